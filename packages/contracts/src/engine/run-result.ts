@@ -1,0 +1,81 @@
+import { z } from "zod";
+
+/**
+ * Percentile summaries keyed "p" + percentile ("p5", "p17", "p50", …), following the
+ * percentiles the spec asked for. Linear interpolation between order statistics
+ * (R type 7, NumPy's default); weighted when an observational constraint applies.
+ */
+export const percentileSetSchema = z.record(z.string().regex(/^p\d+(\.\d+)?$/), z.number());
+export type PercentileSet = z.infer<typeof percentileSetSchema>;
+
+/** Per-year series: one array per percentile key plus the (weighted) mean. */
+export const percentileSeriesSchema = z.record(z.string(), z.array(z.number()));
+export type PercentileSeries = z.infer<typeof percentileSeriesSchema>;
+
+/** Distribution-free 95 % interval for each reported percentile (order statistics, CHECKS.md §7.3). */
+export const precisionSchema = z.record(z.string(), z.tuple([z.number(), z.number()]));
+
+export const crossingSchema = z.record(
+  z.string(),
+  z.record(z.string(), z.number().nullable()),
+);
+
+export const horizonSchema = z.object({
+  year: z.number().int(),
+  temperature: percentileSetSchema,
+  exceedance: z.record(z.string(), z.number()),
+  /** Committed warming if forcing stayed at this year's level: F/lambda minus the anomaly. */
+  committed: percentileSetSchema,
+  precision: precisionSchema,
+  forcing: percentileSetSchema,
+  forcingByAgent: z.record(z.string(), percentileSetSchema),
+});
+
+export const sensitivityEntrySchema = z.object({
+  input: z.string(),
+  horizon: z.number().int(),
+  index: z.number(),
+});
+
+export const pathwayResultSchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  years: z.array(z.number().int()),
+  temperature: percentileSeriesSchema,
+  forcing: percentileSeriesSchema,
+  imbalance: percentileSeriesSchema,
+  exceedance: z.record(z.string(), z.array(z.number())),
+  crossing: crossingSchema,
+  horizons: z.array(horizonSchema),
+  sensitivity: z.array(sensitivityEntrySchema),
+  effectiveMembers: z.number(),
+  constraint: z
+    .object({
+      from: z.number().int(),
+      to: z.number().int(),
+      observed: z.number(),
+      sd: z.number(),
+      effectiveMembers: z.number(),
+      windowWarmingPrior: percentileSetSchema,
+      windowWarmingPosterior: percentileSetSchema,
+      ecsPrior: percentileSetSchema,
+      ecsPosterior: percentileSetSchema,
+    })
+    .nullable(),
+});
+
+export const runResultSchema = z.object({
+  engineVersion: z.string(),
+  inputHash: z.string(),
+  resultHash: z.string(),
+  members: z.number().int(),
+  effectiveMembers: z.number(),
+  /** Implied sensitivities of the sampled members (weighted by the first pathway's constraint, if any). */
+  implied: z.object({ ecs: percentileSetSchema, tcr: percentileSetSchema }),
+  pathways: z.array(pathwayResultSchema),
+});
+
+export type HorizonResult = z.infer<typeof horizonSchema>;
+export type SensitivityEntry = z.infer<typeof sensitivityEntrySchema>;
+export type PathwayResult = z.infer<typeof pathwayResultSchema>;
+export type RunResult = z.infer<typeof runResultSchema>;

@@ -1,0 +1,206 @@
+import { z } from "zod";
+import { distributionSchema } from "./distribution.js";
+import { CLIMATE_INPUTS, FORCING_AGENTS, FORCING_EXPRESSIONS, type ForcingAgent } from "./agents.js";
+
+/** Upper limit on ensemble size: 2,000,000 members stays well under 1 GiB of engine memory. */
+export const MAX_MEMBERS = 2_000_000;
+/** Longest pathway accepted, in years. */
+export const MAX_PATHWAY_YEARS = 1000;
+
+const finite = () => z.number({ error: "must be a number" }).refine(Number.isFinite, "must be finite");
+const year = () => z.number({ error: "must be a year" }).int("must be a whole year");
+const series = () => z.array(finite(), { error: "must be an array of numbers" });
+const nonNegativeSeries = () =>
+  z.array(
+    finite().refine((v) => v >= 0, "must not be negative (a concentration)"),
+    { error: "must be an array of numbers" },
+  );
+
+const erfSeriesSchema = z.object({ erf: series() }).strict();
+const agentSeriesSchema = z.union([erfSeriesSchema], { error: 'must be { "erf": [..] }' });
+const co2SeriesSchema = z.union([erfSeriesSchema, z.object({ ppm: nonNegativeSeries() }).strict()], {
+  error: 'must be { "erf": [..] } or { "ppm": [..] }',
+});
+const ppbSeriesSchema = z.union([erfSeriesSchema, z.object({ ppb: nonNegativeSeries() }).strict()], {
+  error: 'must be { "erf": [..] } or { "ppb": [..] }',
+});
+
+export const pathwayAgentsSchema = z
+  .object({
+    co2: co2SeriesSchema.optional(),
+    ch4: ppbSeriesSchema.optional(),
+    n2o: ppbSeriesSchema.optional(),
+    "other-wmghg": agentSeriesSchema.optional(),
+    ozone: agentSeriesSchema.optional(),
+    "aerosol-radiation": agentSeriesSchema.optional(),
+    "aerosol-cloud": agentSeriesSchema.optional(),
+    "land-use": agentSeriesSchema.optional(),
+    solar: agentSeriesSchema.optional(),
+    volcanic: agentSeriesSchema.optional(),
+    other: agentSeriesSchema.optional(),
+  })
+  .strict();
+
+export const pathwaySpecSchema = z
+  .object({
+    id: z.string().min(1, "must not be empty"),
+    name: z.string().min(1, "must not be empty"),
+    startYear: year(),
+    agents: pathwayAgentsSchema,
+  })
+  .strict();
+
+const climateSchema = z
+  .object({
+    ecs: distributionSchema,
+    f2x: distributionSchema,
+    upperHeatCapacity: distributionSchema,
+    deepHeatCapacity: distributionSchema,
+    heatExchange: distributionSchema,
+    deepEfficacy: distributionSchema,
+  })
+  .strict();
+
+const agentScaleSchema = z.object({ scale: distributionSchema }).strict();
+
+export const correlationSchema = z
+  .object({
+    between: z.tuple([z.string(), z.string()], { error: "must name two inputs" }),
+    rank: finite().refine((v) => v > -1 && v < 1, "must lie strictly between -1 and 1"),
+  })
+  .strict();
+
+export const constraintSchema = z
+  .object({
+    from: year(),
+    to: year(),
+    observed: finite(),
+    sd: finite().refine((v) => v > 0, "must be > 0"),
+  })
+  .strict();
+
+export const modelSpecSchema = z
+  .object({
+    climate: climateSchema,
+    agents: z
+      .object(Object.fromEntries(FORCING_AGENTS.map((a) => [a, agentScaleSchema.optional()])) as Record<
+        ForcingAgent,
+        z.ZodOptional<typeof agentScaleSchema>
+      >)
+      .strict()
+      .default({}),
+    correlations: z.array(correlationSchema).default([]),
+    constraint: constraintSchema.nullable().default(null),
+    /** Concentration-to-forcing expression; AR6 refit by default (CHECKS.md §1.3). */
+    forcingExpression: z.enum(FORCING_EXPRESSIONS).default("ar6"),
+  })
+  .strict();
+
+const percentileSchema = finite().refine((v) => v > 0 && v < 100, "must lie strictly between 0 and 100");
+
+export const runSpecSchema = z
+  .object({
+    seed: z.string({ error: "must be text" }).min(1, "must not be empty"),
+    members: z
+      .number({ error: "must be a number" })
+      .int("must be a whole number")
+      .min(1, "must be at least 1")
+      .max(MAX_MEMBERS, `must be at most ${MAX_MEMBERS}`),
+    sampling: z.enum(["latin-hypercube", "monte-carlo"], {
+      error: 'must be "latin-hypercube" or "monte-carlo"',
+    }),
+    baseline: z.tuple([year(), year()]).default([1850, 1900]),
+    percentiles: z.array(percentileSchema).min(1, "must list at least one percentile").default([5, 17, 50, 83, 95]),
+    thresholds: z.array(finite()).default([1.5, 2, 3]),
+    horizons: z.array(year()).default([2030, 2050, 2100]),
+    pathways: z.array(pathwaySpecSchema).min(1, "must hold at least one pathway"),
+    model: modelSpecSchema,
+  })
+  .strict()
+  .superRefine((spec, ctx) => {
+    const [b0, b1] = spec.baseline;
+    if (b1 < b0) ctx.addIssue({ code: "custom", path: ["baseline"], message: `baseline ${b0}–${b1} ends before it starts` });
+    const seenIds = new Set<string>();
+    spec.pathways.forEach((p, i) => {
+      if (seenIds.has(p.id)) ctx.addIssue({ code: "custom", path: ["pathways", i, "id"], message: `"${p.id}" is used twice` });
+      seenIds.add(p.id);
+      const entries = Object.entries(p.agents).filter(([, s]) => s !== undefined);
+      if (entries.length === 0) {
+        ctx.addIssue({ code: "custom", path: ["pathways", i, "agents"], message: "must hold at least one agent" });
+        return;
+      }
+      const [firstAgent, firstSeries] = entries[0]!;
+      const firstKey = Object.keys(firstSeries!)[0]!;
+      const expected = (firstSeries as Record<string, number[]>)[firstKey]!.length;
+      if (expected < 1 || expected > MAX_PATHWAY_YEARS) {
+        ctx.addIssue({
+          code: "custom",
+          path: ["pathways", i, "agents", firstAgent, firstKey],
+          message: `has ${expected} values, expected 1 to ${MAX_PATHWAY_YEARS}`,
+        });
+        return;
+      }
+      for (const [agent, s] of entries.slice(1)) {
+        const key = Object.keys(s!)[0]!;
+        const n = (s as Record<string, number[]>)[key]!.length;
+        if (n !== expected)
+          ctx.addIssue({
+            code: "custom",
+            path: ["pathways", i, "agents", agent, key],
+            message: `has ${n} values, expected ${expected}`,
+          });
+      }
+      const lastYear = p.startYear + expected - 1;
+      if (b0 < p.startYear || b1 > lastYear)
+        ctx.addIssue({
+          code: "custom",
+          path: ["baseline"],
+          message: `baseline ${b0}–${b1} lies outside the pathway years ${p.startYear}–${lastYear} (pathways[${i}])`,
+        });
+      spec.horizons.forEach((h, j) => {
+        if (h < p.startYear || h > lastYear)
+          ctx.addIssue({
+            code: "custom",
+            path: ["horizons", j],
+            message: `${h} lies outside the pathway years ${p.startYear}–${lastYear} (pathways[${i}])`,
+          });
+      });
+      const c = spec.model.constraint;
+      if (c && (c.from < p.startYear || c.to > lastYear))
+        ctx.addIssue({
+          code: "custom",
+          path: ["model", "constraint"],
+          message: `window ${c.from}–${c.to} lies outside the pathway years ${p.startYear}–${lastYear} (pathways[${i}])`,
+        });
+    });
+    const c = spec.model.constraint;
+    if (c && c.to < c.from)
+      ctx.addIssue({ code: "custom", path: ["model", "constraint", "to"], message: "must not be before from" });
+    const inputs = new Set<string>([...CLIMATE_INPUTS, ...FORCING_AGENTS]);
+    const pairs = new Set<string>();
+    spec.model.correlations.forEach((corr, i) => {
+      const [a, b] = corr.between;
+      [a, b].forEach((name, j) => {
+        if (!inputs.has(name))
+          ctx.addIssue({
+            code: "custom",
+            path: ["model", "correlations", i, "between", j],
+            message: `"${name}" is not an input (one of ${[...inputs].join(", ")})`,
+          });
+      });
+      if (a === b)
+        ctx.addIssue({ code: "custom", path: ["model", "correlations", i, "between"], message: "must name two different inputs" });
+      const key = [a, b].sort().join("|");
+      if (pairs.has(key))
+        ctx.addIssue({ code: "custom", path: ["model", "correlations", i, "between"], message: "repeats a pair already given" });
+      pairs.add(key);
+    });
+  });
+
+/** A run spec as written by a user (defaults not yet applied). */
+export type RunSpecInput = z.input<typeof runSpecSchema>;
+/** A run spec with every default applied: what the engine runs. */
+export type RunSpec = z.output<typeof runSpecSchema>;
+export type PathwaySpec = z.output<typeof pathwaySpecSchema>;
+export type ModelSpec = z.output<typeof modelSpecSchema>;
+export type ObservationalConstraint = z.output<typeof constraintSchema>;
