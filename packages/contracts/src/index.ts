@@ -3,3 +3,8 @@ export * from "./engine/distribution.js";
 export * from "./engine/run-spec.js";
 export * from "./engine/run-result.js";
 export * from "./engine/format-issues.js";
+export * from "./api/errors.js";
+export * from "./api/users.js";
+export * from "./api/me.js";
+export * from "./api/audit.js";
+export * from "./api/outbox.js";

@@ -1,0 +1,29 @@
+import { z } from "zod";
+
+/** The four Plumeline roles; the permission each grants is fixed in apps/api/src/auth/permissions.ts. */
+export const roles = ["analyst", "actuary", "manager", "admin"] as const;
+export const roleSchema = z.enum(roles);
+export type Role = z.infer<typeof roleSchema>;
+
+export const userSchema = z.object({
+  id: z.string(),
+  email: z.string(),
+  name: z.string(),
+  role: roleSchema,
+  createdAt: z.string(),
+});
+export type User = z.infer<typeof userSchema>;
+
+/** POST /api/users — invite: the server creates the user and mails a one-time password. */
+export const inviteUserBodySchema = z.object({
+  email: z.email().max(254),
+  name: z.string().trim().min(1).max(120),
+  role: roleSchema,
+});
+export type InviteUserBody = z.infer<typeof inviteUserBodySchema>;
+
+/** PATCH /api/users/:id — change the role. */
+export const updateUserBodySchema = z.object({ role: roleSchema });
+export type UpdateUserBody = z.infer<typeof updateUserBodySchema>;
+
+export const userIdParamsSchema = z.object({ id: z.string().min(1) });
