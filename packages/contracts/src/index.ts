@@ -8,3 +8,7 @@ export * from "./api/users.js";
 export * from "./api/me.js";
 export * from "./api/audit.js";
 export * from "./api/outbox.js";
+export * from "./api/pathways.js";
+export * from "./api/model-versions.js";
+export * from "./api/runs.js";
+export * from "./api/exports.js";

@@ -1,0 +1,77 @@
+import { z } from "zod";
+import { pathwayAgentsSchema } from "../engine/run-spec.js";
+
+/**
+ * Pathway bodies and responses (docs/API.md "pathways"). A pathway's `agents` are exactly the
+ * engine's pathway spec series (ERF per agent, or ppm/ppb for CO2/CH4/N2O), one value per year
+ * from `startYear`.
+ */
+const text = (max: number) => z.string({ error: "must be text" }).trim().max(max, `must be at most ${max} characters`);
+const requiredText = (max: number) => text(max).min(1, "must not be empty");
+
+export const pathwayMetadataSchema = z
+  .object({
+    name: requiredText(120),
+    description: text(2000).default(""),
+    /** Where the numbers came from (publication, dataset, or "invented, shaped from …"). */
+    source: requiredText(500),
+    /** Which release/edition of the source (inputs get revised upstream: JOB.md caution 7). */
+    vintage: requiredText(120),
+  })
+  .strict();
+
+export const createPathwayBodySchema = pathwayMetadataSchema
+  .extend({
+    startYear: z.number({ error: "must be a year" }).int("must be a whole year").min(1, "must be a year"),
+    agents: pathwayAgentsSchema,
+  })
+  .strict();
+export type CreatePathwayBody = z.input<typeof createPathwayBodySchema>;
+
+/** Editing a pathway that is not yet locked: any of the create fields. */
+export const updatePathwayBodySchema = createPathwayBodySchema.partial().strict();
+export type UpdatePathwayBody = z.input<typeof updatePathwayBodySchema>;
+
+/** Multipart text fields sent with an upload; `preview=true` parses without saving. */
+export const uploadPathwayFieldsSchema = z.object({
+  name: z.string().optional(),
+  description: z.string().optional(),
+  source: z.string().optional(),
+  vintage: z.string().optional(),
+  preview: z
+    .enum(["true", "false"], { error: 'must be "true" or "false"' })
+    .optional()
+    .transform((v) => v === "true"),
+});
+
+export const pathwaySummarySchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  description: z.string(),
+  source: z.string(),
+  vintage: z.string(),
+  startYear: z.number().int(),
+  endYear: z.number().int(),
+  /** Agent ids carried, in the engine's order (FORCING_AGENTS). */
+  agents: z.array(z.string()),
+  /** The quantity each agent is given in: "erf" (W m-2), "ppm" or "ppb". */
+  quantities: z.record(z.string(), z.enum(["erf", "ppm", "ppb"])),
+  /** SHA-256 (hex) of the canonical JSON of { startYear, agents }. */
+  checksum: z.string(),
+  locked: z.boolean(),
+  createdBy: z.string(),
+  createdAt: z.string(),
+});
+export type PathwaySummary = z.infer<typeof pathwaySummarySchema>;
+
+/** A pathway in full: `agents` is the series object exactly as the engine's pathway spec takes it. */
+export const pathwaySchema = pathwaySummarySchema.extend({ agents: pathwayAgentsSchema });
+export type Pathway = z.infer<typeof pathwaySchema>;
+
+export const pathwayPreviewSchema = z.object({
+  startYear: z.number().int(),
+  endYear: z.number().int(),
+  agents: z.array(z.object({ agent: z.string(), quantity: z.enum(["erf", "ppm", "ppb"]), column: z.string() })),
+  rows: z.array(z.record(z.string(), z.number())),
+});
+export type PathwayPreview = z.infer<typeof pathwayPreviewSchema>;

@@ -1,0 +1,92 @@
+import { z } from "zod";
+import { MAX_MEMBERS } from "../engine/run-spec.js";
+import { MODEL_VERSION_STATUSES } from "./model-versions.js";
+
+/** Runs: an ensemble of one model version over one or more pathways, executed by the queue. */
+export const RUN_STATUSES = ["queued", "running", "succeeded", "failed", "cancelled"] as const;
+export type RunStatus = (typeof RUN_STATUSES)[number];
+
+const finite = () => z.number({ error: "must be a number" }).refine(Number.isFinite, "must be finite");
+
+export const createRunBodySchema = z
+  .object({
+    name: z.string({ error: "must be text" }).trim().max(120, "must be at most 120 characters").optional(),
+    modelVersionId: z.string({ error: "must be a model version id" }).min(1, "must not be empty"),
+    pathwayIds: z
+      .array(z.string().min(1, "must not be empty"), { error: "must be a list of pathway ids" })
+      .min(1, "must hold at least one pathway")
+      .max(12, "must hold at most 12 pathways")
+      .refine((ids) => new Set(ids).size === ids.length, "must not repeat a pathway"),
+    members: z
+      .number({ error: "must be a number" })
+      .int("must be a whole number")
+      .min(1, "must be at least 1")
+      .max(MAX_MEMBERS, `must be at most ${MAX_MEMBERS}`),
+    seed: z.string({ error: "must be text" }).trim().min(1, "must not be empty").max(200),
+    sampling: z.enum(["latin-hypercube", "monte-carlo"], { error: 'must be "latin-hypercube" or "monte-carlo"' }),
+    horizons: z.array(z.number().int("must be a whole year")).optional(),
+    thresholds: z.array(finite()).optional(),
+    percentiles: z.array(finite().refine((v) => v > 0 && v < 100, "must lie strictly between 0 and 100")).min(1).optional(),
+    perilProfileIds: z.array(z.string().min(1)).optional(),
+    portfolioId: z.string().min(1).nullable().optional(),
+  })
+  .strict();
+export type CreateRunBody = z.input<typeof createRunBodySchema>;
+
+export const listRunsQuerySchema = z.object({
+  mine: z.enum(["true", "false"], { error: 'must be "true" or "false"' }).optional(),
+  status: z.enum(RUN_STATUSES, { error: `must be one of ${RUN_STATUSES.join(", ")}` }).optional(),
+});
+
+export const runSummarySchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  status: z.enum(RUN_STATUSES),
+  /** 0–1, share of simulated years done. */
+  progress: z.number(),
+  /** True when the model version was not approved when the run was made; never changes. */
+  exploratory: z.boolean(),
+  modelVersion: z.object({
+    id: z.string(),
+    name: z.string(),
+    versionNumber: z.number().int(),
+    status: z.enum(MODEL_VERSION_STATUSES),
+  }),
+  pathwayIds: z.array(z.string()),
+  members: z.number().int(),
+  seed: z.string(),
+  sampling: z.enum(["latin-hypercube", "monte-carlo"]),
+  perilProfileIds: z.array(z.string()),
+  portfolioId: z.string().nullable(),
+  createdBy: z.string(),
+  createdByName: z.string().nullable(),
+  createdAt: z.string(),
+  startedAt: z.string().nullable(),
+  finishedAt: z.string().nullable(),
+  error: z.string().nullable(),
+});
+export type RunSummary = z.infer<typeof runSummarySchema>;
+
+export const runSchema = runSummarySchema.extend({
+  manifest: z.object({
+    engineVersion: z.string().nullable(),
+    inputHash: z.string(),
+    resultHash: z.string().nullable(),
+    /** The validated engine run spec, exactly as queued. */
+    spec: z.unknown(),
+    pathways: z.array(z.object({ id: z.string(), name: z.string(), checksum: z.string(), source: z.string(), vintage: z.string() })),
+  }),
+});
+export type Run = z.infer<typeof runSchema>;
+
+export const replayResponseSchema = z.object({
+  matched: z.boolean(),
+  resultHash: z.string().nullable(),
+  replayHash: z.string(),
+  engineVersion: z.string(),
+});
+export type ReplayResponse = z.infer<typeof replayResponseSchema>;
+
+/** Payload of an "ensemble-run" queue job (the queue validates it before running). */
+export const runJobPayloadSchema = z.object({ runId: z.string().min(1) }).strict();
+export type RunJobPayload = z.infer<typeof runJobPayloadSchema>;
