@@ -1,0 +1,172 @@
+/**
+ * The run spec and result as the engine sees them. They mirror the shared contracts
+ * (packages/contracts/src/engine) field for field, but the engine library imports nothing
+ * of ours, so the shapes are restated here. DESIGN.md "Engine contract" fixes the names.
+ */
+
+/** One uncertain input. Units follow the input it describes. */
+export type Distribution =
+  | { type: "fixed"; value: number }
+  | { type: "normal"; mean: number; sd: number }
+  | { type: "lognormal"; median: number; logSd: number }
+  | { type: "uniform"; min: number; max: number }
+  | { type: "triangular"; min: number; mode: number; max: number }
+  | { type: "truncated-normal"; mean: number; sd: number; min: number; max: number }
+  | {
+      type: "range";
+      p50: number;
+      low: number;
+      high: number;
+      coverage: 90 | 66;
+      shape: "lognormal" | "split-normal";
+    };
+
+export const FORCING_AGENTS = [
+  "co2",
+  "ch4",
+  "n2o",
+  "other-wmghg",
+  "ozone",
+  "aerosol-radiation",
+  "aerosol-cloud",
+  "land-use",
+  "solar",
+  "volcanic",
+  "other",
+] as const;
+export type ForcingAgent = (typeof FORCING_AGENTS)[number];
+
+/** Gases that may be given as concentrations, with the unit key each takes. */
+export const CONCENTRATION_KEYS = { co2: "ppm", ch4: "ppb", n2o: "ppb" } as const;
+export type ConcentrationGas = keyof typeof CONCENTRATION_KEYS;
+
+export const CLIMATE_INPUTS = [
+  "ecs",
+  "f2x",
+  "upperHeatCapacity",
+  "deepHeatCapacity",
+  "heatExchange",
+  "deepEfficacy",
+] as const;
+export type ClimateInput = (typeof CLIMATE_INPUTS)[number];
+
+export const FORCING_EXPRESSIONS = ["ar6", "etminan-2016", "myhre-1998"] as const;
+export type ForcingExpressionName = (typeof FORCING_EXPRESSIONS)[number];
+
+/** Per agent: an ERF series (W m-2) or, for CO2/CH4/N2O, concentrations (ppm / ppb). */
+export type AgentSeries = { erf: number[] } | { ppm: number[] } | { ppb: number[] };
+
+export interface PathwaySpec {
+  id: string;
+  name: string;
+  startYear: number;
+  agents: Partial<Record<ForcingAgent, AgentSeries>>;
+}
+
+export interface Correlation {
+  between: [string, string];
+  rank: number;
+}
+
+export interface ObservationalConstraint {
+  from: number;
+  to: number;
+  observed: number;
+  sd: number;
+}
+
+export interface ModelSpec {
+  climate: Record<ClimateInput, Distribution>;
+  agents: Partial<Record<ForcingAgent, { scale: Distribution }>>;
+  correlations: Correlation[];
+  constraint: ObservationalConstraint | null;
+  forcingExpression: ForcingExpressionName;
+}
+
+export type SamplingMethod = "latin-hypercube" | "monte-carlo";
+
+/** A run spec with every default applied: what the engine runs and hashes. */
+export interface RunSpec {
+  seed: string;
+  members: number;
+  sampling: SamplingMethod;
+  baseline: [number, number];
+  percentiles: number[];
+  thresholds: number[];
+  horizons: number[];
+  pathways: PathwaySpec[];
+  model: ModelSpec;
+}
+
+/** A run spec as a user may write it: the optional parts may be left out. */
+export type RunSpecInput = Omit<RunSpec, "baseline" | "percentiles" | "thresholds" | "horizons" | "model"> & {
+  baseline?: [number, number];
+  percentiles?: number[];
+  thresholds?: number[];
+  horizons?: number[];
+  model: Omit<ModelSpec, "agents" | "correlations" | "constraint" | "forcingExpression"> & {
+    agents?: ModelSpec["agents"];
+    correlations?: Correlation[];
+    constraint?: ObservationalConstraint | null;
+    forcingExpression?: ForcingExpressionName;
+  };
+};
+
+/** Percentile values keyed "p" + percentile: { p5, p17, p50, p83, p95 }. */
+export type PercentileSet = Record<string, number>;
+/** Per-year series keyed like PercentileSet plus "mean". */
+export type PercentileSeries = Record<string, number[]>;
+
+export interface HorizonResult {
+  year: number;
+  temperature: PercentileSet;
+  exceedance: Record<string, number>;
+  committed: PercentileSet;
+  /** Distribution-free 95 % interval of each temperature percentile; null when too few members. */
+  precision: Record<string, [number, number] | null>;
+  forcing: PercentileSet;
+  forcingByAgent: Record<string, PercentileSet>;
+}
+
+export interface SensitivityEntry {
+  input: string;
+  horizon: number;
+  index: number;
+}
+
+export interface ConstraintResult {
+  from: number;
+  to: number;
+  observed: number;
+  sd: number;
+  effectiveMembers: number;
+  windowWarmingPrior: PercentileSet;
+  windowWarmingPosterior: PercentileSet;
+  ecsPrior: PercentileSet;
+  ecsPosterior: PercentileSet;
+}
+
+export interface PathwayResult {
+  id: string;
+  name: string;
+  years: number[];
+  temperature: PercentileSeries;
+  forcing: PercentileSeries;
+  imbalance: PercentileSeries;
+  exceedance: Record<string, number[]>;
+  crossing: Record<string, Record<string, number | null>>;
+  horizons: HorizonResult[];
+  sensitivity: SensitivityEntry[];
+  effectiveMembers: number;
+  constraint: ConstraintResult | null;
+}
+
+export interface RunResult {
+  engineVersion: string;
+  inputHash: string;
+  resultHash: string;
+  members: number;
+  effectiveMembers: number;
+  implied: { ecs: PercentileSet; tcr: PercentileSet };
+  pathways: PathwayResult[];
+}

@@ -1,0 +1,324 @@
+/**
+ * Exact percentiles of one ensemble quantity without sorting it: linear interpolation
+ * between order statistics (R type 7, NumPy's default; Hyndman & Fan 1996 definition 7),
+ * found by a bucket pass. Weighted percentiles use the weighted analogue of type 7 from
+ * weighted-positions.ts.
+ *
+ * Method: one pass counts members (and, weighted, sums weights) into B equal-width buckets
+ * over [min, max]. Bucket index floor((v − min)·B/(max − min)) is monotone in v, so the
+ * buckets partition the sorted order; cumulative counts say which buckets hold the wanted
+ * order statistics. A second pass copies only the members of those few buckets, which are
+ * sorted and read. Cost O(n + b log b) per call, b = members in the wanted buckets (about
+ * n/B each); the result is identical to sorting everything, because the same order
+ * statistics are read and interpolated with the same expression as quantileSorted (d3).
+ *
+ * Example: values [3, 1, 2, 4], p = 0.5 -> 2.5 (same as d3.quantile([3, 1, 2, 4], 0.5)).
+ */
+import { weightedPosition } from "./weighted-positions.js";
+
+const MAX_BUCKETS = 4096;
+
+export class PercentileSelector {
+  private counts = new Int32Array(0);
+  private bucketWeights = new Float64Array(0);
+  private slotOfBucket = new Int32Array(0);
+  private gathered = new Float64Array(0);
+  private gatheredWeights = new Float64Array(0);
+  private order = new Uint32Array(0);
+
+  /**
+   * Writes the percentiles `probs` (each in [0, 1]) of values[0..n) into out[0..probs.length).
+   * min/max must be the exact extremes of values[0..n) (callers get them in a pass they make
+   * anyway). weights: null for an unweighted ensemble; otherwise non-negative weights whose
+   * sum is totalWeight.
+   */
+  select(
+    values: Float64Array,
+    n: number,
+    probs: ArrayLike<number>,
+    out: Float64Array,
+    min: number,
+    max: number,
+    weights: Float64Array | null = null,
+    totalWeight = 0,
+  ): void {
+    if (n === 0) throw new RangeError("values must not be empty");
+    if (!(max > min)) {
+      for (let i = 0; i < probs.length; i++) out[i] = min;
+      return;
+    }
+    if (weights) this.selectWeighted(values, n, probs, out, min, max, weights, totalWeight);
+    else this.selectUnweighted(values, n, probs, out, min, max);
+  }
+
+  private prepare(n: number): number {
+    const buckets = Math.max(16, Math.min(MAX_BUCKETS, n >> 5));
+    if (this.counts.length < buckets) {
+      this.counts = new Int32Array(buckets);
+      this.bucketWeights = new Float64Array(buckets);
+      this.slotOfBucket = new Int32Array(buckets);
+    }
+    this.counts.fill(0, 0, buckets);
+    this.slotOfBucket.fill(-1, 0, buckets);
+    return buckets;
+  }
+
+  private selectUnweighted(
+    values: Float64Array,
+    n: number,
+    probs: ArrayLike<number>,
+    out: Float64Array,
+    min: number,
+    max: number,
+  ): void {
+    const buckets = this.prepare(n);
+    const counts = this.counts;
+    const scale = buckets / (max - min);
+    const last = buckets - 1;
+    for (let i = 0; i < n; i++) {
+      const b = ((values[i]! - min) * scale) | 0;
+      counts[b > last ? last : b]++;
+    }
+    // Ranks (0-based) each percentile reads: floor(h) and floor(h) + 1, h = (n − 1)p.
+    const wanted: number[] = [];
+    for (let j = 0; j < probs.length; j++) {
+      const h = (n - 1) * probs[j]!;
+      const lo = Math.floor(h);
+      wanted.push(lo, Math.min(lo + 1, n - 1));
+    }
+    const located = this.locateRanks(wanted, buckets);
+    this.gatherAndSort(values, null, n, min, scale, last);
+    for (let j = 0; j < probs.length; j++) {
+      const h = (n - 1) * probs[j]!;
+      const lo = Math.floor(h);
+      const value0 = this.gathered[located[2 * j]!]!;
+      const value1 = this.gathered[located[2 * j + 1]!]!;
+      // Same expression as d3-array quantileSorted (R-7).
+      out[j] = value0 + (value1 - value0) * (h - lo);
+    }
+  }
+
+  /** For each wanted rank: its index in the gathered buffer once wanted buckets are sorted. */
+  private locateRanks(ranks: number[], buckets: number): number[] {
+    const counts = this.counts;
+    const slot = this.slotOfBucket;
+    const order = ranks.map((r, i) => [r, i] as const).sort((a, b) => a[0] - b[0]);
+    const bucketOfRank = new Array<number>(ranks.length);
+    const rankInBucket = new Array<number>(ranks.length);
+    let bucket = 0;
+    let before = 0;
+    for (const [rank, i] of order) {
+      while (bucket < buckets - 1 && before + counts[bucket]! <= rank) before += counts[bucket++]!;
+      bucketOfRank[i] = bucket;
+      rankInBucket[i] = rank - before;
+      slot[bucket] = 1;
+    }
+    // Lay the wanted buckets out one after another in the gathered buffer.
+    let offset = 0;
+    const start = new Int32Array(buckets);
+    for (let b = 0; b < buckets; b++) {
+      if (slot[b]! < 0) continue;
+      slot[b] = offset;
+      start[b] = offset;
+      offset += counts[b]!;
+    }
+    this.ensureGathered(offset);
+    return ranks.map((_, i) => start[bucketOfRank[i]!]! + rankInBucket[i]!);
+  }
+
+  private ensureGathered(size: number): void {
+    if (this.gathered.length < size) {
+      const grown = Math.max(size, this.gathered.length * 2, 1024);
+      this.gathered = new Float64Array(grown);
+      this.gatheredWeights = new Float64Array(grown);
+      this.order = new Uint32Array(grown);
+    }
+  }
+
+  /**
+   * Copies the members of the wanted buckets into the gathered buffer and sorts each
+   * bucket's stretch; with weights, the weights follow their values (ties keep member order).
+   */
+  private gatherAndSort(
+    values: Float64Array,
+    weights: Float64Array | null,
+    n: number,
+    min: number,
+    scale: number,
+    last: number,
+  ): void {
+    const slot = this.slotOfBucket;
+    const counts = this.counts;
+    const fill = new Map<number, number>();
+    const cursor = new Int32Array(last + 1);
+    const starts: Array<[number, number]> = [];
+    for (let b = 0; b <= last; b++) {
+      if (slot[b]! >= 0) {
+        cursor[b] = slot[b]!;
+        starts.push([slot[b]!, counts[b]!]);
+      }
+    }
+    fill.clear();
+    const gathered = this.gathered;
+    if (weights) {
+      const order = this.order;
+      for (let i = 0; i < n; i++) {
+        const v = values[i]!;
+        let b = ((v - min) * scale) | 0;
+        if (b > last) b = last;
+        if (slot[b]! >= 0) order[cursor[b]++] = i;
+      }
+      for (const [start, count] of starts) {
+        const idx = order.subarray(start, start + count);
+        // Sort member indices by value, ties by index, so weights pair deterministically.
+        const sortedIdx = Array.from(idx).sort((a, b) => values[a]! - values[b]! || a - b);
+        for (let k = 0; k < count; k++) {
+          const m = sortedIdx[k]!;
+          gathered[start + k] = values[m]!;
+          this.gatheredWeights[start + k] = weights[m]!;
+        }
+      }
+      return;
+    }
+    for (let i = 0; i < n; i++) {
+      const v = values[i]!;
+      let b = ((v - min) * scale) | 0;
+      if (b > last) b = last;
+      if (slot[b]! >= 0) gathered[cursor[b]++] = v;
+    }
+    for (const [start, count] of starts) gathered.subarray(start, start + count).sort();
+  }
+
+  private selectWeighted(
+    values: Float64Array,
+    n: number,
+    probs: ArrayLike<number>,
+    out: Float64Array,
+    min: number,
+    max: number,
+    weights: Float64Array,
+    totalWeight: number,
+  ): void {
+    const buckets = this.prepare(n);
+    const counts = this.counts;
+    const sums = this.bucketWeights;
+    sums.fill(0, 0, buckets);
+    const scale = buckets / (max - min);
+    const last = buckets - 1;
+    for (let i = 0; i < n; i++) {
+      let b = ((values[i]! - min) * scale) | 0;
+      if (b > last) b = last;
+      counts[b]++;
+      sums[b] += weights[i]!;
+    }
+    // Locate, per percentile, the bucket where the weighted position crosses p, using the
+    // bucket's first-member position bound; then take that bucket and its neighbours, so the
+    // crossing lies inside the gathered stretch (checked below; widened if it does not).
+    const slot = this.slotOfBucket;
+    const crossing = new Array<number>(probs.length);
+    for (let j = 0; j < probs.length; j++) {
+      const p = probs[j]!;
+      let before = 0;
+      let cumulative = 0;
+      let b = 0;
+      for (; b < last; b++) {
+        const nextCount = before + counts[b]!;
+        const nextWeight = cumulative + sums[b]!;
+        // Position of the first member after this bucket, with its weight taken as 0 (a bound).
+        if (weightedPosition(nextCount, nextWeight, 0, n, totalWeight) > p) break;
+        before = nextCount;
+        cumulative = nextWeight;
+      }
+      crossing[j] = b;
+    }
+    let spread = 1;
+    for (;;) {
+      slot.fill(-1, 0, buckets);
+      for (const b of crossing) {
+        for (let k = Math.max(0, b - spread); k <= Math.min(last, b + spread); k++) slot[k] = 1;
+      }
+      let offset = 0;
+      for (let b = 0; b < buckets; b++) {
+        if (slot[b]! < 0) continue;
+        slot[b] = offset;
+        offset += counts[b]!;
+      }
+      this.ensureGathered(offset);
+      this.gatherAndSort(values, weights, n, min, scale, last);
+      if (this.interpolateWeighted(probs, out, n, totalWeight, buckets)) return;
+      spread *= 4; // the crossing fell outside the gathered buckets: widen and read again
+    }
+  }
+
+  /**
+   * Walks the gathered runs of consecutive wanted buckets, computing each member's weighted
+   * position from the exact counts and weights before the run, and interpolates. Returns
+   * false if some percentile's bracketing pair was not inside one gathered run.
+   */
+  private interpolateWeighted(
+    probs: ArrayLike<number>,
+    out: Float64Array,
+    n: number,
+    totalWeight: number,
+    buckets: number,
+  ): boolean {
+    const slot = this.slotOfBucket;
+    const counts = this.counts;
+    const sums = this.bucketWeights;
+    const done = new Array<boolean>(probs.length).fill(false);
+    let before = 0;
+    let cumulative = 0;
+    let b = 0;
+    while (b < buckets) {
+      if (slot[b]! < 0) {
+        before += counts[b]!;
+        cumulative += sums[b]!;
+        b++;
+        continue;
+      }
+      // A run of consecutive gathered buckets: [b, end).
+      let end = b;
+      let runCount = 0;
+      while (end < buckets && slot[end]! >= 0) runCount += counts[end++]!;
+      const start = slot[b]!;
+      let prefix = cumulative;
+      let previousPosition = Number.NEGATIVE_INFINITY;
+      let previousValue = 0;
+      for (let k = 0; k < runCount; k++) {
+        const w = this.gatheredWeights[start + k]!;
+        const value = this.gathered[start + k]!;
+        const position = weightedPosition(before + k, prefix, w, n, totalWeight);
+        for (let j = 0; j < probs.length; j++) {
+          if (done[j]) continue;
+          const p = probs[j]!;
+          if (position >= p && k > 0 && previousPosition <= p) {
+            out[j] =
+              position === previousPosition
+                ? value
+                : previousValue + (value - previousValue) * ((p - previousPosition) / (position - previousPosition));
+            done[j] = true;
+          } else if (position >= p && before + k === 0) {
+            out[j] = value; // p at or below the first member's position
+            done[j] = true;
+          }
+        }
+        previousPosition = position;
+        previousValue = value;
+        prefix += w;
+      }
+      // p beyond the last member's position: the maximum (only if this run ends the data).
+      if (end === buckets) {
+        for (let j = 0; j < probs.length; j++) {
+          if (!done[j] && previousPosition <= probs[j]!) {
+            out[j] = previousValue;
+            done[j] = true;
+          }
+        }
+      }
+      before += runCount;
+      for (let k = b; k < end; k++) cumulative += sums[k]!;
+      b = end;
+    }
+    return done.every(Boolean);
+  }
+}
