@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { perilResultSchema } from "./peril.js";
 
 /**
  * Percentile summaries keyed "p" + percentile ("p5", "p17", "p50", …), following the
@@ -73,6 +74,8 @@ export const runResultSchema = z.object({
   /** Implied sensitivities of the sampled members (weighted by the first pathway's constraint, if any). */
   implied: z.object({ ecs: percentileSetSchema, tcr: percentileSetSchema }),
   pathways: z.array(pathwayResultSchema),
+  /** Peril lens results, present when the spec carried perils (peril.ts). */
+  perils: perilResultSchema.optional(),
 });
 
 export type HorizonResult = z.infer<typeof horizonSchema>;

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { distributionSchema } from "./distribution.js";
 import { CLIMATE_INPUTS, FORCING_AGENTS, FORCING_EXPRESSIONS, type ForcingAgent } from "./agents.js";
+import { perilProfilesSchema, perilSpecIssues, portfolioSchema } from "./peril.js";
 
 /** Upper limit on ensemble size: 2,000,000 members stays well under 1 GiB of engine memory. */
 export const MAX_MEMBERS = 2_000_000;
@@ -115,9 +116,13 @@ export const runSpecSchema = z
     horizons: z.array(year()).default([2030, 2050, 2100]),
     pathways: z.array(pathwaySpecSchema).min(1, "must hold at least one pathway"),
     model: modelSpecSchema,
+    /** Optional peril lens (peril.ts): profiles applied at the horizons, and a portfolio baseline. */
+    perils: perilProfilesSchema.optional(),
+    portfolio: portfolioSchema.optional(),
   })
   .strict()
   .superRefine((spec, ctx) => {
+    for (const issue of perilSpecIssues(spec)) ctx.addIssue({ code: "custom", ...issue });
     const [b0, b1] = spec.baseline;
     if (b1 < b0) ctx.addIssue({ code: "custom", path: ["baseline"], message: `baseline ${b0}–${b1} ends before it starts` });
     const seenIds = new Set<string>();

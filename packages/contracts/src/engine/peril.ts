@@ -1,0 +1,315 @@
+import { z } from "zod";
+import currencyCodes from "currency-codes";
+import { distributionSchema, type Distribution } from "./distribution.js";
+
+/**
+ * Peril lens (DESIGN.md "Peril lens"): how a hazard or loss metric scales with global
+ * warming beyond the warming already in the insurer's own view of risk, and the portfolio
+ * baseline figures it is applied to.
+ *
+ * Rules the engine follows (shown again in PERIL_RULES for screens and exports):
+ * * Warming is the global-mean anomaly against 1850–1900, in K. `baselineWarming` (ΔT0) is
+ *   the warming already contained in the firm's baseline risk view.
+ * * per-kelvin: multiplier = (1 + r)^(ΔT − ΔT0), r a fraction per K (0.07 = 7 %/K), r > −1.
+ *   Below the baseline warming the multiplier falls below 1, by the same law.
+ * * table: the points give the metric at global warming levels relative to any fixed
+ *   reference (AR6 SPM.6 uses 1850–1900 = 1). The multiplier is the table value at ΔT
+ *   divided by the table value at ΔT0, so it is exactly 1 at the warming already in the
+ *   risk view; when the table's value at ΔT0 is 1 the points are the multipliers
+ *   themselves. Inside the table: straight lines between points (linear in warming).
+ *   Outside: "hold" keeps the end point's value; "extrapolate" continues the end segment
+ *   at its constant per-kelvin rate (geometric), so a multiplier never reaches 0.
+ * * frequency metric: an event of return period T becomes one of return period T / m.
+ *   AAL scales by m (each event m times as frequent, same loss per event). The loss at
+ *   return period T after scaling equals the baseline loss at return period T·m (every
+ *   loss level's exceedance frequency is multiplied by m), read off the baseline loss
+ *   curve drawn straight on a log-return-period axis through the 1-in-100 and 1-in-200
+ *   points, extrapolated with the same slope both ways and floored at 0.
+ * * severity metric: AAL and the 1-in-100 and 1-in-200 losses each scale by m; return
+ *   periods are not shifted (they need a hazard-to-loss curve the lens does not have).
+ * * A portfolio row is projected by every profile with the same peril and region.
+ */
+
+const finite = () => z.number({ error: "must be a number" }).refine(Number.isFinite, "must be finite");
+
+/** Perils the demo and the editor offer; any lower-case slug is accepted. */
+export const SUGGESTED_PERILS = [
+  "flood-heavy-rainfall",
+  "heat",
+  "wind",
+  "drought",
+  "wildfire",
+  "hail",
+  "coastal-flood",
+] as const;
+
+export const PERIL_METRICS = ["frequency", "severity"] as const;
+export type PerilMetric = (typeof PERIL_METRICS)[number];
+
+/** Limits on the warming already contained in a baseline risk view (K above 1850–1900). */
+export const BASELINE_WARMING_RANGE = [0, 3] as const;
+/** Warming levels a table may list (K above 1850–1900). */
+export const TABLE_WARMING_RANGE = [0, 10] as const;
+/** Baseline return periods the lens reports (years): the pricing/solvency tail points. */
+export const BASELINE_RETURN_PERIODS = [100, 200] as const;
+
+/** z-scores of the upper end of a central range: 90 % -> 95th percentile, 66 % -> 83rd. */
+const RANGE_Z: Record<90 | 66, number> = { 90: 1.6448536269514722, 66: 0.9541652531461943 };
+/** Standard deviations below the centre that must stay above a rate of −100 % (P < 1e-9). */
+const RATE_SAFETY_SDS = 6;
+
+/**
+ * Checks that a rate distribution cannot give r ≤ −1 (a multiplier base 1 + r ≤ 0).
+ * Bounded shapes need their lower bound above −1; normal and split-normal shapes need
+ * their centre six standard deviations above −1 (truncate them to bound them exactly).
+ */
+function rateSupportProblem(d: Distribution): { field: string; message: string } | null {
+  const floor = "must be > -1 (a rate of -100 % per K or less leaves no hazard)";
+  switch (d.type) {
+    case "fixed":
+      return d.value > -1 ? null : { field: "value", message: floor };
+    case "uniform":
+    case "triangular":
+    case "truncated-normal":
+      return d.min > -1 ? null : { field: "min", message: floor };
+    case "lognormal":
+      return null;
+    case "normal":
+      return d.mean - RATE_SAFETY_SDS * d.sd > -1
+        ? null
+        : { field: "sd", message: "lets the rate reach -100 % per K (mean - 6 sd must be > -1; use truncated-normal)" };
+    case "range": {
+      if (d.shape === "lognormal") return null;
+      const lowSd = (d.p50 - d.low) / RANGE_Z[d.coverage];
+      return d.p50 - RATE_SAFETY_SDS * lowSd > -1
+        ? null
+        : { field: "low", message: "lets the rate reach -100 % per K (p50 - 6 lower sd must be > -1)" };
+    }
+  }
+}
+
+export const perKelvinScalingSchema = z
+  .object({
+    kind: z.literal("per-kelvin"),
+    /** Fractional change per K of warming beyond the baseline (0.07 = 7 %/K), uncertain. */
+    rate: distributionSchema,
+  })
+  .strict()
+  .superRefine((s, ctx) => {
+    const problem = rateSupportProblem(s.rate);
+    if (problem) ctx.addIssue({ code: "custom", path: ["rate", problem.field], message: problem.message });
+  });
+
+export const tablePointSchema = z
+  .object({
+    warming: finite().refine(
+      (v) => v >= TABLE_WARMING_RANGE[0] && v <= TABLE_WARMING_RANGE[1],
+      `must lie between ${TABLE_WARMING_RANGE[0]} and ${TABLE_WARMING_RANGE[1]} K above 1850–1900`,
+    ),
+    multiplier: finite().refine((v) => v > 0, "must be > 0"),
+  })
+  .strict();
+
+export const tableScalingSchema = z
+  .object({
+    kind: z.literal("table"),
+    points: z.array(tablePointSchema, { error: "must be a list of { warming, multiplier }" }).min(2, "must hold at least two points"),
+    beyondTable: z.enum(["hold", "extrapolate"], { error: 'must be "hold" or "extrapolate"' }),
+  })
+  .strict()
+  .superRefine((s, ctx) => {
+    s.points.forEach((p, i) => {
+      const prev = s.points[i - 1];
+      if (prev && !(p.warming > prev.warming))
+        ctx.addIssue({
+          code: "custom",
+          path: ["points", i, "warming"],
+          message: `must be greater than points[${i - 1}].warming (${prev.warming}): warming levels must strictly increase`,
+        });
+    });
+  });
+
+export const perilScalingSchema = z.discriminatedUnion("kind", [perKelvinScalingSchema, tableScalingSchema], {
+  error: 'kind must be "per-kelvin" or "table"',
+});
+
+const slug = (example: string) =>
+  z
+    .string({ error: "must be text" })
+    .trim()
+    .regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, `must be a lower-case slug like "${example}"`);
+const label = () => z.string({ error: "must be text" }).trim().min(1, "must not be empty").max(120, "must be at most 120 characters");
+
+export const perilProfileSchema = z
+  .object({
+    id: z.string({ error: "must be text" }).trim().min(1, "must not be empty").max(64, "must be at most 64 characters"),
+    name: label(),
+    peril: slug("flood-heavy-rainfall"),
+    region: label(),
+    metric: z.enum(PERIL_METRICS, { error: 'must be "frequency" or "severity"' }),
+    baselineWarming: finite().refine(
+      (v) => v >= BASELINE_WARMING_RANGE[0] && v <= BASELINE_WARMING_RANGE[1],
+      `must lie between ${BASELINE_WARMING_RANGE[0]} and ${BASELINE_WARMING_RANGE[1]} K (warming above 1850–1900 already in the risk view)`,
+    ),
+    scaling: perilScalingSchema,
+    /** Where the scaling comes from, with its flag (e.g. "AR6 SPM B.2.4 [read-P]"). */
+    source: z.string({ error: "must be text" }).trim().max(500, "must be at most 500 characters").optional(),
+  })
+  .strict();
+
+/** ISO 4217 codes (currency-codes package), less XTS (testing) and XXX (no currency). */
+export const CURRENCY_CODES: readonly string[] = currencyCodes.codes().filter((c) => c !== "XTS" && c !== "XXX");
+const currencySet = new Set(CURRENCY_CODES);
+
+const money = () => finite().refine((v) => v >= 0, "must not be negative");
+
+/**
+ * One line of a portfolio baseline: the firm's own figures for a region and peril, from
+ * its catastrophe model or experience, in one currency. Losses per year (AAL) and at the
+ * 1-in-100 and 1-in-200 annual return periods.
+ */
+export const portfolioRowSchema = z
+  .object({
+    region: label(),
+    peril: slug("flood-heavy-rainfall"),
+    currency: z
+      .string({ error: "must be text" })
+      .trim()
+      .refine((c) => currencySet.has(c), "must be an ISO 4217 currency code in capitals, such as EUR"),
+    aal: money(),
+    loss100: money(),
+    loss200: money(),
+  })
+  .strict()
+  .superRefine((r, ctx) => {
+    if (r.loss200 < r.loss100)
+      ctx.addIssue({
+        code: "custom",
+        path: ["loss200"],
+        message: `must be at least loss100 (${r.loss100}): a 1-in-200 loss cannot be below the 1-in-100 loss`,
+      });
+  });
+
+/** Rows of a portfolio: each (region, peril) once. Issues name the row index and field. */
+export const portfolioRowsSchema = z
+  .array(portfolioRowSchema, { error: "must be a list of rows" })
+  .min(1, "must hold at least one row")
+  .superRefine((rows, ctx) => {
+    const seen = new Map<string, number>();
+    rows.forEach((r, i) => {
+      const key = `${r.region}\u0000${r.peril}`;
+      const first = seen.get(key);
+      if (first !== undefined)
+        ctx.addIssue({
+          code: "custom",
+          path: [i, "region"],
+          message: `repeats region "${r.region}" with peril "${r.peril}", already given in rows[${first}]`,
+        });
+      else seen.set(key, i);
+    });
+  });
+
+export const portfolioSchema = z
+  .object({
+    id: z.string({ error: "must be text" }).trim().min(1, "must not be empty").max(64, "must be at most 64 characters"),
+    name: label(),
+    rows: portfolioRowsSchema,
+  })
+  .strict();
+
+/** Profiles of one run: ids unique. */
+export const perilProfilesSchema = z.array(perilProfileSchema, { error: "must be a list of peril profiles" }).superRefine((ps, ctx) => {
+  const seen = new Map<string, number>();
+  ps.forEach((p, i) => {
+    const first = seen.get(p.id);
+    if (first !== undefined)
+      ctx.addIssue({ code: "custom", path: [i, "id"], message: `"${p.id}" is used twice (also perils[${first}])` });
+    else seen.set(p.id, i);
+  });
+});
+
+/**
+ * Cross-field checks for a run spec carrying perils: warming levels and baseline warming are
+ * measured against 1850–1900, so the run's anomaly baseline must be 1850–1900.
+ */
+export function perilSpecIssues(spec: {
+  baseline: readonly [number, number];
+  perils?: readonly unknown[] | undefined;
+  portfolio?: unknown;
+}): { path: (string | number)[]; message: string }[] {
+  const issues: { path: (string | number)[]; message: string }[] = [];
+  const hasPerils = (spec.perils?.length ?? 0) > 0;
+  if (hasPerils && (spec.baseline[0] !== 1850 || spec.baseline[1] !== 1900))
+    issues.push({
+      path: ["baseline"],
+      message: "must be [1850, 1900] when perils are given (peril warming levels are measured against 1850–1900)",
+    });
+  if (spec.portfolio !== undefined && spec.portfolio !== null && !hasPerils)
+    issues.push({ path: ["portfolio"], message: "needs at least one peril profile in perils to be projected" });
+  return issues;
+}
+
+/** Summary of one uncertain output: the requested percentiles ("p5" …) and the (weighted) mean. */
+export const perilSummarySchema = z.record(z.string().regex(/^(p\d+(\.\d+)?|mean)$/), z.number());
+
+export const projectedLossSchema = z.object({
+  region: z.string(),
+  peril: z.string(),
+  currency: z.string(),
+  aal: perilSummarySchema,
+  loss100: perilSummarySchema,
+  loss200: perilSummarySchema,
+});
+
+export const perilHorizonResultSchema = z.object({
+  year: z.number().int(),
+  multiplier: perilSummarySchema,
+  /** Frequency profiles: return period (years) of today's 1-in-100 and 1-in-200 events; null for severity. */
+  returnPeriods: z.object({ "100": perilSummarySchema, "200": perilSummarySchema }).nullable(),
+  losses: z.array(projectedLossSchema),
+});
+
+export const perilProfileResultSchema = z.object({
+  profileId: z.string(),
+  name: z.string(),
+  peril: z.string(),
+  region: z.string(),
+  metric: z.enum(PERIL_METRICS),
+  baselineWarming: z.number(),
+  horizons: z.array(perilHorizonResultSchema),
+});
+
+export const pathwayPerilResultSchema = z.object({
+  pathwayId: z.string(),
+  profiles: z.array(perilProfileResultSchema),
+});
+
+export const perilResultSchema = z.object({
+  portfolioId: z.string().nullable(),
+  pathways: z.array(pathwayPerilResultSchema),
+  /** Portfolio rows no profile matched (same peril and region): not projected. */
+  unmatchedRows: z.array(z.object({ region: z.string(), peril: z.string() })),
+});
+
+/** The rules above in plain words, for result screens and workbook cautions. */
+export const PERIL_RULES: readonly string[] = [
+  "Warming is the global-mean anomaly against 1850–1900; multipliers apply only to warming beyond the baseline warming already in the firm's risk view.",
+  "Per-kelvin scaling: multiplier = (1 + r)^(warming − baseline warming), r as a fraction per K, sampled member by member so warming and scaling uncertainty combine.",
+  "Table scaling: straight lines between the table's points, divided by the table's value at the baseline warming (multiplier 1 there); outside the table the end value is held or the end segment's per-kelvin rate is continued, as the profile states.",
+  "Frequency profiles: an event of return period T becomes one of return period T / multiplier; AAL scales by the multiplier; the loss at return period T becomes the baseline loss at return period T × multiplier, read on a straight line through the 1-in-100 and 1-in-200 losses against the logarithm of the return period (same slope beyond them, never below 0).",
+  "Severity profiles: AAL, 1-in-100 and 1-in-200 losses each scale by the multiplier; return periods are not shifted.",
+  "Not a catastrophe model: multipliers adjust the firm's own view of risk. Scaling differs by region, peril and return period (rarer events can change more in frequency); exposure growth, adaptation, compound perils and tipping points are not included.",
+];
+
+export type PerKelvinScaling = z.output<typeof perKelvinScalingSchema>;
+export type TableScaling = z.output<typeof tableScalingSchema>;
+export type PerilScaling = z.output<typeof perilScalingSchema>;
+export type PerilProfile = z.output<typeof perilProfileSchema>;
+export type PortfolioRow = z.output<typeof portfolioRowSchema>;
+export type Portfolio = z.output<typeof portfolioSchema>;
+export type PerilSummary = z.infer<typeof perilSummarySchema>;
+export type ProjectedLoss = z.infer<typeof projectedLossSchema>;
+export type PerilHorizonResult = z.infer<typeof perilHorizonResultSchema>;
+export type PerilProfileResult = z.infer<typeof perilProfileResultSchema>;
+export type PathwayPerilResult = z.infer<typeof pathwayPerilResultSchema>;
+export type PerilResult = z.infer<typeof perilResultSchema>;
