@@ -37,3 +37,19 @@ export const exportRecordSchema = z.object({
   createdAt: z.string(),
 });
 export type ExportRecord = z.infer<typeof exportRecordSchema>;
+
+/**
+ * Limitations shown beside results on screens and in every export (JOB.md "Cautions to show",
+ * DESIGN.md "Cautions the product shows").
+ */
+export const RESULT_CAUTIONS = [
+  "Global mean only: a two-layer energy balance model says nothing by itself about regional climate, extremes or sea level.",
+  "Not a catastrophe model: multipliers adjust the firm's own view of risk; they do not replace it.",
+  "Scenarios are not forecasts: percentiles describe physical-climate uncertainty given a pathway, not the chance of the pathway.",
+  "Per-degree factors apply to warming beyond what the firm's baseline view of risk already contains.",
+  "Scaling differs by region, peril and return period; rarer events can change by more in frequency.",
+  "Missing: tipping points, compound perils, adaptation, exposure growth.",
+  "Inputs can be revised or withdrawn upstream: cite the vintage of every pathway and assumption.",
+  "Results support and do not replace licensed actuarial judgement, local regulation and the firm's model-risk policy.",
+  "Exploratory results (made with a model version that was not approved) are not for filings.",
+] as const;

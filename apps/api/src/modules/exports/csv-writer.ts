@@ -1,0 +1,20 @@
+import { neutraliseFormula } from "./neutralise-formula.js";
+import type { Table, TableCell } from "./result-tables.js";
+
+/**
+ * RFC 4180 CSV: comma-separated, CRLF line ends, fields quoted when they hold a comma, quote or
+ * line break (quotes doubled). Text is formula-neutralised first; numbers are written with
+ * JavaScript's shortest round-trip form so reading them back gives the same doubles.
+ */
+function field(cell: TableCell): string {
+  if (cell === null) return "";
+  if (typeof cell === "number") return Number.isFinite(cell) ? String(cell) : "";
+  const text = neutraliseFormula(cell);
+  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+}
+
+export function tableToCsv(table: Table): string {
+  const lines = [table.columns.map(field).join(",")];
+  for (const row of table.rows) lines.push(row.map(field).join(","));
+  return lines.join("\r\n") + "\r\n";
+}

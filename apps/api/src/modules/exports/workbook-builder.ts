@@ -1,0 +1,172 @@
+import ExcelJS from "exceljs";
+import {
+  CLIMATE_INPUT_UNITS,
+  RESULT_CAUTIONS,
+  type Distribution,
+  type ModelSpec,
+  type ResultTable,
+  type RunResult,
+} from "@plumeline/contracts";
+import { neutraliseFormula } from "./neutralise-formula.js";
+import { resultTable, type Table, type TableCell } from "./result-tables.js";
+
+/** What the manifest sheet states about the run (all of it read from the database, not the request). */
+export interface WorkbookManifest {
+  runId: string;
+  runName: string;
+  exploratory: boolean;
+  createdBy: string;
+  createdAt: string;
+  finishedAt: string | null;
+  modelVersion: {
+    id: string;
+    name: string;
+    versionNumber: number;
+    status: string;
+    changeClass: string | null;
+    decidedBy: string | null;
+    decidedAt: string | null;
+  };
+  pathways: Array<{ id: string; name: string; source: string; vintage: string; startYear: number; endYear: number; checksum: string }>;
+  seed: string;
+  members: number;
+  sampling: string;
+  baseline: [number, number];
+  percentiles: number[];
+  thresholds: number[];
+  horizons: number[];
+  engineVersion: string;
+  inputHash: string;
+  resultHash: string;
+  exportedBy: string;
+  exportedAt: string;
+}
+
+const BOLD = { bold: true } as const;
+
+function safe(cell: TableCell): TableCell {
+  return typeof cell === "string" ? neutraliseFormula(cell) : cell;
+}
+
+function addTableSheet(workbook: ExcelJS.Workbook, name: string, table: Table, note: string): void {
+  const sheet = workbook.addWorksheet(name);
+  sheet.addRow([note]).font = { italic: true };
+  const header = sheet.addRow(table.columns.map(safe));
+  header.font = BOLD;
+  for (const row of table.rows) sheet.addRow(row.map(safe));
+  sheet.views = [{ state: "frozen", ySplit: 2 }];
+  table.columns.forEach((_, i) => (sheet.getColumn(i + 1).width = i < 2 ? 22 : 14));
+}
+
+function describeDistribution(d: Distribution): string {
+  switch (d.type) {
+    case "fixed":
+      return `fixed at ${d.value}`;
+    case "normal":
+      return `normal, mean ${d.mean}, sd ${d.sd}`;
+    case "lognormal":
+      return `lognormal, median ${d.median}, log-sd ${d.logSd}`;
+    case "uniform":
+      return `uniform ${d.min} to ${d.max}`;
+    case "triangular":
+      return `triangular ${d.min} / mode ${d.mode} / ${d.max}`;
+    case "truncated-normal":
+      return `truncated normal, mean ${d.mean}, sd ${d.sd}, within ${d.min} to ${d.max}`;
+    case "range":
+      return `median ${d.p50}, ${d.coverage === 90 ? "5–95" : "17–83"} % range ${d.low} to ${d.high}, fitted ${d.shape}`;
+  }
+}
+
+function addManifest(workbook: ExcelJS.Workbook, m: WorkbookManifest, result: RunResult): void {
+  const sheet = workbook.addWorksheet("Manifest");
+  sheet.getColumn(1).width = 28;
+  sheet.getColumn(2).width = 70;
+  const status = sheet.addRow([
+    "Status",
+    m.exploratory
+      ? "EXPLORATORY — made with a model version that was not approved; not for filings"
+      : "APPROVED — made with an approved model version",
+  ]);
+  status.font = { bold: true, size: 13, color: { argb: m.exploratory ? "FFB42318" : "FF05603A" } };
+  const mv = m.modelVersion;
+  const pairs: Array<[string, TableCell]> = [
+    ["Run", `${m.runName} (${m.runId})`],
+    ["Run made by", m.createdBy],
+    ["Run created at", m.createdAt],
+    ["Run finished at", m.finishedAt],
+    ["Model version", `${mv.name} v${mv.versionNumber} (${mv.id})`],
+    ["Model version status (now)", mv.status],
+    ["Change class", mv.changeClass],
+    ["Decided by", mv.decidedBy],
+    ["Decided at", mv.decidedAt],
+    ["Seed", m.seed],
+    ["Members", m.members],
+    ["Effective members", result.effectiveMembers],
+    ["Sampling", m.sampling],
+    ["Baseline period", `${m.baseline[0]}–${m.baseline[1]}`],
+    ["Percentiles", m.percentiles.join(", ")],
+    ["Thresholds (K)", m.thresholds.join(", ")],
+    ["Horizons", m.horizons.join(", ")],
+    ["Engine version", m.engineVersion],
+    ["Input hash", m.inputHash],
+    ["Result hash", m.resultHash],
+    ["Exported by", m.exportedBy],
+    ["Exported at", m.exportedAt],
+  ];
+  for (const [k, v] of pairs) sheet.addRow([k, safe(v)]).getCell(1).font = BOLD;
+  sheet.addRow([]);
+  sheet.addRow(["Pathways"]).font = BOLD;
+  sheet.addRow(["id", "name", "source", "vintage", "years", "checksum (SHA-256)"]).font = BOLD;
+  for (const p of m.pathways)
+    sheet.addRow([p.id, p.name, p.source, p.vintage, `${p.startYear}–${p.endYear}`, p.checksum].map(safe));
+}
+
+function addInputs(workbook: ExcelJS.Workbook, model: ModelSpec): void {
+  const sheet = workbook.addWorksheet("Inputs");
+  sheet.getColumn(1).width = 24;
+  sheet.getColumn(2).width = 16;
+  sheet.getColumn(3).width = 70;
+  sheet.addRow(["input", "unit", "distribution", "parameters (JSON)"]).font = BOLD;
+  for (const [input, d] of Object.entries(model.climate))
+    sheet.addRow([input, CLIMATE_INPUT_UNITS[input as keyof typeof CLIMATE_INPUT_UNITS] ?? "", describeDistribution(d), JSON.stringify(d)].map(safe));
+  for (const [agent, a] of Object.entries(model.agents))
+    if (a) sheet.addRow([`${agent} forcing scale`, "1", describeDistribution(a.scale), JSON.stringify(a.scale)].map(safe));
+  sheet.addRow(["other agents' forcing scale", "1", "fixed at 1", ""]);
+  sheet.addRow([]);
+  sheet.addRow(["Rank correlations (Iman–Conover)"]).font = BOLD;
+  if (model.correlations.length === 0) sheet.addRow(["none"]);
+  for (const c of model.correlations) sheet.addRow([`${c.between[0]} ~ ${c.between[1]}`, c.rank]);
+  sheet.addRow([]);
+  sheet.addRow(["Observational constraint"]).font = BOLD;
+  const c = model.constraint;
+  sheet.addRow([c ? `warming ${c.from}–${c.to}: observed ${c.observed} K, sd ${c.sd} K` : "none"]);
+  sheet.addRow(["Concentration-to-forcing expression", model.forcingExpression]);
+}
+
+const TABLE_SHEETS: Array<[ResultTable, string, string]> = [
+  ["temperature", "Temperature", "Temperature anomaly (K) vs the baseline period, percentiles by year (linear interpolation, R type 7)"],
+  ["horizons", "Horizons", "At each horizon: temperature percentiles (K), probability of exceeding each threshold, committed warming (K), total forcing (W m-2)"],
+  ["exceedance", "Exceedance", "Probability (0–1) that the year's temperature anomaly exceeds each threshold"],
+  ["crossing", "Crossing years", "Percentiles of the first year each threshold is crossed; share_never = members that never cross within the pathway"],
+  ["sensitivity", "Sensitivity", "Which inputs drive the spread at each horizon (index as reported by the engine)"],
+  ["forcing", "Forcing", "Total effective radiative forcing (W m-2), percentiles by year"],
+  ["imbalance", "Imbalance", "Top-of-atmosphere imbalance (W m-2), percentiles by year"],
+];
+
+/** The run's workbook: Manifest first, result tables, Inputs, Cautions. Returns the .xlsx bytes. */
+export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunResult, model: ModelSpec): Promise<Buffer> {
+  const workbook = new ExcelJS.Workbook();
+  workbook.creator = "Plumeline";
+  // Fixed dates keep the bytes of two exports of the same run comparable apart from the manifest.
+  workbook.created = new Date(manifest.exportedAt);
+  workbook.modified = new Date(manifest.exportedAt);
+  addManifest(workbook, manifest, result);
+  const tag = manifest.exploratory ? "EXPLORATORY — " : "";
+  for (const [table, name, note] of TABLE_SHEETS) addTableSheet(workbook, name, resultTable(result, table), `${tag}${note}`);
+  addInputs(workbook, model);
+  const cautions = workbook.addWorksheet("Cautions");
+  cautions.getColumn(1).width = 120;
+  cautions.addRow(["Cautions — read before using these results"]).font = BOLD;
+  for (const c of RESULT_CAUTIONS) cautions.addRow([neutraliseFormula(c)]);
+  return Buffer.from(await workbook.xlsx.writeBuffer());
+}
