@@ -1,0 +1,104 @@
+/**
+ * Peril lens shapes as the engine sees them. They mirror the shared contracts
+ * (packages/contracts/src/engine/peril.ts) field for field; the engine library imports
+ * nothing of ours, so they are restated here. The rules they follow are written out in
+ * the contracts file and in PERIL_RULES there.
+ */
+import type { Distribution } from "../distributions/types.js";
+
+export type PerilMetric = "frequency" | "severity";
+
+/** multiplier = (1 + r)^(ΔT − ΔT0), r a fraction per K (0.07 = 7 %/K), r > −1. */
+export interface PerKelvinScaling {
+  kind: "per-kelvin";
+  rate: Distribution;
+}
+
+/** A point of a scaling table: the metric at a global warming level (K above 1850–1900). */
+export interface TablePoint {
+  warming: number;
+  multiplier: number;
+}
+
+/**
+ * Multipliers by warming level, relative to any fixed reference; the lens divides by the
+ * value at the baseline warming. "hold" keeps the end value beyond the table, "extrapolate"
+ * continues the end segment's per-kelvin (geometric) rate.
+ */
+export interface TableScaling {
+  kind: "table";
+  points: TablePoint[];
+  beyondTable: "hold" | "extrapolate";
+}
+
+export type PerilScaling = PerKelvinScaling | TableScaling;
+
+export interface PerilProfile {
+  id: string;
+  name: string;
+  /** Lower-case slug: "flood-heavy-rainfall", "heat", "wind", … */
+  peril: string;
+  region: string;
+  metric: PerilMetric;
+  /** Warming already in the firm's risk view, K above 1850–1900 (0–3). */
+  baselineWarming: number;
+  scaling: PerilScaling;
+  source?: string;
+}
+
+/** The firm's baseline figures for one region and peril, in one currency. */
+export interface PortfolioRow {
+  region: string;
+  peril: string;
+  currency: string;
+  aal: number;
+  loss100: number;
+  loss200: number;
+}
+
+export interface Portfolio {
+  id: string;
+  name: string;
+  rows: PortfolioRow[];
+}
+
+/** Requested percentiles ("p5", …) and the (weighted) mean of one uncertain output. */
+export type PerilSummary = Record<string, number>;
+
+export interface ProjectedLoss {
+  region: string;
+  peril: string;
+  currency: string;
+  aal: PerilSummary;
+  loss100: PerilSummary;
+  loss200: PerilSummary;
+}
+
+export interface PerilHorizonResult {
+  year: number;
+  multiplier: PerilSummary;
+  /** Frequency profiles: return period of today's 1-in-100 and 1-in-200 events; null for severity. */
+  returnPeriods: { "100": PerilSummary; "200": PerilSummary } | null;
+  losses: ProjectedLoss[];
+}
+
+export interface PerilProfileResult {
+  profileId: string;
+  name: string;
+  peril: string;
+  region: string;
+  metric: PerilMetric;
+  baselineWarming: number;
+  horizons: PerilHorizonResult[];
+}
+
+export interface PathwayPerilResult {
+  pathwayId: string;
+  profiles: PerilProfileResult[];
+}
+
+export interface PerilResult {
+  portfolioId: string | null;
+  pathways: PathwayPerilResult[];
+  unmatchedRows: { region: string; peril: string }[];
+}
