@@ -1,0 +1,57 @@
+import { existsSync } from "node:fs";
+import path from "node:path";
+import { toNodeHandler } from "better-auth/node";
+import express from "express";
+import { rateLimit } from "express-rate-limit";
+import helmet from "helmet";
+import type { AppContext } from "./context.js";
+import { AppError } from "./errors/app-error.js";
+import { errorHandler } from "./errors/error-handler.js";
+import { requireTrustedOrigin } from "./middleware/require-trusted-origin.js";
+import { moduleRouters } from "./modules/index.js";
+
+const JSON_LIMIT = "1mb";
+
+/** Builds the Express app around a context without listening, so tests drive it in-process. */
+export function createApp(ctx: AppContext): express.Express {
+  const app = express();
+  app.locals.ctx = ctx;
+  app.disable("x-powered-by");
+  app.set("trust proxy", "loopback");
+  app.use(helmet());
+
+  // Sign-in attempts per client address; on top of better-auth's own limiter.
+  app.use(
+    "/api/auth/sign-in",
+    rateLimit({
+      windowMs: 60_000,
+      limit: ctx.config.signInRateLimit,
+      standardHeaders: "draft-7",
+      legacyHeaders: false,
+      handler: (_req, res) => {
+        res.status(429).json({ error: { code: "rate_limited", message: "Too many sign-in attempts. Wait a minute and try again." } });
+      },
+    }),
+  );
+  // better-auth reads the raw body itself, so it is mounted before express.json().
+  app.all("/api/auth/*splat", toNodeHandler(ctx.auth));
+
+  app.use(express.json({ limit: JSON_LIMIT }));
+  const api = express.Router();
+  api.use(requireTrustedOrigin);
+  for (const [mountPath, router] of moduleRouters) api.use(mountPath, router);
+  api.use((req, _res, next) => next(new AppError(404, "not_found", `No API endpoint ${req.method} ${req.baseUrl}${req.path}.`)));
+  app.use("/api", api);
+
+  serveWebBuild(app, ctx.config.webDist);
+  app.use(errorHandler);
+  return app;
+}
+
+/** Serves the built web app with an SPA fallback: any non-/api GET gets index.html. */
+function serveWebBuild(app: express.Express, webDist: string): void {
+  const indexHtml = path.join(webDist, "index.html");
+  if (!existsSync(indexHtml)) return;
+  app.use(express.static(webDist, { index: false, maxAge: "1h" }));
+  app.get(/^(?!\/api(?:\/|$)).*/, (_req, res) => res.sendFile(indexHtml));
+}

@@ -1,0 +1,70 @@
+import { betterAuth } from "better-auth";
+import { createAuthMiddleware, isAPIError } from "better-auth/api";
+import { admin } from "better-auth/plugins";
+import type { Config } from "../config.js";
+import type { Models } from "../db/models.js";
+import { accessControl, authRoles } from "./access-control.js";
+import { sequelizeAdapter } from "./sequelize-adapter.js";
+
+export interface SignInFailure {
+  email: string | null;
+  reason: string;
+  ipAddress: string | null;
+}
+
+export interface CreateAuthOptions {
+  config: Config;
+  models: Models;
+  onSignInFailure: (failure: SignInFailure) => Promise<void>;
+}
+
+/**
+ * The better-auth instance: email + password only, sign-up disabled (admins invite), sessions
+ * stored in SQLite through our Sequelize adapter, roles through the admin plugin.
+ * Mounted by app.ts at /api/auth/*splat.
+ */
+export function createAuth({ config, models, onSignInFailure }: CreateAuthOptions) {
+  const secureCookies = config.publicOrigin.startsWith("https://");
+  return betterAuth({
+    appName: "Plumeline",
+    baseURL: config.publicOrigin,
+    basePath: "/api/auth",
+    secret: config.authSecret,
+    trustedOrigins: config.trustedOrigins,
+    telemetry: { enabled: false },
+    database: sequelizeAdapter({
+      models: { user: models.User, session: models.Session, account: models.Account, verification: models.Verification },
+    }),
+    emailAndPassword: { enabled: true, disableSignUp: true, minPasswordLength: 10, maxPasswordLength: 128 },
+    session: { expiresIn: 60 * 60 * 12, updateAge: 60 * 60 },
+    rateLimit: {
+      enabled: true,
+      window: 60,
+      max: 300,
+      customRules: { "/sign-in/email": { window: 60, max: config.signInRateLimit } },
+    },
+    advanced: {
+      // better-auth skips its origin/CSRF check under test runners by default; keep it on everywhere.
+      disableOriginCheck: false,
+      useSecureCookies: secureCookies,
+      defaultCookieAttributes: { httpOnly: true, sameSite: "lax", secure: secureCookies },
+    },
+    plugins: [admin({ ac: accessControl, roles: authRoles, defaultRole: "analyst", adminRoles: ["admin"] })],
+    hooks: {
+      // Runs after every auth endpoint, also when it failed: `returned` then holds the error.
+      after: createAuthMiddleware(async (ctx) => {
+        if (ctx.path !== "/sign-in/email") return;
+        const returned = ctx.context.returned;
+        if (!isAPIError(returned)) return;
+        const body = (ctx.body ?? {}) as { email?: unknown };
+        await onSignInFailure({
+          email: typeof body.email === "string" ? body.email.toLowerCase().slice(0, 254) : null,
+          reason: returned.body?.code ?? returned.message ?? String(returned.status),
+          ipAddress: ctx.request?.headers.get("x-forwarded-for") ?? null,
+        });
+      }),
+    },
+  });
+}
+
+export type Auth = ReturnType<typeof createAuth>;

@@ -1,0 +1,74 @@
+import type { Role } from "@plumeline/contracts";
+import { roles } from "@plumeline/contracts";
+
+/** Every named permission a route can require (docs/API.md). */
+export const permissions = [
+  "pathways:read",
+  "pathways:write",
+  "model-versions:read",
+  "model-versions:write",
+  "model-versions:decide",
+  "runs:read",
+  "runs:create",
+  "exports:create",
+  "perils:read",
+  "perils:write",
+  "audit:read",
+  "users:manage",
+  "outbox:read",
+] as const;
+export type Permission = (typeof permissions)[number];
+
+/** THE one role -> permission table. Ownership rules (no self-approval) live in the services. */
+export const permissionsByRole: Record<Role, readonly Permission[]> = {
+  analyst: [
+    "pathways:read",
+    "pathways:write",
+    "model-versions:read",
+    "model-versions:write",
+    "runs:read",
+    "runs:create",
+    "exports:create",
+    "perils:read",
+    "perils:write",
+  ],
+  actuary: [
+    "pathways:read",
+    "model-versions:read",
+    "runs:read",
+    "runs:create",
+    "exports:create",
+    "perils:read",
+    "perils:write",
+  ],
+  manager: [
+    "pathways:read",
+    "model-versions:read",
+    "model-versions:decide",
+    "runs:read",
+    "exports:create",
+    "perils:read",
+    "audit:read",
+  ],
+  admin: [
+    "pathways:read",
+    "model-versions:read",
+    "runs:read",
+    "perils:read",
+    "audit:read",
+    "users:manage",
+    "outbox:read",
+  ],
+};
+
+export function isRole(value: unknown): value is Role {
+  return typeof value === "string" && (roles as readonly string[]).includes(value);
+}
+
+export function hasPermission(role: Role, permission: Permission): boolean {
+  return permissionsByRole[role].includes(permission);
+}
+
+export function permissionsOf(role: Role): Permission[] {
+  return [...permissionsByRole[role]];
+}

@@ -1,0 +1,103 @@
+import { randomBytes } from "node:crypto";
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import { fileURLToPath } from "node:url";
+import { z } from "zod";
+
+/** The repository root, so defaults (data folder, web build) do not depend on the cwd. */
+export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../../..");
+
+const envSchema = z.object({
+  NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
+  PORT: z.coerce.number().int().min(0).max(65535).default(4000),
+  HOST: z.string().min(1).default("0.0.0.0"),
+  PLUMELINE_DATA_DIR: z.string().min(1).optional(),
+  DATABASE_FILE: z.string().min(1).optional(),
+  AUTH_SECRET: z.string().min(32, "must be at least 32 characters").optional(),
+  PUBLIC_ORIGIN: z.url().optional(),
+  TRUSTED_ORIGINS: z.string().optional(),
+  SMTP_URL: z.url().optional(),
+  SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(0),
+  MAIL_FROM: z.string().min(3).default("Plumeline <no-reply@plumeline.invalid>"),
+  WORKERS: z.coerce.number().int().min(1).max(64).optional(),
+  QUEUE: z.enum(["sqlite", "bullmq"]).default("sqlite"),
+  REDIS_URL: z.url().optional(),
+  SIGN_IN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+  WEB_DIST: z.string().min(1).optional(),
+  SEED_DEMO: z.enum(["true", "false"]).default("true"),
+});
+
+export interface Config {
+  env: "development" | "production" | "test";
+  port: number;
+  host: string;
+  dataDir: string;
+  databaseFile: string;
+  authSecret: string;
+  /** Origin the app is served from; cookies are `Secure` when it is https. */
+  publicOrigin: string;
+  trustedOrigins: string[];
+  /** Unset: mail goes to the embedded SMTP server and lands in the outbox. */
+  smtpUrl: string | undefined;
+  /** Port of the embedded SMTP server; 0 picks a free one. */
+  smtpPort: number;
+  mailFrom: string;
+  workers: number;
+  queue: "sqlite" | "bullmq";
+  redisUrl: string | undefined;
+  /** Sign-in attempts allowed per client address per minute. */
+  signInRateLimit: number;
+  webDist: string;
+  seedDemo: boolean;
+}
+
+export class ConfigError extends Error {
+  override name = "ConfigError";
+}
+
+/** Parses the environment once, fails fast naming every bad variable, and fills safe defaults. */
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
+  const parsed = envSchema.safeParse(env);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((issue) => `${issue.path.join(".")}: ${issue.message}`);
+    throw new ConfigError(`Invalid configuration:\n  ${lines.join("\n  ")}`);
+  }
+  const e = parsed.data;
+  if (e.QUEUE === "bullmq" && !e.REDIS_URL) throw new ConfigError("Invalid configuration:\n  REDIS_URL: required when QUEUE=bullmq");
+
+  const dataDir = path.resolve(repoRoot, e.PLUMELINE_DATA_DIR ?? "data");
+  const publicOrigin = (e.PUBLIC_ORIGIN ?? `http://localhost:${e.PORT}`).replace(/\/$/, "");
+  const extraOrigins = (e.TRUSTED_ORIGINS ?? "").split(",").map((o) => o.trim()).filter(Boolean);
+  const localOrigins = [`http://localhost:${e.PORT}`, `http://127.0.0.1:${e.PORT}`, "http://localhost:5173"];
+
+  return {
+    env: e.NODE_ENV,
+    port: e.PORT,
+    host: e.HOST,
+    dataDir,
+    databaseFile: path.resolve(dataDir, e.DATABASE_FILE ?? "plumeline.db"),
+    authSecret: e.AUTH_SECRET ?? readOrCreateSecret(dataDir),
+    publicOrigin,
+    trustedOrigins: [...new Set([publicOrigin, ...localOrigins, ...extraOrigins])],
+    smtpUrl: e.SMTP_URL,
+    smtpPort: e.SMTP_PORT,
+    mailFrom: e.MAIL_FROM,
+    workers: e.WORKERS ?? os.availableParallelism(),
+    queue: e.QUEUE,
+    redisUrl: e.REDIS_URL,
+    signInRateLimit: e.SIGN_IN_RATE_LIMIT,
+    webDist: path.resolve(repoRoot, e.WEB_DIST ?? "apps/web/dist"),
+    seedDemo: e.SEED_DEMO === "true",
+  };
+}
+
+/** A secret generated on first start and kept in the data folder, so sessions survive restarts. */
+function readOrCreateSecret(dataDir: string): string {
+  const file = path.join(dataDir, "auth-secret");
+  if (existsSync(file)) return readFileSync(file, "utf8").trim();
+  mkdirSync(dataDir, { recursive: true });
+  const secret = randomBytes(32).toString("base64url");
+  writeFileSync(file, secret, { mode: 0o600 });
+  return secret;
+}

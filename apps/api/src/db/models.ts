@@ -1,0 +1,29 @@
+import type { Sequelize } from "sequelize";
+import { initAccountModel } from "../auth/account.model.js";
+import { initSessionModel } from "../auth/session.model.js";
+import { initVerificationModel } from "../auth/verification.model.js";
+import { initAuditEventModel } from "../modules/audit/audit-event.model.js";
+import { initOutboxMessageModel } from "../modules/outbox/outbox-message.model.js";
+import { initUserModel } from "../modules/users/user.model.js";
+
+/**
+ * Registers every module's model on this Sequelize instance. Model classes bind to the
+ * instance they were last initialised with, so a process keeps one open context at a time.
+ * Add one line per model (and associations below); the schema itself comes from migrations.
+ */
+export function initModels(sequelize: Sequelize) {
+  const models = {
+    // foundation
+    User: initUserModel(sequelize),
+    Session: initSessionModel(sequelize),
+    Account: initAccountModel(sequelize),
+    Verification: initVerificationModel(sequelize),
+    AuditEvent: initAuditEventModel(sequelize),
+    OutboxMessage: initOutboxMessageModel(sequelize),
+    // domain (pathways, model versions, runs, jobs, results, exports)
+    // peril (peril profiles, portfolios)
+  };
+  return models;
+}
+
+export type Models = ReturnType<typeof initModels>;

@@ -1,0 +1,69 @@
+import type { ErrorRequestHandler } from "express";
+import type { ApiError, ErrorDetail } from "@plumeline/contracts";
+import { formatPath } from "@plumeline/contracts";
+import multer from "multer";
+import { ZodError } from "zod";
+import { AppError, type AppErrorStatus } from "./app-error.js";
+
+/**
+ * The status each AppError status maps to. Written out on purpose (not `err.status || 500`):
+ * a status outside this table is a programming error and answers 500.
+ */
+const statusByAppErrorStatus: Record<AppErrorStatus, number> = {
+  400: 400,
+  401: 401,
+  403: 403,
+  404: 404,
+  409: 409,
+  413: 413,
+};
+
+interface Mapped {
+  status: number;
+  body: ApiError;
+}
+
+/** Turns any thrown value into a status and the one error body shape (docs/API.md). */
+export function toErrorResponse(err: unknown): Mapped {
+  if (err instanceof AppError) {
+    const status = statusByAppErrorStatus[err.status];
+    if (status !== undefined) {
+      return { status, body: { error: { code: err.code, message: err.message, ...(err.details ? { details: err.details } : {}) } } };
+    }
+  }
+  if (err instanceof ZodError) {
+    const details: ErrorDetail[] = err.issues.map((issue) => ({ path: formatPath(issue.path), message: issue.message }));
+    return { status: 400, body: { error: { code: "validation_failed", message: "The request has invalid fields.", details } } };
+  }
+  if (err instanceof multer.MulterError) {
+    if (err.code === "LIMIT_FILE_SIZE" || err.code === "LIMIT_FIELD_VALUE" || err.code === "LIMIT_FILE_COUNT") {
+      return { status: 413, body: { error: { code: "payload_too_large", message: `Upload too large: ${err.message}.` } } };
+    }
+    return { status: 400, body: { error: { code: "bad_upload", message: err.message, details: [{ path: err.field ?? "file", message: err.message }] } } };
+  }
+  // body-parser errors carry `type` and a status: oversized or malformed JSON bodies.
+  if (isBodyParserError(err)) {
+    if (err.type === "entity.too.large") {
+      return { status: 413, body: { error: { code: "payload_too_large", message: "The request body is too large." } } };
+    }
+    if (err.type === "entity.parse.failed") {
+      return { status: 400, body: { error: { code: "malformed_json", message: "The request body is not valid JSON." } } };
+    }
+  }
+  return { status: 500, body: { error: { code: "internal_error", message: "Something went wrong on our side. It has been logged." } } };
+}
+
+function isBodyParserError(err: unknown): err is { type: string; status: number } {
+  return typeof err === "object" && err !== null && typeof (err as { type?: unknown }).type === "string" && typeof (err as { status?: unknown }).status === "number";
+}
+
+/** The ONE error handler, mounted last in app.ts. Logs only unexpected failures. */
+export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
+  const { status, body } = toErrorResponse(err);
+  if (status === 500) console.error(`[api] ${req.method} ${req.originalUrl} failed:`, err);
+  if (res.headersSent) {
+    res.end();
+    return;
+  }
+  res.status(status).json(body);
+};

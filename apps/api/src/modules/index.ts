@@ -1,0 +1,21 @@
+import type { Router } from "express";
+import { auditRouter } from "./audit/audit.routes.js";
+import { healthRouter } from "./health/health.routes.js";
+import { meRouter } from "./me/me.routes.js";
+import { outboxRouter } from "./outbox/outbox.routes.js";
+import { usersRouter } from "./users/users.routes.js";
+
+/**
+ * Every module's router and the path it is mounted at under /api. app.ts mounts them in
+ * this order. Add one line per module.
+ */
+export const moduleRouters: ReadonlyArray<readonly [path: string, router: Router]> = [
+  // foundation
+  ["/health", healthRouter],
+  ["/me", meRouter],
+  ["/users", usersRouter],
+  ["/audit", auditRouter],
+  ["/outbox", outboxRouter],
+  // domain (pathways, model-versions, runs, results, exports)
+  // peril (peril-profiles, portfolios)
+];

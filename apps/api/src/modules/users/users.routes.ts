@@ -1,0 +1,18 @@
+import { inviteUserBodySchema, updateUserBodySchema, userIdParamsSchema } from "@plumeline/contracts";
+import { Router } from "express";
+import { authenticate } from "../../middleware/authenticate.js";
+import { requirePermission } from "../../middleware/require-permission.js";
+import { validate } from "../../middleware/validate.js";
+import { usersController } from "./users.controller.js";
+
+export const usersRouter = Router();
+
+usersRouter.get("/", authenticate, requirePermission("users:manage"), usersController.list);
+usersRouter.post("/", authenticate, requirePermission("users:manage"), validate({ body: inviteUserBodySchema }), usersController.invite);
+usersRouter.patch(
+  "/:id",
+  authenticate,
+  requirePermission("users:manage"),
+  validate({ params: userIdParamsSchema, body: updateUserBodySchema }),
+  usersController.update,
+);

@@ -1,0 +1,3 @@
+export * from "./organisation.js";
+export * from "./users.js";
+// Domain seed data (pathways, model versions) and peril seed data are exported below.
