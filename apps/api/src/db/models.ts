@@ -5,6 +5,12 @@ import { initVerificationModel } from "../auth/verification.model.js";
 import { initAuditEventModel } from "../modules/audit/audit-event.model.js";
 import { initOutboxMessageModel } from "../modules/outbox/outbox-message.model.js";
 import { initUserModel } from "../modules/users/user.model.js";
+import { initPathwayModel } from "../modules/pathways/pathway.model.js";
+import { initModelVersionModel } from "../modules/model-versions/model-version.model.js";
+import { initRunModel } from "../modules/runs/run.model.js";
+import { initJobModel } from "../queue/job.model.js";
+import { initRunResultModel, initRunResultRowModel } from "../modules/results/run-result.model.js";
+import { initExportRecordModel } from "../modules/exports/export-record.model.js";
 
 /**
  * Registers every module's model on this Sequelize instance. Model classes bind to the
@@ -21,6 +27,13 @@ export function initModels(sequelize: Sequelize) {
     AuditEvent: initAuditEventModel(sequelize),
     OutboxMessage: initOutboxMessageModel(sequelize),
     // domain (pathways, model versions, runs, jobs, results, exports)
+    Pathway: initPathwayModel(sequelize),
+    ModelVersion: initModelVersionModel(sequelize),
+    Run: initRunModel(sequelize),
+    Job: initJobModel(sequelize),
+    RunResult: initRunResultModel(sequelize),
+    RunResultRow: initRunResultRowModel(sequelize),
+    ExportRecord: initExportRecordModel(sequelize),
     // peril (peril profiles, portfolios)
   };
   return models;

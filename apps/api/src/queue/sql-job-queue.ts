@@ -1,0 +1,130 @@
+import { randomUUID } from "node:crypto";
+import { Op, type Transaction } from "sequelize";
+import type { JobModel } from "./job.model.js";
+import type { ClaimedJob, JobQueue } from "./job-queue.js";
+
+const DEFAULT_MAX_ATTEMPTS = 3;
+
+/**
+ * The durable queue as a table (STYLE.md example 5). Claims are a guarded update: the row
+ * changes from 'queued' to 'running' only if it is still 'queued', so of two workers racing
+ * for one row exactly one sees "1 row updated"; the other moves on to the next candidate.
+ * Every later write is guarded by `locked_by`, so a worker whose job was re-queued under it
+ * cannot overwrite the new owner's state.
+ */
+export function createSqlJobQueue(Job: typeof JobModel): JobQueue {
+  return {
+    async enqueue(type, payload, transaction, options = {}) {
+      const id = randomUUID();
+      await Job.create(
+        { id, type, payload, status: "queued", maxAttempts: options.maxAttempts ?? DEFAULT_MAX_ATTEMPTS },
+        { transaction },
+      );
+      return id;
+    },
+
+    async claimNext(workerId, types) {
+      // A few candidates, oldest first; losing a race on one just tries the next.
+      for (;;) {
+        const candidates = await Job.findAll({
+          where: { status: "queued", type: { [Op.in]: [...types] } },
+          order: [["createdAt", "ASC"], ["id", "ASC"]],
+          limit: 5,
+          attributes: ["id"],
+        });
+        if (candidates.length === 0) return null;
+        for (const { id } of candidates) {
+          const now = new Date();
+          const [claimed] = await Job.update(
+            {
+              status: "running",
+              lockedBy: workerId,
+              lockedAt: now,
+              heartbeatAt: now,
+              startedAt: now,
+              attempts: Job.sequelize!.literal("attempts + 1"),
+            },
+            { where: { id, status: "queued" } },
+          );
+          if (claimed === 1) {
+            const row = await Job.findByPk(id);
+            if (!row) continue;
+            return { id, type: row.type, payload: row.payload, attempts: row.attempts, maxAttempts: row.maxAttempts, lockedBy: workerId } satisfies ClaimedJob;
+          }
+        }
+      }
+    },
+
+    async heartbeat(jobId, workerId, progress) {
+      const [updated] = await Job.update(
+        { progress, heartbeatAt: new Date() },
+        { where: { id: jobId, lockedBy: workerId, status: "running" } },
+      );
+      const row = await Job.findByPk(jobId, { attributes: ["cancelRequested", "status", "lockedBy"] });
+      return { cancelRequested: Boolean(row?.cancelRequested), stillOwned: updated === 1 };
+    },
+
+    async finish(jobId, workerId, status, transaction, error) {
+      const [updated] = await Job.update(
+        { status, finishedAt: new Date(), lockedBy: null, lastError: error ?? null, ...(status === "succeeded" ? { progress: 1 } : {}) },
+        { where: { id: jobId, lockedBy: workerId, status: "running" }, transaction },
+      );
+      return updated === 1;
+    },
+
+    async release(jobId, workerId, reason, options = {}) {
+      const row = await Job.findByPk(jobId);
+      if (!row || row.lockedBy !== workerId || row.status !== "running") return null;
+      // A shutdown is not the job's fault: it gets its attempt back.
+      const attempts = options.refundAttempt ? Math.max(0, row.attempts - 1) : row.attempts;
+      const status = row.cancelRequested ? "cancelled" : attempts >= row.maxAttempts ? "failed" : "queued";
+      const [updated] = await Job.update(
+        {
+          status,
+          attempts,
+          lockedBy: null,
+          lockedAt: null,
+          lastError: reason,
+          finishedAt: status === "queued" ? null : new Date(),
+        },
+        { where: { id: jobId, lockedBy: workerId, status: "running" } },
+      );
+      if (updated !== 1) return null;
+      return status;
+    },
+
+    async requestCancel(jobId, transaction) {
+      const opts = transaction ? { transaction } : {};
+      const [cancelledQueued] = await Job.update(
+        { status: "cancelled", cancelRequested: true, finishedAt: new Date() },
+        { where: { id: jobId, status: "queued" }, ...opts },
+      );
+      if (cancelledQueued === 1) return "cancelled";
+      const [flagged] = await Job.update({ cancelRequested: true }, { where: { id: jobId, status: "running" }, ...opts });
+      return flagged === 1 ? "requested" : "finished";
+    },
+
+    async requeueAbandoned(olderThan) {
+      const where = olderThan
+        ? { status: "running", heartbeatAt: { [Op.lt]: olderThan } }
+        : { status: "running" };
+      const rows = await Job.findAll({ where });
+      const out: Array<{ id: string; status: "queued" | "failed" }> = [];
+      for (const row of rows) {
+        const status = row.attempts >= row.maxAttempts ? "failed" : "queued";
+        const [updated] = await Job.update(
+          {
+            status,
+            lockedBy: null,
+            lockedAt: null,
+            lastError: `worker ${row.lockedBy ?? "?"} stopped while running the job (attempt ${row.attempts} of ${row.maxAttempts})`,
+            finishedAt: status === "failed" ? new Date() : null,
+          },
+          { where: { id: row.id, status: "running", lockedBy: row.lockedBy } },
+        );
+        if (updated === 1) out.push({ id: row.id, status });
+      }
+      return out;
+    },
+  };
+}

@@ -1,0 +1,177 @@
+import { runJobPayloadSchema, runResultSchema } from "@plumeline/contracts";
+import type { AppContext } from "../context.js";
+import { recordAudit } from "../modules/audit/audit.service.js";
+import { storeRunResult } from "../modules/results/store-run-result.js";
+import type { RunModel } from "../modules/runs/run.model.js";
+import type { ClaimedJob, JobQueue } from "../queue/job-queue.js";
+import { EngineThreadCrashed, type EngineOutcome, type EngineThread } from "./engine-thread-client.js";
+import { mailRunOutcome } from "./run-notifications.js";
+
+export const RUN_JOB_TYPE = "ensemble-run";
+
+export type WorkerContext = Pick<AppContext, "models" | "sequelize" | "mailer" | "config">;
+
+export interface StepOptions {
+  /** Least time between two progress writes to the database (the engine reports far more often). */
+  progressWriteMs?: number;
+  /** True while the server shuts down: a job interrupted then gets its attempt back. */
+  isStopping?: () => boolean;
+}
+
+export type StepOutcome = "idle" | "succeeded" | "failed" | "cancelled" | "requeued";
+
+/**
+ * One worker step (STYLE.md example 5): claim the oldest queued run job, run the engine in
+ * `thread`, and write the outcome. The result, the run's new state, the job's end and the
+ * audit row commit in ONE transaction, so a run is never "succeeded" without its result.
+ * A thread crash gives the job back to the queue (or fails it after its last attempt).
+ */
+export async function processNextRunJob(
+  ctx: WorkerContext,
+  queue: JobQueue,
+  workerId: string,
+  thread: EngineThread,
+  options: StepOptions = {},
+): Promise<StepOutcome> {
+  const job = await queue.claimNext(workerId, [RUN_JOB_TYPE]);
+  if (!job) return "idle";
+  const payload = runJobPayloadSchema.safeParse(job.payload);
+  const run = payload.success ? await ctx.models.Run.findByPk(payload.data.runId) : null;
+  if (!run) {
+    const reason = payload.success ? `run ${payload.data.runId} no longer exists` : "job payload is not a run job";
+    await ctx.sequelize.transaction((t) => queue.finish(job.id, workerId, "failed", t, reason));
+    return "failed";
+  }
+  await run.update({ status: "running", startedAt: new Date(), progress: 0, error: null });
+
+  const progress = throttledProgress(ctx, queue, job, run, thread, options.progressWriteMs ?? 500);
+  let outcome: EngineOutcome;
+  try {
+    outcome = await thread.run(run.spec, progress.report);
+  } catch (error) {
+    await progress.flush();
+    if (!(error instanceof EngineThreadCrashed)) throw error;
+    const stopping = options.isStopping?.() ?? false;
+    return giveBack(ctx, queue, job, run, stopping ? "the server shut down while the run was in progress" : error.message, stopping);
+  }
+  await progress.flush();
+  return writeOutcome(ctx, queue, job, run, outcome);
+}
+
+/** Progress writes at most every `everyMs`, one at a time; each doubles as heartbeat and cancel check. */
+function throttledProgress(ctx: WorkerContext, queue: JobQueue, job: ClaimedJob, run: RunModel, thread: EngineThread, everyMs: number) {
+  let last = 0;
+  let chain: Promise<void> = Promise.resolve();
+  let writing = false;
+  return {
+    report(fraction: number) {
+      const now = Date.now();
+      if (writing || now - last < everyMs) return;
+      last = now;
+      writing = true;
+      chain = chain
+        .then(async () => {
+          const beat = await queue.heartbeat(job.id, job.lockedBy, fraction);
+          if (beat.cancelRequested) thread.cancel();
+          await ctx.models.Run.update({ progress: fraction }, { where: { id: run.id, status: "running" } });
+        })
+        .catch((error) => console.error(`[worker] progress write for run ${run.id} failed:`, error))
+        .finally(() => (writing = false));
+    },
+    flush: () => chain,
+  };
+}
+
+async function writeOutcome(ctx: WorkerContext, queue: JobQueue, job: ClaimedJob, run: RunModel, outcome: EngineOutcome): Promise<StepOutcome> {
+  const finishedAt = new Date();
+  let status: "succeeded" | "failed" | "cancelled" = outcome.kind === "done" ? "succeeded" : outcome.kind;
+  let error = outcome.kind === "failed" ? outcome.message : null;
+  if (outcome.kind === "done") {
+    const checked = runResultSchema.safeParse(outcome.result);
+    if (!checked.success) {
+      status = "failed";
+      error = `the engine returned a result that does not match the contract: ${checked.error.issues[0]?.message ?? "invalid"}`;
+    }
+  }
+  await ctx.sequelize.transaction(async (transaction) => {
+    if (status === "succeeded" && outcome.kind === "done") {
+      await storeRunResult(ctx.models, run.id, outcome.result, transaction);
+      await run.update(
+        { status, progress: 1, finishedAt, engineVersion: outcome.result.engineVersion, resultHash: outcome.result.resultHash, error: null },
+        { transaction },
+      );
+    } else {
+      await run.update({ status, finishedAt, error }, { transaction });
+    }
+    const finished = await queue.finish(job.id, job.lockedBy, status, transaction, error ?? undefined);
+    if (!finished) throw new Error(`job ${job.id} is no longer held by ${job.lockedBy}; outcome discarded`);
+    await recordAudit(
+      ctx,
+      {
+        actorId: null,
+        action: `run.${status}`,
+        entityType: "run",
+        entityId: run.id,
+        summary:
+          status === "succeeded"
+            ? `Run "${run.name}" finished (${run.members} members, result hash ${run.resultHash}).`
+            : status === "cancelled"
+              ? `Run "${run.name}" was cancelled while running.`
+              : `Run "${run.name}" failed: ${error}`,
+        data: { jobId: job.id, attempt: job.attempts, workerId: job.lockedBy, resultHash: run.resultHash, error },
+      },
+      transaction,
+    );
+  });
+  await mailRunOutcome(ctx, run);
+  return status;
+}
+
+/** The thread died under the job: back to the queue while attempts remain, else failed with the reason. */
+async function giveBack(ctx: WorkerContext, queue: JobQueue, job: ClaimedJob, run: RunModel, reason: string, refundAttempt = false): Promise<StepOutcome> {
+  const status = await queue.release(job.id, job.lockedBy, reason, { refundAttempt });
+  if (status === null) return "failed";
+  const runStatus = status === "queued" ? "queued" : status;
+  await run.update({
+    status: runStatus,
+    progress: 0,
+    error: status === "queued" ? null : `${reason} (after ${job.attempts} attempt${job.attempts === 1 ? "" : "s"})`,
+    finishedAt: status === "queued" ? null : new Date(),
+  });
+  await recordAudit(ctx, {
+    actorId: null,
+    action: status === "queued" ? "run.requeued" : `run.${runStatus}`,
+    entityType: "run",
+    entityId: run.id,
+    summary: status === "queued" ? `Run "${run.name}" went back to the queue: ${reason}.` : `Run "${run.name}" ${runStatus}: ${reason}.`,
+    data: { jobId: job.id, attempt: job.attempts, reason },
+  });
+  if (runStatus === "failed") await mailRunOutcome(ctx, run);
+  return status === "queued" ? "requeued" : runStatus === "cancelled" ? "cancelled" : "failed";
+}
+
+/** After start-up re-queueing, bring each affected run's state in line with its job. */
+export async function syncRunsWithRequeuedJobs(ctx: WorkerContext, jobs: Array<{ id: string; status: "queued" | "failed" }>): Promise<void> {
+  for (const { id, status } of jobs) {
+    const job = await ctx.models.Job.findByPk(id);
+    const payload = runJobPayloadSchema.safeParse(job?.payload);
+    if (!job || !payload.success) continue;
+    const run = await ctx.models.Run.findByPk(payload.data.runId);
+    if (!run) continue;
+    await run.update({
+      status,
+      progress: 0,
+      error: status === "failed" ? job.lastError : null,
+      finishedAt: status === "failed" ? new Date() : null,
+    });
+    await recordAudit(ctx, {
+      actorId: null,
+      action: status === "queued" ? "run.requeued" : "run.failed",
+      entityType: "run",
+      entityId: run.id,
+      summary: `Run "${run.name}" was left running by a stopped server; ${status === "queued" ? "it is queued again" : "it has no attempts left and failed"}.`,
+      data: { jobId: id, reason: job.lastError },
+    });
+    if (status === "failed") await mailRunOutcome(ctx, run);
+  }
+}

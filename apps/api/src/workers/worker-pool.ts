@@ -1,0 +1,87 @@
+import os from "node:os";
+import type { JobQueue } from "../queue/job-queue.js";
+import { jobSignal } from "../queue/job-signal.js";
+import { EngineThread } from "./engine-thread-client.js";
+import { processNextRunJob, syncRunsWithRequeuedJobs, type WorkerContext } from "./process-run-job.js";
+
+export interface WorkerPoolOptions {
+  /** Engine threads, each running one job at a time (config WORKERS; default one per core). */
+  size: number;
+  /** How often an idle worker looks for queued jobs it was not told about (other processes). */
+  pollMs?: number;
+  progressWriteMs?: number;
+}
+
+export interface WorkerPool {
+  readonly size: number;
+  /** Wakes idle workers now (a job was just queued). */
+  notify(): void;
+  /** Stops taking jobs, ends the threads, gives interrupted jobs back to the queue. */
+  stop(): Promise<void>;
+}
+
+/**
+ * Starts `size` workers. First, jobs left "running" by a process that died are re-queued
+ * (or failed, out of attempts); then each worker loops: claim, run in its own engine thread,
+ * write the outcome. A worker whose thread died gets a fresh thread before its next job.
+ */
+export async function startWorkerPool(ctx: WorkerContext, queue: JobQueue, options: WorkerPoolOptions): Promise<WorkerPool> {
+  const requeued = await queue.requeueAbandoned();
+  await syncRunsWithRequeuedJobs(ctx, requeued);
+
+  const pollMs = options.pollMs ?? 1000;
+  let stopping = false;
+  const wakers = new Set<() => void>();
+  const notify = () => {
+    for (const wake of [...wakers]) wake();
+  };
+  jobSignal.on("enqueued", notify);
+  const threads: EngineThread[] = [];
+  const host = `${os.hostname()}:${process.pid}`;
+
+  const sleep = () =>
+    new Promise<void>((resolve) => {
+      const done = () => {
+        clearTimeout(timer);
+        wakers.delete(done);
+        resolve();
+      };
+      const timer = setTimeout(done, pollMs);
+      wakers.add(done);
+    });
+
+  async function loop(slot: number): Promise<void> {
+    const workerId = `${host}:worker-${slot}`;
+    let thread = new EngineThread(workerId);
+    threads[slot] = thread;
+    while (!stopping) {
+      if (!thread.alive) {
+        thread = new EngineThread(workerId);
+        threads[slot] = thread;
+      }
+      try {
+        const outcome = await processNextRunJob(ctx, queue, workerId, thread, {
+          progressWriteMs: options.progressWriteMs,
+          isStopping: () => stopping,
+        });
+        if (outcome === "idle" && !stopping) await sleep();
+      } catch (error) {
+        console.error(`[worker] ${workerId}:`, error);
+        if (!stopping) await sleep();
+      }
+    }
+  }
+
+  const loops = Array.from({ length: options.size }, (_, slot) => loop(slot));
+  return {
+    size: options.size,
+    notify,
+    async stop() {
+      stopping = true;
+      jobSignal.off("enqueued", notify);
+      notify();
+      await Promise.all(threads.map((t) => t.terminate()));
+      await Promise.allSettled(loops);
+    },
+  };
+}
