@@ -1,0 +1,2 @@
+import { SignInRoute } from "@/features/auth/routes/sign-in";
+export default SignInRoute;

@@ -1,0 +1,86 @@
+import { useMemo } from "react";
+import { line, scaleLinear } from "d3";
+import { AxisBottom, AxisLeft } from "./axes";
+import { ChartFrame, DataTable } from "./chart-frame";
+import { DEFAULT_MARGINS, innerSize } from "./margins";
+import { useChartWidth } from "./use-chart-width";
+
+export interface ExceedanceCurve {
+  /** Threshold in K above the baseline. */
+  threshold: number;
+  /** Share of members above the threshold, 0–1, one per year. */
+  probability: number[];
+}
+
+/** Threshold colours step up the ember ramp: a hotter threshold reads as a deeper colour. */
+const THRESHOLD_COLORS = ["var(--pl-ember-400)", "var(--pl-ember-600)", "var(--pl-danger)", "var(--pl-ember-800)", "var(--pl-series-3)"];
+
+/**
+ * Probability of exceeding each warming threshold, per year (0–100 %). Thresholds are
+ * drawn in order, so a higher threshold is always the lower curve.
+ */
+export function ExceedanceChart({
+  title,
+  years,
+  curves,
+  fromYear,
+  height = 280,
+  unit = "K",
+}: {
+  title: string;
+  years: number[];
+  curves: ExceedanceCurve[];
+  fromYear?: number;
+  height?: number;
+  unit?: string;
+}) {
+  const [ref, width] = useChartWidth<HTMLDivElement>();
+  const m = DEFAULT_MARGINS;
+  const { innerWidth, innerHeight } = innerSize(width, height, m);
+  const start = Math.max(0, fromYear === undefined ? 0 : years.findIndex((y) => y >= fromYear));
+  const x = useMemo(() => scaleLinear().domain([years[start]!, years[years.length - 1]!]).range([0, innerWidth]), [years, start, innerWidth]);
+  const y = useMemo(() => scaleLinear().domain([0, 100]).range([innerHeight, 0]), [innerHeight]);
+  const sorted = [...curves].sort((a, b) => a.threshold - b.threshold);
+  const idx = Array.from({ length: years.length - start }, (_, k) => start + k);
+
+  return (
+    <ChartFrame
+      title={title}
+      description={`Share of members whose warming is above each threshold in that year.`}
+      table={
+        <DataTable
+          caption={title}
+          columns={["Year", ...sorted.map((c) => `> ${c.threshold} ${unit} (%)`)]}
+          rows={idx.filter((k) => years[k]! % 10 === 0).map((k) => [years[k]!, ...sorted.map((c) => (c.probability[k]! * 100).toFixed(1))])}
+        />
+      }
+    >
+      <div className="flex flex-wrap gap-3 text-xs">
+        {sorted.map((c, i) => (
+          <span key={c.threshold} className="flex items-center gap-1.5">
+            <span aria-hidden className="h-0.5 w-4" style={{ background: THRESHOLD_COLORS[i % THRESHOLD_COLORS.length] }} />
+            above {c.threshold} {unit}
+          </span>
+        ))}
+      </div>
+      <div ref={ref} className="w-full">
+        <svg width={width} height={height} role="img" aria-label={`${title}: probability (%) against year`}>
+          <g transform={`translate(${m.left},${m.top})`}>
+            <AxisLeft scale={y} width={innerWidth} label="Probability of exceeding (%)" ticks={5} />
+            <AxisBottom scale={x} height={innerHeight} width={innerWidth} label="Year" ticks={Math.max(2, Math.floor(innerWidth / 80))} />
+            {sorted.map((c, i) => (
+              <path
+                key={c.threshold}
+                data-threshold={c.threshold}
+                d={line<number>().x((k) => x(years[k]!)).y((k) => y(c.probability[k]! * 100))(idx) ?? ""}
+                fill="none"
+                stroke={THRESHOLD_COLORS[i % THRESHOLD_COLORS.length]}
+                strokeWidth={2}
+              />
+            ))}
+          </g>
+        </svg>
+      </div>
+    </ChartFrame>
+  );
+}

@@ -1,0 +1,288 @@
+import { useMemo, useState, type KeyboardEvent, type PointerEvent } from "react";
+import { area, extent, line, max, min, scaleLinear } from "d3";
+import { AxisBottom, AxisLeft } from "./axes";
+import { ChartFrame, DataTable } from "./chart-frame";
+import { DEFAULT_MARGINS, innerSize } from "./margins";
+import { seriesColor } from "./palette";
+import { useChartWidth } from "./use-chart-width";
+
+/** One pathway (or run) as plain arrays: the year axis and five percentile series of equal length. */
+export interface FanSeries {
+  id: string;
+  name: string;
+  years: number[];
+  p5: number[];
+  p17: number[];
+  p50: number[];
+  p83: number[];
+  p95: number[];
+  color?: string;
+}
+
+export interface ObservedWindow {
+  from: number;
+  to: number;
+  observed?: number;
+  sd?: number;
+}
+
+export interface FanChartProps {
+  title: string;
+  series: FanSeries[];
+  /** Axis label with its unit, e.g. "Warming above 1850–1900 (K)". */
+  yLabel: string;
+  unit: string;
+  fromYear?: number;
+  toYear?: number;
+  /** Shared axes when two charts are compared side by side. */
+  yDomain?: [number, number];
+  observedWindow?: ObservedWindow | null;
+  thresholds?: number[];
+  height?: number;
+  description?: string;
+  /** Decimals in the read-out and the table. */
+  digits?: number;
+}
+
+const KEYS = ["p5", "p17", "p50", "p83", "p95"] as const;
+
+/** Index range of years within [from, to]. */
+function yearWindow(years: number[], from: number, to: number): [number, number] {
+  let a = 0;
+  while (a < years.length && years[a]! < from) a++;
+  let b = years.length - 1;
+  while (b > a && years[b]! > to) b--;
+  return [a, b + 1];
+}
+
+/** Y domain covering every visible band, padded a little and always including 0. */
+export function fanYDomain(series: FanSeries[], from = -Infinity, to = Infinity): [number, number] {
+  let lo = 0;
+  let hi = 0;
+  for (const s of series) {
+    const [a, b] = yearWindow(s.years, from, to);
+    lo = Math.min(lo, min(s.p5.slice(a, b)) ?? 0);
+    hi = Math.max(hi, max(s.p95.slice(a, b)) ?? 0);
+  }
+  const pad = (hi - lo) * 0.04 || 0.5;
+  return [lo < 0 ? lo - pad : 0, hi + pad];
+}
+
+/**
+ * Fan chart: per series, a light 5–95 % band, a stronger 17–83 % band and the solid median,
+ * over years. Hover or arrow keys read out the year's percentiles; legend buttons toggle
+ * series; an optional shaded window marks the observed period used by a constraint.
+ */
+export function FanChart({
+  title,
+  series,
+  yLabel,
+  unit,
+  fromYear,
+  toYear,
+  yDomain,
+  observedWindow,
+  thresholds = [],
+  height = 360,
+  description,
+  digits = 2,
+}: FanChartProps) {
+  const [ref, width] = useChartWidth<HTMLDivElement>();
+  const [hidden, setHidden] = useState<Set<string>>(new Set());
+  const [hoverYear, setHoverYear] = useState<number | null>(null);
+  const m = DEFAULT_MARGINS;
+  const { innerWidth, innerHeight } = innerSize(width, height, m);
+  const visible = series.filter((s) => !hidden.has(s.id));
+
+  const allYears = series.flatMap((s) => [s.years[0]!, s.years[s.years.length - 1]!]);
+  const [minYear, maxYear] = extent(allYears) as [number, number];
+  const x0 = Math.max(fromYear ?? minYear, minYear);
+  const x1 = Math.min(toYear ?? maxYear, maxYear);
+
+  const x = useMemo(() => scaleLinear().domain([x0, x1]).range([0, innerWidth]), [x0, x1, innerWidth]);
+  const y = useMemo(
+    () => scaleLinear().domain(yDomain ?? fanYDomain(visible.length ? visible : series, x0, x1)).range([innerHeight, 0]).nice(),
+    [yDomain, visible, series, x0, x1, innerHeight],
+  );
+
+  const shapes = useMemo(
+    () =>
+      series.map((s, i) => {
+        const [a, b] = yearWindow(s.years, x0, x1);
+        const idx = Array.from({ length: b - a }, (_, k) => a + k);
+        const band = (lo: number[], hi: number[]) =>
+          area<number>()
+            .x((k) => x(s.years[k]!))
+            .y0((k) => y(lo[k]!))
+            .y1((k) => y(hi[k]!))(idx) ?? "";
+        return {
+          s,
+          color: s.color ?? seriesColor(i),
+          outer: band(s.p5, s.p95),
+          inner: band(s.p17, s.p83),
+          median: line<number>()
+            .x((k) => x(s.years[k]!))
+            .y((k) => y(s.p50[k]!))(idx) ?? "",
+        };
+      }),
+    [series, x, y, x0, x1],
+  );
+
+  function yearFromPointer(e: PointerEvent<SVGRectElement>) {
+    const rect = e.currentTarget.getBoundingClientRect();
+    const year = Math.round(x.invert(e.clientX - rect.left));
+    setHoverYear(Math.max(x0, Math.min(x1, year)));
+  }
+  function onKey(e: KeyboardEvent<SVGRectElement>) {
+    const step = e.shiftKey ? 10 : 1;
+    if (e.key === "ArrowRight") setHoverYear((h) => Math.min(x1, (h ?? x0) + step));
+    else if (e.key === "ArrowLeft") setHoverYear((h) => Math.max(x0, (h ?? x1) - step));
+    else if (e.key === "Escape") setHoverYear(null);
+    else return;
+    e.preventDefault();
+  }
+
+  const readout =
+    hoverYear === null
+      ? []
+      : visible
+          .map((s) => {
+            const k = s.years.indexOf(hoverYear);
+            return k < 0 ? null : { s, values: KEYS.map((key) => s[key][k]!) };
+          })
+          .filter((r): r is { s: FanSeries; values: number[] } => r !== null);
+
+  const table = (
+    <DataTable
+      caption={title}
+      columns={["Series", "Year", ...KEYS.map((k) => `${k.slice(1)} % (${unit})`)]}
+      rows={series.flatMap((s) =>
+        s.years
+          .map((yr, k) => ({ yr, k }))
+          .filter(({ yr }) => yr >= x0 && yr <= x1 && (yr % 10 === 0 || yr === x1))
+          .map(({ yr, k }) => [s.name, yr, ...KEYS.map((key) => s[key][k]!.toFixed(digits))]),
+      )}
+    />
+  );
+
+  return (
+    <ChartFrame
+      title={title}
+      description={description ?? "Median line, 17–83 % (likely) and 5–95 % (very likely) bands. Hover or use arrow keys to read a year."}
+      table={table}
+    >
+      {series.length > 1 && (
+        <div className="flex flex-wrap gap-2" role="group" aria-label="Show or hide series">
+          {shapes.map(({ s, color }) => (
+            <button
+              key={s.id}
+              type="button"
+              aria-pressed={!hidden.has(s.id)}
+              onClick={() =>
+                setHidden((h) => {
+                  const next = new Set(h);
+                  if (next.has(s.id)) next.delete(s.id);
+                  else next.add(s.id);
+                  return next;
+                })
+              }
+              className="flex items-center gap-1.5 rounded-full border border-line px-2.5 py-0.5 text-xs aria-pressed:bg-surface-2 aria-[pressed=false]:opacity-50"
+            >
+              <span aria-hidden className="h-2.5 w-2.5 rounded-full" style={{ background: color }} />
+              {s.name}
+            </button>
+          ))}
+        </div>
+      )}
+      <div ref={ref} className="relative w-full">
+        <svg width={width} height={height} role="img" aria-label={`${title}: ${yLabel} against year`} className="block overflow-visible">
+          <g transform={`translate(${m.left},${m.top})`}>
+            {observedWindow && observedWindow.to >= x0 && observedWindow.from <= x1 && (
+              <g data-testid="observed-window">
+                <rect
+                  x={x(Math.max(observedWindow.from, x0))}
+                  width={Math.max(1, x(Math.min(observedWindow.to, x1)) - x(Math.max(observedWindow.from, x0)))}
+                  y={0}
+                  height={innerHeight}
+                  fill="var(--pl-accent)"
+                  opacity={0.09}
+                />
+                {observedWindow.observed !== undefined && (
+                  <line
+                    x1={x(Math.max(observedWindow.from, x0))}
+                    x2={x(Math.min(observedWindow.to, x1))}
+                    y1={y(observedWindow.observed)}
+                    y2={y(observedWindow.observed)}
+                    stroke="var(--pl-accent)"
+                    strokeWidth={3}
+                  />
+                )}
+                <text x={x(Math.max(observedWindow.from, x0)) - 4} y={12} textAnchor="end" className="fill-accent text-[10px]">
+                  observed {observedWindow.from}–{observedWindow.to}
+                </text>
+              </g>
+            )}
+            <AxisLeft scale={y} width={innerWidth} label={yLabel} />
+            <AxisBottom scale={x} height={innerHeight} width={innerWidth} label="Year" format={(v) => String(v)} ticks={Math.max(2, Math.floor(innerWidth / 80))} />
+            {thresholds.map((t) =>
+              t >= y.domain()[0]! && t <= y.domain()[1]! ? (
+                <g key={t}>
+                  <line x2={innerWidth} y1={y(t)} y2={y(t)} stroke="var(--pl-danger)" strokeDasharray="5 4" opacity={0.55} />
+                  <text x={4} y={y(t) - 4} className="fill-danger text-[10px] num">
+                    {t} {unit}
+                  </text>
+                </g>
+              ) : null,
+            )}
+            {shapes
+              .filter(({ s }) => !hidden.has(s.id))
+              .map(({ s, color, outer, inner, median }) => (
+                <g key={s.id} data-series={s.id}>
+                  <path data-band="p5-p95" d={outer} fill={color} fillOpacity={0.16} />
+                  <path data-band="p17-p83" d={inner} fill={color} fillOpacity={0.32} />
+                  <path data-band="p50" d={median} fill="none" stroke={color} strokeWidth={2} />
+                </g>
+              ))}
+            {hoverYear !== null && (
+              <line x1={x(hoverYear)} x2={x(hoverYear)} y2={innerHeight} stroke="var(--pl-ink)" strokeOpacity={0.4} />
+            )}
+            <rect
+              width={innerWidth}
+              height={innerHeight}
+              fill="transparent"
+              tabIndex={0}
+              aria-label="Chart read-out: use left and right arrow keys to move through years"
+              onPointerMove={yearFromPointer}
+              onPointerLeave={() => setHoverYear(null)}
+              onKeyDown={onKey}
+              onBlur={() => setHoverYear(null)}
+            />
+          </g>
+        </svg>
+        {hoverYear !== null && readout.length > 0 && (
+          <div
+            role="status"
+            className="pointer-events-none absolute top-2 z-10 min-w-44 rounded-md border border-line bg-surface/95 px-3 py-2 text-xs shadow-card"
+            style={x(hoverYear) + m.left > width / 2 ? { left: m.left + 8 } : { right: m.right + 8 }}
+          >
+            <p className="mb-1 font-semibold text-ink">{hoverYear}</p>
+            {readout.map(({ s, values }) => (
+              <div key={s.id} className="mb-1">
+                {series.length > 1 && <p className="font-medium">{s.name}</p>}
+                <p className="num text-muted">
+                  median <span className="text-text">{values[2]!.toFixed(digits)}</span> {unit}
+                </p>
+                <p className="num text-muted">
+                  17–83 <span className="text-text">{values[1]!.toFixed(digits)}–{values[3]!.toFixed(digits)}</span>
+                </p>
+                <p className="num text-muted">
+                  5–95 <span className="text-text">{values[0]!.toFixed(digits)}–{values[4]!.toFixed(digits)}</span>
+                </p>
+              </div>
+            ))}
+          </div>
+        )}
+      </div>
+    </ChartFrame>
+  );
+}

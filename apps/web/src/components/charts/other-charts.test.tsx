@@ -1,0 +1,106 @@
+import { render } from "@testing-library/react";
+import { describe, expect, it } from "vitest";
+import { pathPoints, tickMap } from "@/testing/svg-geometry";
+import { CrossingHistogram, crossingBins } from "./crossing-histogram";
+import { ExceedanceChart } from "./exceedance-chart";
+import { ForcingBreakdownChart } from "./forcing-breakdown-chart";
+import { ForcingStackChart } from "./forcing-stack-chart";
+import { SensitivityBars } from "./sensitivity-bars";
+
+describe("ExceedanceChart", () => {
+  it("plots probabilities as percent on a 0–100 axis", () => {
+    const years = [2000, 2010, 2020];
+    const { container } = render(
+      <ExceedanceChart title="Exceedance" years={years} curves={[{ threshold: 2, probability: [0, 0.25, 0.5] }]} />,
+    );
+    const y = tickMap(container, "y");
+    const pts = pathPoints(container.querySelector('[data-threshold="2"]')!.getAttribute("d")!);
+    // d3-path rounds coordinates to 3 decimals
+    expect(pts.map((p) => p[1])).toEqual([y(0), y(25), y(50)].map((v) => expect.closeTo(v, 2)));
+    expect(container.textContent).toContain("Probability of exceeding (%)");
+  });
+});
+
+describe("crossingBins", () => {
+  it("gives each interval between consecutive percentiles its share of members", () => {
+    // Shares follow from the percentile definitions: 17−5 = 12 %, 50−17 = 33 %, …
+    const bins = crossingBins({ p5: 2030, p17: 2035, p50: 2045, p83: 2060, p95: 2080 });
+    expect(bins).toEqual([
+      { from: 2030, to: 2035, share: expect.closeTo(0.12, 12) },
+      { from: 2035, to: 2045, share: expect.closeTo(0.33, 12) },
+      { from: 2045, to: 2060, share: expect.closeTo(0.33, 12) },
+      { from: 2060, to: 2080, share: expect.closeTo(0.12, 12) },
+    ]);
+  });
+
+  it("leaves intervals that end in 'never' to the never share", () => {
+    const bins = crossingBins({ p5: 2030, p17: 2035, p50: 2045, p83: null, p95: null });
+    expect(bins.map((b) => b.to)).toEqual([2035, 2045]);
+  });
+
+  it("draws a never bar and bars whose area is the share", () => {
+    const { container } = render(
+      <CrossingHistogram title="Crossing 2 K" crossing={{ threshold: 2, percentiles: { p5: 2030, p17: 2036, p50: 2045, p83: 2060, p95: null }, never: 0.1 }} />,
+    );
+    expect(container.querySelector('[data-testid="never-bar"]')).toHaveTextContent("10%");
+    const y = tickMap(container, "y");
+    const bar = container.querySelector('[data-bin="2036-2045"]')!;
+    // 33 % of members over 9 years -> 3.667 % per year
+    expect(Number(bar.getAttribute("y"))).toBeCloseTo(y(33 / 9), 6);
+  });
+});
+
+describe("ForcingBreakdownChart", () => {
+  it("places the 5–95 bracket ends at p5 and p95 on the forcing axis", () => {
+    const agents = [
+      { agent: "co2", label: "CO2", p5: 1.8, p50: 2.1, p95: 2.4 },
+      { agent: "aerosol-cloud", label: "Aerosol–cloud", p5: -1.7, p50: -0.9, p95: -0.3 },
+    ];
+    const { container } = render(<ForcingBreakdownChart title="Forcing 2020" year={2020} agents={agents} />);
+    const x = tickMap(container, "x");
+    for (const a of agents) {
+      const lines = container.querySelectorAll(`[data-agent="${a.agent}"] [data-role="bracket"] line`);
+      expect(Number(lines[0]!.getAttribute("x1"))).toBeCloseTo(x(a.p5), 6);
+      expect(Number(lines[0]!.getAttribute("x2"))).toBeCloseTo(x(a.p95), 6);
+      const bar = container.querySelector(`[data-agent="${a.agent}"] [data-role="median-bar"]`)!;
+      expect(Number(bar.getAttribute("width"))).toBeCloseTo(Math.abs(x(a.p50) - x(0)), 6);
+    }
+    expect(container.textContent).toContain("Effective radiative forcing (W m-2)");
+  });
+});
+
+describe("ForcingStackChart", () => {
+  it("draws the total line at the sum of the agents", () => {
+    const years = [2000, 2001, 2002];
+    const agents = [
+      { agent: "co2", label: "CO2", values: [1, 1.5, 2] },
+      { agent: "aerosol-cloud", label: "Aerosol–cloud", values: [-0.5, -0.6, -0.7] },
+    ];
+    const { container } = render(<ForcingStackChart title="Forcing" years={years} agents={agents} />);
+    const y = tickMap(container, "y");
+    const total = pathPoints(container.querySelector('[data-role="total"]')!.getAttribute("d")!);
+    // d3-path rounds coordinates to 3 decimals
+    [0.5, 0.9, 1.3].forEach((v, i) => expect(total[i]![1]).toBeCloseTo(y(v), 2));
+    // Cooling agent is stacked below zero: its area lies under the zero line.
+    const cooling = pathPoints(container.querySelector('[data-agent="aerosol-cloud"]')!.getAttribute("d")!);
+    cooling.forEach(([, py]) => expect(py).toBeGreaterThanOrEqual(y(0) - 1e-3));
+  });
+});
+
+describe("SensitivityBars", () => {
+  it("orders inputs by the size of their index, largest first", () => {
+    const { container } = render(
+      <SensitivityBars
+        title="Sensitivity"
+        horizon={2100}
+        bars={[
+          { input: "f2x", label: "F2x", index: 0.2 },
+          { input: "ecs", label: "ECS", index: 0.8 },
+          { input: "aerosol-cloud", label: "Aerosol–cloud", index: -0.4 },
+        ]}
+      />,
+    );
+    const order = [...container.querySelectorAll("[data-input]")].map((g) => g.getAttribute("data-input"));
+    expect(order).toEqual(["ecs", "aerosol-cloud", "f2x"]);
+  });
+});

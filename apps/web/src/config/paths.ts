@@ -1,0 +1,71 @@
+import type { Permission } from "./permissions";
+
+/**
+ * Every route of the app in one table: the pattern the router mounts, a builder that
+ * produces links (so no feature spells a URL by hand), the permission the page needs and
+ * the sentence shown when a user without it opens the URL directly.
+ */
+interface RouteDef<A extends unknown[] = []> {
+  path: string;
+  build: (...args: A) => string;
+  permission?: Permission;
+  /** Completes "… needs the X role": what the page is for. */
+  purpose?: string;
+}
+
+const route = <A extends unknown[]>(def: RouteDef<A>) => def;
+const qs = (params: Record<string, string | undefined>) => {
+  const s = new URLSearchParams(Object.entries(params).filter((e): e is [string, string] => Boolean(e[1]))).toString();
+  return s ? `?${s}` : "";
+};
+
+export const paths = {
+  signIn: route({ path: "/sign-in", build: (next?: string, expired?: boolean) => `/sign-in${qs({ next, expired: expired ? "1" : undefined })}` }),
+  desk: route({ path: "/", build: () => "/" }),
+
+  pathways: route({ path: "/pathways", build: () => "/pathways", permission: "pathways:read", purpose: "Reading pathways" }),
+  pathwayUpload: route({ path: "/pathways/upload", build: () => "/pathways/upload", permission: "pathways:write", purpose: "Uploading pathways" }),
+  pathwayCompose: route({
+    path: "/pathways/compose",
+    build: (fromId?: string) => `/pathways/compose${qs({ from: fromId })}`,
+    permission: "pathways:write",
+    purpose: "Composing pathways",
+  }),
+  pathway: route({ path: "/pathways/:pathwayId", build: (id: string) => `/pathways/${id}`, permission: "pathways:read", purpose: "Reading pathways" }),
+
+  modelVersions: route({ path: "/model-versions", build: (status?: string) => `/model-versions${qs({ status })}`, permission: "model-versions:read", purpose: "Reading model versions" }),
+  modelVersionNew: route({
+    path: "/model-versions/new",
+    build: (fromId?: string) => `/model-versions/new${qs({ from: fromId })}`,
+    permission: "model-versions:write",
+    purpose: "Drafting model versions",
+  }),
+  modelVersion: route({ path: "/model-versions/:versionId", build: (id: string) => `/model-versions/${id}`, permission: "model-versions:read", purpose: "Reading model versions" }),
+  modelVersionEdit: route({ path: "/model-versions/:versionId/edit", build: (id: string) => `/model-versions/${id}/edit`, permission: "model-versions:write", purpose: "Editing model versions" }),
+  modelVersionReview: route({
+    path: "/model-versions/:versionId/review",
+    build: (id: string) => `/model-versions/${id}/review`,
+    permission: "model-versions:decide",
+    purpose: "Approving model versions",
+  }),
+
+  runs: route({ path: "/runs", build: () => "/runs", permission: "runs:read", purpose: "Reading runs" }),
+  runNew: route({ path: "/runs/new", build: (versionId?: string) => `/runs/new${qs({ version: versionId })}`, permission: "runs:create", purpose: "Starting runs" }),
+  runCompare: route({
+    path: "/runs/compare",
+    build: (a?: string, b?: string) => `/runs/compare${qs({ a, b })}`,
+    permission: "runs:read",
+    purpose: "Comparing runs",
+  }),
+  run: route({ path: "/runs/:runId", build: (id: string) => `/runs/${id}`, permission: "runs:read", purpose: "Reading runs" }),
+
+  perils: route({ path: "/peril-lens", build: () => "/peril-lens", permission: "perils:read", purpose: "The peril lens" }),
+
+  exports: route({ path: "/exports", build: () => "/exports", permission: "runs:read", purpose: "Reading exports" }),
+
+  adminUsers: route({ path: "/admin/users", build: () => "/admin/users", permission: "users:manage", purpose: "Managing users and roles" }),
+  adminAudit: route({ path: "/admin/audit", build: () => "/admin/audit", permission: "audit:read", purpose: "Reading the audit log" }),
+  adminOutbox: route({ path: "/admin/outbox", build: (id?: string) => `/admin/outbox${qs({ message: id })}`, permission: "outbox:read", purpose: "Reading the outbox" }),
+} as const;
+
+export type RouteKey = keyof typeof paths;
