@@ -1,0 +1,117 @@
+import { sampleRankCorrelation } from "simple-statistics";
+import { describe, expect, it } from "vitest";
+import { quantilesOf } from "../distributions/index.js";
+import { createRandom } from "../random/create-random.js";
+import { choleskyFactor } from "./cholesky.js";
+import { imanConover } from "./iman-conover.js";
+import { latinHypercube } from "./latin-hypercube.js";
+
+function spearmanReference(x: Float64Array, y: Float64Array): number {
+  // Reference: simple-statistics sampleRankCorrelation (Spearman's rho).
+  return sampleRankCorrelation(Array.from(x), Array.from(y));
+}
+
+describe("imanConover", () => {
+  const n = 5000;
+  const target = [
+    [1, -0.3, 0.6],
+    [-0.3, 1, 0],
+    [0.6, 0, 1],
+  ];
+  const uniforms = latinHypercube(n, 3, createRandom("ic-inputs"));
+  // Three different marginals: ECS as a published range, a normal forcing scale, a triangle.
+  const inputs = [
+    quantilesOf({ type: "range", p50: 3, low: 2, high: 5, coverage: 90, shape: "lognormal" }, uniforms[0]!, "ecs"),
+    quantilesOf({ type: "normal", mean: 1, sd: 0.2 }, uniforms[1]!, "aerosol"),
+    quantilesOf({ type: "triangular", min: 5, mode: 7, max: 10 }, uniforms[2]!, "heat"),
+  ];
+  const correlated = imanConover(inputs, target, createRandom("ic-scores"));
+
+  it("achieves Spearman −0.3 and 0.6 within sampling error at n = 5000 (Iman & Conover 1982; CHECKS.md §7.6)", () => {
+    // CHECKS.md §7.6: the induced rank correlation approximately equals the target; the sd of a
+    // sample Spearman coefficient is about 1/√n = 0.014, so ±0.03 is generous.
+    expect(spearmanReference(correlated[0]!, correlated[1]!)).toBeCloseTo(-0.3, 1);
+    expect(Math.abs(spearmanReference(correlated[0]!, correlated[1]!) + 0.3)).toBeLessThan(0.03);
+    expect(Math.abs(spearmanReference(correlated[0]!, correlated[2]!) - 0.6)).toBeLessThan(0.03);
+    expect(Math.abs(spearmanReference(correlated[1]!, correlated[2]!))).toBeLessThan(0.03);
+  });
+
+  it("preserves every marginal exactly (sorted columns unchanged) and leaves the inputs alone", () => {
+    for (let j = 0; j < 3; j++) {
+      expect(correlated[j]!.slice().sort()).toEqual(inputs[j]!.slice().sort());
+      expect(correlated[j]).not.toBe(inputs[j]);
+    }
+    expect(inputs[0]).toEqual(quantilesOf({ type: "range", p50: 3, low: 2, high: 5, coverage: 90, shape: "lognormal" }, uniforms[0]!, "ecs"));
+  });
+
+  it("removes chance correlation when the target is the identity", () => {
+    const identity = [
+      [1, 0],
+      [0, 1],
+    ];
+    const result = imanConover(latinHypercube(2000, 2, createRandom("ic-id")), identity, createRandom("ic-id-scores"));
+    expect(Math.abs(spearmanReference(result[0]!, result[1]!))).toBeLessThan(0.01);
+  });
+
+  it("repeats for the same seed", () => {
+    const again = imanConover(inputs, target, createRandom("ic-scores"));
+    expect(again).toEqual(correlated);
+  });
+
+  it("returns copies for one column or too few members", () => {
+    const single = [new Float64Array([3, 1, 2])];
+    expect(imanConover(single, [[1]], createRandom("s"))).toEqual(single);
+    const tiny = [new Float64Array([1, 2]), new Float64Array([3, 4])];
+    expect(imanConover(tiny, [[1, 0.5], [0.5, 1]], createRandom("s"))).toEqual(tiny);
+  });
+
+  it("names what is wrong with the target or the columns", () => {
+    const columns = [new Float64Array(10), new Float64Array(10)];
+    const random = createRandom("s");
+    expect(() => imanConover(columns, [[1]], random)).toThrow("target must be a 2×2 matrix");
+    expect(() => imanConover(columns, [[1, 0.5], [0.4, 1]], random)).toThrow("target[0][1] must equal target[1][0]");
+    expect(() => imanConover(columns, [[0.9, 0], [0, 1]], random)).toThrow("target[0][0] must be 1");
+    expect(() => imanConover(columns, [[1, 1.2], [1.2, 1]], random)).toThrow("target[0][1] must be in [-1, 1]");
+    expect(() => imanConover([new Float64Array(10), new Float64Array(9)], [[1, 0], [0, 1]], random)).toThrow(
+      "columns[1] must have 10 members like columns[0]",
+    );
+    const contradictory = [
+      [1, 0.9, 0.9],
+      [0.9, 1, -0.9],
+      [0.9, -0.9, 1],
+    ];
+    expect(() => imanConover([...columns, new Float64Array(10)], contradictory, random)).toThrow(
+      "correlation matrix is not positive definite",
+    );
+  });
+});
+
+describe("choleskyFactor", () => {
+  it("factors [[4, 2], [2, 3]] as [[2, 0], [1, √2]] (hand computation) and rebuilds a 3×3 matrix", () => {
+    const factor = choleskyFactor([
+      [4, 2],
+      [2, 3],
+    ]);
+    expect(factor[0]).toEqual([2, 0]);
+    expect(factor[1]![0]).toBe(1);
+    expect(factor[1]![1]).toBeCloseTo(Math.SQRT2, 15);
+    const a = [
+      [1, -0.3, 0.6],
+      [-0.3, 1, 0],
+      [0.6, 0, 1],
+    ];
+    const l = choleskyFactor(a);
+    for (let i = 0; i < 3; i++)
+      for (let j = 0; j < 3; j++) {
+        let sum = 0;
+        for (let k = 0; k < 3; k++) sum += l[i]![k]! * l[j]![k]!;
+        expect(sum).toBeCloseTo(a[i]![j]!, 14);
+      }
+  });
+
+  it("rejects a matrix that is not positive definite (perfect correlation included)", () => {
+    expect(() => choleskyFactor([[1, 1], [1, 1]])).toThrow(new RangeError("correlation matrix is not positive definite"));
+    expect(() => choleskyFactor([[1, 2], [2, 1]])).toThrow("correlation matrix is not positive definite");
+    expect(() => choleskyFactor([[1, 0], [0]])).toThrow("matrix[1] must have 2 entries");
+  });
+});
