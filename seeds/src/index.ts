@@ -1,3 +1,4 @@
 export * from "./organisation.js";
 export * from "./users.js";
 // Domain seed data (pathways, model versions) and peril seed data are exported below.
+export * from "./perils/index.js";
