@@ -51,6 +51,28 @@ export class PercentileSelector {
     else this.selectUnweighted(values, n, probs, out, min, max);
   }
 
+  /**
+   * Exact order statistics: out[j] = the ranks[j]-th smallest of values[0..n) (0-based),
+   * as a full sort would give. min/max as for select().
+   */
+  orderStatistics(values: Float64Array, n: number, ranks: number[], out: Float64Array, min: number, max: number): void {
+    if (!(max > min)) {
+      for (let j = 0; j < ranks.length; j++) out[j] = min;
+      return;
+    }
+    const buckets = this.prepare(n);
+    const counts = this.counts;
+    const scale = buckets / (max - min);
+    const last = buckets - 1;
+    for (let i = 0; i < n; i++) {
+      const b = ((values[i]! - min) * scale) | 0;
+      counts[b > last ? last : b]++;
+    }
+    const located = this.locateRanks(ranks, buckets);
+    this.gatherAndSort(values, null, n, min, scale, last);
+    for (let j = 0; j < ranks.length; j++) out[j] = this.gathered[located[j]!]!;
+  }
+
   private prepare(n: number): number {
     const buckets = Math.max(16, Math.min(MAX_BUCKETS, n >> 5));
     if (this.counts.length < buckets) {

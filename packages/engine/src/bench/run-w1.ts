@@ -1,0 +1,45 @@
+import type { StageTimes } from "../ensemble/run-ensemble.js";
+import { runEnsembleParallel } from "../node/run-ensemble-parallel.js";
+import { w1Spec } from "./w1-spec.js";
+
+/** One W1 line, with the fields and meaning of bench/W1.md. */
+export interface W1Line {
+  impl: "plumeline-ts";
+  members: number;
+  years: number;
+  total_s: number;
+  sample_s: number;
+  simulate_s: number;
+  summarize_s: number;
+  member_years_per_s: number;
+  check: number;
+}
+
+/**
+ * Times W1 through the engine's ordinary entry (runEnsembleParallel: sampling, both passes,
+ * streaming summaries, result assembly and hashing), from spec to finished result.
+ * check = Σ over years of the five temperature percentiles plus the share above 1.5 K.
+ */
+export async function runW1(members: number, threads?: number): Promise<W1Line> {
+  const spec = w1Spec(members);
+  const times: StageTimes = { sample: 0, simulate: 0, summarise: 0, finish: 0 };
+  const start = performance.now();
+  const result = await runEnsembleParallel(spec, { ...(threads ? { threads } : {}), stageTimes: times });
+  const total = (performance.now() - start) / 1000;
+  const pathway = result.pathways[0]!;
+  let check = 0;
+  for (const key of ["p5", "p17", "p50", "p83", "p95"]) for (const v of pathway.temperature[key]!) check += v;
+  for (const v of pathway.exceedance["1.5"]!) check += v;
+  const round = (x: number) => Math.round(x * 1e4) / 1e4;
+  return {
+    impl: "plumeline-ts",
+    members,
+    years: pathway.years.length,
+    total_s: round(total),
+    sample_s: round(times.sample),
+    simulate_s: round(times.simulate),
+    summarize_s: round(times.summarise + times.finish),
+    member_years_per_s: Number(((members * pathway.years.length) / total).toPrecision(4)),
+    check: round(check),
+  };
+}

@@ -1,0 +1,43 @@
+import { CliError } from "./cli-error.js";
+
+export const USAGE = `usage:
+  engine run SPEC.json [--out FILE] [--threads T]   result JSON on stdout (or FILE)
+  engine validate SPEC.json                        checks a spec without running it
+  engine bench --members N [--threads T]           one W1 benchmark line (bench/W1.md)`;
+
+export interface ParsedArgs {
+  command: "run" | "validate" | "bench";
+  file?: string;
+  out?: string;
+  members?: number;
+  threads?: number;
+}
+
+/** Parses the CLI's small grammar; anything unexpected is a CliError naming the argument. */
+export function parseArgs(argv: string[]): ParsedArgs {
+  const [command, ...rest] = argv;
+  if (command !== "run" && command !== "validate" && command !== "bench")
+    throw new CliError(command ? `unknown command "${command}"\n${USAGE}` : USAGE);
+  const parsed: ParsedArgs = { command };
+  for (let i = 0; i < rest.length; i++) {
+    const arg = rest[i]!;
+    const value = () => {
+      const v = rest[++i];
+      if (v === undefined) throw new CliError(`${arg} needs a value`);
+      return v;
+    };
+    const count = (name: string) => {
+      const v = Number(value());
+      if (!Number.isInteger(v) || v < 1) throw new CliError(`${name} must be a whole number ≥ 1`);
+      return v;
+    };
+    if (arg === "--out" && command === "run") parsed.out = value();
+    else if (arg === "--threads" && command !== "validate") parsed.threads = count("--threads");
+    else if (arg === "--members" && command === "bench") parsed.members = count("--members");
+    else if (!arg.startsWith("--") && command !== "bench" && parsed.file === undefined) parsed.file = arg;
+    else throw new CliError(`unexpected argument "${arg}"\n${USAGE}`);
+  }
+  if (command !== "bench" && parsed.file === undefined) throw new CliError(`${command} needs a SPEC.json file\n${USAGE}`);
+  if (command === "bench" && parsed.members === undefined) parsed.members = 100_000;
+  return parsed;
+}

@@ -1,0 +1,84 @@
+import type { RunSpec } from "../spec/types.js";
+import type { MemberClimate } from "./member-climate.js";
+import type { PathwayForcing } from "./pathway-forcing.js";
+import type { Allocate } from "./sample-inputs.js";
+import type { ModelInput } from "./uncertain-inputs.js";
+
+/** Years whose per-member values the streaming pass is allowed to hold in one slot. */
+export interface YearSlot {
+  anomaly: Float64Array;
+  forcing: Float64Array;
+  imbalance: Float64Array;
+}
+
+/**
+ * Everything one run needs, sampled once. All per-member arrays are O(members); nothing is
+ * members × years. Arrays come from an allocator so the parallel runner can place them in
+ * shared memory and hand the same plan to its worker threads.
+ */
+export interface EnsemblePlan {
+  members: number;
+  inputs: ModelInput[];
+  columns: Float64Array[];
+  climate: MemberClimate;
+  pathways: PathwayForcing[];
+  /** Requested percentiles as probabilities, in the order asked. */
+  probs: number[];
+  thresholds: number[];
+  /** Thresholds ascending, for the one-comparison-per-year crossing test. */
+  thresholdsAscending: number[];
+  baseline: [number, number];
+  constraint: RunSpec["model"]["constraint"];
+  horizons: number[];
+  state: EnsembleState;
+}
+
+export interface EnsembleState {
+  upper: Float64Array;
+  deep: Float64Array;
+  /** Pass 1 sums, turned into each member's baseline and constraint-window mean anomaly. */
+  baselineMean: Float64Array;
+  windowMean: Float64Array;
+  /** Constraint weights of the current pathway (all 1 without a constraint). */
+  weights: Float64Array;
+  /** Per ascending threshold: each member's first year index above it, −1 while never. */
+  crossing: Float64Array[];
+  crossedCount: Float64Array;
+  /** Ring of year slots: the simulation writes year t into slot t mod ring size. */
+  slots: YearSlot[];
+  /** Per horizon: member anomaly, committed warming and total forcing in that year. */
+  horizonTemperature: Float64Array[];
+  horizonCommitted: Float64Array[];
+  horizonForcing: Float64Array[];
+  /** Per-year summaries of the current pathway (layout in yearly-layout.ts). */
+  yearly: Float64Array;
+}
+
+export function allocateState(
+  members: number,
+  thresholds: number,
+  horizons: number,
+  ringSize: number,
+  yearlyLength: number,
+  allocate: Allocate,
+): EnsembleState {
+  const many = (count: number) => Array.from({ length: count }, () => allocate(members));
+  return {
+    upper: allocate(members),
+    deep: allocate(members),
+    baselineMean: allocate(members),
+    windowMean: allocate(members),
+    weights: allocate(members),
+    crossing: many(thresholds),
+    crossedCount: allocate(members),
+    slots: Array.from({ length: ringSize }, () => ({
+      anomaly: allocate(members),
+      forcing: allocate(members),
+      imbalance: allocate(members),
+    })),
+    horizonTemperature: many(horizons),
+    horizonCommitted: many(horizons),
+    horizonForcing: many(horizons),
+    yearly: allocate(yearlyLength),
+  };
+}

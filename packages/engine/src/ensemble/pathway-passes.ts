@@ -1,0 +1,57 @@
+import { advanceBaselineYear } from "./advance-year.js";
+import type { EnsemblePlan } from "./ensemble-plan.js";
+
+/**
+ * The two passes over one pathway, for members [lo, hi). Anomalies are against each
+ * member's own baseline-period mean, which is only known once the baseline period has been
+ * simulated, so a first pass runs up to the later of the baseline end and the constraint
+ * window end (the same two-pass scheme as bench/ebm_ref.c) and the reporting pass restarts
+ * from the pathway's first year. Members are independent, so any split gives the same numbers.
+ */
+export function firstPassYears(plan: EnsemblePlan, pathwayIndex: number): number {
+  const pathway = plan.pathways[pathwayIndex]!;
+  const lastYear = Math.max(plan.baseline[1], plan.constraint ? plan.constraint.to : -Infinity);
+  return lastYear - pathway.startYear + 1;
+}
+
+/** Runs the first pass for members [lo, hi), leaving baseline and window mean anomalies. */
+export function runBaselinePass(plan: EnsemblePlan, pathwayIndex: number, lo: number, hi: number, onYear?: () => void): void {
+  const pathway = plan.pathways[pathwayIndex]!;
+  const { upper, deep, baselineMean, windowMean } = plan.state;
+  upper.fill(0, lo, hi);
+  deep.fill(0, lo, hi);
+  baselineMean.fill(0, lo, hi);
+  windowMean.fill(0, lo, hi);
+  const [b0, b1] = plan.baseline;
+  const c = plan.constraint;
+  const years = firstPassYears(plan, pathwayIndex);
+  for (let t = 0; t < years; t++) {
+    const year = pathway.startYear + t;
+    advanceBaselineYear(plan, pathway, t, lo, hi, year >= b0 && year <= b1, c !== null && year >= c.from && year <= c.to);
+    onYear?.();
+  }
+  const baselineYears = b1 - b0 + 1;
+  const windowYears = c ? c.to - c.from + 1 : 1;
+  for (let m = lo; m < hi; m++) {
+    const baseline = baselineMean[m]! / baselineYears;
+    baselineMean[m] = baseline;
+    windowMean[m] = c ? windowMean[m]! / windowYears - baseline : 0;
+  }
+}
+
+/** Clears the state of members [lo, hi) for the reporting pass. */
+export function resetForReporting(plan: EnsemblePlan, lo: number, hi: number): void {
+  const { upper, deep, crossing, crossedCount } = plan.state;
+  upper.fill(0, lo, hi);
+  deep.fill(0, lo, hi);
+  crossedCount.fill(0, lo, hi);
+  for (const years of crossing) years.fill(-1, lo, hi);
+}
+
+/** Horizon indexes falling in each year of a pathway. */
+export function horizonsByYear(plan: EnsemblePlan, pathwayIndex: number): number[][] {
+  const pathway = plan.pathways[pathwayIndex]!;
+  const byYear = Array.from({ length: pathway.years }, () => [] as number[]);
+  plan.horizons.forEach((h, i) => byYear[h - pathway.startYear]?.push(i));
+  return byYear;
+}

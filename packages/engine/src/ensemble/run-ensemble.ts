@@ -1,0 +1,82 @@
+import { RunCancelledError } from "../spec/spec-error.js";
+import type { PathwayResult, PercentileSet, RunResult, RunSpec, RunSpecInput } from "../spec/types.js";
+import { advanceReportedYear } from "./advance-year.js";
+import { assembleResult } from "./assemble-result.js";
+import { finishPathway } from "./finish-pathway.js";
+import { impliedSensitivities } from "./implied-sensitivity.js";
+import { firstPassYears, horizonsByYear, resetForReporting, runBaselinePass } from "./pathway-passes.js";
+import { weighPathway } from "./pathway-weights.js";
+import { preparePlan } from "./prepare-plan.js";
+import { YearSummariser } from "./summarise-year.js";
+
+export interface RunOptions {
+  /** Called with the finished fraction (0..1), about every 1 % of the work. */
+  onProgress?(fraction: number): void;
+  /** Polled about every 1 % of the work; answering true stops the run with RunCancelledError. */
+  shouldCancel?(): boolean;
+  /** If given, filled with the seconds spent in each stage (for the benchmark). */
+  stageTimes?: StageTimes;
+}
+
+/** Wall-clock seconds per stage; parallel stages count thread-seconds divided by threads. */
+export interface StageTimes {
+  sample: number;
+  simulate: number;
+  summarise: number;
+  finish: number;
+}
+
+/**
+ * Runs an ensemble: samples the inputs, advances every member through each pathway year by
+ * year with the two-layer model, and summarises each year as it is produced (memory
+ * O(members), never members × years). Pure and synchronous: same spec, same result and
+ * resultHash. Throws SpecError for a spec it cannot run (message names the field).
+ * Cost O(members × years × (agents + log of bucket size)).
+ */
+export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions = {}): RunResult {
+  const times = options.stageTimes;
+  let clock = performance.now();
+  const lap = (stage: keyof StageTimes) => {
+    const now = performance.now();
+    if (times) times[stage] += (now - clock) / 1000;
+    clock = now;
+  };
+  const { spec, plan } = preparePlan(input);
+  lap("sample");
+  const n = plan.members;
+  const totalYears = plan.pathways.reduce((s, p, i) => s + p.years + firstPassYears(plan, i), 0);
+  const every = Math.max(1, Math.floor(totalYears / 100));
+  let done = 0;
+  const tick = () => {
+    done++;
+    if (done % every !== 0) return;
+    if (options.shouldCancel?.()) throw new RunCancelledError();
+    options.onProgress?.(done / totalYears);
+  };
+  const pathways: PathwayResult[] = [];
+  let implied: { ecs: PercentileSet; tcr: PercentileSet } | null = null;
+  const inputRanks = new Map<number, Float64Array>();
+  const summariser = new YearSummariser(plan);
+  const slot = plan.state.slots[0]!;
+  plan.pathways.forEach((pathway, p) => {
+    runBaselinePass(plan, p, 0, n, tick);
+    const weighting = weighPathway(plan);
+    resetForReporting(plan, 0, n);
+    const byYear = horizonsByYear(plan, p);
+    lap("simulate");
+    for (let t = 0; t < pathway.years; t++) {
+      advanceReportedYear(plan, pathway, t, 0, n, slot);
+      if (times) lap("simulate");
+      summariser.summarise(t, pathway.years, slot, weighting.weights, weighting.totalWeight, byYear[t]!);
+      if (times) lap("summarise");
+      tick();
+    }
+    pathways.push(finishPathway(spec, plan, p, weighting, inputRanks));
+    if (p === 0) implied = impliedSensitivities(plan, spec.percentiles, weighting);
+    lap("finish");
+  });
+  options.onProgress?.(1);
+  const result = assembleResult(spec, pathways, implied!);
+  lap("finish");
+  return result;
+}

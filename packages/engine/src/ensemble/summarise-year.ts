@@ -1,0 +1,95 @@
+import { PercentileSelector } from "../summary/percentile-selector.js";
+import type { EnsemblePlan, YearSlot } from "./ensemble-plan.js";
+import { exceedanceRow, summaryRow } from "./yearly-layout.js";
+
+/**
+ * Summarises one reported year from its slot: percentiles and mean of the anomaly, total
+ * forcing and imbalance, and the probability of exceeding each threshold (weighted when a
+ * constraint applies). Members are always visited in member order, so the numbers do not
+ * depend on which thread summarises or how members were split for simulation. At horizon
+ * years it also keeps each member's anomaly, forcing and committed warming.
+ */
+export class YearSummariser {
+  private readonly selector = new PercentileSelector();
+  private readonly out: Float64Array;
+
+  constructor(private readonly plan: EnsemblePlan) {
+    this.out = new Float64Array(plan.probs.length);
+  }
+
+  /**
+   * weights: null when the ensemble is unweighted; totalWeight their sum in member order.
+   * horizonIndexes: the horizons (indexes into plan.horizons) that fall in this year.
+   */
+  summarise(t: number, years: number, slot: YearSlot, weights: Float64Array | null, totalWeight: number, horizonIndexes: number[]): void {
+    const plan = this.plan;
+    const percentiles = plan.probs.length;
+    const yearly = plan.state.yearly;
+    const n = plan.members;
+    const exceed = this.temperatureSums(slot.anomaly, weights);
+    this.describe(0, t, years, slot.anomaly, weights, totalWeight);
+    for (let i = 0; i < plan.thresholds.length; i++)
+      yearly[exceedanceRow(i, percentiles) * years + t] = weights ? exceed[i]! / totalWeight : exceed[i]! / n;
+    this.describe(1, t, years, slot.forcing, weights, totalWeight);
+    this.describe(2, t, years, slot.imbalance, weights, totalWeight);
+    for (const h of horizonIndexes) this.keepHorizon(h, slot);
+  }
+
+  /** Weighted (or plain) count of members above each threshold. */
+  private temperatureSums(values: Float64Array, weights: Float64Array | null): number[] {
+    const thresholds = this.plan.thresholds;
+    const sums = new Array<number>(thresholds.length).fill(0);
+    const n = this.plan.members;
+    for (let i = 0; i < thresholds.length; i++) {
+      const threshold = thresholds[i]!;
+      let s = 0;
+      if (weights) {
+        for (let m = 0; m < n; m++) if (values[m]! > threshold) s += weights[m]!;
+      } else {
+        for (let m = 0; m < n; m++) if (values[m]! > threshold) s++;
+      }
+      sums[i] = s;
+    }
+    return sums;
+  }
+
+  private describe(quantity: number, t: number, years: number, values: Float64Array, weights: Float64Array | null, totalWeight: number): void {
+    const n = this.plan.members;
+    let min = values[0]!;
+    let max = min;
+    let sum = 0;
+    if (weights) {
+      for (let m = 0; m < n; m++) {
+        const v = values[m]!;
+        if (v < min) min = v;
+        else if (v > max) max = v;
+        sum += weights[m]! * v;
+      }
+    } else {
+      for (let m = 0; m < n; m++) {
+        const v = values[m]!;
+        if (v < min) min = v;
+        else if (v > max) max = v;
+        sum += v;
+      }
+    }
+    const percentiles = this.plan.probs.length;
+    this.selector.select(values, n, this.plan.probs, this.out, min, max, weights, totalWeight);
+    const yearly = this.plan.state.yearly;
+    for (let j = 0; j < percentiles; j++) yearly[summaryRow(quantity, j, percentiles) * years + t] = this.out[j]!;
+    yearly[summaryRow(quantity, percentiles, percentiles) * years + t] = weights ? sum / totalWeight : sum / n;
+  }
+
+  /** Committed warming: equilibrium F/λ minus the current warming, both from the pathway start. */
+  private keepHorizon(h: number, slot: YearSlot): void {
+    const { horizonTemperature, horizonForcing, horizonCommitted, baselineMean } = this.plan.state;
+    const lambda = this.plan.climate.lambda;
+    const temperature = horizonTemperature[h]!;
+    const forcing = horizonForcing[h]!;
+    const committed = horizonCommitted[h]!;
+    temperature.set(slot.anomaly);
+    forcing.set(slot.forcing);
+    for (let m = 0; m < this.plan.members; m++)
+      committed[m] = slot.forcing[m]! / lambda[m]! - (slot.anomaly[m]! + baselineMean[m]!);
+  }
+}

@@ -1,0 +1,3 @@
+/** Node-only entry of the engine: the worker-thread runner. */
+export { runEnsembleParallel, PARALLEL_MIN_MEMBERS, type ParallelRunOptions } from "./run-ensemble-parallel.js";
+export type { StageTimes } from "../ensemble/run-ensemble.js";

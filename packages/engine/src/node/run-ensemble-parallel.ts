@@ -1,0 +1,184 @@
+import { availableParallelism } from "node:os";
+import { Worker } from "node:worker_threads";
+import { assembleResult } from "../ensemble/assemble-result.js";
+import type { EnsemblePlan } from "../ensemble/ensemble-plan.js";
+import { finishPathway } from "../ensemble/finish-pathway.js";
+import { impliedSensitivities } from "../ensemble/implied-sensitivity.js";
+import { firstPassYears, horizonsByYear } from "../ensemble/pathway-passes.js";
+import { weighPathway } from "../ensemble/pathway-weights.js";
+import { preparePlan } from "../ensemble/prepare-plan.js";
+import { runEnsemble, type StageTimes } from "../ensemble/run-ensemble.js";
+import { RunCancelledError } from "../spec/spec-error.js";
+import type { PathwayResult, PercentileSet, RunResult, RunSpec, RunSpecInput } from "../spec/types.js";
+import { CANCEL_FLAG, createPipelineControl, type PipelineControl } from "./pipeline-control.js";
+import type { FromWorker, ToWorker } from "./worker-messages.js";
+
+/** Below this many members one thread is faster than starting workers. */
+export const PARALLEL_MIN_MEMBERS = 20_000;
+
+export interface ParallelRunOptions {
+  /** Worker threads; default: the machine's available cores when members ≥ 20,000, else 1. */
+  threads?: number;
+  onProgress?(fraction: number): void;
+  signal?: AbortSignal;
+  /** If given, filled with seconds per stage (parallel stages: thread-seconds / threads). */
+  stageTimes?: StageTimes;
+}
+
+const sharedAllocate = (length: number) => new Float64Array(new SharedArrayBuffer(8 * length));
+
+/**
+ * runEnsemble spread over worker threads: sampling happens once on this thread (one seeded
+ * stream per input, as in runEnsemble) into shared memory; workers each advance a block of
+ * members and take turns summarising years (ensemble-worker.ts). Results are bit-identical
+ * to runEnsemble for any thread count. Rejects with SpecError for a bad spec and with
+ * RunCancelledError when the signal aborts.
+ */
+export async function runEnsembleParallel(input: RunSpecInput | RunSpec, options: ParallelRunOptions = {}): Promise<RunResult> {
+  const threads = Math.max(
+    1,
+    Math.floor(options.threads ?? (input.members >= PARALLEL_MIN_MEMBERS ? availableParallelism() : 1)),
+  );
+  if (threads === 1 || input.members < 2 * threads) {
+    const signal = options.signal;
+    return runEnsemble(input, {
+      ...(options.onProgress ? { onProgress: options.onProgress } : {}),
+      ...(options.stageTimes ? { stageTimes: options.stageTimes } : {}),
+      shouldCancel: () => signal?.aborted === true,
+    });
+  }
+  // Start the workers first: their start-up overlaps with sampling on this thread.
+  const pool = new WorkerPool(threads);
+  try {
+    const start = performance.now();
+    const { spec, plan } = preparePlan(input, threads + 2, sharedAllocate);
+    if (options.stageTimes) options.stageTimes.sample += (performance.now() - start) / 1000;
+    return await runWithPool(spec, plan, pool, options);
+  } finally {
+    pool.stop();
+  }
+}
+
+async function runWithPool(spec: RunSpec, plan: EnsemblePlan, pool: WorkerPool, options: ParallelRunOptions): Promise<RunResult> {
+  const maxYears = Math.max(...plan.pathways.map((p) => p.years));
+  const control = createPipelineControl(maxYears);
+  const onAbort = () => Atomics.store(control.flags, CANCEL_FLAG, 1);
+  options.signal?.addEventListener("abort", onAbort);
+  const totalYears = plan.pathways.reduce((s, p, i) => s + p.years + firstPassYears(plan, i), 0);
+  let finishedYears = 0;
+  const progress = options.onProgress
+    ? setInterval(() => {
+        const reported = control.summarised.reduce((s, v) => s + v, 0);
+        options.onProgress!((finishedYears + reported) / totalYears);
+      }, 100)
+    : null;
+  try {
+    const n = plan.members;
+    await pool.all((w, count) => ({
+      kind: "plan",
+      plan,
+      control,
+      worker: w,
+      workers: count,
+      lo: Math.floor((n * w) / count),
+      hi: Math.floor((n * (w + 1)) / count),
+    }));
+    const pathways: PathwayResult[] = [];
+    let implied: { ecs: PercentileSet; tcr: PercentileSet } | null = null;
+    const inputRanks = new Map<number, Float64Array>();
+    const times = options.stageTimes;
+    const account = (replies: FromWorker[]) => {
+      if (!times) return;
+      for (const reply of replies) {
+        if (reply.kind !== "done") continue;
+        times.simulate += reply.simulateSeconds / replies.length;
+        times.summarise += reply.summariseSeconds / replies.length;
+      }
+    };
+    for (let p = 0; p < plan.pathways.length; p++) {
+      if (options.signal?.aborted) throw new RunCancelledError();
+      account(await pool.all(() => ({ kind: "baseline", pathway: p })));
+      finishedYears += firstPassYears(plan, p);
+      const weighting = weighPathway(plan);
+      control.simulated.fill(0);
+      control.summarised.fill(0);
+      account(await pool.all(() => ({
+        kind: "report",
+        pathway: p,
+        weighted: weighting.weights !== null,
+        totalWeight: weighting.totalWeight,
+        horizonsByYear: horizonsByYear(plan, p),
+      })));
+      const finishStart = performance.now();
+      finishedYears += plan.pathways[p]!.years;
+      control.summarised.fill(0);
+      pathways.push(finishPathway(spec, plan, p, weighting, inputRanks));
+      if (p === 0) implied = impliedSensitivities(plan, spec.percentiles, weighting);
+      if (times) times.finish += (performance.now() - finishStart) / 1000;
+    }
+    options.onProgress?.(1);
+    const finishStart = performance.now();
+    const result = assembleResult(spec, pathways, implied!);
+    if (times) times.finish += (performance.now() - finishStart) / 1000;
+    return result;
+  } finally {
+    if (progress) clearInterval(progress);
+    options.signal?.removeEventListener("abort", onAbort);
+  }
+}
+
+/** A fixed set of ensemble workers driven in lock-step: each call sends one message to all and awaits all replies. */
+class WorkerPool {
+  private readonly workers: Worker[];
+
+  constructor(count: number) {
+    const { url, execArgv } = workerEntry();
+    this.workers = Array.from({ length: count }, () => new Worker(url, { execArgv }));
+  }
+
+  all(message: (worker: number, count: number) => ToWorker): Promise<FromWorker[]> {
+    const count = this.workers.length;
+    return Promise.all(
+      this.workers.map(
+        (worker, w) =>
+          new Promise<FromWorker>((resolve, reject) => {
+            const cleanup = () => {
+              worker.off("message", onMessage);
+              worker.off("error", onError);
+            };
+            const onMessage = (reply: FromWorker) => {
+              cleanup();
+              if (reply.kind === "failed") reject(Object.assign(new Error(reply.message), { stack: reply.stack }));
+              else if (reply.kind === "cancelled") reject(new RunCancelledError());
+              else resolve(reply);
+            };
+            const onError = (error: Error) => {
+              cleanup();
+              reject(error);
+            };
+            worker.on("message", onMessage);
+            worker.on("error", onError);
+            worker.postMessage(message(w, count));
+          }),
+      ),
+    );
+  }
+
+  stop(): void {
+    for (const worker of this.workers) void worker.terminate();
+  }
+}
+
+/**
+ * The worker script beside this file: compiled JavaScript in dist; under the test runner
+ * (TypeScript sources) the same file as .ts, loaded through tsx.
+ */
+function workerEntry(): { url: URL; execArgv: string[] } {
+  const fromSource = import.meta.url.endsWith(".ts");
+  return {
+    url: new URL(fromSource ? "./ensemble-worker.ts" : "./ensemble-worker.js", import.meta.url),
+    execArgv: fromSource ? ["--import", "tsx"] : [],
+  };
+}
+
+export type { PipelineControl };

@@ -1,0 +1,16 @@
+import type { EnsemblePlan } from "../ensemble/ensemble-plan.js";
+import type { PipelineControl } from "./pipeline-control.js";
+
+/** Messages from the main thread to an ensemble worker. */
+export type ToWorker =
+  | { kind: "plan"; plan: EnsemblePlan; control: PipelineControl; worker: number; workers: number; lo: number; hi: number }
+  | { kind: "baseline"; pathway: number }
+  | { kind: "report"; pathway: number; weighted: boolean; totalWeight: number; horizonsByYear: number[][] }
+  | { kind: "stop" };
+
+/** Messages from an ensemble worker back to the main thread. */
+export type FromWorker =
+  | { kind: "ready" }
+  | { kind: "done"; simulateSeconds: number; summariseSeconds: number }
+  | { kind: "cancelled" }
+  | { kind: "failed"; message: string; stack?: string };

@@ -1,0 +1,28 @@
+import type { RunSpec, RunSpecInput } from "./types.js";
+
+/**
+ * The spec with every default filled in, as DESIGN.md states them: baseline 1850–1900,
+ * percentiles 5/17/50/83/95, thresholds 1.5/2/3 K, horizons 2030/2050/2100, no
+ * correlations, no constraint, the AR6 concentration expression. The input hash is taken
+ * of this form, so writing a default out or leaving it out gives the same hash.
+ */
+export function applyDefaults(input: RunSpecInput | RunSpec): RunSpec {
+  const model = input.model;
+  return {
+    seed: input.seed,
+    members: input.members,
+    sampling: input.sampling,
+    baseline: input.baseline ?? [1850, 1900],
+    percentiles: input.percentiles ?? [5, 17, 50, 83, 95],
+    thresholds: input.thresholds ?? [1.5, 2, 3],
+    horizons: input.horizons ?? [2030, 2050, 2100],
+    pathways: input.pathways,
+    model: {
+      climate: model.climate,
+      agents: model.agents ?? {},
+      correlations: model.correlations ?? [],
+      constraint: model.constraint ?? null,
+      forcingExpression: model.forcingExpression ?? "ar6",
+    },
+  };
+}
