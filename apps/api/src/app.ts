@@ -5,6 +5,7 @@ import express from "express";
 import { rateLimit } from "express-rate-limit";
 import helmet from "helmet";
 import type { AppContext } from "./context.js";
+import { CLIENT_IP_HEADER } from "./auth/create-auth.js";
 import { AppError } from "./errors/app-error.js";
 import { errorHandler } from "./errors/error-handler.js";
 import { requireTrustedOrigin } from "./middleware/require-trusted-origin.js";
@@ -33,8 +34,13 @@ export function createApp(ctx: AppContext): express.Express {
       },
     }),
   );
-  // better-auth reads the raw body itself, so it is mounted before express.json().
-  app.all("/api/auth/*splat", toNodeHandler(ctx.auth));
+  // better-auth reads the raw body itself, so it is mounted before express.json(). It sees
+  // a fetch Request without the socket, so it gets the client address (as Express resolved
+  // it under "trust proxy") in a header we always overwrite, so a client cannot spoof it.
+  app.all("/api/auth/*splat", (req, _res, next) => {
+    req.headers[CLIENT_IP_HEADER] = req.ip ?? req.socket.remoteAddress ?? "unknown";
+    next();
+  }, toNodeHandler(ctx.auth));
 
   app.use(express.json({ limit: JSON_LIMIT }));
   const api = express.Router();

@@ -41,6 +41,7 @@ describe("sign-in (better-auth on the Sequelize adapter)", () => {
     expect(rows.length).toBe(before + 1);
     expect(rows[0]!.actorEmail).toBe(demoUser("actuary").email);
     expect(rows[0]!.summary).toContain(demoUser("actuary").email);
+    expect((rows[0]!.data as { ipAddress: string }).ipAddress).toMatch(/127\.0\.0\.1|::1/);
   });
 
   it("refuses sign-up: only admins create accounts", async () => {

@@ -6,6 +6,9 @@ import type { Models } from "../db/models.js";
 import { accessControl, authRoles } from "./access-control.js";
 import { sequelizeAdapter } from "./sequelize-adapter.js";
 
+/** Set by app.ts on every /api/auth request from Express's view of the client address. */
+export const CLIENT_IP_HEADER = "x-plumeline-client-ip";
+
 export interface SignInFailure {
   email: string | null;
   reason: string;
@@ -32,6 +35,8 @@ export function createAuth({ config, models, onSignInFailure }: CreateAuthOption
     secret: config.authSecret,
     trustedOrigins: config.trustedOrigins,
     telemetry: { enabled: false },
+    // Failed sign-ins are audited; better-auth's own warning per bad password is noise in tests.
+    logger: { level: config.env === "test" ? "error" : "warn" },
     database: sequelizeAdapter({
       models: { user: models.User, session: models.Session, account: models.Account, verification: models.Verification },
     }),
@@ -46,6 +51,7 @@ export function createAuth({ config, models, onSignInFailure }: CreateAuthOption
     advanced: {
       // better-auth skips its origin/CSRF check under test runners by default; keep it on everywhere.
       disableOriginCheck: false,
+      ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
       useSecureCookies: secureCookies,
       defaultCookieAttributes: { httpOnly: true, sameSite: "lax", secure: secureCookies },
     },
@@ -60,7 +66,7 @@ export function createAuth({ config, models, onSignInFailure }: CreateAuthOption
         await onSignInFailure({
           email: typeof body.email === "string" ? body.email.toLowerCase().slice(0, 254) : null,
           reason: returned.body?.code ?? returned.message ?? String(returned.status),
-          ipAddress: ctx.request?.headers.get("x-forwarded-for") ?? null,
+          ipAddress: ctx.request?.headers.get(CLIENT_IP_HEADER) ?? null,
         });
       }),
     },
