@@ -19,6 +19,12 @@ export async function getUser(ctx: Pick<AppContext, "models">, id: string): Prom
   return toUser(row);
 }
 
+/** Addresses of everyone holding `role`, e.g. the managers to notify of a submission. */
+export async function emailsOfRole(ctx: Pick<AppContext, "models">, role: Role): Promise<string[]> {
+  const rows = await ctx.models.User.findAll({ where: { role }, attributes: ["email"], order: [["email", "ASC"]] });
+  return rows.map((r) => r.email);
+}
+
 /** A temporary password: 18 random bytes, base64url (24 characters, 144 bits). */
 export function generateTemporaryPassword(): string {
   return randomBytes(18).toString("base64url");
