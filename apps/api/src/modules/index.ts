@@ -4,6 +4,11 @@ import { healthRouter } from "./health/health.routes.js";
 import { meRouter } from "./me/me.routes.js";
 import { outboxRouter } from "./outbox/outbox.routes.js";
 import { usersRouter } from "./users/users.routes.js";
+import { pathwaysRouter } from "./pathways/pathways.routes.js";
+import { modelVersionsRouter } from "./model-versions/model-versions.routes.js";
+import { runsRouter } from "./runs/runs.routes.js";
+import { resultsRouter } from "./results/results.routes.js";
+import { exportsRouter, runExportsRouter } from "./exports/exports.routes.js";
 
 /**
  * Every module's router and the path it is mounted at under /api. app.ts mounts them in
@@ -17,5 +22,11 @@ export const moduleRouters: ReadonlyArray<readonly [path: string, router: Router
   ["/audit", auditRouter],
   ["/outbox", outboxRouter],
   // domain (pathways, model-versions, runs, results, exports)
+  ["/pathways", pathwaysRouter],
+  ["/model-versions", modelVersionsRouter],
+  ["/runs", runsRouter],
+  ["/runs", resultsRouter],
+  ["/runs", runExportsRouter],
+  ["/exports", exportsRouter],
   // peril (peril-profiles, portfolios)
 ];

@@ -5,6 +5,7 @@
  */
 import { parentPort } from "node:worker_threads";
 import { runEnsemble } from "@plumeline/engine";
+import type { RunResult } from "@plumeline/contracts";
 import type { FromEngineThread, ToEngineThread } from "./engine-thread-protocol.js";
 
 const PROGRESS_EVERY_MS = 200;
@@ -41,7 +42,8 @@ port.on("message", (message: ToEngineThread) => {
       // The engine asks between simulated years and stops when told to.
       shouldCancel: cancelled,
     });
-    post(cancelled() ? { type: "cancelled" } : { type: "done", result });
+    // The engine's own RunResult type is the contract's shape; the worker re-checks it on arrival.
+    post(cancelled() ? { type: "cancelled" } : { type: "done", result: result as unknown as RunResult });
   } catch (error) {
     if (cancelled()) post({ type: "cancelled" });
     else post({ type: "failed", message: error instanceof Error ? error.message : String(error) });

@@ -1,0 +1,21 @@
+import { listExportsQuerySchema, RESULT_TABLES } from "@plumeline/contracts";
+import { Router } from "express";
+import { z } from "zod";
+import { authenticate } from "../../middleware/authenticate.js";
+import { requirePermission } from "../../middleware/require-permission.js";
+import { validate } from "../../middleware/validate.js";
+import { exportsController as c } from "./exports.controller.js";
+
+const tableParams = z.object({
+  id: z.string().min(1),
+  table: z.enum(RESULT_TABLES, { error: `must be one of ${RESULT_TABLES.join(", ")}` }),
+});
+
+/** File downloads of a run, mounted under /runs (each one is recorded as an export). */
+export const runExportsRouter: Router = Router();
+runExportsRouter.get("/:id/tables/:table.csv", authenticate, requirePermission("runs:read"), validate({ params: tableParams }), c.csv);
+runExportsRouter.get("/:id/workbook.xlsx", authenticate, requirePermission("exports:create"), validate({ params: z.object({ id: z.string().min(1) }) }), c.workbook);
+
+/** The export register, mounted at /exports. */
+export const exportsRouter: Router = Router();
+exportsRouter.get("/", authenticate, requirePermission("runs:read"), validate({ query: listExportsQuerySchema }), c.list);

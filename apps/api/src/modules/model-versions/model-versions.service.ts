@@ -1,0 +1,276 @@
+import { randomUUID } from "node:crypto";
+import {
+  createModelVersionBodySchema,
+  type ChangeClass,
+  type CreateModelVersionBody,
+  type ErrorDetail,
+  type ModelVersion,
+  type ModelVersionDiff,
+  type ModelVersionStatus,
+  type ModelVersionSummary,
+  type UpdateModelVersionBody,
+} from "@plumeline/contracts";
+import { Op, type Transaction } from "sequelize";
+import type { AppContext } from "../../context.js";
+import { badRequest, conflict, forbidden, notFound } from "../../errors/app-error.js";
+import type { RequestUser } from "../../middleware/request-context.js";
+import { recordAudit } from "../audit/audit.service.js";
+import { lockPathways } from "../pathways/pathways.service.js";
+import { diffModelVersions } from "./model-version-diff.js";
+import { mailDecided, mailSubmitted } from "./model-version-mail.js";
+import type { ModelVersionModel } from "./model-version.model.js";
+
+type Ctx = Pick<AppContext, "models" | "sequelize" | "mailer" | "config">;
+
+const iso = (d: Date | null) => (d ? d.toISOString() : null);
+
+async function userNames(ctx: Pick<Ctx, "models">, ids: Array<string | null>): Promise<Map<string, string>> {
+  const wanted = [...new Set(ids.filter((x): x is string => !!x))];
+  if (wanted.length === 0) return new Map();
+  const users = await ctx.models.User.findAll({ where: { id: { [Op.in]: wanted } }, attributes: ["id", "name"] });
+  return new Map(users.map((u) => [u.id, u.name]));
+}
+
+function toSummary(row: ModelVersionModel, names: Map<string, string>): ModelVersionSummary {
+  return {
+    id: row.id,
+    name: row.name,
+    versionNumber: row.versionNumber,
+    status: row.status,
+    parentId: row.parentId,
+    changeClass: row.changeClass,
+    authorId: row.authorId,
+    authorName: names.get(row.authorId) ?? null,
+    createdAt: row.createdAt.toISOString(),
+    updatedAt: row.updatedAt.toISOString(),
+    submittedAt: iso(row.submittedAt),
+    decidedBy: row.decidedBy,
+    decidedByName: row.decidedBy ? (names.get(row.decidedBy) ?? null) : null,
+    decidedAt: iso(row.decidedAt),
+  };
+}
+
+function toFull(row: ModelVersionModel, names: Map<string, string>): ModelVersion {
+  return {
+    ...toSummary(row, names),
+    model: row.model,
+    defaults: row.defaults,
+    notes: row.notes,
+    submissionNote: row.submissionNote,
+    decisionComment: row.decisionComment,
+    retiredAt: iso(row.retiredAt),
+    pathwayIds: row.pathwayIds ?? [],
+    perilProfileIds: row.perilProfileIds ?? [],
+  };
+}
+
+export async function presentModelVersion(ctx: Pick<Ctx, "models">, row: ModelVersionModel): Promise<ModelVersion> {
+  return toFull(row, await userNames(ctx, [row.authorId, row.decidedBy]));
+}
+
+export async function listModelVersions(ctx: Ctx, status?: ModelVersionStatus): Promise<ModelVersionSummary[]> {
+  const rows = await ctx.models.ModelVersion.findAll({
+    where: status ? { status } : {},
+    order: [["updatedAt", "DESC"], ["versionNumber", "DESC"]],
+  });
+  const names = await userNames(ctx, rows.flatMap((r) => [r.authorId, r.decidedBy]));
+  return rows.map((r) => toSummary(r, names));
+}
+
+export async function findModelVersion(ctx: Pick<Ctx, "models">, id: string, transaction?: Transaction): Promise<ModelVersionModel> {
+  const row = await ctx.models.ModelVersion.findByPk(id, transaction ? { transaction } : {});
+  if (!row) throw notFound("Model version", id);
+  return row;
+}
+
+export async function getModelVersion(ctx: Ctx, id: string): Promise<ModelVersion> {
+  return presentModelVersion(ctx, await findModelVersion(ctx, id));
+}
+
+/** Referenced ids must exist: every missing one is named. */
+async function checkReferences(ctx: Ctx, parentId: string | null | undefined, pathwayIds: string[] | undefined, transaction: Transaction) {
+  const errors: ErrorDetail[] = [];
+  let parent: ModelVersionModel | null = null;
+  if (parentId) {
+    parent = await ctx.models.ModelVersion.findByPk(parentId, { transaction });
+    if (!parent) errors.push({ path: "parentId", message: `model version ${parentId} does not exist` });
+  }
+  if (pathwayIds && pathwayIds.length > 0) {
+    const found = await ctx.models.Pathway.findAll({ where: { id: { [Op.in]: pathwayIds } }, attributes: ["id"], transaction });
+    const have = new Set(found.map((p) => p.id));
+    pathwayIds.forEach((id, i) => {
+      if (!have.has(id)) errors.push({ path: `pathwayIds[${i}]`, message: `pathway ${id} does not exist` });
+    });
+  }
+  if (errors.length > 0) throw badRequest(errors);
+  return parent;
+}
+
+export async function createModelVersion(ctx: Ctx, user: RequestUser, body: CreateModelVersionBody): Promise<ModelVersion> {
+  const input = createModelVersionBodySchema.parse(body);
+  const row = await ctx.sequelize.transaction(async (transaction) => {
+    const parent = await checkReferences(ctx, input.parentId, input.pathwayIds, transaction);
+    const id = randomUUID();
+    const familyId = parent?.familyId ?? id;
+    const highest = (await ctx.models.ModelVersion.max("versionNumber", { where: { familyId }, transaction })) as number | null;
+    const created = await ctx.models.ModelVersion.create(
+      {
+        id,
+        familyId,
+        versionNumber: (highest ?? 0) + 1,
+        name: input.name,
+        status: "draft",
+        parentId: input.parentId ?? null,
+        model: input.model,
+        defaults: input.defaults,
+        notes: input.notes,
+        pathwayIds: input.pathwayIds,
+        perilProfileIds: input.perilProfileIds,
+        authorId: user.id,
+      },
+      { transaction },
+    );
+    await recordAudit(
+      ctx,
+      {
+        actorId: user.id,
+        action: "model-version.created",
+        entityType: "model-version",
+        entityId: id,
+        summary: `Draft model version "${created.name}" v${created.versionNumber} created${parent ? ` from v${parent.versionNumber}` : ""}.`,
+        data: { parentId: created.parentId, familyId },
+      },
+      transaction,
+    );
+    return created;
+  });
+  return presentModelVersion(ctx, row);
+}
+
+function refuseUnlessEditableDraft(row: ModelVersionModel, user: RequestUser, verb: string): void {
+  if (row.status === "approved" || row.status === "retired")
+    throw conflict(`Model version "${row.name}" v${row.versionNumber} is ${row.status} and cannot change. Create a new version from it.`, "model_version_immutable");
+  if (row.status !== "draft")
+    throw conflict(`Model version "${row.name}" v${row.versionNumber} is ${row.status}; only a draft can be ${verb}.`, "model_version_not_draft");
+  if (row.authorId !== user.id) throw forbidden(`Only the author of a draft can ${verb.replace(/ed$/, "")} it.`, "not_author");
+}
+
+export async function updateModelVersion(ctx: Ctx, user: RequestUser, id: string, body: UpdateModelVersionBody): Promise<ModelVersion> {
+  await ctx.sequelize.transaction(async (transaction) => {
+    const row = await findModelVersion(ctx, id, transaction);
+    refuseUnlessEditableDraft(row, user, "edited");
+    if (body.parentId === id) throw badRequest([{ path: "parentId", message: "cannot be the version itself" }]);
+    await checkReferences(ctx, body.parentId, body.pathwayIds, transaction);
+    const changes = Object.fromEntries(Object.entries(body).filter(([, v]) => v !== undefined));
+    await row.update(changes, { transaction });
+    await recordAudit(
+      ctx,
+      {
+        actorId: user.id,
+        action: "model-version.updated",
+        entityType: "model-version",
+        entityId: id,
+        summary: `Draft "${row.name}" v${row.versionNumber} edited (${Object.keys(changes).join(", ") || "no fields"}).`,
+        data: { fields: Object.keys(changes) },
+      },
+      transaction,
+    );
+  });
+  return getModelVersion(ctx, id);
+}
+
+/** Governed content compared by the diff: what a reviewer signs off on. */
+function governed(row: ModelVersionModel) {
+  return { name: row.name, model: row.model, defaults: row.defaults, notes: row.notes, pathwayIds: row.pathwayIds ?? [], perilProfileIds: row.perilProfileIds ?? [] };
+}
+
+export async function diffModelVersion(ctx: Ctx, id: string, againstId?: string): Promise<ModelVersionDiff> {
+  const row = await findModelVersion(ctx, id);
+  const otherId = againstId ?? row.parentId;
+  if (!otherId) return { against: null, changes: diffModelVersions({}, governed(row)) };
+  const other = await findModelVersion(ctx, otherId);
+  return {
+    against: { id: other.id, name: other.name, versionNumber: other.versionNumber },
+    changes: diffModelVersions(governed(other), governed(row)),
+  };
+}
+
+export async function submitModelVersion(ctx: Ctx, user: RequestUser, id: string, changeClass: ChangeClass, note?: string): Promise<ModelVersion> {
+  const row = await ctx.sequelize.transaction(async (transaction) => {
+    const row = await findModelVersion(ctx, id, transaction);
+    refuseUnlessEditableDraft(row, user, "submitted");
+    await row.update({ status: "in-review", changeClass, submissionNote: note ?? null, submittedAt: new Date() }, { transaction });
+    await recordAudit(
+      ctx,
+      {
+        actorId: user.id,
+        action: "model-version.submitted",
+        entityType: "model-version",
+        entityId: id,
+        summary: `"${row.name}" v${row.versionNumber} submitted for review as a ${changeClass} change.`,
+        data: { changeClass, note: note ?? null },
+      },
+      transaction,
+    );
+    return row;
+  });
+  await mailSubmitted(ctx, row, user.name);
+  return presentModelVersion(ctx, row);
+}
+
+type Decision = "approved" | "rejected";
+
+/** Approve or reject an in-review version; the author can never decide their own (separation of duties). */
+export async function decideModelVersion(ctx: Ctx, user: RequestUser, id: string, decision: Decision, comment: string): Promise<ModelVersion> {
+  const row = await ctx.sequelize.transaction(async (transaction) => {
+    const row = await findModelVersion(ctx, id, transaction);
+    if (row.authorId === user.id)
+      throw forbidden(`You wrote "${row.name}" v${row.versionNumber}; another manager must decide it.`, "self_approval_forbidden");
+    if (row.status !== "in-review")
+      throw conflict(`Model version "${row.name}" v${row.versionNumber} is ${row.status}; only a version in review can be ${decision}.`, "model_version_not_in_review");
+    await row.update({ status: decision, decidedBy: user.id, decidedAt: new Date(), decisionComment: comment }, { transaction });
+    if (decision === "approved") await lockPathways(ctx, row.pathwayIds ?? [], transaction);
+    await recordAudit(
+      ctx,
+      {
+        actorId: user.id,
+        action: `model-version.${decision}`,
+        entityType: "model-version",
+        entityId: id,
+        summary: `"${row.name}" v${row.versionNumber} ${decision} (${row.changeClass} change): ${comment}`,
+        data: { comment, changeClass: row.changeClass, authorId: row.authorId },
+      },
+      transaction,
+    );
+    return row;
+  });
+  await mailDecided(ctx, row, user.name);
+  return presentModelVersion(ctx, row);
+}
+
+/** Retire an approved version: no new runs on it; its runs stay reproducible. */
+export async function retireModelVersion(ctx: Ctx, user: RequestUser, id: string, comment?: string): Promise<ModelVersion> {
+  const row = await ctx.sequelize.transaction(async (transaction) => {
+    const row = await findModelVersion(ctx, id, transaction);
+    if (row.authorId === user.id)
+      throw forbidden(`You wrote "${row.name}" v${row.versionNumber}; another manager must retire it.`, "self_approval_forbidden");
+    if (row.status !== "approved")
+      throw conflict(`Model version "${row.name}" v${row.versionNumber} is ${row.status}; only an approved version can be retired.`, "model_version_not_approved");
+    await row.update({ status: "retired", retiredBy: user.id, retiredAt: new Date(), retireComment: comment ?? null }, { transaction });
+    await recordAudit(
+      ctx,
+      {
+        actorId: user.id,
+        action: "model-version.retired",
+        entityType: "model-version",
+        entityId: id,
+        summary: `"${row.name}" v${row.versionNumber} retired${comment ? `: ${comment}` : "."}`,
+        data: { comment: comment ?? null },
+      },
+      transaction,
+    );
+    return row;
+  });
+  await mailDecided(ctx, row, user.name);
+  return presentModelVersion(ctx, row);
+}

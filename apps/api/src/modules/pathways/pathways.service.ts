@@ -1,0 +1,218 @@
+import { randomUUID } from "node:crypto";
+import {
+  createPathwayBodySchema,
+  formatPath,
+  pathwayMetadataSchema,
+  type CreatePathwayBody,
+  type ErrorDetail,
+  type Pathway,
+  type PathwayPreview,
+  type PathwaySummary,
+  type UpdatePathwayBody,
+} from "@plumeline/contracts";
+import { Op, type Transaction } from "sequelize";
+import type { AppContext } from "../../context.js";
+import { AppError, badRequest, conflict, forbidden, notFound } from "../../errors/app-error.js";
+import type { RequestUser } from "../../middleware/request-context.js";
+import { recordAudit } from "../audit/audit.service.js";
+import { pathwayChecksum } from "./pathway-checksum.js";
+import { pathwayFileType, readCsvRows, readXlsxRows, UnreadableFileError } from "./pathway-file.js";
+import { checkSeriesShape, seriesAgents, seriesLength } from "./pathway-series.js";
+import { parsePathwayTable, type PathwaySeries } from "./pathway-table.js";
+import type { PathwayModel } from "./pathway.model.js";
+
+type Ctx = Pick<AppContext, "models" | "sequelize">;
+
+export const PREVIEW_ROWS = 20;
+
+export function toPathwaySummary(row: PathwayModel): PathwaySummary {
+  const list = seriesAgents(row.agents);
+  return {
+    id: row.id,
+    name: row.name,
+    description: row.description,
+    source: row.source,
+    vintage: row.vintage,
+    startYear: row.startYear,
+    endYear: row.endYear,
+    agents: list.map((a) => a.agent),
+    quantities: Object.fromEntries(list.map((a) => [a.agent, a.quantity])),
+    checksum: row.checksum,
+    locked: row.locked,
+    createdBy: row.createdBy,
+    createdAt: row.createdAt.toISOString(),
+  };
+}
+
+export function toPathway(row: PathwayModel): Pathway {
+  return { ...toPathwaySummary(row), agents: row.agents as Pathway["agents"] };
+}
+
+export async function listPathways(ctx: Ctx): Promise<PathwaySummary[]> {
+  const rows = await ctx.models.Pathway.findAll({ order: [["createdAt", "DESC"], ["name", "ASC"]] });
+  return rows.map(toPathwaySummary);
+}
+
+export async function findPathway(ctx: Ctx, id: string, transaction?: Transaction): Promise<PathwayModel> {
+  const row = await ctx.models.Pathway.findByPk(id, transaction ? { transaction } : {});
+  if (!row) throw notFound("Pathway", id);
+  return row;
+}
+
+export async function getPathway(ctx: Ctx, id: string): Promise<Pathway> {
+  return toPathway(await findPathway(ctx, id));
+}
+
+export async function createPathway(ctx: Ctx, user: RequestUser, body: CreatePathwayBody, origin = "json"): Promise<Pathway> {
+  const input = createPathwayBodySchema.parse(body);
+  const shape = checkSeriesShape(input.agents as PathwaySeries);
+  if (shape.length > 0) throw badRequest(shape, "The pathway's series are inconsistent.");
+  const agents = input.agents as PathwaySeries;
+  const row = await ctx.sequelize.transaction(async (transaction) => {
+    const created = await ctx.models.Pathway.create(
+      {
+        id: randomUUID(),
+        name: input.name,
+        description: input.description,
+        source: input.source,
+        vintage: input.vintage,
+        startYear: input.startYear,
+        endYear: input.startYear + seriesLength(agents) - 1,
+        agents,
+        checksum: pathwayChecksum(input.startYear, agents),
+        locked: false,
+        createdBy: user.id,
+      },
+      { transaction },
+    );
+    await recordAudit(
+      ctx,
+      {
+        actorId: user.id,
+        action: "pathway.created",
+        entityType: "pathway",
+        entityId: created.id,
+        summary: `Pathway "${created.name}" created from ${origin} (${created.startYear}–${created.endYear}, checksum ${created.checksum.slice(0, 12)}…).`,
+        data: { checksum: created.checksum, source: created.source, vintage: created.vintage, origin },
+      },
+      transaction,
+    );
+    return created;
+  });
+  return toPathway(row);
+}
+
+/** Editing is allowed only to the creator and only while no run or approved version uses the pathway. */
+export async function updatePathway(ctx: Ctx, user: RequestUser, id: string, body: UpdatePathwayBody): Promise<Pathway> {
+  const row = await findPathway(ctx, id);
+  if (row.locked)
+    throw conflict(
+      `Pathway "${row.name}" is locked: a run or an approved model version uses it. Create a new pathway instead.`,
+      "pathway_locked",
+    );
+  if (row.createdBy !== user.id) throw forbidden("Only the person who created a pathway can edit it.", "not_owner");
+  const agents = (body.agents ?? row.agents) as PathwaySeries;
+  const startYear = body.startYear ?? row.startYear;
+  const shape = checkSeriesShape(agents);
+  if (shape.length > 0) throw badRequest(shape, "The pathway's series are inconsistent.");
+  const checksum = pathwayChecksum(startYear, agents);
+  await ctx.sequelize.transaction(async (transaction) => {
+    const [updated] = await ctx.models.Pathway.update(
+      {
+        ...(body.name !== undefined ? { name: body.name } : {}),
+        ...(body.description !== undefined ? { description: body.description } : {}),
+        ...(body.source !== undefined ? { source: body.source } : {}),
+        ...(body.vintage !== undefined ? { vintage: body.vintage } : {}),
+        startYear,
+        endYear: startYear + seriesLength(agents) - 1,
+        agents,
+        checksum,
+      },
+      // Guarded: a run created since the read above locks the row and makes this a no-op.
+      { where: { id, locked: false }, transaction },
+    );
+    if (updated !== 1) throw conflict(`Pathway "${row.name}" was locked meanwhile. Create a new pathway instead.`, "pathway_locked");
+    await recordAudit(
+      ctx,
+      {
+        actorId: user.id,
+        action: "pathway.updated",
+        entityType: "pathway",
+        entityId: id,
+        summary: `Pathway "${body.name ?? row.name}" edited (checksum ${row.checksum.slice(0, 12)}… -> ${checksum.slice(0, 12)}…).`,
+        data: { before: row.checksum, after: checksum, fields: Object.keys(body) },
+      },
+      transaction,
+    );
+  });
+  return getPathway(ctx, id);
+}
+
+/** Locks pathways for good (a run or an approved version now depends on their numbers). */
+export async function lockPathways(ctx: Ctx, ids: string[], transaction: Transaction): Promise<void> {
+  if (ids.length === 0) return;
+  await ctx.models.Pathway.update({ locked: true }, { where: { id: { [Op.in]: ids }, locked: false }, transaction });
+}
+
+export interface UploadedFile {
+  originalname: string;
+  buffer: Buffer;
+}
+
+/**
+ * Parses an uploaded CSV/XLSX. With `preview` it only reports what it read; otherwise the
+ * metadata fields must be valid too and the pathway is created. Problems in the file and in
+ * the fields come back together in one 400; nothing is saved unless everything is valid.
+ */
+export async function uploadPathway(
+  ctx: Ctx,
+  user: RequestUser,
+  file: UploadedFile | undefined,
+  fields: { name?: string; description?: string; source?: string; vintage?: string; preview: boolean },
+): Promise<{ preview: PathwayPreview } | { pathway: Pathway }> {
+  if (!file) throw badRequest([{ path: "file", message: "is required (a .csv or .xlsx file)" }]);
+  const type = pathwayFileType(file.originalname);
+  if (!type)
+    throw new AppError(400, "unsupported_file_type", `"${file.originalname}" is not a .csv or .xlsx file.`, [
+      { path: "file", message: "must be a .csv or .xlsx file" },
+    ]);
+  let rows;
+  try {
+    rows = type === "csv" ? readCsvRows(file.buffer) : await readXlsxRows(file.buffer);
+  } catch (error) {
+    if (error instanceof UnreadableFileError) throw badRequest([{ path: "file", message: error.message }], "The file could not be read.");
+    throw error;
+  }
+  const table = parsePathwayTable(rows);
+  const errors: ErrorDetail[] = table.ok ? [] : [...table.errors];
+  let metadata: ReturnType<typeof pathwayMetadataSchema.parse> | null = null;
+  if (!fields.preview) {
+    const parsed = pathwayMetadataSchema.safeParse({
+      name: fields.name ?? "",
+      description: fields.description ?? "",
+      source: fields.source ?? "",
+      vintage: fields.vintage ?? "",
+    });
+    if (parsed.success) metadata = parsed.data;
+    else errors.push(...parsed.error.issues.map((i) => ({ path: formatPath(i.path), message: i.message })));
+  }
+  if (!table.ok || errors.length > 0)
+    throw badRequest(errors, `The upload has ${errors.length} problem${errors.length === 1 ? "" : "s"}; nothing was saved.`);
+
+  if (fields.preview)
+    return {
+      preview: {
+        startYear: table.table.startYear,
+        endYear: table.table.endYear,
+        agents: table.table.columns.map((c) => ({ agent: c.agent, quantity: c.quantity, column: c.header })),
+        rows: table.table.rows.slice(0, PREVIEW_ROWS),
+      },
+    };
+  const pathway = await createPathway(
+    ctx,
+    user,
+    { ...metadata!, startYear: table.table.startYear, agents: table.table.agents as CreatePathwayBody["agents"] },
+    `upload ${file.originalname}`,
+  );
+  return { pathway };
+}

@@ -1,0 +1,16 @@
+import type { RunResult } from "@plumeline/contracts";
+import type { AppContext } from "../../context.js";
+import { conflict } from "../../errors/app-error.js";
+import { findRun } from "../runs/runs.service.js";
+import type { RunModel } from "../runs/run.model.js";
+
+type Ctx = Pick<AppContext, "models">;
+
+/** The run and its stored engine result; 404 for an unknown run, 409 while it has no result. */
+export async function getRunWithResult(ctx: Ctx, runId: string): Promise<{ run: RunModel; result: RunResult }> {
+  const run = await findRun(ctx, runId);
+  if (run.status !== "succeeded") throw conflict(`Run "${run.name}" is ${run.status}; it has no result yet.`, "result_not_ready");
+  const stored = await ctx.models.RunResult.findByPk(runId);
+  if (!stored) throw conflict(`Run "${run.name}" has no stored result.`, "result_not_ready");
+  return { run, result: stored.result };
+}

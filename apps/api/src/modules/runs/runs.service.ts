@@ -1,0 +1,216 @@
+import { randomUUID } from "node:crypto";
+import type { CreateRunBody, ErrorDetail, ReplayResponse, Run, RunStatus, RunSummary } from "@plumeline/contracts";
+import { engineVersion, inputHash } from "@plumeline/engine";
+import { Op } from "sequelize";
+import type { AppContext } from "../../context.js";
+import { AppError, badRequest, conflict, forbidden, notFound } from "../../errors/app-error.js";
+import type { RequestUser } from "../../middleware/request-context.js";
+import { jobSignal } from "../../queue/job-signal.js";
+import { createSqlJobQueue } from "../../queue/sql-job-queue.js";
+import { EngineThread } from "../../workers/engine-thread-client.js";
+import { RUN_JOB_TYPE } from "../../workers/process-run-job.js";
+import { recordAudit } from "../audit/audit.service.js";
+import type { ModelVersionModel } from "../model-versions/model-version.model.js";
+import { lockPathways } from "../pathways/pathways.service.js";
+import { buildRunSpec } from "./build-run-spec.js";
+import type { RunModel } from "./run.model.js";
+
+type Ctx = Pick<AppContext, "models" | "sequelize" | "mailer" | "config">;
+
+const iso = (d: Date | null) => (d ? d.toISOString() : null);
+/** Columns a list needs: the spec (all pathway series) stays out, so the queue screen stays fast. */
+const SUMMARY_ATTRIBUTES = [
+  "id", "name", "status", "progress", "exploratory", "modelVersionId", "pathwayIds", "members", "seed", "sampling",
+  "perilProfileIds", "portfolioId", "createdBy", "createdAt", "startedAt", "finishedAt", "error",
+];
+
+async function present(ctx: Pick<Ctx, "models">, rows: RunModel[]): Promise<RunSummary[]> {
+  const versionIds = [...new Set(rows.map((r) => r.modelVersionId))];
+  const userIds = [...new Set(rows.map((r) => r.createdBy))];
+  const [versions, users] = await Promise.all([
+    ctx.models.ModelVersion.findAll({ where: { id: { [Op.in]: versionIds } }, attributes: ["id", "name", "versionNumber", "status"] }),
+    ctx.models.User.findAll({ where: { id: { [Op.in]: userIds } }, attributes: ["id", "name"] }),
+  ]);
+  const versionById = new Map(versions.map((v) => [v.id, v]));
+  const nameById = new Map(users.map((u) => [u.id, u.name]));
+  return rows.map((r) => {
+    const v = versionById.get(r.modelVersionId);
+    return {
+      id: r.id,
+      name: r.name,
+      status: r.status,
+      progress: r.progress,
+      exploratory: r.exploratory,
+      modelVersion: { id: r.modelVersionId, name: v?.name ?? "?", versionNumber: v?.versionNumber ?? 0, status: v?.status ?? "draft" },
+      pathwayIds: r.pathwayIds,
+      members: r.members,
+      seed: r.seed,
+      sampling: r.sampling,
+      perilProfileIds: r.perilProfileIds ?? [],
+      portfolioId: r.portfolioId,
+      createdBy: r.createdBy,
+      createdByName: nameById.get(r.createdBy) ?? null,
+      createdAt: r.createdAt.toISOString(),
+      startedAt: iso(r.startedAt),
+      finishedAt: iso(r.finishedAt),
+      error: r.error,
+    };
+  });
+}
+
+export async function listRuns(ctx: Ctx, user: RequestUser, query: { mine?: "true" | "false"; status?: RunStatus }): Promise<RunSummary[]> {
+  const where: Record<string, unknown> = {};
+  if (query.mine === "true") where.createdBy = user.id;
+  if (query.status) where.status = query.status;
+  const rows = await ctx.models.Run.findAll({ where, attributes: SUMMARY_ATTRIBUTES, order: [["createdAt", "DESC"]], limit: 500 });
+  return present(ctx, rows);
+}
+
+export async function findRun(ctx: Pick<Ctx, "models">, id: string): Promise<RunModel> {
+  const row = await ctx.models.Run.findByPk(id);
+  if (!row) throw notFound("Run", id);
+  return row;
+}
+
+export async function getRun(ctx: Ctx, id: string): Promise<Run> {
+  const row = await findRun(ctx, id);
+  const [summary] = await present(ctx, [row]);
+  const pathways = await ctx.models.Pathway.findAll({ where: { id: { [Op.in]: row.pathwayIds } } });
+  const byId = new Map(pathways.map((p) => [p.id, p]));
+  return {
+    ...summary!,
+    manifest: {
+      engineVersion: row.engineVersion,
+      inputHash: row.inputHash,
+      resultHash: row.resultHash,
+      spec: row.spec,
+      pathways: row.pathwayIds.map((pid) => {
+        const p = byId.get(pid);
+        return { id: pid, name: p?.name ?? "?", checksum: p?.checksum ?? "", source: p?.source ?? "", vintage: p?.vintage ?? "" };
+      }),
+    },
+  };
+}
+
+/**
+ * Creates a run and its queue job in ONE transaction: the spec is built from the model
+ * version and pathways and validated against the engine contract first; pathways are locked
+ * (their numbers are now part of a record). A run on a version that is not approved is
+ * exploratory, for ever.
+ */
+export async function createRun(ctx: Ctx, user: RequestUser, body: CreateRunBody): Promise<RunSummary> {
+  const run = await ctx.sequelize.transaction(async (transaction) => {
+    const errors: ErrorDetail[] = [];
+    const version: ModelVersionModel | null = await ctx.models.ModelVersion.findByPk(body.modelVersionId, { transaction });
+    if (!version) errors.push({ path: "modelVersionId", message: `model version ${body.modelVersionId} does not exist` });
+    const pathways = await ctx.models.Pathway.findAll({ where: { id: { [Op.in]: body.pathwayIds } }, transaction });
+    const byId = new Map(pathways.map((p) => [p.id, p]));
+    body.pathwayIds.forEach((id, i) => {
+      if (!byId.has(id)) errors.push({ path: `pathwayIds[${i}]`, message: `pathway ${id} does not exist` });
+    });
+    if (errors.length > 0 || !version) throw badRequest(errors);
+    if (version.status === "retired")
+      throw conflict(`Model version "${version.name}" v${version.versionNumber} is retired; new runs need a current version.`, "model_version_retired");
+    const ordered = body.pathwayIds.map((id) => byId.get(id)!);
+    const built = buildRunSpec(body, version, ordered);
+    if (!built.ok) throw badRequest(built.errors, "The run does not make a valid engine spec.");
+
+    const id = randomUUID();
+    const exploratory = version.status !== "approved";
+    const created = await ctx.models.Run.create(
+      {
+        id,
+        name: body.name?.trim() || `${version.name} v${version.versionNumber} · ${ordered.map((p) => p.name).join(", ")}`.slice(0, 120),
+        modelVersionId: version.id,
+        pathwayIds: body.pathwayIds,
+        members: body.members,
+        seed: body.seed,
+        sampling: body.sampling,
+        spec: built.spec,
+        // The engine's own hash of the spec (defaults applied), so the result's inputHash matches.
+        inputHash: inputHash(built.spec),
+        exploratory,
+        status: "queued",
+        progress: 0,
+        perilProfileIds: body.perilProfileIds ?? [],
+        portfolioId: body.portfolioId ?? null,
+        createdBy: user.id,
+      },
+      { transaction },
+    );
+    const jobId = await createSqlJobQueue(ctx.models.Job).enqueue(RUN_JOB_TYPE, { runId: id }, transaction);
+    await created.update({ jobId }, { transaction });
+    await lockPathways(ctx, body.pathwayIds, transaction);
+    await recordAudit(
+      ctx,
+      {
+        actorId: user.id,
+        action: "run.created",
+        entityType: "run",
+        entityId: id,
+        summary: `Run "${created.name}" queued: ${body.members} members, seed "${body.seed}", ${exploratory ? "EXPLORATORY" : "approved"} model version v${version.versionNumber}.`,
+        data: { jobId, inputHash: created.inputHash, modelVersionId: version.id, pathwayIds: body.pathwayIds, exploratory },
+      },
+      transaction,
+    );
+    return created;
+  });
+  jobSignal.emit("enqueued");
+  const [summary] = await present(ctx, [run]);
+  return summary!;
+}
+
+/** Owner cancels: a queued run stops at once; a running one at its next simulated year. */
+export async function cancelRun(ctx: Ctx, user: RequestUser, id: string): Promise<RunSummary> {
+  const run = await findRun(ctx, id);
+  if (run.createdBy !== user.id) throw forbidden("Only the person who started a run can cancel it.", "not_owner");
+  if (run.status !== "queued" && run.status !== "running")
+    throw conflict(`Run "${run.name}" is already ${run.status}.`, "run_finished");
+  await ctx.sequelize.transaction(async (transaction) => {
+    const outcome = run.jobId ? await createSqlJobQueue(ctx.models.Job).requestCancel(run.jobId, transaction) : "finished";
+    if (outcome === "cancelled") await run.update({ status: "cancelled", finishedAt: new Date() }, { transaction });
+    if (outcome === "finished") throw conflict(`Run "${run.name}" finished meanwhile.`, "run_finished");
+    await recordAudit(
+      ctx,
+      {
+        actorId: user.id,
+        action: outcome === "cancelled" ? "run.cancelled" : "run.cancel-requested",
+        entityType: "run",
+        entityId: id,
+        summary: outcome === "cancelled" ? `Run "${run.name}" cancelled before it started.` : `Cancellation of running run "${run.name}" requested.`,
+      },
+      transaction,
+    );
+  });
+  await run.reload({ attributes: SUMMARY_ATTRIBUTES });
+  const [summary] = await present(ctx, [run]);
+  return summary!;
+}
+
+/**
+ * Re-runs the stored spec in a fresh engine thread and compares result hashes: same inputs,
+ * seed and engine version must give the same hash. Waits for the engine (synchronous API).
+ */
+export async function replayRun(ctx: Ctx, user: RequestUser, id: string): Promise<ReplayResponse> {
+  const run = await findRun(ctx, id);
+  if (run.status !== "succeeded" || !run.resultHash)
+    throw conflict(`Run "${run.name}" is ${run.status}; only a finished run can be replayed.`, "run_not_finished");
+  const thread = new EngineThread(`replay-${id.slice(0, 8)}`);
+  let outcome;
+  try {
+    outcome = await thread.run(run.spec);
+  } finally {
+    await thread.terminate();
+  }
+  if (outcome.kind !== "done") throw new AppError(409, "replay_failed", `The replay did not finish: ${outcome.kind === "failed" ? outcome.message : "cancelled"}.`);
+  const matched = outcome.result.resultHash === run.resultHash;
+  await recordAudit(ctx, {
+    actorId: user.id,
+    action: "run.replayed",
+    entityType: "run",
+    entityId: id,
+    summary: `Run "${run.name}" replayed: result hash ${matched ? "matches" : "DIFFERS"} (engine ${outcome.result.engineVersion}${run.engineVersion !== outcome.result.engineVersion ? `, run made with ${run.engineVersion}` : ""}).`,
+    data: { matched, resultHash: run.resultHash, replayHash: outcome.result.resultHash, engineVersion: outcome.result.engineVersion },
+  });
+  return { matched, resultHash: run.resultHash, replayHash: outcome.result.resultHash, engineVersion: outcome.result.engineVersion ?? engineVersion };
+}
