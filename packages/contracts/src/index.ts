@@ -13,3 +13,4 @@ export * from "./api/pathways.js";
 export * from "./api/model-versions.js";
 export * from "./api/runs.js";
 export * from "./api/exports.js";
+export * from "./api/perils.js";
