@@ -11,6 +11,8 @@ import { initRunModel } from "../modules/runs/run.model.js";
 import { initJobModel } from "../queue/job.model.js";
 import { initRunResultModel, initRunResultRowModel } from "../modules/results/run-result.model.js";
 import { initExportRecordModel } from "../modules/exports/export-record.model.js";
+import { initPerilProfileModel } from "../modules/peril-profiles/peril-profile.model.js";
+import { initPortfolioModel } from "../modules/portfolios/portfolio.model.js";
 
 /**
  * Registers every module's model on this Sequelize instance. Model classes bind to the
@@ -35,6 +37,8 @@ export function initModels(sequelize: Sequelize) {
     RunResultRow: initRunResultRowModel(sequelize),
     ExportRecord: initExportRecordModel(sequelize),
     // peril (peril profiles, portfolios)
+    PerilProfile: initPerilProfileModel(sequelize),
+    Portfolio: initPortfolioModel(sequelize),
   };
   return models;
 }
