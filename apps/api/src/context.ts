@@ -57,6 +57,12 @@ export async function createContext(config: Config): Promise<AppContext> {
         data: failure,
       });
     },
+    onPasswordChanged: async (userId) => {
+      await sequelize.transaction(async (transaction) => {
+        await models.User.update({ mustChangePassword: false }, { where: { id: userId }, transaction });
+        await recordAudit({ models }, { actorId: userId, action: "user.password-changed", entityType: "user", entityId: userId, summary: "Password changed." }, transaction);
+      });
+    },
   });
   const steps: Array<() => Promise<void> | void> = [];
   const ctx: AppContext = { config, sequelize, models, auth, mailer, smtp, onClose: (step) => void steps.push(step) };

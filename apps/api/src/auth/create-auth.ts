@@ -19,6 +19,7 @@ export interface CreateAuthOptions {
   config: Config;
   models: Models;
   onSignInFailure: (failure: SignInFailure) => Promise<void>;
+  onPasswordChanged: (userId: string) => Promise<void>;
 }
 
 /**
@@ -26,7 +27,7 @@ export interface CreateAuthOptions {
  * stored in SQLite through our Sequelize adapter, roles through the admin plugin.
  * Mounted by app.ts at /api/auth/*splat.
  */
-export function createAuth({ config, models, onSignInFailure }: CreateAuthOptions) {
+export function createAuth({ config, models, onSignInFailure, onPasswordChanged }: CreateAuthOptions) {
   const secureCookies = config.publicOrigin.startsWith("https://");
   return betterAuth({
     appName: "Plumeline",
@@ -40,6 +41,12 @@ export function createAuth({ config, models, onSignInFailure }: CreateAuthOption
     database: sequelizeAdapter({
       models: { user: models.User, session: models.Session, account: models.Account, verification: models.Verification },
     }),
+    user: {
+      additionalFields: {
+        // Read-only to clients (input: false); set by the invitation, cleared by a password change.
+        mustChangePassword: { type: "boolean", required: false, defaultValue: false, input: false },
+      },
+    },
     emailAndPassword: { enabled: true, disableSignUp: true, minPasswordLength: 10, maxPasswordLength: 128 },
     session: { expiresIn: 60 * 60 * 12, updateAge: 60 * 60 },
     rateLimit: {
@@ -59,8 +66,12 @@ export function createAuth({ config, models, onSignInFailure }: CreateAuthOption
     hooks: {
       // Runs after every auth endpoint, also when it failed: `returned` then holds the error.
       after: createAuthMiddleware(async (ctx) => {
-        if (ctx.path !== "/sign-in/email") return;
         const returned = ctx.context.returned;
+        if (ctx.path === "/change-password" && !isAPIError(returned) && ctx.context.session) {
+          await onPasswordChanged(ctx.context.session.user.id);
+          return;
+        }
+        if (ctx.path !== "/sign-in/email") return;
         if (!isAPIError(returned)) return;
         const body = (ctx.body ?? {}) as { email?: unknown };
         await onSignInFailure({

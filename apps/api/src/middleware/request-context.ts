@@ -9,6 +9,8 @@ export interface RequestUser {
   email: string;
   name: string;
   role: Role;
+  /** True for an invited user still on the mailed password. */
+  mustChangePassword: boolean;
 }
 
 declare global {

@@ -5,5 +5,11 @@ import { roleSchema } from "./users.js";
 export const meSchema = z.object({
   user: z.object({ id: z.string(), email: z.string(), name: z.string(), role: roleSchema }),
   permissions: z.array(z.string()),
+  /**
+   * True for an invited user still on the mailed one-time password: every other endpoint
+   * answers 403 `password_change_required` until they call better-auth's change-password
+   * (`POST /api/auth/change-password { currentPassword, newPassword }`).
+   */
+  mustChangePassword: z.boolean(),
 });
 export type Me = z.infer<typeof meSchema>;

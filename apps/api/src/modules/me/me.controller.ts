@@ -5,8 +5,8 @@ import { currentUser } from "../../middleware/request-context.js";
 
 export const meController = {
   show(req: Request, res: Response) {
-    const user = currentUser(req);
-    const body: Me = { user, permissions: permissionsOf(user.role) };
+    const { id, email, name, role, mustChangePassword } = currentUser(req);
+    const body: Me = { user: { id, email, name, role }, permissions: permissionsOf(role), mustChangePassword };
     res.json(body);
   },
 };

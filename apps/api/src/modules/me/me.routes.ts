@@ -1,7 +1,8 @@
 import { Router } from "express";
-import { authenticate } from "../../middleware/authenticate.js";
+import { authenticateAllowingPasswordChange } from "../../middleware/authenticate.js";
 import { meController } from "./me.controller.js";
 
 export const meRouter = Router();
 
-meRouter.get("/", authenticate, meController.show);
+// An invited user on the mailed password may still ask who they are (the web app then shows the password form).
+meRouter.get("/", authenticateAllowingPasswordChange, meController.show);

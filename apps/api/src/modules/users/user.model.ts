@@ -12,6 +12,8 @@ export class UserModel extends Model {
   declare banned: boolean | null;
   declare banReason: string | null;
   declare banExpires: Date | null;
+  /** Set on invitation: the mailed password opens only GET /api/me and the password change. */
+  declare mustChangePassword: boolean;
   declare createdAt: Date;
   declare updatedAt: Date;
 }
@@ -28,6 +30,7 @@ export function initUserModel(sequelize: Sequelize): typeof UserModel {
       banned: { type: DataTypes.BOOLEAN, allowNull: true, defaultValue: false },
       banReason: { type: DataTypes.STRING, allowNull: true },
       banExpires: { type: DataTypes.DATE, allowNull: true },
+      mustChangePassword: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
       createdAt: { type: DataTypes.DATE, allowNull: false },
       updatedAt: { type: DataTypes.DATE, allowNull: false },
     },

@@ -39,6 +39,7 @@ export async function inviteUser(ctx: UsersContext, actor: RequestUser, body: In
   if (await ctx.models.User.findOne({ where: { email } })) throw conflict(`A user with the email ${email} already exists.`, "email_taken");
   const password = generateTemporaryPassword();
   const { user } = await ctx.auth.api.createUser({ body: { email, name: body.name, password, role: body.role } });
+  await ctx.models.User.update({ mustChangePassword: true }, { where: { id: user.id } });
   await recordAudit(ctx, {
     actorId: actor.id,
     actorEmail: actor.email,
@@ -59,7 +60,7 @@ export async function inviteUser(ctx: UsersContext, actor: RequestUser, body: In
       `  email:    ${email}`,
       `  password: ${password}`,
       "",
-      "This password was generated for you and sent by mail; change it after your first sign-in.",
+      "This password works once: after signing in you will be asked to choose your own before anything else.",
     ].join("\n"),
   });
   return getUser(ctx, user.id);

@@ -119,3 +119,35 @@ describe("PATCH /api/users/:id", () => {
     expect(res.body.error.code).toBe("untrusted_origin");
   });
 });
+
+describe("invited user's one-time password", () => {
+  it("opens only /api/me until the user picks their own password; the change is audited", async () => {
+    const invited = await admin.post("/api/users").send({ email: "lior.vantongeren@harbourline.example", name: "Lior Vantongeren", role: "manager" });
+    expect(invited.status).toBe(201);
+    const list = await admin.get("/api/outbox");
+    const summary = list.body.find((m: { to: string[] }) => m.to.includes("lior.vantongeren@harbourline.example"));
+    const mail = await admin.get(`/api/outbox/${summary.id}`);
+    const mailed = /password:\s+(\S+)/.exec(mail.body.text)![1]!;
+
+    const agent = request.agent(t.app);
+    agent.set("Origin", TEST_ORIGIN);
+    expect((await agent.post("/api/auth/sign-in/email").send({ email: "lior.vantongeren@harbourline.example", password: mailed })).status).toBe(200);
+    const me = await agent.get("/api/me");
+    expect(me.status).toBe(200);
+    expect(me.body.mustChangePassword).toBe(true);
+    const blocked = await agent.get("/api/audit");
+    expect(blocked.status).toBe(403);
+    expect(blocked.body.error.code).toBe("password_change_required");
+
+    const changed = await agent.post("/api/auth/change-password").send({ currentPassword: mailed, newPassword: "lior-own-password-2" });
+    expect(changed.status).toBe(200);
+    expect((await agent.get("/api/me")).body.mustChangePassword).toBe(false);
+    expect((await agent.get("/api/audit")).status).toBe(200);
+    const audit = await t.ctx.models.AuditEvent.findOne({ where: { action: "user.password-changed", entityId: invited.body.id } });
+    expect(audit).not.toBeNull();
+
+    // The mailed password no longer signs in.
+    const reuse = await request(t.app).post("/api/auth/sign-in/email").set("Origin", TEST_ORIGIN).send({ email: "lior.vantongeren@harbourline.example", password: mailed });
+    expect(reuse.status).toBe(401);
+  });
+});
