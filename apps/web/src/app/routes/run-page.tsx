@@ -1,0 +1,117 @@
+import { useParams } from "react-router-dom";
+import { useQueryClient } from "@tanstack/react-query";
+import { paths } from "@/config/paths";
+import { useMe } from "@/features/auth/api/get-me";
+import { exportsRootKey } from "@/features/exports/api/get-exports";
+import { useCancelRun } from "@/features/runs/api/cancel-run";
+import { useRun } from "@/features/runs/api/get-run";
+import { useRunResult } from "@/features/runs/api/get-run-result";
+import { ExportPanel } from "@/features/runs/components/export-panel";
+import { ReplayPanel } from "@/features/runs/components/replay-panel";
+import { ResultView } from "@/features/runs/components/result-view";
+import { RunManifest } from "@/features/runs/components/run-manifest";
+import { RunProgress } from "@/features/runs/components/run-progress";
+import { ApprovedSeal, ExploratoryStamp } from "@/components/ui/badges";
+import { Button, ButtonLink } from "@/components/ui/button";
+import { Card, CardBody, CardHeader } from "@/components/ui/card";
+import { PageHeader } from "@/components/ui/page-header";
+import { ErrorState, LoadingState } from "@/components/ui/states";
+
+export default function RunPage() {
+  const { runId = "" } = useParams();
+  const me = useMe();
+  const run = useRun(runId);
+  const succeeded = run.data?.status === "succeeded";
+  const result = useRunResult(runId, succeeded);
+  const cancel = useCancelRun();
+  const queryClient = useQueryClient();
+  const can = (p: string) => me.data?.permissions.includes(p) ?? false;
+
+  if (run.isPending) return <LoadingState label="Loading run…" />;
+  if (run.isError) return <ErrorState error={run.error} retry={() => run.refetch()} />;
+  const r = run.data;
+  const active = r.status === "queued" || r.status === "running";
+
+  return (
+    <>
+      <PageHeader
+        kicker={
+          <span className="flex items-center gap-2">
+            Run {r.exploratory ? <ExploratoryStamp size="sm" /> : <ApprovedSeal size="sm" />}
+          </span>
+        }
+        title={r.name || `Run ${r.id.slice(0, 8)}`}
+        description={
+          r.exploratory
+            ? "Made with a model version that was not approved when the run was made: exploratory, not for filing."
+            : "Made with an approved model version."
+        }
+        actions={
+          <>
+            <ButtonLink to={paths.runCompare.build(r.id)} variant="secondary">
+              Compare…
+            </ButtonLink>
+            {active && can("runs:create") && r.createdBy === me.data?.user.id && (
+              <Button variant="danger" onClick={() => cancel.mutate(r.id)} disabled={cancel.isPending}>
+                Cancel run
+              </Button>
+            )}
+          </>
+        }
+      />
+      {r.exploratory && (
+        <div className="stamp-exploratory mb-6 rounded-md px-4 py-2 text-sm font-medium">
+          EXPLORATORY — model version “{r.modelVersion.name} v{r.modelVersion.versionNumber}” was {r.modelVersion.status === "approved" ? "not yet approved" : r.modelVersion.status} when this run was made. Do not use for filings.
+        </div>
+      )}
+      {!succeeded && (
+        <Card className="mb-6">
+          <CardBody className="max-w-md">
+            <RunProgress run={r} />
+            {active && <p className="mt-2 text-sm text-muted">The page updates on its own while the ensemble runs.</p>}
+            {r.status === "cancelled" && <p className="mt-2 text-sm text-muted">This run was cancelled before it finished.</p>}
+          </CardBody>
+        </Card>
+      )}
+      {succeeded &&
+        (result.isPending ? (
+          <LoadingState label="Loading result…" />
+        ) : result.isError ? (
+          <ErrorState error={result.error} retry={() => result.refetch()} />
+        ) : (
+          <ResultView run={r} result={result.data} />
+        ))}
+      <div className="mt-6 grid gap-6 xl:grid-cols-[2fr_1fr]">
+        <Card>
+          <CardHeader title="Manifest" subtitle="Everything needed to reproduce this run." />
+          <CardBody>
+            <RunManifest run={r} />
+          </CardBody>
+        </Card>
+        <div className="flex flex-col gap-6">
+          {succeeded && (
+            <Card>
+              <CardHeader title="Export" />
+              <CardBody>
+                <ExportPanel
+                  runId={r.id}
+                  exploratory={r.exploratory}
+                  canWorkbook={can("exports:create")}
+                  onExported={() => queryClient.invalidateQueries({ queryKey: exportsRootKey })}
+                />
+              </CardBody>
+            </Card>
+          )}
+          {succeeded && (
+            <Card>
+              <CardHeader title="Replay" />
+              <CardBody>
+                <ReplayPanel runId={r.id} canReplay={can("runs:create")} />
+              </CardBody>
+            </Card>
+          )}
+        </div>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,46 @@
+import { Link } from "react-router-dom";
+import { AGENT_LABELS, type ForcingAgent, type PathwaySummary } from "@plumeline/contracts";
+import { paths } from "@/config/paths";
+import { Table, Td, Th } from "@/components/ui/table";
+import { formatDate } from "@/lib/format";
+
+export function PathwaysTable({ pathways }: { pathways: PathwaySummary[] }) {
+  return (
+    <Table>
+      <thead>
+        <tr>
+          <Th>Pathway</Th>
+          <Th>Source</Th>
+          <Th>Vintage</Th>
+          <Th numeric>Years</Th>
+          <Th>Agents</Th>
+          <Th>Added</Th>
+        </tr>
+      </thead>
+      <tbody>
+        {pathways.map((p) => (
+          <tr key={p.id} className="hover:bg-surface-2/60">
+            <Td>
+              <Link to={paths.pathway.build(p.id)} className="font-medium text-accent hover:underline">
+                {p.name}
+              </Link>
+              {p.locked && (
+                <span className="ml-2 rounded bg-surface-2 px-1.5 text-[10px] uppercase tracking-wider text-muted" title="Pinned by an approved model version or used by a run: no longer editable">
+                  locked
+                </span>
+              )}
+              {p.description && <p className="mt-0.5 line-clamp-1 text-xs text-muted">{p.description}</p>}
+            </Td>
+            <Td className="max-w-64 text-muted">{p.source}</Td>
+            <Td className="whitespace-nowrap">{p.vintage}</Td>
+            <Td numeric className="whitespace-nowrap">
+              {p.startYear}–{p.endYear}
+            </Td>
+            <Td className="text-xs text-muted">{p.agents.map((a) => AGENT_LABELS[a as ForcingAgent] ?? a).join(", ")}</Td>
+            <Td className="whitespace-nowrap text-muted">{formatDate(p.createdAt)}</Td>
+          </tr>
+        ))}
+      </tbody>
+    </Table>
+  );
+}

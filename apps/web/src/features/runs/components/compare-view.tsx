@@ -1,0 +1,48 @@
+import type { RunResult } from "@plumeline/contracts";
+import { FanChart, fanYDomain } from "@/components/charts/fan-chart";
+import { PercentileStrips, type PercentileStrip } from "@/components/charts/percentile-strips";
+import { seriesColor } from "@/components/charts/palette";
+import { hasFanPercentiles, toFanSeries } from "../lib/result-adapters";
+
+export interface CompareSide {
+  label: string;
+  result: RunResult;
+  pathwayId: string;
+}
+
+/**
+ * Two results side by side on shared axes: the same warming scale on both fan charts, and
+ * the horizons they have in common as percentile strips on one axis.
+ */
+export function CompareView({ a, b, fromYear = 1850 }: { a: CompareSide; b: CompareSide; fromYear?: number }) {
+  const pa = a.result.pathways.find((p) => p.id === a.pathwayId) ?? a.result.pathways[0];
+  const pb = b.result.pathways.find((p) => p.id === b.pathwayId) ?? b.result.pathways[0];
+  if (!pa || !pb) return null;
+  if (!hasFanPercentiles(pa.temperature) || !hasFanPercentiles(pb.temperature))
+    return <p className="text-sm text-muted">Comparison needs the 5/17/50/83/95 percentiles in both results.</p>;
+  const sa = { ...toFanSeries(pa), id: "a", name: `${a.label}: ${pa.name}`, color: seriesColor(0) };
+  const sb = { ...toFanSeries(pb), id: "b", name: `${b.label}: ${pb.name}`, color: seriesColor(1) };
+  const shared = fanYDomain([sa, sb], fromYear);
+  const toYear = Math.min(sa.years.at(-1)!, sb.years.at(-1)!);
+  const common = pa.horizons.map((h) => h.year).filter((y) => pb.horizons.some((h) => h.year === y));
+  const strips: PercentileStrip[] = common.flatMap((year) =>
+    [
+      { side: "a", label: a.label, p: pa, color: seriesColor(0) },
+      { side: "b", label: b.label, p: pb, color: seriesColor(1) },
+    ].map(({ side, label, p, color }) => {
+      const t = p.horizons.find((h) => h.year === year)!.temperature;
+      return { id: `${year}-${side}`, label: `${year} · ${label}`, p5: t.p5!, p17: t.p17!, p50: t.p50!, p83: t.p83!, p95: t.p95!, color };
+    }),
+  );
+  return (
+    <div className="flex flex-col gap-6">
+      <div className="grid gap-6 xl:grid-cols-2">
+        {[sa, sb].map((s) => (
+          <FanChart key={s.id} title={s.name} series={[s]} yLabel="Warming above baseline (K)" unit="K" fromYear={fromYear} toYear={toYear} yDomain={shared} height={320} />
+        ))}
+      </div>
+      <FanChart title="Both on one chart" series={[sa, sb]} yLabel="Warming above baseline (K)" unit="K" fromYear={fromYear} toYear={toYear} yDomain={shared} height={340} />
+      {strips.length > 0 && <PercentileStrips title="Warming at the shared horizons" strips={strips} axisLabel="Warming above baseline (K)" />}
+    </div>
+  );
+}

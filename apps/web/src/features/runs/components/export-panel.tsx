@@ -1,0 +1,41 @@
+import { RESULT_TABLES } from "@plumeline/contracts";
+import { buttonClass } from "@/components/ui/button";
+import { ExploratoryStamp } from "@/components/ui/badges";
+import { tableCsvUrl, workbookUrl } from "../api/export-urls";
+
+/**
+ * One-click workbook (manifest sheet first) and a CSV per table. Each download is recorded
+ * by the server; `onExported` lets the page refresh the exports list afterwards.
+ */
+export function ExportPanel({ runId, exploratory, canWorkbook, onExported }: { runId: string; exploratory: boolean; canWorkbook: boolean; onExported?: () => void }) {
+  const later = () => window.setTimeout(() => onExported?.(), 1500);
+  return (
+    <div className="flex flex-col gap-3 text-sm">
+      {exploratory && (
+        <p className="flex items-center gap-2 text-ember-800">
+          <ExploratoryStamp size="sm" /> Exports of this run are marked exploratory on every sheet.
+        </p>
+      )}
+      {canWorkbook ? (
+        <a href={workbookUrl(runId)} download className={buttonClass("primary", "md", "self-start")} onClick={later}>
+          <svg aria-hidden viewBox="0 0 16 16" className="h-4 w-4" fill="none" stroke="currentColor" strokeWidth="1.6">
+            <path d="M8 2v8M4.5 6.5 8 10l3.5-3.5M3 13h10" />
+          </svg>
+          Workbook (.xlsx)
+        </a>
+      ) : (
+        <p className="text-xs text-faint">Workbooks need the analyst, actuary or manager role.</p>
+      )}
+      <div>
+        <p className="mb-1 text-xs font-medium uppercase tracking-wider text-muted">CSV tables</p>
+        <div className="flex flex-wrap gap-1.5">
+          {RESULT_TABLES.map((t) => (
+            <a key={t} href={tableCsvUrl(runId, t)} download className={buttonClass("secondary", "sm")} onClick={later}>
+              {t}.csv
+            </a>
+          ))}
+        </div>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,52 @@
+import { Link } from "react-router-dom";
+import type { Run } from "@plumeline/contracts";
+import { paths } from "@/config/paths";
+import { formatDateTime, formatInteger } from "@/lib/format";
+
+/** What makes the run reproducible: version, pathways with checksums, seed, engine, hashes. */
+export function RunManifest({ run }: { run: Run }) {
+  const items: Array<[string, React.ReactNode]> = [
+    [
+      "Model version",
+      <Link key="mv" to={paths.modelVersion.build(run.modelVersion.id)} className="text-accent hover:underline">
+        {run.modelVersion.name} v{run.modelVersion.versionNumber} ({run.modelVersion.status})
+      </Link>,
+    ],
+    ["Members", <span className="num">{formatInteger(run.members)}</span>],
+    ["Sampling", run.sampling === "latin-hypercube" ? "Latin hypercube" : "Monte Carlo"],
+    ["Seed", <code className="num">{run.seed}</code>],
+    ["Engine", <code className="num">{run.manifest.engineVersion ?? "–"}</code>],
+    ["Result hash", <code className="num break-all">{run.manifest.resultHash ?? "–"}</code>],
+    ["Started by", `${run.createdByName ?? "–"}, ${formatDateTime(run.createdAt)}`],
+  ];
+  return (
+    <div className="grid gap-4 text-sm lg:grid-cols-[1fr_1fr]">
+      <dl className="grid grid-cols-[8rem_1fr] gap-x-3 gap-y-1.5">
+        {items.map(([k, v]) => (
+          <div key={k} className="contents">
+            <dt className="text-muted">{k}</dt>
+            <dd className="min-w-0">{v}</dd>
+          </div>
+        ))}
+      </dl>
+      <div>
+        <p className="mb-1 text-muted">Pathways (source, vintage, checksum)</p>
+        <ul className="space-y-1.5">
+          {run.manifest.pathways.map((p) => (
+            <li key={p.id}>
+              <Link to={paths.pathway.build(p.id)} className="font-medium text-accent hover:underline">
+                {p.name}
+              </Link>{" "}
+              <span className="text-muted">
+                — {p.source}, {p.vintage}
+              </span>
+              <code className="num block truncate text-[11px] text-faint" title={p.checksum}>
+                {p.checksum}
+              </code>
+            </li>
+          ))}
+        </ul>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,56 @@
+import { AGENT_LABELS, FORCING_AGENTS, type ForcingAgent, type HorizonResult, type PathwayResult } from "@plumeline/contracts";
+import type { AgentForcing } from "@/components/charts/forcing-breakdown-chart";
+import type { FanSeries } from "@/components/charts/fan-chart";
+import type { CrossingDistribution } from "@/components/charts/crossing-histogram";
+import type { ExceedanceCurve } from "@/components/charts/exceedance-chart";
+import type { SensitivityBar } from "@/components/charts/sensitivity-bars";
+import { inputLabel } from "@/lib/input-labels";
+
+/**
+ * Turns the engine's result JSON into the plain arrays the charts take. The fan chart needs
+ * the five standard percentiles; a run that asked for others still shows its table.
+ */
+const FAN_KEYS = ["p5", "p17", "p50", "p83", "p95"] as const;
+
+export function hasFanPercentiles(series: Record<string, number[]>): boolean {
+  return FAN_KEYS.every((k) => Array.isArray(series[k]));
+}
+
+export function toFanSeries(p: PathwayResult, quantity: "temperature" | "forcing" | "imbalance" = "temperature"): FanSeries {
+  const s = p[quantity];
+  return { id: p.id, name: p.name, years: p.years, p5: s.p5!, p17: s.p17!, p50: s.p50!, p83: s.p83!, p95: s.p95! };
+}
+
+export function toExceedanceCurves(p: PathwayResult): ExceedanceCurve[] {
+  return Object.entries(p.exceedance)
+    .map(([threshold, probability]) => ({ threshold: Number(threshold), probability }))
+    .sort((a, b) => a.threshold - b.threshold);
+}
+
+export function toCrossing(p: PathwayResult, threshold: string): CrossingDistribution {
+  const c = p.crossing[threshold] ?? {};
+  const percentiles: Record<string, number | null> = {};
+  for (const [k, v] of Object.entries(c)) if (/^p\d/.test(k)) percentiles[k] = v;
+  return { threshold: Number(threshold), percentiles, never: c.never ?? 0 };
+}
+
+export function toAgentForcing(h: HorizonResult): { agents: AgentForcing[]; total: AgentForcing | undefined } {
+  const agents = FORCING_AGENTS.filter((a) => h.forcingByAgent[a]).map((a: ForcingAgent) => {
+    const set = h.forcingByAgent[a]!;
+    return { agent: a, label: AGENT_LABELS[a], p5: set.p5 ?? set.p50!, p50: set.p50!, p95: set.p95 ?? set.p50! };
+  });
+  const f = h.forcing;
+  const total = f.p50 !== undefined ? { agent: "total", label: "Total", p5: f.p5 ?? f.p50, p50: f.p50, p95: f.p95 ?? f.p50 } : undefined;
+  return { agents, total };
+}
+
+export function toSensitivityBars(p: PathwayResult, horizon: number): SensitivityBar[] {
+  return p.sensitivity.filter((s) => s.horizon === horizon).map((s) => ({ input: s.input, label: inputLabel(s.input), index: s.index }));
+}
+
+/** Sorted percentile keys of a set: ["p5", "p17", "p50", …]. */
+export function percentileKeys(set: Record<string, unknown>): string[] {
+  return Object.keys(set)
+    .filter((k) => /^p\d+(\.\d+)?$/.test(k))
+    .sort((a, b) => Number(a.slice(1)) - Number(b.slice(1)));
+}
