@@ -1,0 +1,2 @@
+export * from "./ar6-anchors.js";
+export * from "./harbourline-pathways.js";
