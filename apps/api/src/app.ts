@@ -34,6 +34,11 @@ export function createApp(ctx: AppContext): express.Express {
       },
     }),
   );
+  // User management goes through /api/users (validated, audited, no self-demotion). The admin
+  // plugin's HTTP endpoints would bypass all three, so only server-side calls may use them.
+  app.all("/api/auth/admin/*splat", (req, _res, next) =>
+    next(new AppError(404, "not_found", `No API endpoint ${req.method} ${req.originalUrl}; manage users through /api/users.`)),
+  );
   // better-auth reads the raw body itself, so it is mounted before express.json(). It sees
   // a fetch Request without the socket, so it gets the client address (as Express resolved
   // it under "trust proxy") in a header we always overwrite, so a client cannot spoof it.

@@ -36,8 +36,10 @@ async function main(): Promise<void> {
     console.log(`[server] ${signal}: shutting down`);
     const forced = setTimeout(() => process.exit(1), 10_000);
     forced.unref();
-    await new Promise<void>((resolve) => server.close(() => resolve()));
-    server.closeAllConnections();
+    // Stop accepting, let requests in flight finish, drop idle keep-alive sockets.
+    const closed = new Promise<void>((resolve) => server.close(() => resolve()));
+    server.closeIdleConnections();
+    await closed;
     await closeContext(ctx);
     clearTimeout(forced);
     process.exit(0);

@@ -80,6 +80,14 @@ describe("POST /api/users (invite)", () => {
   });
 });
 
+describe("better-auth admin endpoints over HTTP", () => {
+  it("are closed, so role changes cannot bypass the audited /api/users path", async () => {
+    const res = await admin.post("/api/auth/admin/set-role").send({ userId: t.userIds.analyst, role: "manager" });
+    expect(res.status).toBe(404);
+    expect((await t.ctx.models.User.findByPk(t.userIds.analyst))?.role).toBe("analyst");
+  });
+});
+
 describe("PATCH /api/users/:id", () => {
   it("changes the role, audits old and new role, and the new permissions apply at once", async () => {
     const actuaryAgent = await signIn(t.app, "actuary");
