@@ -1,6 +1,7 @@
 import { demoOrganisation, demoUsers } from "@plumeline/seeds";
 import type { AppContext } from "../context.js";
 import { recordAudit } from "../modules/audit/audit.service.js";
+import { seedDomain } from "./seed-domain.js";
 import { seedUsers } from "./seed-users.js";
 
 /**
@@ -11,7 +12,7 @@ import { seedUsers } from "./seed-users.js";
 export async function loadDemoSeed(ctx: AppContext): Promise<boolean> {
   if ((await ctx.models.User.count()) > 0) return false;
   const userIds = await seedUsers(ctx, demoUsers);
-  // Domain seed (pathways, model versions) goes here, e.g. `await seedDomain(ctx, userIds);`
+  await seedDomain(ctx, userIds);
   await recordAudit(ctx, {
     actorId: null,
     action: "seed.loaded",
