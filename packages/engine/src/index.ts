@@ -15,4 +15,17 @@ export { engineVersion } from "./version.js";
 export { PercentileSelector } from "./summary/percentile-selector.js";
 export { weightedPosition } from "./summary/weighted-positions.js";
 export * from "./random/create-random.js";
-export * from "./distributions/index.js";
+export {
+  quantileOf,
+  quantilesOf,
+  sampleOf,
+  cdfOf,
+  densityOf,
+  validateDistribution,
+  summarizeDistribution,
+  densityCurve,
+  fitRange,
+  standardNormalQuantile,
+  standardNormalCdf,
+} from "./distributions/index.js";
+export * from "./peril/index.js";

@@ -1,23 +1,6 @@
 import type { EnsemblePlan, YearSlot } from "./ensemble-plan.js";
+import { memberForcing } from "./member-forcing.js";
 import type { PathwayForcing } from "./pathway-forcing.js";
-
-/**
- * Total forcing of members [lo, hi) in year t: Σ_k scale[m,k]·base[k,t], written to `out`.
- * Agents outer, members inner, so each pass is one multiply-add over contiguous arrays
- * (the layout of the C reference); fixed-scale agents come pre-summed in fixedTotal.
- */
-export function memberForcing(plan: EnsemblePlan, pathway: PathwayForcing, t: number, lo: number, hi: number, out: Float64Array): void {
-  const fixed = pathway.fixedTotal[t]!;
-  for (let m = lo; m < hi; m++) out[m] = fixed;
-  for (let k = 0; k < pathway.agents.length; k++) {
-    const column = pathway.scaleInput[k]!;
-    if (column < 0) continue;
-    const b = pathway.base[k]![t]!;
-    if (b === 0) continue;
-    const scale = plan.columns[column]!;
-    for (let m = lo; m < hi; m++) out[m] += scale[m]! * b;
-  }
-}
 
 /**
  * First pass, year t, members [lo, hi): advance the state with forcing held constant over
@@ -30,13 +13,15 @@ export function advanceBaselineYear(
   t: number,
   lo: number,
   hi: number,
+  chunk: number,
   inBaseline: boolean,
   inWindow: boolean,
 ): void {
   const { a11, a12, a21, a22, b1, b2 } = plan.climate;
   const { upper, deep, baselineMean, windowMean } = plan.state;
-  const forcing = plan.state.slots[0]!.forcing;
-  memberForcing(plan, pathway, t, lo, hi, forcing);
+  const slot = plan.state.slots[0]!;
+  const forcing = slot.forcing;
+  memberForcing(plan, pathway, t, lo, hi, forcing, slot.extremes, 6 * chunk);
   for (let m = lo; m < hi; m++) {
     const x = upper[m]!;
     const y = deep[m]!;
@@ -62,14 +47,20 @@ export function advanceReportedYear(
   t: number,
   lo: number,
   hi: number,
+  chunk: number,
   slot: YearSlot,
 ): void {
   const { a11, a12, a21, a22, b1, b2, lambda, extraUptake } = plan.climate;
   const { upper, deep, baselineMean, crossing, crossedCount } = plan.state;
   const thresholds = plan.thresholdsAscending;
   const thresholdCount = thresholds.length;
-  const { anomaly, forcing, imbalance } = slot;
-  memberForcing(plan, pathway, t, lo, hi, forcing);
+  const { anomaly, forcing, imbalance, extremes } = slot;
+  const at = 6 * chunk;
+  memberForcing(plan, pathway, t, lo, hi, forcing, extremes, at);
+  let minAnomaly = Infinity;
+  let maxAnomaly = -Infinity;
+  let minImbalance = Infinity;
+  let maxImbalance = -Infinity;
   for (let m = lo; m < hi; m++) {
     const x = upper[m]!;
     const y = deep[m]!;
@@ -80,7 +71,12 @@ export function advanceReportedYear(
     deep[m] = nextDeep;
     const a = next - baselineMean[m]!;
     anomaly[m] = a;
-    imbalance[m] = f - lambda[m]! * next - extraUptake[m]! * (next - nextDeep);
+    const n = f - lambda[m]! * next - extraUptake[m]! * (next - nextDeep);
+    imbalance[m] = n;
+    if (a < minAnomaly) minAnomaly = a;
+    if (a > maxAnomaly) maxAnomaly = a;
+    if (n < minImbalance) minImbalance = n;
+    if (n > maxImbalance) maxImbalance = n;
     let c = crossedCount[m]!;
     if (c < thresholdCount && a > thresholds[c]!) {
       do crossing[c++]![m] = t;
@@ -88,4 +84,8 @@ export function advanceReportedYear(
       crossedCount[m] = c;
     }
   }
+  extremes[at + 2] = minAnomaly;
+  extremes[at + 3] = maxAnomaly;
+  extremes[at + 4] = minImbalance;
+  extremes[at + 5] = maxImbalance;
 }

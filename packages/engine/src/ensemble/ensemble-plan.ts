@@ -9,6 +9,12 @@ export interface YearSlot {
   anomaly: Float64Array;
   forcing: Float64Array;
   imbalance: Float64Array;
+  /**
+   * Per member block ("chunk") that wrote the year: min and max of forcing, anomaly and
+   * imbalance (6 numbers per chunk), so summaries need no extremes pass. Min and max do
+   * not depend on the order they are taken in, so chunking cannot change them.
+   */
+  extremes: Float64Array;
 }
 
 /**
@@ -30,6 +36,8 @@ export interface EnsemblePlan {
   baseline: [number, number];
   constraint: RunSpec["model"]["constraint"];
   horizons: number[];
+  /** Member blocks that write each year (1, or the number of worker threads). */
+  chunks: number;
   state: EnsembleState;
 }
 
@@ -46,6 +54,8 @@ export interface EnsembleState {
   crossedCount: Float64Array;
   /** Ring of year slots: the simulation writes year t into slot t mod ring size. */
   slots: YearSlot[];
+  /** Varying agent scales, member-major (member-forcing.ts); width of the widest pathway. */
+  memberScales: Float64Array;
   /** Per horizon: member anomaly, committed warming and total forcing in that year. */
   horizonTemperature: Float64Array[];
   horizonCommitted: Float64Array[];
@@ -59,6 +69,8 @@ export function allocateState(
   thresholds: number,
   horizons: number,
   ringSize: number,
+  chunks: number,
+  scaleWidth: number,
   yearlyLength: number,
   allocate: Allocate,
 ): EnsembleState {
@@ -75,7 +87,9 @@ export function allocateState(
       anomaly: allocate(members),
       forcing: allocate(members),
       imbalance: allocate(members),
+      extremes: allocate(6 * chunks),
     })),
+    memberScales: allocate(members * scaleWidth),
     horizonTemperature: many(horizons),
     horizonCommitted: many(horizons),
     horizonForcing: many(horizons),

@@ -15,6 +15,12 @@ export interface PathwayForcing {
   fixedScale: number[];
   /** Σ over fixed-scale agents of scale·base: one series instead of one per agent. */
   fixedTotal: Float64Array;
+  /** Varying-scale agents, padded to 0, 4, 8 or 12 slots (member-forcing.ts). */
+  scaleWidth: number;
+  /** Per slot: the model-input column of its scale. */
+  slotColumns: number[];
+  /** Per slot, its agent's base series: slotBase[slot·years + t] (zeros for padding). */
+  slotBase: Float64Array;
 }
 
 /**
@@ -27,12 +33,19 @@ export function buildPathwayForcing(spec: RunSpec, index: number, inputNames: st
   const pathway: PathwaySpec = spec.pathways[index]!;
   const agents = FORCING_AGENTS.filter((a) => pathway.agents[a] !== undefined);
   const years = seriesLength(pathway);
+  // Every gas given as a concentration, for the expressions' overlap terms (the others are
+  // held at their 1750 values by the forcing module).
+  const concentrations: Partial<Record<ConcentrationGas, number[]>> = {};
+  for (const gas of ["co2", "ch4", "n2o"] as const) {
+    const series = pathway.agents[gas];
+    if (series && "ppm" in series) concentrations[gas] = series.ppm;
+    if (series && "ppb" in series) concentrations[gas] = series.ppb;
+  }
   const base = agents.map((agent) => {
     const series = pathway.agents[agent]!;
     if ("erf" in series) return Float64Array.from(series.erf);
-    const concentrations = "ppm" in series ? series.ppm : series.ppb;
     try {
-      return gasForcingSeries(spec.model.forcingExpression, agent as ConcentrationGas, Float64Array.from(concentrations), years);
+      return gasForcingSeries(spec.model.forcingExpression, agent as ConcentrationGas, concentrations, years);
     } catch (error) {
       const key = "ppm" in series ? "ppm" : "ppb";
       throw SpecError.fromRangeError(`pathways[${index}].agents.${agent}.${key}`, error);
@@ -53,7 +66,12 @@ export function buildPathwayForcing(spec: RunSpec, index: number, inputNames: st
       if (!Number.isFinite(series[t]!))
         throw new SpecError(`pathways[${index}].agents.${agents[k]}`, `gives a non-finite forcing in year ${pathway.startYear + t}`);
   });
-  return { startYear: pathway.startYear, years, agents, base, scaleInput, fixedScale, fixedTotal };
+  const varying = agents.map((_, k) => k).filter((k) => scaleInput[k]! >= 0 && base[k]!.some((v) => v !== 0));
+  const scaleWidth = varying.length === 0 ? 0 : Math.ceil(varying.length / 4) * 4;
+  const slotBase = new Float64Array(scaleWidth * years);
+  varying.forEach((k, j) => slotBase.set(base[k]!, j * years));
+  const slotColumns = varying.map((k) => scaleInput[k]!);
+  return { startYear: pathway.startYear, years, agents, base, scaleInput, fixedScale, fixedTotal, scaleWidth, slotColumns, slotBase };
 }
 
 export function seriesLength(pathway: PathwaySpec): number {

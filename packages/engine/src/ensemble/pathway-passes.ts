@@ -1,5 +1,6 @@
 import { advanceBaselineYear } from "./advance-year.js";
 import type { EnsemblePlan } from "./ensemble-plan.js";
+import { fillMemberScales } from "./member-forcing.js";
 
 /**
  * The two passes over one pathway, for members [lo, hi). Anomalies are against each
@@ -15,8 +16,16 @@ export function firstPassYears(plan: EnsemblePlan, pathwayIndex: number): number
 }
 
 /** Runs the first pass for members [lo, hi), leaving baseline and window mean anomalies. */
-export function runBaselinePass(plan: EnsemblePlan, pathwayIndex: number, lo: number, hi: number, onYear?: () => void): void {
+export function runBaselinePass(
+  plan: EnsemblePlan,
+  pathwayIndex: number,
+  lo: number,
+  hi: number,
+  chunk: number,
+  onYear?: () => void,
+): void {
   const pathway = plan.pathways[pathwayIndex]!;
+  fillMemberScales(plan, pathway, lo, hi);
   const { upper, deep, baselineMean, windowMean } = plan.state;
   upper.fill(0, lo, hi);
   deep.fill(0, lo, hi);
@@ -27,7 +36,7 @@ export function runBaselinePass(plan: EnsemblePlan, pathwayIndex: number, lo: nu
   const years = firstPassYears(plan, pathwayIndex);
   for (let t = 0; t < years; t++) {
     const year = pathway.startYear + t;
-    advanceBaselineYear(plan, pathway, t, lo, hi, year >= b0 && year <= b1, c !== null && year >= c.from && year <= c.to);
+    advanceBaselineYear(plan, pathway, t, lo, hi, chunk, year >= b0 && year <= b1, c !== null && year >= c.from && year <= c.to);
     onYear?.();
   }
   const baselineYears = b1 - b0 + 1;

@@ -14,7 +14,12 @@ import { yearlyLength } from "./yearly-layout.js";
  * each pathway's forcing: all the deterministic set-up of a run, shared by the one-thread
  * and the worker-thread runners (which only differ in who advances which members).
  */
-export function preparePlan(input: RunSpecInput | RunSpec, ringSize = 1, allocate: Allocate = allocateLocal): { spec: RunSpec; plan: EnsemblePlan } {
+export function preparePlan(
+  input: RunSpecInput | RunSpec,
+  ringSize = 1,
+  allocate: Allocate = allocateLocal,
+  chunks = 1,
+): { spec: RunSpec; plan: EnsemblePlan } {
   const spec = applyDefaults(input);
   validateSpec(spec);
   const inputs = listModelInputs(spec);
@@ -46,6 +51,8 @@ export function preparePlan(input: RunSpecInput | RunSpec, ringSize = 1, allocat
     spec.thresholds.length,
     spec.horizons.length,
     ringSize,
+    chunks,
+    Math.max(...pathways.map((p) => p.scaleWidth)),
     yearlyLength(probs.length, spec.thresholds.length, maxYears),
     allocate,
   );
@@ -61,6 +68,7 @@ export function preparePlan(input: RunSpecInput | RunSpec, ringSize = 1, allocat
     baseline: spec.baseline,
     constraint: spec.model.constraint,
     horizons: [...spec.horizons],
+    chunks,
     state,
   };
   return { spec, plan };

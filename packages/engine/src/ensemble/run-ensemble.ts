@@ -59,13 +59,13 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
   const summariser = new YearSummariser(plan);
   const slot = plan.state.slots[0]!;
   plan.pathways.forEach((pathway, p) => {
-    runBaselinePass(plan, p, 0, n, tick);
+    runBaselinePass(plan, p, 0, n, 0, tick);
     const weighting = weighPathway(plan);
     resetForReporting(plan, 0, n);
     const byYear = horizonsByYear(plan, p);
     lap("simulate");
     for (let t = 0; t < pathway.years; t++) {
-      advanceReportedYear(plan, pathway, t, 0, n, slot);
+      advanceReportedYear(plan, pathway, t, 0, n, 0, slot);
       if (times) lap("simulate");
       summariser.summarise(t, pathway.years, slot, weighting.weights, weighting.totalWeight, byYear[t]!);
       if (times) lap("summarise");

@@ -27,11 +27,11 @@ export class YearSummariser {
     const yearly = plan.state.yearly;
     const n = plan.members;
     const exceed = this.temperatureSums(slot.anomaly, weights);
-    this.describe(0, t, years, slot.anomaly, weights, totalWeight);
+    this.describe(0, t, years, slot.anomaly, slot.extremes, 2, weights, totalWeight);
     for (let i = 0; i < plan.thresholds.length; i++)
       yearly[exceedanceRow(i, percentiles) * years + t] = weights ? exceed[i]! / totalWeight : exceed[i]! / n;
-    this.describe(1, t, years, slot.forcing, weights, totalWeight);
-    this.describe(2, t, years, slot.imbalance, weights, totalWeight);
+    this.describe(1, t, years, slot.forcing, slot.extremes, 0, weights, totalWeight);
+    this.describe(2, t, years, slot.imbalance, slot.extremes, 4, weights, totalWeight);
     for (const h of horizonIndexes) this.keepHorizon(h, slot);
   }
 
@@ -53,31 +53,30 @@ export class YearSummariser {
     return sums;
   }
 
-  private describe(quantity: number, t: number, years: number, values: Float64Array, weights: Float64Array | null, totalWeight: number): void {
+  private describe(
+    quantity: number,
+    t: number,
+    years: number,
+    values: Float64Array,
+    extremes: Float64Array,
+    at: number,
+    weights: Float64Array | null,
+    totalWeight: number,
+  ): void {
     const n = this.plan.members;
-    let min = values[0]!;
-    let max = min;
-    let sum = 0;
-    if (weights) {
-      for (let m = 0; m < n; m++) {
-        const v = values[m]!;
-        if (v < min) min = v;
-        else if (v > max) max = v;
-        sum += weights[m]! * v;
-      }
-    } else {
-      for (let m = 0; m < n; m++) {
-        const v = values[m]!;
-        if (v < min) min = v;
-        else if (v > max) max = v;
-        sum += v;
-      }
+    let min = Infinity;
+    let max = -Infinity;
+    for (let chunk = 0; chunk < this.plan.chunks; chunk++) {
+      min = Math.min(min, extremes[6 * chunk + at]!);
+      max = Math.max(max, extremes[6 * chunk + at + 1]!);
     }
     const percentiles = this.plan.probs.length;
-    this.selector.select(values, n, this.plan.probs, this.out, min, max, weights, totalWeight);
+    const sum = this.selector.select(values, n, this.plan.probs, this.out, min, max, weights, totalWeight);
     const yearly = this.plan.state.yearly;
     for (let j = 0; j < percentiles; j++) yearly[summaryRow(quantity, j, percentiles) * years + t] = this.out[j]!;
-    yearly[summaryRow(quantity, percentiles, percentiles) * years + t] = weights ? sum / totalWeight : sum / n;
+    // Mean in member order (the selector sums during its counting pass); a constant is its own mean.
+    const mean = min === max ? min : weights ? sum / totalWeight : sum / n;
+    yearly[summaryRow(quantity, percentiles, percentiles) * years + t] = mean;
   }
 
   /** Committed warming: equilibrium F/λ minus the current warming, both from the pathway start. */

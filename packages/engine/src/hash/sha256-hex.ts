@@ -1,4 +1,4 @@
-import canonicalize from "canonicalize";
+import canonicalizeModule from "canonicalize";
 import { sha256 } from "@noble/hashes/sha256";
 import { bytesToHex, utf8ToBytes } from "@noble/hashes/utils";
 
@@ -12,6 +12,11 @@ import { bytesToHex, utf8ToBytes } from "@noble/hashes/utils";
  *
  * Example: canonicalHash({ b: 1, a: [2] }) hashes the text '{"a":[2],"b":1}'.
  */
+// The package is CommonJS with an ESM-style type declaration: take the function either way.
+type Canonicalize = (input: unknown) => string | undefined;
+const canonicalize: Canonicalize =
+  (canonicalizeModule as unknown as { default?: Canonicalize }).default ?? (canonicalizeModule as unknown as Canonicalize);
+
 export function canonicalHash(value: unknown): string {
   const text = canonicalize(value);
   if (text === undefined) throw new RangeError("value cannot be written as JSON");

@@ -33,7 +33,7 @@ port.on("message", (message: ToWorker) => {
       send({ kind: "ready" });
     } else if (message.kind === "baseline") {
       const start = performance.now();
-      runBaselinePass(plan, message.pathway, lo, hi);
+      runBaselinePass(plan, message.pathway, lo, hi, me);
       send({ kind: "done", simulateSeconds: (performance.now() - start) / 1000, summariseSeconds: 0 });
     } else if (message.kind === "report") {
       simulateSeconds = 0;
@@ -60,7 +60,7 @@ function reportPathway(message: Extract<ToWorker, { kind: "report" }>): boolean 
     if (t >= ring && !waitUntilAtLeast(control, control.summarised, t - ring, 1)) return false;
     const slot = plan.state.slots[t % ring]!;
     const start = performance.now();
-    advanceReportedYear(plan, pathway, t, lo, hi, slot);
+    advanceReportedYear(plan, pathway, t, lo, hi, me, slot);
     simulateSeconds += (performance.now() - start) / 1000;
     addAndWake(control.simulated, t, 1);
     if (t % workers !== me) continue;

@@ -77,6 +77,8 @@ function validatePathwaySeries(spec: RunSpec, i: number): number {
     values.forEach((v, t) => {
       if (typeof v !== "number" || !Number.isFinite(v)) throw new SpecError(`${field}.${key}[${t}]`, "must be finite");
       if (key !== "erf" && v < 0) throw new SpecError(`${field}.${key}[${t}]`, "must not be negative (a concentration)");
+      if (key !== "erf" && v === 0)
+        throw new SpecError(`${field}.${key}[${t}]`, "must be > 0 (the forcing expressions take its logarithm)");
     });
     if (expected < 0) {
       if (values.length < 1 || values.length > MAX_PATHWAY_YEARS)

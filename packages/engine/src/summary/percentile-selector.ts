@@ -30,7 +30,8 @@ export class PercentileSelector {
    * Writes the percentiles `probs` (each in [0, 1]) of values[0..n) into out[0..probs.length).
    * min/max must be the exact extremes of values[0..n) (callers get them in a pass they make
    * anyway). weights: null for an unweighted ensemble; otherwise non-negative weights whose
-   * sum is totalWeight.
+   * sum is totalWeight. Returns Σ values (weighted: Σ w·v) in index order, taken during the
+   * counting pass so callers get the mean for free (0 when min = max: no pass is made).
    */
   select(
     values: Float64Array,
@@ -41,14 +42,14 @@ export class PercentileSelector {
     max: number,
     weights: Float64Array | null = null,
     totalWeight = 0,
-  ): void {
+  ): number {
     if (n === 0) throw new RangeError("values must not be empty");
     if (!(max > min)) {
       for (let i = 0; i < probs.length; i++) out[i] = min;
-      return;
+      return 0;
     }
-    if (weights) this.selectWeighted(values, n, probs, out, min, max, weights, totalWeight);
-    else this.selectUnweighted(values, n, probs, out, min, max);
+    if (weights) return this.selectWeighted(values, n, probs, out, min, max, weights, totalWeight);
+    return this.selectUnweighted(values, n, probs, out, min, max);
   }
 
   /**
@@ -66,7 +67,7 @@ export class PercentileSelector {
     const last = buckets - 1;
     for (let i = 0; i < n; i++) {
       const b = ((values[i]! - min) * scale) | 0;
-      counts[b > last ? last : b]++;
+      counts[b > last ? last : b]!++;
     }
     const located = this.locateRanks(ranks, buckets);
     this.gatherAndSort(values, null, n, min, scale, last);
@@ -92,14 +93,17 @@ export class PercentileSelector {
     out: Float64Array,
     min: number,
     max: number,
-  ): void {
+  ): number {
     const buckets = this.prepare(n);
     const counts = this.counts;
     const scale = buckets / (max - min);
     const last = buckets - 1;
+    let sum = 0;
     for (let i = 0; i < n; i++) {
-      const b = ((values[i]! - min) * scale) | 0;
-      counts[b > last ? last : b]++;
+      const v = values[i]!;
+      sum += v;
+      const b = ((v - min) * scale) | 0;
+      counts[b > last ? last : b]!++;
     }
     // Ranks (0-based) each percentile reads: floor(h) and floor(h) + 1, h = (n − 1)p.
     const wanted: number[] = [];
@@ -118,6 +122,7 @@ export class PercentileSelector {
       // Same expression as d3-array quantileSorted (R-7).
       out[j] = value0 + (value1 - value0) * (h - lo);
     }
+    return sum;
   }
 
   /** For each wanted rank: its index in the gathered buffer once wanted buckets are sorted. */
@@ -188,7 +193,7 @@ export class PercentileSelector {
         const v = values[i]!;
         let b = ((v - min) * scale) | 0;
         if (b > last) b = last;
-        if (slot[b]! >= 0) order[cursor[b]++] = i;
+        if (slot[b]! >= 0) order[cursor[b]!++] = i;
       }
       for (const [start, count] of starts) {
         const idx = order.subarray(start, start + count);
@@ -206,7 +211,7 @@ export class PercentileSelector {
       const v = values[i]!;
       let b = ((v - min) * scale) | 0;
       if (b > last) b = last;
-      if (slot[b]! >= 0) gathered[cursor[b]++] = v;
+      if (slot[b]! >= 0) gathered[cursor[b]!++] = v;
     }
     for (const [start, count] of starts) gathered.subarray(start, start + count).sort();
   }
@@ -220,36 +225,48 @@ export class PercentileSelector {
     max: number,
     weights: Float64Array,
     totalWeight: number,
-  ): void {
+  ): number {
     const buckets = this.prepare(n);
     const counts = this.counts;
     const sums = this.bucketWeights;
     sums.fill(0, 0, buckets);
     const scale = buckets / (max - min);
     const last = buckets - 1;
+    let sum = 0;
+    let positive = 0;
+    let onlyPositive = 0;
     for (let i = 0; i < n; i++) {
-      let b = ((values[i]! - min) * scale) | 0;
+      const v = values[i]!;
+      const w = weights[i]!;
+      sum += w * v;
+      if (w > 0) {
+        positive++;
+        onlyPositive = v;
+      }
+      let b = ((v - min) * scale) | 0;
       if (b > last) b = last;
-      counts[b]++;
-      sums[b] += weights[i]!;
+      counts[b]!++;
+      sums[b]! += w;
     }
-    // Locate, per percentile, the bucket where the weighted position crosses p, using the
-    // bucket's first-member position bound; then take that bucket and its neighbours, so the
-    // crossing lies inside the gathered stretch (checked below; widened if it does not).
+    if (positive === 0) throw new RangeError("weights must have a positive sum");
+    if (positive === 1) {
+      for (let j = 0; j < probs.length; j++) out[j] = onlyPositive;
+      return sum;
+    }
+    const meanWeight = totalWeight / positive;
+    const span = totalWeight - meanWeight;
+    // Per percentile, the first bucket after which a lower bound of the next position exceeds
+    // p; that bucket and its neighbours are read, and widened if the bracketing pair of
+    // members turns out not to lie inside one gathered run.
     const slot = this.slotOfBucket;
     const crossing = new Array<number>(probs.length);
     for (let j = 0; j < probs.length; j++) {
       const p = probs[j]!;
-      let before = 0;
       let cumulative = 0;
       let b = 0;
       for (; b < last; b++) {
-        const nextCount = before + counts[b]!;
-        const nextWeight = cumulative + sums[b]!;
-        // Position of the first member after this bucket, with its weight taken as 0 (a bound).
-        if (weightedPosition(nextCount, nextWeight, 0, n, totalWeight) > p) break;
-        before = nextCount;
-        cumulative = nextWeight;
+        cumulative += sums[b]!;
+        if ((cumulative - meanWeight / 2) / span > p) break;
       }
       crossing[j] = b;
     }
@@ -267,78 +284,90 @@ export class PercentileSelector {
       }
       this.ensureGathered(offset);
       this.gatherAndSort(values, weights, n, min, scale, last);
-      if (this.interpolateWeighted(probs, out, n, totalWeight, buckets)) return;
-      spread *= 4; // the crossing fell outside the gathered buckets: widen and read again
+      if (this.interpolateWeighted(probs, out, meanWeight, span, buckets)) return sum;
+      spread *= 4;
     }
   }
 
   /**
-   * Walks the gathered runs of consecutive wanted buckets, computing each member's weighted
-   * position from the exact counts and weights before the run, and interpolates. Returns
-   * false if some percentile's bracketing pair was not inside one gathered run.
+   * Walks the gathered runs of consecutive wanted buckets in value order, computing each
+   * positive-weight member's position from the exact weight before the run, and
+   * interpolates as weightedQuantileSorted does. Returns false if some percentile's
+   * bracketing pair was not inside one gathered run.
    */
   private interpolateWeighted(
     probs: ArrayLike<number>,
     out: Float64Array,
-    n: number,
-    totalWeight: number,
+    meanWeight: number,
+    span: number,
     buckets: number,
   ): boolean {
     const slot = this.slotOfBucket;
     const counts = this.counts;
     const sums = this.bucketWeights;
     const done = new Array<boolean>(probs.length).fill(false);
-    let before = 0;
-    let cumulative = 0;
+    let cumulativeBefore = 0;
+    let seenPositiveBefore = false;
     let b = 0;
     while (b < buckets) {
       if (slot[b]! < 0) {
-        before += counts[b]!;
-        cumulative += sums[b]!;
+        cumulativeBefore += sums[b]!;
+        if (counts[b]! > 0 && sums[b]! > 0) seenPositiveBefore = true;
         b++;
         continue;
       }
-      // A run of consecutive gathered buckets: [b, end).
       let end = b;
       let runCount = 0;
       while (end < buckets && slot[end]! >= 0) runCount += counts[end++]!;
       const start = slot[b]!;
-      let prefix = cumulative;
+      let cumulative = cumulativeBefore;
+      // Within a run the member before the first one is unknown unless this is the start of the data.
+      let previousKnown = !seenPositiveBefore;
       let previousPosition = Number.NEGATIVE_INFINITY;
       let previousValue = 0;
+      let lastValue = 0;
+      let anyPositive = false;
       for (let k = 0; k < runCount; k++) {
         const w = this.gatheredWeights[start + k]!;
+        if (w === 0) continue;
         const value = this.gathered[start + k]!;
-        const position = weightedPosition(before + k, prefix, w, n, totalWeight);
+        cumulative += w;
+        const position = weightedPosition(cumulative, w, meanWeight, span);
         for (let j = 0; j < probs.length; j++) {
           if (done[j]) continue;
           const p = probs[j]!;
-          if (position >= p && k > 0 && previousPosition <= p) {
-            out[j] =
-              position === previousPosition
-                ? value
-                : previousValue + (value - previousValue) * ((p - previousPosition) / (position - previousPosition));
-            done[j] = true;
-          } else if (position >= p && before + k === 0) {
-            out[j] = value; // p at or below the first member's position
-            done[j] = true;
+          if (p > position) continue;
+          if (previousPosition === Number.NEGATIVE_INFINITY) {
+            if (!previousKnown) continue; // bracketing pair straddles the run start
+            out[j] = value;
+          } else {
+            out[j] = previousValue + ((p - previousPosition) / (position - previousPosition)) * (value - previousValue);
           }
+          done[j] = true;
         }
         previousPosition = position;
         previousValue = value;
-        prefix += w;
+        lastValue = value;
+        anyPositive = true;
+        previousKnown = true;
       }
-      // p beyond the last member's position: the maximum (only if this run ends the data).
-      if (end === buckets) {
-        for (let j = 0; j < probs.length; j++) {
-          if (!done[j] && previousPosition <= probs[j]!) {
-            out[j] = previousValue;
-            done[j] = true;
+      let runWeight = 0;
+      for (let k = b; k < end; k++) runWeight += sums[k]!;
+      // Beyond the last position: the largest value of positive weight, if nothing positive follows.
+      if (anyPositive) {
+        let positiveAfter = false;
+        for (let k = end; k < buckets; k++) if (sums[k]! > 0) positiveAfter = true;
+        if (!positiveAfter) {
+          for (let j = 0; j < probs.length; j++) {
+            if (!done[j]) {
+              out[j] = lastValue;
+              done[j] = true;
+            }
           }
         }
+        seenPositiveBefore = true;
       }
-      before += runCount;
-      for (let k = b; k < end; k++) cumulative += sums[k]!;
+      cumulativeBefore += runWeight;
       b = end;
     }
     return done.every(Boolean);

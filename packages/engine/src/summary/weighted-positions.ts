@@ -1,13 +1,13 @@
 /**
- * Where the k-th smallest member (0-based) sits on the [0, 1] probability scale of a weighted
- * ensemble, for the weighted analogue of R type 7: S_k = k·w_k + (n − 1)·C_k, normalised by
- * S_n = (n − 1)·W, where C_k is the weight of the k members below it and W the total
- * (the "C = 1" weighted percentile; with equal weights S_k/S_n = k/(n − 1), exactly type 7).
- * Percentiles interpolate linearly between consecutive positions. Positions never decrease
- * with k, because S_{k+1} − S_k = (k+1)·w_{k+1} + (n−1−k)·w_k ≥ 0.
+ * Plotting position of a member of a weighted ensemble, the rule of the statistics module's
+ * weightedQuantileSorted (statistics/weighted-quantile.ts): members of zero weight are
+ * dropped; with C the cumulative weight up to and including the member, w its weight, w̄ the
+ * mean positive weight and W the total, S = (C − (w + w̄)/2) / (W − w̄). With equal weights
+ * S_k = k/(m − 1), exactly R type 7. Percentiles interpolate linearly between the members
+ * whose positions bracket p. Positions increase strictly with C.
  *
- * Example: n = 4 equal weights, k = 2 -> 2/3.
+ * Example: weights [1, 2, 1] -> positions −1/16, 1/2, 17/16.
  */
-export function weightedPosition(k: number, weightBelow: number, weight: number, n: number, totalWeight: number): number {
-  return (k * weight + (n - 1) * weightBelow) / ((n - 1) * totalWeight);
+export function weightedPosition(cumulativeWeight: number, weight: number, meanWeight: number, span: number): number {
+  return (cumulativeWeight - (weight + meanWeight) / 2) / span;
 }
