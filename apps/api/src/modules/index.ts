@@ -9,6 +9,8 @@ import { modelVersionsRouter } from "./model-versions/model-versions.routes.js";
 import { runsRouter } from "./runs/runs.routes.js";
 import { resultsRouter } from "./results/results.routes.js";
 import { exportsRouter, runExportsRouter } from "./exports/exports.routes.js";
+import { perilProfilesRouter } from "./peril-profiles/peril-profiles.routes.js";
+import { portfoliosRouter } from "./portfolios/portfolios.routes.js";
 
 /**
  * Every module's router and the path it is mounted at under /api. app.ts mounts them in
@@ -29,4 +31,6 @@ export const moduleRouters: ReadonlyArray<readonly [path: string, router: Router
   ["/runs", runExportsRouter],
   ["/exports", exportsRouter],
   // peril (peril-profiles, portfolios)
+  ["/peril-profiles", perilProfilesRouter],
+  ["/portfolios", portfoliosRouter],
 ];
