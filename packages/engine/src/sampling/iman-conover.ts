@@ -120,13 +120,29 @@ function transformRows(scores: Float64Array[], transform: number[][]): Float64Ar
   });
 }
 
-/** Puts the k-th smallest value of `values` on the member whose key has rank k. */
+/**
+ * Puts the k-th smallest value of `values` on the member whose key has rank k. Ranks come
+ * from a native numeric sort of the keys and a binary search per member (much faster in JS
+ * than an index sort with a comparator); tied keys take consecutive free ranks.
+ */
 function placeByRanks(values: Float64Array, keys: Float64Array): Float64Array {
+  const n = values.length;
   const sortedValues = values.slice().sort();
-  const order = new Uint32Array(keys.length);
-  for (let i = 0; i < order.length; i++) order[i] = i;
-  order.sort((a, b) => keys[a]! - keys[b]! || a - b);
-  const out = new Float64Array(values.length);
-  for (let k = 0; k < order.length; k++) out[order[k]!] = sortedValues[k]!;
+  const sortedKeys = keys.slice().sort();
+  const taken = new Uint8Array(n);
+  const out = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const key = keys[i]!;
+    let low = 0;
+    let high = n - 1;
+    while (low < high) {
+      const middle = (low + high) >>> 1;
+      if (sortedKeys[middle]! < key) low = middle + 1;
+      else high = middle;
+    }
+    while (taken[low] === 1) low++;
+    taken[low] = 1;
+    out[i] = sortedValues[low]!;
+  }
   return out;
 }
