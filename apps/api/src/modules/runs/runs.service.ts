@@ -1,6 +1,5 @@
 import { randomUUID } from "node:crypto";
 import type { CreateRunBody, ErrorDetail, ReplayResponse, Run, RunStatus, RunSummary } from "@plumeline/contracts";
-import { engineVersion, inputHash } from "@plumeline/engine";
 import { Op } from "sequelize";
 import type { AppContext } from "../../context.js";
 import { AppError, badRequest, conflict, forbidden, notFound } from "../../errors/app-error.js";
@@ -14,6 +13,12 @@ import type { ModelVersionModel } from "../model-versions/model-version.model.js
 import { lockPathways } from "../pathways/pathways.service.js";
 import { buildRunSpec } from "./build-run-spec.js";
 import type { RunModel } from "./run.model.js";
+
+/**
+ * The engine is loaded on first use, not at import: the app (and every module's tests) can
+ * start while the engine package is being rebuilt, and only run endpoints depend on it.
+ */
+const loadEngine = () => import("@plumeline/engine");
 
 type Ctx = Pick<AppContext, "models" | "sequelize" | "mailer" | "config">;
 
@@ -99,6 +104,7 @@ export async function getRun(ctx: Ctx, id: string): Promise<Run> {
  * exploratory, for ever.
  */
 export async function createRun(ctx: Ctx, user: RequestUser, body: CreateRunBody): Promise<RunSummary> {
+  const { inputHash } = await loadEngine();
   const run = await ctx.sequelize.transaction(async (transaction) => {
     const errors: ErrorDetail[] = [];
     const version: ModelVersionModel | null = await ctx.models.ModelVersion.findByPk(body.modelVersionId, { transaction });
@@ -212,5 +218,5 @@ export async function replayRun(ctx: Ctx, user: RequestUser, id: string): Promis
     summary: `Run "${run.name}" replayed: result hash ${matched ? "matches" : "DIFFERS"} (engine ${outcome.result.engineVersion}${run.engineVersion !== outcome.result.engineVersion ? `, run made with ${run.engineVersion}` : ""}).`,
     data: { matched, resultHash: run.resultHash, replayHash: outcome.result.resultHash, engineVersion: outcome.result.engineVersion },
   });
-  return { matched, resultHash: run.resultHash, replayHash: outcome.result.resultHash, engineVersion: outcome.result.engineVersion ?? engineVersion };
+  return { matched, resultHash: run.resultHash, replayHash: outcome.result.resultHash, engineVersion: outcome.result.engineVersion };
 }
