@@ -2,6 +2,7 @@ import { demoOrganisation, demoUsers } from "@plumeline/seeds";
 import type { AppContext } from "../context.js";
 import { recordAudit } from "../modules/audit/audit.service.js";
 import { seedDomain } from "./seed-domain.js";
+import { seedPerils } from "./seed-perils.js";
 import { seedUsers } from "./seed-users.js";
 
 /**
@@ -13,6 +14,7 @@ export async function loadDemoSeed(ctx: AppContext): Promise<boolean> {
   if ((await ctx.models.User.count()) > 0) return false;
   const userIds = await seedUsers(ctx, demoUsers);
   await seedDomain(ctx, userIds);
+  await seedPerils(ctx, userIds);
   await recordAudit(ctx, {
     actorId: null,
     action: "seed.loaded",
