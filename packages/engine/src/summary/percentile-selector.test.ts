@@ -78,4 +78,19 @@ describe("PercentileSelector (R type 7 without a full sort)", () => {
       probs.forEach((p, j) => expect(out[j]).toBeCloseTo(weightedBySorting(values, weights, p), 10));
     }
   });
+
+  it("weighted: one selector reused across sizes (empty buckets between members) stays exact", () => {
+    // Reference: statistics/weighted-quantile.ts on a full sort (equal weights: R-7, d3-array).
+    const selector = new PercentileSelector();
+    const big = Float64Array.from({ length: 100_000 }, (_, i) => i);
+    selector.select(big, big.length, [0.5], new Float64Array(1), 0, 99_999);
+    const values = Float64Array.from([1.5, 2, 2.5, 3, 3.5], (x) => 1.07 ** x);
+    const weights = new Float64Array(5).fill(0.2);
+    const out = new Float64Array(probs.length);
+    selector.select(values, 5, probs, out, values[0]!, values[4]!, weights, 1);
+    probs.forEach((p, j) => expect(out[j]).toBeCloseTo(quantileSorted(Array.from(values), p)!, 12));
+    const skewed = Float64Array.from([0, 0, 1, 1, 2]);
+    selector.select(values, 5, probs, out, values[0]!, values[4]!, skewed, 4);
+    probs.forEach((p, j) => expect(out[j]).toBeCloseTo(weightedBySorting(values, skewed, p), 12));
+  });
 });

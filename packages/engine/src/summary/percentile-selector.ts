@@ -290,10 +290,11 @@ export class PercentileSelector {
   }
 
   /**
-   * Walks the gathered runs of consecutive wanted buckets in value order, computing each
-   * positive-weight member's position from the exact weight before the run, and
-   * interpolates as weightedQuantileSorted does. Returns false if some percentile's
-   * bracketing pair was not inside one gathered run.
+   * Walks the wanted buckets in value order, computing each positive-weight member's position
+   * from the exact weight below it, and interpolates as weightedQuantileSorted does. A member's
+   * predecessor is known unless a bucket that was not read, holding positive weight, lies in
+   * between; a percentile whose bracketing pair straddles such a gap makes this return false
+   * (the caller widens the read buckets). Buckets holding only zero weights are no gap.
    */
   private interpolateWeighted(
     probs: ArrayLike<number>,
@@ -306,28 +307,24 @@ export class PercentileSelector {
     const counts = this.counts;
     const sums = this.bucketWeights;
     const done = new Array<boolean>(probs.length).fill(false);
-    let cumulativeBefore = 0;
-    let seenPositiveBefore = false;
-    let b = 0;
-    while (b < buckets) {
+    let unresolved = false;
+    let cumulative = 0;
+    let previousKnown = true;
+    let previousPosition = Number.NEGATIVE_INFINITY;
+    let previousValue = 0;
+    let lastPositiveGathered = false;
+    for (let b = 0; b < buckets; b++) {
       if (slot[b]! < 0) {
-        cumulativeBefore += sums[b]!;
-        if (counts[b]! > 0 && sums[b]! > 0) seenPositiveBefore = true;
-        b++;
+        if (sums[b]! > 0) {
+          cumulative += sums[b]!;
+          previousKnown = false;
+          lastPositiveGathered = false;
+        }
         continue;
       }
-      let end = b;
-      let runCount = 0;
-      while (end < buckets && slot[end]! >= 0) runCount += counts[end++]!;
       const start = slot[b]!;
-      let cumulative = cumulativeBefore;
-      // Within a run the member before the first one is unknown unless this is the start of the data.
-      let previousKnown = !seenPositiveBefore;
-      let previousPosition = Number.NEGATIVE_INFINITY;
-      let previousValue = 0;
-      let lastValue = 0;
-      let anyPositive = false;
-      for (let k = 0; k < runCount; k++) {
+      const count = counts[b]!;
+      for (let k = 0; k < count; k++) {
         const w = this.gatheredWeights[start + k]!;
         if (w === 0) continue;
         const value = this.gathered[start + k]!;
@@ -337,39 +334,23 @@ export class PercentileSelector {
           if (done[j]) continue;
           const p = probs[j]!;
           if (p > position) continue;
-          if (previousPosition === Number.NEGATIVE_INFINITY) {
-            if (!previousKnown) continue; // bracketing pair straddles the run start
-            out[j] = value;
-          } else {
-            out[j] = previousValue + ((p - previousPosition) / (position - previousPosition)) * (value - previousValue);
-          }
+          if (!previousKnown) unresolved = true;
+          else if (previousPosition === Number.NEGATIVE_INFINITY) out[j] = value;
+          else out[j] = previousValue + ((p - previousPosition) / (position - previousPosition)) * (value - previousValue);
           done[j] = true;
         }
         previousPosition = position;
         previousValue = value;
-        lastValue = value;
-        anyPositive = true;
         previousKnown = true;
+        lastPositiveGathered = true;
       }
-      let runWeight = 0;
-      for (let k = b; k < end; k++) runWeight += sums[k]!;
-      // Beyond the last position: the largest value of positive weight, if nothing positive follows.
-      if (anyPositive) {
-        let positiveAfter = false;
-        for (let k = end; k < buckets; k++) if (sums[k]! > 0) positiveAfter = true;
-        if (!positiveAfter) {
-          for (let j = 0; j < probs.length; j++) {
-            if (!done[j]) {
-              out[j] = lastValue;
-              done[j] = true;
-            }
-          }
-        }
-        seenPositiveBefore = true;
-      }
-      cumulativeBefore += runWeight;
-      b = end;
     }
-    return done.every(Boolean);
+    // Beyond the last position: the largest value of positive weight, if it was read.
+    for (let j = 0; j < probs.length; j++) {
+      if (done[j]) continue;
+      if (lastPositiveGathered) out[j] = previousValue;
+      else unresolved = true;
+    }
+    return !unresolved;
   }
 }
