@@ -22,7 +22,7 @@ import type { ModelVersionModel } from "./model-version.model.js";
 
 type Ctx = Pick<AppContext, "models" | "sequelize" | "mailer" | "config">;
 
-const iso = (d: Date | null) => (d ? d.toISOString() : null);
+const iso = (d: Date | null | undefined) => (d ? d.toISOString() : null);
 
 async function userNames(ctx: Pick<Ctx, "models">, ids: Array<string | null>): Promise<Map<string, string>> {
   const wanted = [...new Set(ids.filter((x): x is string => !!x))];
@@ -37,14 +37,14 @@ function toSummary(row: ModelVersionModel, names: Map<string, string>): ModelVer
     name: row.name,
     versionNumber: row.versionNumber,
     status: row.status,
-    parentId: row.parentId,
-    changeClass: row.changeClass,
+    parentId: row.parentId ?? null,
+    changeClass: row.changeClass ?? null,
     authorId: row.authorId,
     authorName: names.get(row.authorId) ?? null,
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),
     submittedAt: iso(row.submittedAt),
-    decidedBy: row.decidedBy,
+    decidedBy: row.decidedBy ?? null,
     decidedByName: row.decidedBy ? (names.get(row.decidedBy) ?? null) : null,
     decidedAt: iso(row.decidedAt),
   };
@@ -56,8 +56,8 @@ function toFull(row: ModelVersionModel, names: Map<string, string>): ModelVersio
     model: row.model,
     defaults: row.defaults,
     notes: row.notes,
-    submissionNote: row.submissionNote,
-    decisionComment: row.decisionComment,
+    submissionNote: row.submissionNote ?? null,
+    decisionComment: row.decisionComment ?? null,
     retiredAt: iso(row.retiredAt),
     pathwayIds: row.pathwayIds ?? [],
     perilProfileIds: row.perilProfileIds ?? [],

@@ -22,7 +22,7 @@ const loadEngine = () => import("@plumeline/engine");
 
 type Ctx = Pick<AppContext, "models" | "sequelize" | "mailer" | "config">;
 
-const iso = (d: Date | null) => (d ? d.toISOString() : null);
+const iso = (d: Date | null | undefined) => (d ? d.toISOString() : null);
 /** Columns a list needs: the spec (all pathway series) stays out, so the queue screen stays fast. */
 const SUMMARY_ATTRIBUTES = [
   "id", "name", "status", "progress", "exploratory", "modelVersionId", "pathwayIds", "members", "seed", "sampling",
@@ -52,13 +52,13 @@ async function present(ctx: Pick<Ctx, "models">, rows: RunModel[]): Promise<RunS
       seed: r.seed,
       sampling: r.sampling,
       perilProfileIds: r.perilProfileIds ?? [],
-      portfolioId: r.portfolioId,
+      portfolioId: r.portfolioId ?? null,
       createdBy: r.createdBy,
       createdByName: nameById.get(r.createdBy) ?? null,
       createdAt: r.createdAt.toISOString(),
       startedAt: iso(r.startedAt),
       finishedAt: iso(r.finishedAt),
-      error: r.error,
+      error: r.error ?? null,
     };
   });
 }
@@ -85,9 +85,9 @@ export async function getRun(ctx: Ctx, id: string): Promise<Run> {
   return {
     ...summary!,
     manifest: {
-      engineVersion: row.engineVersion,
+      engineVersion: row.engineVersion ?? null,
       inputHash: row.inputHash,
-      resultHash: row.resultHash,
+      resultHash: row.resultHash ?? null,
       spec: row.spec,
       pathways: row.pathwayIds.map((pid) => {
         const p = byId.get(pid);
