@@ -102,7 +102,7 @@ export function validateNormal(d: NormalDistribution, name: string): void {
 /**
  * Normal quantile mean + sd·Φ⁻¹(p), p in (0, 1). Cost O(1).
  *
- * Example: `quantileNormal({ type: "normal", mean: 3, sd: 0.5 }, 0.95)` → 3.822426813475736.
+ * Example: `quantileNormal({ type: "normal", mean: 3, sd: 0.5 }, 0.95)` → 3.8224268134757358.
  */
 export function quantileNormal(d: NormalDistribution, p: number): number {
   requireOpenProbability(p);

@@ -70,6 +70,10 @@ export function quantileRange(d: RangeDistribution, p: number): number {
   return quantileOfFit(fitRange(d), p);
 }
 
+/**
+ * Quantile of an already fitted range (fitRange once, then many draws). Cost O(1).
+ * Example: `quantileOfFit({ kind: "split-normal", mode: 3, sdLow: 0.5, sdHigh: 1 }, 0.5)` → 3.
+ */
 export function quantileOfFit(fit: RangeFit, p: number): number {
   const z = standardNormalQuantile(p);
   if (fit.kind === "lognormal") return Math.exp(fit.mu + (z < 0 ? fit.sigmaLow : fit.sigmaHigh) * z);

@@ -2,14 +2,9 @@ import { requireFinite } from "./checks.js";
 import type { TriangularDistribution } from "./types.js";
 
 /**
- * Triangular law on [min, max] with peak at mode.
- *
- * Quantile by inverting the piecewise-quadratic CDF: with Fc = (mode − min)/(max − min),
- * p < Fc → min + √(p·(max − min)·(mode − min)), else max − √((1 − p)·(max − min)·(max − mode)).
- * Cost O(1). Reference: standard (e.g. Evans, Hastings & Peacock, Statistical
- * Distributions, ch. "Triangular").
- *
- * Example: `quantileTriangular({ type: "triangular", min: 0, mode: 1, max: 2 }, 0.125)` → 0.5.
+ * Checks finite min < max and min ≤ mode ≤ max. Example:
+ * `validateTriangular({ type: "triangular", min: 1, mode: 5, max: 4 }, "c")` throws
+ * RangeError("c.mode must lie between c.min and c.max").
  */
 export function validateTriangular(d: TriangularDistribution, name: string): void {
   requireFinite(d.min, `${name}.min`);
@@ -19,6 +14,14 @@ export function validateTriangular(d: TriangularDistribution, name: string): voi
   if (d.mode < d.min || d.mode > d.max) throw new RangeError(`${name}.mode must lie between ${name}.min and ${name}.max`);
 }
 
+/**
+ * Triangular quantile (peak at mode) by inverting the piecewise-quadratic CDF: with
+ * Fc = (mode − min)/(max − min), p < Fc → min + √(p·(max − min)·(mode − min)),
+ * else max − √((1 − p)·(max − min)·(max − mode)). Cost O(1).
+ * Reference: standard (e.g. Evans, Hastings & Peacock, Statistical Distributions, "Triangular").
+ *
+ * Example: `quantileTriangular({ type: "triangular", min: 0, mode: 1, max: 2 }, 0.125)` → 0.5.
+ */
 export function quantileTriangular(d: TriangularDistribution, p: number): number {
   const width = d.max - d.min;
   const lowerShare = (d.mode - d.min) / width;
@@ -26,6 +29,11 @@ export function quantileTriangular(d: TriangularDistribution, p: number): number
   return d.max - Math.sqrt((1 - p) * width * (d.max - d.mode));
 }
 
+/**
+ * Triangular CDF: (x − min)²/((max − min)(mode − min)) up to the mode,
+ * 1 − (max − x)²/((max − min)(max − mode)) after it. Cost O(1).
+ * Example: `cdfTriangular({ type: "triangular", min: 0, mode: 1, max: 2 }, 1.5)` → 0.875.
+ */
 export function cdfTriangular(d: TriangularDistribution, x: number): number {
   if (x <= d.min) return 0;
   if (x >= d.max) return 1;
@@ -34,6 +42,10 @@ export function cdfTriangular(d: TriangularDistribution, x: number): number {
   return 1 - ((d.max - x) * (d.max - x)) / (width * (d.max - d.mode));
 }
 
+/**
+ * Triangular density, rising linearly to 2/(max − min) at the mode and falling to 0 at max.
+ * Cost O(1). Example: `densityTriangular({ type: "triangular", min: 0, mode: 1, max: 2 }, 1)` → 1.
+ */
 export function densityTriangular(d: TriangularDistribution, x: number): number {
   if (x < d.min || x > d.max) return 0;
   const width = d.max - d.min;

@@ -46,7 +46,7 @@ export function validateTruncatedNormal(d: TruncatedNormalDistribution, name: st
  * and Computing 5, 121–125, on why the tail needs care).
  *
  * Example: `quantileTruncatedNormal({ type: "truncated-normal", mean: 0, sd: 1, min: 0, max: 10 }, 0.5)`
- * → 0.6744897501960818 (the upper quartile of the standard normal).
+ * → 0.6744897501960817 (the upper quartile of the standard normal).
  */
 export function quantileTruncatedNormal(d: TruncatedNormalDistribution, p: number): number {
   const { a, b } = standardBounds(d);
@@ -73,7 +73,7 @@ function upperTailQuantile(a: number, b: number, p: number): number {
 
 /**
  * CDF of the truncated normal, (Φ(z) − Φ(a))/(Φ(b) − Φ(a)) with the same tail handling as
- * the quantile. Example: with mean 0, sd 1, min 0, max 10, `cdfTruncatedNormal(d, 0.6744897501960818)` → 0.5.
+ * the quantile. Example: with mean 0, sd 1, min 0, max 10, `cdfTruncatedNormal(d, 0.6744897501960817)` → 0.5 (to 1e-15).
  */
 export function cdfTruncatedNormal(d: TruncatedNormalDistribution, x: number): number {
   if (x <= d.min) return 0;

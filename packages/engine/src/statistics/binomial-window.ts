@@ -22,6 +22,10 @@ export interface BinomialWindow {
 
 const NEGLIGIBLE = 1e-18;
 
+/**
+ * Builds the window described above. Example: `binomialWindow(4, 0.5)` has first 0 and
+ * lowerTail [1/16, 5/16, 11/16, 15/16, 1].
+ */
 export function binomialWindow(n: number, p: number): BinomialWindow {
   const mode = Math.min(n, Math.floor((n + 1) * p));
   const below: number[] = [];

@@ -1,5 +1,9 @@
 import { describe, expect, it } from "vitest";
+import { binomialWindow, lowerTailAt, upperTailAt } from "./binomial-window.js";
 import { orderStatisticInterval } from "./order-statistic-interval.js";
+
+const SCIPY_CDF_9800 = 0.02221251036473548;
+const SCIPY_SF_10200 = 0.022208913236922253;
 
 describe("orderStatisticInterval", () => {
   // CHECKS.md §7.3 [formula: Conover / David & Nagaraja; numbers computed]: near-symmetric
@@ -49,5 +53,21 @@ describe("orderStatisticInterval", () => {
     expect(() => orderStatisticInterval(10.5, 0.5)).toThrow("n must be an integer ≥ 1");
     expect(() => orderStatisticInterval(100, 1)).toThrow("p must be in (0, 1)");
     expect(() => orderStatisticInterval(100, 0.5, 1)).toThrow("coverage must be in (0, 1)");
+  });
+});
+
+describe("binomialWindow", () => {
+  it("holds the exact Binomial(4, 1/2) CDF and tails (C(4, k)/16)", () => {
+    const window = binomialWindow(4, 0.5);
+    expect(window.first).toBe(0);
+    expect(Array.from(window.lowerTail)).toEqual([1 / 16, 5 / 16, 11 / 16, 15 / 16, 1]);
+    expect(Array.from(window.upperTail)).toEqual([15 / 16, 11 / 16, 5 / 16, 1 / 16, 0]);
+  });
+
+  it("matches SciPy binom.cdf in the tails for n = 10^6, p = 0.01 (12 digits)", () => {
+    // Reference: scipy.stats.binom.cdf(9800, 1e6, 0.01) and binom.sf(10200, 1e6, 0.01) [computed].
+    const window = binomialWindow(1_000_000, 0.01);
+    expect(lowerTailAt(window, 9800)).toBeCloseTo(SCIPY_CDF_9800, 12);
+    expect(upperTailAt(window, 10200)).toBeCloseTo(SCIPY_SF_10200, 12);
   });
 });
