@@ -11,6 +11,7 @@ import { RUN_JOB_TYPE } from "../../workers/process-run-job.js";
 import { recordAudit } from "../audit/audit.service.js";
 import type { ModelVersionModel } from "../model-versions/model-version.model.js";
 import { lockPathways } from "../pathways/pathways.service.js";
+import { resolvePerilLens } from "../peril-profiles/resolve-peril-lens.js";
 import { buildRunSpec } from "./build-run-spec.js";
 import type { RunModel } from "./run.model.js";
 
@@ -114,11 +115,13 @@ export async function createRun(ctx: Ctx, user: RequestUser, body: CreateRunBody
     body.pathwayIds.forEach((id, i) => {
       if (!byId.has(id)) errors.push({ path: `pathwayIds[${i}]`, message: `pathway ${id} does not exist` });
     });
+    const peril = await resolvePerilLens(ctx, body, transaction); // peril lens: profiles + portfolio rows copied into the spec
+    errors.push(...peril.errors);
     if (errors.length > 0 || !version) throw badRequest(errors);
     if (version.status === "retired")
       throw conflict(`Model version "${version.name}" v${version.versionNumber} is retired; new runs need a current version.`, "model_version_retired");
     const ordered = body.pathwayIds.map((id) => byId.get(id)!);
-    const built = buildRunSpec(body, version, ordered);
+    const built = buildRunSpec(body, version, ordered, peril.spec);
     if (!built.ok) throw badRequest(built.errors, "The run does not make a valid engine spec.");
 
     const id = randomUUID();
