@@ -14,6 +14,7 @@ export function formatPath(path: ReadonlyArray<PropertyKey>): string {
 export function formatIssues(error: z.ZodError): string[] {
   return error.issues.map((issue) => {
     const where = formatPath(issue.path);
-    return where ? `${where} ${issue.message}` : issue.message;
+    // A message that already opens with its field ("baseline 1700–1720 lies outside …") stands alone.
+    return where && !issue.message.startsWith(`${where} `) ? `${where} ${issue.message}` : issue.message;
   });
 }

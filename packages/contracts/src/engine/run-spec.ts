@@ -134,9 +134,14 @@ export const runSpecSchema = z
         ctx.addIssue({ code: "custom", path: ["pathways", i, "agents"], message: "must hold at least one agent" });
         return;
       }
-      const [firstAgent, firstSeries] = entries[0]!;
+      // The length most agents share is the expected one, so the odd series out is named.
+      const lengths = entries.map(([, s]) => Object.values(s as Record<string, number[]>)[0]!.length);
+      const counts = lengths.map((l) => lengths.filter((x) => x === l).length);
+      // On a tie the longest: a cut-short series is the usual mistake.
+      const modal = counts.reduce((best, c, i) => (c > counts[best]! || (c === counts[best]! && lengths[i]! > lengths[best]!) ? i : best), 0);
+      const [firstAgent, firstSeries] = entries[modal]!;
       const firstKey = Object.keys(firstSeries!)[0]!;
-      const expected = (firstSeries as Record<string, number[]>)[firstKey]!.length;
+      const expected = lengths[modal]!;
       if (expected < 1 || expected > MAX_PATHWAY_YEARS) {
         ctx.addIssue({
           code: "custom",
@@ -145,7 +150,7 @@ export const runSpecSchema = z
         });
         return;
       }
-      for (const [agent, s] of entries.slice(1)) {
+      for (const [agent, s] of entries) {
         const key = Object.keys(s!)[0]!;
         const n = (s as Record<string, number[]>)[key]!.length;
         if (n !== expected)

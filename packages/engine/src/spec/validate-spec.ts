@@ -61,7 +61,19 @@ function validatePathwaySeries(spec: RunSpec, i: number): number {
   if (!Number.isInteger(pathway.startYear)) throw new SpecError(`pathways[${i}].startYear`, "must be a whole year");
   const entries = Object.entries(pathway.agents ?? {}).filter(([, s]) => s !== undefined);
   if (entries.length === 0) throw new SpecError(`pathways[${i}].agents`, "must hold at least one agent");
-  let expected = -1;
+  // The length most agents share is the expected one, so the odd series out is the one named.
+  const lengths = entries.map(([, series]) => {
+    const values = Object.values(series as Record<string, unknown>)[0];
+    return Array.isArray(values) ? values.length : -1;
+  });
+  const expected = modalLength(lengths);
+  if (expected < 1 || expected > MAX_PATHWAY_YEARS) {
+    const [agent, series] = entries[lengths.indexOf(expected)]!;
+    throw new SpecError(
+      `pathways[${i}].agents.${agent}.${Object.keys(series)[0]}`,
+      `has ${expected} values, expected 1 to ${MAX_PATHWAY_YEARS}`,
+    );
+  }
   for (const [agent, series] of entries) {
     const field = `pathways[${i}].agents.${agent}`;
     if (!(FORCING_AGENTS as readonly string[]).includes(agent))
@@ -80,15 +92,23 @@ function validatePathwaySeries(spec: RunSpec, i: number): number {
       if (key !== "erf" && v === 0)
         throw new SpecError(`${field}.${key}[${t}]`, "must be > 0 (the forcing expressions take its logarithm)");
     });
-    if (expected < 0) {
-      if (values.length < 1 || values.length > MAX_PATHWAY_YEARS)
-        throw new SpecError(`${field}.${key}`, `has ${values.length} values, expected 1 to ${MAX_PATHWAY_YEARS}`);
-      expected = values.length;
-    } else if (values.length !== expected) {
-      throw new SpecError(`${field}.${key}`, `has ${values.length} values, expected ${expected}`);
-    }
+    if (values.length !== expected) throw new SpecError(`${field}.${key}`, `has ${values.length} values, expected ${expected}`);
   }
   return expected;
+}
+
+/** The most frequent length; on a tie the longest (a cut-short series is the usual mistake). */
+export function modalLength(lengths: number[]): number {
+  let best = lengths[0] ?? 0;
+  let bestCount = 0;
+  for (const length of lengths) {
+    const count = lengths.filter((l) => l === length).length;
+    if (count > bestCount || (count === bestCount && length > best)) {
+      best = length;
+      bestCount = count;
+    }
+  }
+  return best;
 }
 
 function validatePathwayYears(spec: RunSpec, i: number, length: number): void {
