@@ -132,8 +132,8 @@ class WorkerPool {
   private readonly workers: Worker[];
 
   constructor(count: number) {
-    const { url, execArgv } = workerEntry();
-    this.workers = Array.from({ length: count }, () => new Worker(url, { execArgv }));
+    const { url } = workerEntry();
+    this.workers = Array.from({ length: count }, () => new Worker(url));
   }
 
   all(message: (worker: number, count: number) => ToWorker): Promise<FromWorker[]> {
@@ -170,15 +170,16 @@ class WorkerPool {
 }
 
 /**
- * The worker script beside this file: compiled JavaScript in dist; under the test runner
- * (TypeScript sources) the same file as .ts, loaded through tsx.
+ * The worker script beside this file: compiled JavaScript in dist. Under the test runner
+ * (TypeScript sources) a small ES-module bootstrap registers tsx in the worker, then loads
+ * the .ts worker (Node 20 does not apply --import loaders given in a worker's execArgv).
  */
-function workerEntry(): { url: URL; execArgv: string[] } {
-  const fromSource = import.meta.url.endsWith(".ts");
-  return {
-    url: new URL(fromSource ? "./ensemble-worker.ts" : "./ensemble-worker.js", import.meta.url),
-    execArgv: fromSource ? ["--import", "tsx"] : [],
-  };
+function workerEntry(): { url: URL } {
+  if (!import.meta.url.endsWith(".ts")) return { url: new URL("./ensemble-worker.js", import.meta.url) };
+  const worker = new URL("./ensemble-worker.ts", import.meta.url).href;
+  const tsx = import.meta.resolve("tsx/esm/api");
+  const bootstrap = `import { register } from ${JSON.stringify(tsx)}; register(); await import(${JSON.stringify(worker)});`;
+  return { url: new URL(`data:text/javascript,${encodeURIComponent(bootstrap)}`) };
 }
 
 export type { PipelineControl };

@@ -1,0 +1,29 @@
+import { describe, expect, it } from "vitest";
+import { runEnsemble } from "../ensemble/run-ensemble.js";
+import { baseSpec, rampPathway } from "../ensemble/test-support/specs.js";
+import { runEnsembleParallel } from "./run-ensemble-parallel.js";
+
+describe("runEnsembleParallel", () => {
+  it("gives results bit-identical to one thread, with and without a constraint", async () => {
+    // Two pathways, a constraint (weighted summaries) and an odd member count split over 2 and 3 threads.
+    const spec = baseSpec({
+      members: 2_001,
+      pathways: [rampPathway("a"), rampPathway("b", 1800, 301)],
+      model: { ...baseSpec().model, constraint: { from: 2011, to: 2020, observed: 1.0, sd: 0.1 } },
+    });
+    const single = runEnsemble(spec);
+    const two = await runEnsembleParallel(spec, { threads: 2 });
+    expect(two).toEqual(single);
+    expect(two.resultHash).toBe(single.resultHash);
+    const unconstrained = { ...spec, model: { ...spec.model, constraint: null } };
+    const three = await runEnsembleParallel(unconstrained, { threads: 3 });
+    expect(three.resultHash).toBe(runEnsemble(unconstrained).resultHash);
+  }, 60_000);
+
+  it("rejects a bad spec with the SpecError and honours an aborted signal", async () => {
+    await expect(runEnsembleParallel(baseSpec({ members: 0 }), { threads: 2 })).rejects.toThrow("members must be at least 1");
+    const controller = new AbortController();
+    controller.abort();
+    await expect(runEnsembleParallel(baseSpec({ members: 3000 }), { threads: 2, signal: controller.signal })).rejects.toThrow(/cancelled/);
+  }, 60_000);
+});
