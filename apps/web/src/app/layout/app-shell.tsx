@@ -14,6 +14,7 @@ import { ThemeToggle } from "@/components/ui/theme-toggle";
 import { cx } from "@/components/ui/cx";
 import { visibleNavItems } from "./nav-items";
 import { Forbidden } from "./forbidden";
+import { ChangePasswordForm } from "@/features/auth/components/change-password-form";
 
 export interface RouteHandle {
   permission?: Permission;
@@ -50,6 +51,7 @@ export function AppShell() {
     );
   }
 
+  if (me.data.mustChangePassword) return <ChangePasswordForm />;
   const { user, permissions } = me.data;
   const gate = [...matches].reverse().find((m) => (m.handle as RouteHandle | undefined)?.permission)?.handle as RouteHandle | undefined;
   const allowed = !gate?.permission || permissions.includes(gate.permission);

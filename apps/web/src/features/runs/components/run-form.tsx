@@ -6,7 +6,7 @@ import { Field, Input, Select } from "@/components/ui/field";
 import { ErrorState } from "@/components/ui/states";
 import { isApiError } from "@/lib/api-error";
 import { useCreateRun } from "../api/create-run";
-import { parseNumberList } from "./parse-list";
+import { parseNumbers } from "@/lib/parse-numbers";
 
 export interface VersionOption {
   id: string;
@@ -56,8 +56,8 @@ export function RunForm({
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const next: Partial<Record<FieldName, string>> = {};
-    const horizons = parseNumberList(String(form.get("horizons") ?? ""));
-    const thresholds = parseNumberList(String(form.get("thresholds") ?? ""));
+    const horizons = parseNumbers(String(form.get("horizons") ?? ""));
+    const thresholds = parseNumbers(String(form.get("thresholds") ?? ""));
     if ("bad" in horizons) next.horizons = `"${horizons.bad}" is not a year; list years separated by commas`;
     if ("bad" in thresholds) next.thresholds = `"${thresholds.bad}" is not a number; list warming levels in K separated by commas`;
     const membersText = String(form.get("members") ?? "").trim();

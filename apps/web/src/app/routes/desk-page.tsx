@@ -1,0 +1,210 @@
+import { Link } from "react-router-dom";
+import { paths } from "@/config/paths";
+import { useMe } from "@/features/auth/api/get-me";
+import { useExports } from "@/features/exports/api/get-exports";
+import { ExportsTable } from "@/features/exports/components/exports-table";
+import { useModelVersions } from "@/features/model-versions/api/get-model-versions";
+import { ModelVersionsTable } from "@/features/model-versions/components/model-versions-table";
+import { useRuns } from "@/features/runs/api/get-runs";
+import { RunsTable } from "@/features/runs/components/runs-table";
+import { ExploratoryStamp } from "@/components/ui/badges";
+import { ButtonLink } from "@/components/ui/button";
+import { Card, CardBody, CardHeader } from "@/components/ui/card";
+import { PageHeader } from "@/components/ui/page-header";
+import { PanelErrorBoundary } from "@/components/ui/panel-error-boundary";
+import { EmptyState, ErrorState, LoadingState } from "@/components/ui/states";
+
+const GREETING: Record<string, string> = {
+  analyst: "Build pathways and assumptions, run ensembles, study the spread.",
+  actuary: "Run approved versions, read the tables, export workbooks.",
+  manager: "Review what analysts submit; approve, reject or retire.",
+  admin: "Manage people and roles; read the audit trail and the outbox.",
+};
+
+/** The home desk, composed from the features the role may use. */
+export default function DeskPage() {
+  const me = useMe();
+  const perms = me.data?.permissions ?? [];
+  const can = (p: string) => perms.includes(p);
+  const user = me.data!.user;
+  return (
+    <>
+      <PageHeader
+        kicker="Desk"
+        title={`Good to see you, ${user.name.split(" ")[0]}`}
+        description={GREETING[user.role]}
+        actions={
+          can("runs:create") && (
+            <ButtonLink to={paths.runNew.build()} variant="primary">
+              New run
+            </ButtonLink>
+          )
+        }
+      />
+      <div className="grid gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+        <div className="flex min-w-0 flex-col gap-6">
+          {can("model-versions:decide") && (
+            <PanelErrorBoundary>
+              <ReviewsWaiting userId={user.id} />
+            </PanelErrorBoundary>
+          )}
+          {can("runs:read") && (
+            <PanelErrorBoundary>
+              <MyRuns userId={user.id} canCreate={can("runs:create")} mine={can("runs:create")} />
+            </PanelErrorBoundary>
+          )}
+          {can("model-versions:write") && (
+            <PanelErrorBoundary>
+              <MyDrafts userId={user.id} />
+            </PanelErrorBoundary>
+          )}
+        </div>
+        <div className="flex min-w-0 flex-col gap-6">
+          {can("runs:read") && (
+            <PanelErrorBoundary>
+              <ExploratoryFlags />
+            </PanelErrorBoundary>
+          )}
+          {can("runs:read") && (
+            <PanelErrorBoundary>
+              <RecentExports />
+            </PanelErrorBoundary>
+          )}
+          {can("users:manage") && (
+            <Card>
+              <CardHeader title="Administration" />
+              <CardBody className="flex flex-wrap gap-2">
+                <ButtonLink to={paths.adminUsers.build()}>Users and roles</ButtonLink>
+                <ButtonLink to={paths.adminAudit.build()}>Audit log</ButtonLink>
+                <ButtonLink to={paths.adminOutbox.build()}>Outbox</ButtonLink>
+              </CardBody>
+            </Card>
+          )}
+        </div>
+      </div>
+    </>
+  );
+}
+
+function MyRuns({ userId, canCreate, mine }: { userId: string; canCreate: boolean; mine: boolean }) {
+  const runs = useRuns({ mine });
+  return (
+    <Card>
+      <CardHeader title={mine ? "My runs" : "Recent runs"} subtitle="Progress updates on its own while runs are going." actions={<Link to={paths.runs.build()} className="text-sm text-accent">All runs →</Link>} />
+      {runs.isPending ? (
+        <LoadingState />
+      ) : runs.isError ? (
+        <CardBody>
+          <ErrorState error={runs.error} />
+        </CardBody>
+      ) : runs.data.length === 0 ? (
+        <CardBody>
+          <EmptyState title="No runs yet" action={canCreate ? <ButtonLink to={paths.runNew.build()}>Start a run</ButtonLink> : undefined} />
+        </CardBody>
+      ) : (
+        <RunsTable runs={runs.data.slice(0, 8)} currentUserId={userId} canCreate={canCreate} compact />
+      )}
+    </Card>
+  );
+}
+
+function ReviewsWaiting({ userId }: { userId: string }) {
+  const versions = useModelVersions("in-review");
+  return (
+    <Card className="border-l-4 border-l-accent">
+      <CardHeader title="Waiting for your review" subtitle="Versions you did not write; you cannot decide on your own." />
+      {versions.isPending ? (
+        <LoadingState />
+      ) : versions.isError ? (
+        <CardBody>
+          <ErrorState error={versions.error} />
+        </CardBody>
+      ) : versions.data.length === 0 ? (
+        <CardBody>
+          <EmptyState title="Nothing to review" />
+        </CardBody>
+      ) : (
+        <ul className="divide-y divide-line">
+          {versions.data.map((v) => (
+            <li key={v.id} className="flex items-center justify-between gap-3 px-4 py-3">
+              <div>
+                <p className="font-medium">
+                  {v.name} <span className="num text-muted">v{v.versionNumber}</span>
+                </p>
+                <p className="text-xs text-muted">
+                  {v.changeClass ?? "–"} change by {v.authorName ?? "–"}
+                  {v.authorId === userId && " (yours: another manager decides)"}
+                </p>
+              </div>
+              <ButtonLink to={paths.modelVersionReview.build(v.id)} size="sm" variant={v.authorId === userId ? "secondary" : "primary"}>
+                Review
+              </ButtonLink>
+            </li>
+          ))}
+        </ul>
+      )}
+    </Card>
+  );
+}
+
+function MyDrafts({ userId }: { userId: string }) {
+  const versions = useModelVersions();
+  const mine = versions.data?.filter((v) => v.authorId === userId && (v.status === "draft" || v.status === "in-review" || v.status === "rejected")) ?? [];
+  if (versions.isPending || mine.length === 0) return null;
+  return (
+    <Card>
+      <CardHeader title="My model versions in progress" />
+      <ModelVersionsTable versions={mine} />
+    </Card>
+  );
+}
+
+function ExploratoryFlags() {
+  const runs = useRuns({ status: "succeeded" });
+  if (runs.isPending) return null;
+  if (runs.isError) return <ErrorState error={runs.error} />;
+  const exploratory = runs.data.filter((r) => r.exploratory);
+  return (
+    <Card>
+      <CardHeader title="Exploratory results" subtitle="Made with versions that were not approved: not for filing." />
+      <CardBody>
+        {exploratory.length === 0 ? (
+          <p className="text-sm text-muted">No exploratory results. Every finished run used an approved version.</p>
+        ) : (
+          <ul className="flex flex-col gap-2">
+            {exploratory.slice(0, 6).map((r) => (
+              <li key={r.id} className="flex items-center justify-between gap-2 text-sm">
+                <Link to={paths.run.build(r.id)} className="truncate text-accent hover:underline">
+                  {r.name}
+                </Link>
+                <ExploratoryStamp size="sm" />
+              </li>
+            ))}
+          </ul>
+        )}
+      </CardBody>
+    </Card>
+  );
+}
+
+function RecentExports() {
+  const exports = useExports(true);
+  return (
+    <Card>
+      <CardHeader title="My recent exports" actions={<Link to={paths.exports.build()} className="text-sm text-accent">All exports →</Link>} />
+      {exports.isPending ? (
+        <LoadingState />
+      ) : exports.isError ? (
+        <CardBody>
+          <ErrorState error={exports.error} />
+        </CardBody>
+      ) : exports.data.length === 0 ? (
+        <CardBody>
+          <p className="text-sm text-muted">Nothing exported yet.</p>
+        </CardBody>
+      ) : (
+        <ExportsTable exports={exports.data.slice(0, 5)} compact />
+      )}
+    </Card>
+  );
+}

@@ -1,0 +1,37 @@
+import { useNavigate, useSearchParams } from "react-router-dom";
+import { paths } from "@/config/paths";
+import { useModelVersion } from "@/features/model-versions/api/get-model-version";
+import { useCreateModelVersion } from "@/features/model-versions/api/save-model-version";
+import { ModelEditor, type ModelDraft } from "@/features/model-versions/components/model-editor";
+import { STARTING_DRAFT } from "@/features/model-versions/lib/starting-draft";
+import { PageHeader } from "@/components/ui/page-header";
+import { ErrorState, LoadingState } from "@/components/ui/states";
+
+export default function ModelVersionNewPage() {
+  const [params] = useSearchParams();
+  const fromId = params.get("from") ?? undefined;
+  const parent = useModelVersion(fromId);
+  const create = useCreateModelVersion();
+  const navigate = useNavigate();
+  if (fromId && parent.isPending) return <LoadingState />;
+  if (fromId && parent.isError) return <ErrorState error={parent.error} />;
+  const initial: ModelDraft = parent.data
+    ? { name: parent.data.name, notes: parent.data.notes, parentId: parent.data.id, model: parent.data.model, defaults: parent.data.defaults }
+    : STARTING_DRAFT;
+  return (
+    <>
+      <PageHeader
+        kicker="Model versions"
+        title={parent.data ? `New draft from ${parent.data.name} v${parent.data.versionNumber}` : "New model version"}
+        description={parent.data ? "Starts as a copy of its parent; the review will show exactly what you change." : "Starts from AR6 assessed ranges (sources in the notes); change what you need."}
+      />
+      <ModelEditor
+        initial={initial}
+        submitLabel="Save draft"
+        pending={create.isPending}
+        serverError={create.error}
+        onSave={(body) => create.mutate(body, { onSuccess: (v) => navigate(paths.modelVersion.build(v.id)) })}
+      />
+    </>
+  );
+}

@@ -1,0 +1,48 @@
+import { roles, type Role, type User } from "@plumeline/contracts";
+import { Select } from "@/components/ui/field";
+import { InlineError } from "@/components/ui/states";
+import { Table, Td, Th } from "@/components/ui/table";
+import { formatDate } from "@/lib/format";
+import { useChangeUserRole } from "../api/save-user";
+
+export function UsersTable({ users, currentUserId }: { users: User[]; currentUserId: string }) {
+  const change = useChangeUserRole();
+  return (
+    <>
+      <Table>
+        <thead>
+          <tr>
+            <Th>Name</Th>
+            <Th>Email</Th>
+            <Th>Role</Th>
+            <Th>Since</Th>
+          </tr>
+        </thead>
+        <tbody>
+          {users.map((u) => (
+            <tr key={u.id}>
+              <Td className="font-medium">{u.name}</Td>
+              <Td className="text-muted">{u.email}</Td>
+              <Td>
+                <Select
+                  aria-label={`Role of ${u.name}`}
+                  value={u.role}
+                  className="w-36 py-1"
+                  disabled={u.id === currentUserId || (change.isPending && change.variables?.id === u.id)}
+                  title={u.id === currentUserId ? "You cannot change your own role" : undefined}
+                  onChange={(e) => change.mutate({ id: u.id, role: e.target.value as Role })}
+                >
+                  {roles.map((r) => (
+                    <option key={r}>{r}</option>
+                  ))}
+                </Select>
+              </Td>
+              <Td className="text-muted">{formatDate(u.createdAt)}</Td>
+            </tr>
+          ))}
+        </tbody>
+      </Table>
+      <InlineError error={change.error} />
+    </>
+  );
+}

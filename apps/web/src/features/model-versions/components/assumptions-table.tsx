@@ -1,0 +1,50 @@
+import { CLIMATE_INPUTS, CLIMATE_INPUT_UNITS, FORCING_AGENTS, type Distribution, type ModelSpec } from "@plumeline/contracts";
+import { Table, Td, Th } from "@/components/ui/table";
+import { inputLabel } from "@/lib/input-labels";
+import { percentileValues } from "../lib/distribution-math";
+import { DISTRIBUTION_TYPE_LABELS } from "../lib/distribution-fields";
+
+function describe(d: Distribution): string {
+  const { type, ...params } = d;
+  return `${DISTRIBUTION_TYPE_LABELS[type]} (${Object.entries(params)
+    .map(([k, v]) => `${k} ${v}`)
+    .join(", ")})`;
+}
+
+/** Read-only summary of every input: its distribution and its 5/17/50/83/95 values. */
+export function AssumptionsTable({ model }: { model: ModelSpec }) {
+  const rows: Array<{ key: string; unit: string; d: Distribution }> = [
+    ...CLIMATE_INPUTS.map((k) => ({ key: k, unit: CLIMATE_INPUT_UNITS[k], d: model.climate[k] })),
+    ...FORCING_AGENTS.filter((a) => model.agents[a]).map((a) => ({ key: a, unit: "×", d: model.agents[a]!.scale })),
+  ];
+  return (
+    <Table>
+      <thead>
+        <tr>
+          <Th>Input</Th>
+          <Th>Distribution</Th>
+          {[5, 17, 50, 83, 95].map((p) => (
+            <Th key={p} numeric>
+              {p} %
+            </Th>
+          ))}
+        </tr>
+      </thead>
+      <tbody>
+        {rows.map(({ key, unit, d }) => (
+          <tr key={key}>
+            <Td className="whitespace-nowrap">
+              {inputLabel(key)} <span className="text-xs text-muted">({unit})</span>
+            </Td>
+            <Td className="text-xs text-muted">{describe(d)}</Td>
+            {percentileValues(d).map((v) => (
+              <Td key={v.p} numeric className={v.p === 50 ? "font-semibold" : undefined}>
+                {Math.abs(v.value) >= 100 ? v.value.toFixed(1) : v.value.toFixed(3)}
+              </Td>
+            ))}
+          </tr>
+        ))}
+      </tbody>
+    </Table>
+  );
+}

@@ -1,0 +1,40 @@
+import type { ModelVersionDiff } from "@plumeline/contracts";
+import { Table, Td, Th } from "@/components/ui/table";
+import { EmptyState } from "@/components/ui/states";
+
+const show = (v: unknown) => (v === null || v === undefined ? "—" : typeof v === "object" ? JSON.stringify(v) : String(v));
+
+/** What changed against the parent (or another version), one line per changed field. */
+export function DiffTable({ diff }: { diff: ModelVersionDiff }) {
+  if (!diff.against) return <p className="text-sm text-muted">This version has no parent: everything in it is new.</p>;
+  if (diff.changes.length === 0) return <EmptyState title={`No differences from ${diff.against.name} v${diff.against.versionNumber}`} />;
+  return (
+    <Table>
+      <caption className="mb-2 text-left text-sm text-muted">
+        Against {diff.against.name} v{diff.against.versionNumber}: {diff.changes.length} change{diff.changes.length === 1 ? "" : "s"}
+      </caption>
+      <thead>
+        <tr>
+          <Th>Field</Th>
+          <Th>Before</Th>
+          <Th>After</Th>
+        </tr>
+      </thead>
+      <tbody>
+        {diff.changes.map((c) => (
+          <tr key={c.path}>
+            <Td>
+              <code className="text-xs">{c.path}</code>
+            </Td>
+            <Td className="num max-w-sm break-all text-xs">
+              <span className="rounded bg-danger-soft px-1">{show(c.before)}</span>
+            </Td>
+            <Td className="num max-w-sm break-all text-xs">
+              <span className="rounded bg-ok-soft px-1">{show(c.after)}</span>
+            </Td>
+          </tr>
+        ))}
+      </tbody>
+    </Table>
+  );
+}

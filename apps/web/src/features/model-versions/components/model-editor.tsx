@@ -1,0 +1,325 @@
+import { useState, type FormEvent } from "react";
+import {
+  AGENT_LABELS,
+  CLIMATE_INPUTS,
+  CLIMATE_INPUT_UNITS,
+  FORCING_AGENTS,
+  FORCING_EXPRESSIONS,
+  createModelVersionBodySchema,
+  formatPath,
+  type CreateModelVersionBody,
+  type Distribution,
+  type ForcingAgent,
+  type ModelSpec,
+  type ModelVersionDefaults,
+} from "@plumeline/contracts";
+import { Button } from "@/components/ui/button";
+import { Card, CardBody, CardHeader } from "@/components/ui/card";
+import { Field, Input, Select, Textarea } from "@/components/ui/field";
+import { ErrorState } from "@/components/ui/states";
+import { CLIMATE_INPUT_LABELS, inputLabel } from "@/lib/input-labels";
+import { DistributionEditor } from "./distribution-editor";
+import { parseNumbers } from "@/lib/parse-numbers";
+
+export interface ModelDraft {
+  name: string;
+  notes: string;
+  parentId: string | null;
+  model: ModelSpec;
+  defaults: ModelVersionDefaults;
+}
+
+const EXPRESSION_LABELS: Record<string, string> = {
+  ar6: "AR6 refit (IPCC AR6 WGI Ch. 7)",
+  "etminan-2016": "Etminan et al. 2016",
+  "myhre-1998": "Myhre et al. 1998 (logarithmic CO2)",
+};
+
+/**
+ * Drafting a model version: every input's distribution with its live preview, forcing
+ * scale factors per agent, rank correlations, the observational constraint and the run
+ * defaults. The body is checked with the API's schema before it is sent; messages appear
+ * beside the field they concern.
+ */
+export function ModelEditor({
+  initial,
+  submitLabel,
+  pending,
+  serverError,
+  onSave,
+}: {
+  initial: ModelDraft;
+  submitLabel: string;
+  pending: boolean;
+  serverError: unknown;
+  onSave: (body: CreateModelVersionBody) => void;
+}) {
+  const [name, setName] = useState(initial.name);
+  const [notes, setNotes] = useState(initial.notes);
+  const [climate, setClimate] = useState<Record<string, Distribution | null>>({ ...initial.model.climate });
+  const [agents, setAgents] = useState<Partial<Record<ForcingAgent, Distribution | null>>>(
+    Object.fromEntries(Object.entries(initial.model.agents).map(([a, v]) => [a, v?.scale ?? null])),
+  );
+  const [correlations, setCorrelations] = useState(initial.model.correlations.map((c) => ({ a: c.between[0], b: c.between[1], rank: String(c.rank) })));
+  const [constraintOn, setConstraintOn] = useState(initial.model.constraint !== null);
+  const [constraint, setConstraint] = useState(() => {
+    const c = initial.model.constraint ?? { from: 2011, to: 2020, observed: 1.09, sd: 0.076 };
+    return { from: String(c.from), to: String(c.to), observed: String(c.observed), sd: String(c.sd) };
+  });
+  const [expression, setExpression] = useState(initial.model.forcingExpression);
+  const [defaults, setDefaults] = useState({
+    percentiles: initial.defaults.percentiles.join(", "),
+    thresholds: initial.defaults.thresholds.join(", "),
+    horizons: initial.defaults.horizons.join(", "),
+    baseline: initial.defaults.baseline.join(", "),
+  });
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [addAgent, setAddAgent] = useState<ForcingAgent | "">("");
+  const inputs = [...CLIMATE_INPUTS, ...FORCING_AGENTS];
+
+  function submit(e: FormEvent) {
+    e.preventDefault();
+    const next: Record<string, string> = {};
+    const badInput = [...Object.entries(climate), ...Object.entries(agents)].filter(([, d]) => d === null).map(([k]) => inputLabel(k));
+    if (badInput.length) next.inputs = `Fix the distribution of: ${badInput.join(", ")}`;
+    const lists = Object.fromEntries(Object.entries(defaults).map(([k, v]) => [k, parseNumbers(v)]));
+    for (const [k, v] of Object.entries(lists)) if ("bad" in v) next[`defaults.${k}`] = `"${v.bad}" is not a number`;
+    const num = (v: string) => (v.trim() === "" ? Number.NaN : Number(v));
+    const body = {
+      name,
+      notes,
+      parentId: initial.parentId,
+      model: {
+        climate,
+        agents: Object.fromEntries(Object.entries(agents).map(([a, d]) => [a, { scale: d }])),
+        correlations: correlations.map((c) => ({ between: [c.a, c.b], rank: num(c.rank) })),
+        constraint: constraintOn ? { from: num(constraint.from), to: num(constraint.to), observed: num(constraint.observed), sd: num(constraint.sd) } : null,
+        forcingExpression: expression,
+      },
+      defaults: Object.fromEntries(Object.entries(lists).map(([k, v]) => [k, "values" in v ? v.values : []])),
+    };
+    if (Object.keys(next).length === 0) {
+      const parsed = createModelVersionBodySchema.safeParse(body);
+      if (!parsed.success) {
+        for (const i of parsed.error.issues) next[formatPath(i.path.filter((p) => typeof p !== "symbol") as Array<string | number>)] ??= i.message;
+      } else {
+        setErrors({});
+        onSave(body as CreateModelVersionBody);
+        return;
+      }
+    }
+    setErrors(next);
+  }
+
+  const err = (path: string) => errors[path];
+  const errorList = Object.entries(errors);
+
+  return (
+    <form noValidate onSubmit={submit} className="flex flex-col gap-6">
+      <Card>
+        <CardHeader title="About this version" />
+        <CardBody className="grid gap-4 lg:grid-cols-2">
+          <Field label="Name" error={err("name")}>
+            {(p) => <Input {...p} value={name} onChange={(e) => setName(e.target.value)} maxLength={120} />}
+          </Field>
+          <Field label="Concentration-to-forcing expression" hint="Used for pathways given as CO2/CH4/N2O concentrations.">
+            {(p) => (
+              <Select {...p} value={expression} onChange={(e) => setExpression(e.target.value as typeof expression)}>
+                {FORCING_EXPRESSIONS.map((x) => (
+                  <option key={x} value={x}>
+                    {EXPRESSION_LABELS[x] ?? x}
+                  </option>
+                ))}
+              </Select>
+            )}
+          </Field>
+          <Field label="Notes: sources and justification" error={err("notes")} className="lg:col-span-2" hint="Cite where every assumption comes from; reviewers read this.">
+            {(p) => <Textarea {...p} value={notes} onChange={(e) => setNotes(e.target.value)} rows={5} />}
+          </Field>
+        </CardBody>
+      </Card>
+
+      <Card>
+        <CardHeader title="Climate response" subtitle="Two-layer energy balance model inputs. Each preview updates as you type." />
+        <CardBody className="flex flex-col gap-3">
+          {CLIMATE_INPUTS.map((k) => (
+            <DistributionEditor
+              key={k}
+              id={k}
+              label={CLIMATE_INPUT_LABELS[k]}
+              unit={CLIMATE_INPUT_UNITS[k]}
+              value={initial.model.climate[k]}
+              onChange={(d) => setClimate((c) => ({ ...c, [k]: d }))}
+            />
+          ))}
+        </CardBody>
+      </Card>
+
+      <Card>
+        <CardHeader title="Forcing scale factors" subtitle="Each member multiplies an agent's series by a sampled factor. Agents not listed keep a factor of exactly 1." />
+        <CardBody className="flex flex-col gap-3">
+          {FORCING_AGENTS.filter((a) => a in agents).map((a) => (
+            <div key={a} className="relative">
+              <DistributionEditor
+                id={a}
+                label={`${AGENT_LABELS[a]} scale`}
+                unit="× (scale)"
+                value={initial.model.agents[a]?.scale ?? { type: "range", p50: 1, low: 0.8, high: 1.2, coverage: 90, shape: "split-normal" }}
+                onChange={(d) => setAgents((s) => ({ ...s, [a]: d }))}
+              />
+              <button
+                type="button"
+                className="absolute bottom-2 right-3 text-xs text-danger hover:underline"
+                onClick={() =>
+                  setAgents((s) => {
+                    const next = { ...s };
+                    delete next[a];
+                    return next;
+                  })
+                }
+              >
+                Remove {AGENT_LABELS[a]}
+              </button>
+            </div>
+          ))}
+          <div className="flex items-end gap-2">
+            <label className="flex flex-col gap-1 text-sm">
+              <span className="font-medium text-ink">Add a scale factor for</span>
+              <Select value={addAgent} onChange={(e) => setAddAgent(e.target.value as ForcingAgent)} className="w-64">
+                <option value="">Choose an agent…</option>
+                {FORCING_AGENTS.filter((a) => !(a in agents)).map((a) => (
+                  <option key={a} value={a}>
+                    {AGENT_LABELS[a]}
+                  </option>
+                ))}
+              </Select>
+            </label>
+            <Button
+              variant="secondary"
+              disabled={!addAgent}
+              onClick={() => {
+                if (!addAgent) return;
+                setAgents((s) => ({ ...s, [addAgent]: { type: "range", p50: 1, low: 0.8, high: 1.2, coverage: 90, shape: "split-normal" } }));
+                setAddAgent("");
+              }}
+            >
+              Add
+            </Button>
+          </div>
+        </CardBody>
+      </Card>
+
+      <Card>
+        <CardHeader title="Rank correlations" subtitle="Imposed between sampled inputs by Iman–Conover; leave empty for independent inputs." />
+        <CardBody className="flex flex-col gap-2">
+          {correlations.map((c, i) => (
+            <div key={i} className="flex flex-wrap items-start gap-2" data-correlation={i}>
+              <Select aria-label={`Correlation ${i + 1}: first input`} value={c.a} onChange={(e) => setCorrelations((cs) => cs.map((x, j) => (j === i ? { ...x, a: e.target.value } : x)))} className="w-56">
+                {inputs.map((k) => (
+                  <option key={k} value={k}>
+                    {inputLabel(k)}
+                  </option>
+                ))}
+              </Select>
+              <Select aria-label={`Correlation ${i + 1}: second input`} value={c.b} onChange={(e) => setCorrelations((cs) => cs.map((x, j) => (j === i ? { ...x, b: e.target.value } : x)))} className="w-56">
+                {inputs.map((k) => (
+                  <option key={k} value={k}>
+                    {inputLabel(k)}
+                  </option>
+                ))}
+              </Select>
+              <div className="flex flex-col">
+                <Input
+                  aria-label={`Correlation ${i + 1}: rank correlation`}
+                  className="num w-24"
+                  value={c.rank}
+                  onChange={(e) => setCorrelations((cs) => cs.map((x, j) => (j === i ? { ...x, rank: e.target.value } : x)))}
+                  aria-invalid={err(`model.correlations[${i}].rank`) ? true : undefined}
+                />
+              </div>
+              <Button variant="ghost" size="sm" onClick={() => setCorrelations((cs) => cs.filter((_, j) => j !== i))}>
+                Remove
+              </Button>
+              {(err(`model.correlations[${i}].rank`) || err(`model.correlations[${i}].between`)) && (
+                <p role="alert" className="basis-full text-xs font-medium text-danger">
+                  {err(`model.correlations[${i}].rank`) ? `Rank ${err(`model.correlations[${i}].rank`)}` : err(`model.correlations[${i}].between`)}
+                </p>
+              )}
+            </div>
+          ))}
+          <div>
+            <Button variant="secondary" size="sm" onClick={() => setCorrelations((cs) => [...cs, { a: "ecs", b: "aerosol-cloud", rank: "-0.3" }])}>
+              Add correlation
+            </Button>
+          </div>
+        </CardBody>
+      </Card>
+
+      <Card>
+        <CardHeader title="Observational constraint" subtitle="Weights members by how well their warming over an observed window matches the observation." />
+        <CardBody className="flex flex-col gap-3">
+          <label className="flex items-center gap-2 text-sm">
+            <input type="checkbox" checked={constraintOn} onChange={(e) => setConstraintOn(e.target.checked)} className="accent-[var(--pl-accent)]" />
+            Weight members by observed warming
+          </label>
+          {constraintOn && (
+            <div className="grid gap-3 sm:grid-cols-4">
+              {(
+                [
+                  ["from", "Window from (year)"],
+                  ["to", "Window to (year)"],
+                  ["observed", "Observed warming (K)"],
+                  ["sd", "Observation sd (K)"],
+                ] as const
+              ).map(([k, label]) => (
+                <Field key={k} label={label} error={err(`model.constraint.${k}`)}>
+                  {(p) => <Input {...p} className="num" value={constraint[k]} onChange={(e) => setConstraint((c) => ({ ...c, [k]: e.target.value }))} />}
+                </Field>
+              ))}
+              <p className="text-xs text-muted sm:col-span-4">
+                AR6 SPM A.1.2: 2011–2020 was 1.09 K [0.95–1.20] above 1850–1900; sd 0.076 K treats that range as 5–95 %.
+              </p>
+            </div>
+          )}
+        </CardBody>
+      </Card>
+
+      <Card>
+        <CardHeader title="Run defaults" subtitle="Runs of this version start from these; a run may override horizons and thresholds." />
+        <CardBody className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
+          {(
+            [
+              ["percentiles", "Percentiles"],
+              ["thresholds", "Thresholds (K)"],
+              ["horizons", "Horizons (years)"],
+              ["baseline", "Baseline period (first, last year)"],
+            ] as const
+          ).map(([k, label]) => (
+            <Field key={k} label={label} error={err(`defaults.${k}`) ?? Object.entries(errors).find(([p]) => p.startsWith(`defaults.${k}[`))?.[1]}>
+              {(p) => <Input {...p} className="num" value={defaults[k]} onChange={(e) => setDefaults((d) => ({ ...d, [k]: e.target.value }))} />}
+            </Field>
+          ))}
+        </CardBody>
+      </Card>
+
+      {errorList.length > 0 && (
+        <div role="alert" className="rounded-md border border-danger/40 bg-danger-soft px-4 py-3 text-sm">
+          <p className="font-semibold text-danger">The version cannot be saved yet</p>
+          <ul className="mt-1 list-disc pl-5">
+            {errorList.slice(0, 12).map(([path, message]) => (
+              <li key={path}>
+                {path === "inputs" ? message : `${path} ${message}`}
+              </li>
+            ))}
+          </ul>
+        </div>
+      )}
+      {serverError ? <ErrorState error={serverError} /> : null}
+      <div className="sticky bottom-0 -mx-2 flex gap-2 border-t border-line bg-canvas/95 px-2 py-3 backdrop-blur">
+        <Button type="submit" disabled={pending}>
+          {pending ? "Saving…" : submitLabel}
+        </Button>
+      </div>
+    </form>
+  );
+}
