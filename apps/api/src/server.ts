@@ -5,6 +5,7 @@ import { ConfigError, loadConfig } from "./config.js";
 import { closeContext, createContext } from "./context.js";
 import { migrate } from "./db/migrate.js";
 import { loadDemoSeed } from "./seed/load-demo-seed.js";
+import { startWorkers } from "./workers/index.js";
 
 /** Entry point: config, migrations, first-start seed, mail, (workers), listen, graceful shutdown. */
 async function main(): Promise<void> {
@@ -13,7 +14,8 @@ async function main(): Promise<void> {
   const applied = await migrate(ctx.sequelize);
   if (applied.length > 0) console.log(`[db] applied ${applied.length} migration(s) to ${config.databaseFile}`);
   const seeded = config.seedDemo ? await loadDemoSeed(ctx) : false;
-  // Workers and queue start here (they register their shutdown with ctx.onClose).
+  // Run workers (engine threads) start after migrating; they register their shutdown with ctx.onClose.
+  await startWorkers(ctx);
 
   const app = createApp(ctx);
   const server: Server = await new Promise((resolve, reject) => {

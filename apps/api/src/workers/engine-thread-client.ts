@@ -1,4 +1,5 @@
 import { createRequire } from "node:module";
+import path from "node:path";
 import { pathToFileURL } from "node:url";
 import { Worker } from "node:worker_threads";
 import type { RunResult, RunSpec } from "@plumeline/contracts";
@@ -12,17 +13,22 @@ export class EngineThreadCrashed extends Error {
 }
 
 /**
- * Where the thread's code is and how Node must start it. From TypeScript sources (tsx,
- * vitest) the thread gets tsx's loader explicitly: a worker does not inherit loaders that
- * vitest registers, and under `node --import tsx` passing it again is harmless. From a
- * compiled build (.js next to this file) the thread needs nothing extra.
+ * How to start the thread's code. From a compiled build (.js next to this file) it is a plain
+ * worker file. From TypeScript sources (`node --import tsx`, vitest) Node 20 does not pass
+ * module loaders on to worker threads, so a two-line bootstrap registers tsx's ESM hooks
+ * inside the thread (tsx's public `tsx/esm/api`) and then imports engine-thread.ts.
  */
-function threadEntry(): { url: URL; execArgv: string[] } {
-  const fromSource = import.meta.url.endsWith(".ts");
-  const url = new URL(fromSource ? "./engine-thread.ts" : "./engine-thread.js", import.meta.url);
-  if (!fromSource) return { url, execArgv: [] };
-  const tsxLoader = pathToFileURL(createRequire(import.meta.url).resolve("tsx")).href;
-  return { url, execArgv: ["--import", tsxLoader] };
+function threadEntry(): { entry: URL | string; eval: boolean } {
+  if (!import.meta.url.endsWith(".ts")) return { entry: new URL("./engine-thread.js", import.meta.url), eval: false };
+  const require = createRequire(import.meta.url);
+  const tsxPackage = require.resolve("tsx/package.json");
+  const exportsMap = (require("tsx/package.json") as { exports: Record<string, { import?: { default?: string } }> }).exports;
+  const esmApi = pathToFileURL(path.join(path.dirname(tsxPackage), exportsMap["./esm/api"]?.import?.default ?? "dist/esm/api/index.mjs")).href;
+  const target = new URL("./engine-thread.ts", import.meta.url).href;
+  const code =
+    `import(${JSON.stringify(esmApi)}).then((tsx) => { tsx.register(); return import(${JSON.stringify(target)}); })` +
+    `.catch((error) => { console.error("[engine-thread] could not start:", error); process.exit(1); });`;
+  return { entry: code, eval: true };
 }
 
 /** One long-lived engine thread; `run` sends it one ensemble at a time. */
@@ -33,8 +39,8 @@ export class EngineThread {
   private exited = false;
 
   constructor(readonly name: string) {
-    const entry = threadEntry();
-    this.worker = new Worker(entry.url, { execArgv: entry.execArgv, name });
+    const { entry, eval: isCode } = threadEntry();
+    this.worker = new Worker(entry, { eval: isCode, name });
     this.worker.on("message", (message: FromEngineThread) => this.onMessage(message));
     this.worker.on("error", (error) => this.crash(`engine thread ${name} crashed: ${error.message}`));
     this.worker.on("exit", (code) => {
