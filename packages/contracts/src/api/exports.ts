@@ -9,6 +9,10 @@ export const RESULT_TABLES = [
   "exceedance",
   "crossing",
   "sensitivity",
+  // peril lens (present when the run carried peril profiles; header only otherwise)
+  "peril-multipliers",
+  "peril-return-periods",
+  "peril-losses",
 ] as const;
 export type ResultTable = (typeof RESULT_TABLES)[number];
 

@@ -1,4 +1,5 @@
 import type { PathwayResult, ResultTable, RunResult } from "@plumeline/contracts";
+import { perilTable } from "../peril-profiles/peril-result-tables.js";
 
 export type TableCell = string | number | null;
 export interface Table {
@@ -108,5 +109,9 @@ export function resultTable(result: RunResult, table: ResultTable): Table {
       return horizonsTable(result);
     case "sensitivity":
       return sensitivityTable(result);
+    case "peril-multipliers":
+    case "peril-return-periods":
+    case "peril-losses":
+      return perilTable(result, table);
   }
 }

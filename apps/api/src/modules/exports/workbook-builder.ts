@@ -1,12 +1,14 @@
 import ExcelJS from "exceljs";
 import {
   CLIMATE_INPUT_UNITS,
+  PERIL_RULES,
   RESULT_CAUTIONS,
   type Distribution,
   type ModelSpec,
   type ResultTable,
   type RunResult,
 } from "@plumeline/contracts";
+import { PERIL_TABLE_SHEETS } from "../peril-profiles/peril-result-tables.js";
 import { neutraliseFormula } from "./neutralise-formula.js";
 import { resultTable, type Table, type TableCell } from "./result-tables.js";
 
@@ -163,10 +165,16 @@ export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunRe
   addManifest(workbook, manifest, result);
   const tag = manifest.exploratory ? "EXPLORATORY — " : "";
   for (const [table, name, note] of TABLE_SHEETS) addTableSheet(workbook, name, resultTable(result, table), `${tag}${note}`);
+  if (result.perils) for (const [table, name, note] of PERIL_TABLE_SHEETS) addTableSheet(workbook, name, resultTable(result, table), `${tag}${note}`);
   addInputs(workbook, model);
   const cautions = workbook.addWorksheet("Cautions");
   cautions.getColumn(1).width = 120;
   cautions.addRow(["Cautions — read before using these results"]).font = BOLD;
   for (const c of RESULT_CAUTIONS) cautions.addRow([neutraliseFormula(c)]);
+  if (result.perils) {
+    cautions.addRow([]);
+    cautions.addRow(["Peril lens — how the multipliers were applied"]).font = BOLD;
+    for (const rule of PERIL_RULES) cautions.addRow([neutraliseFormula(rule)]);
+  }
   return Buffer.from(await workbook.xlsx.writeBuffer());
 }
