@@ -1,0 +1,142 @@
+import ExcelJS from "exceljs";
+import { parse } from "csv-parse/sync";
+import type { RunResult } from "@plumeline/contracts";
+import { RESULT_CAUTIONS } from "@plumeline/contracts";
+import request from "supertest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { createSqlJobQueue } from "../../queue/sql-job-queue.js";
+import { signIn, type SignedInAgent } from "../../test-support/sign-in.js";
+import { createTestContext, type TestContext } from "../../test-support/test-context.js";
+import { EngineThread } from "../../workers/engine-thread-client.js";
+import { processNextRunJob } from "../../workers/process-run-job.js";
+import { createModelVersion } from "../model-versions/model-versions.service.js";
+import { createPathway } from "../pathways/pathways.service.js";
+import { testModelVersionBody, testPathwayBody } from "../runs/runs.fixtures.js";
+
+let t: TestContext;
+let analyst: SignedInAgent;
+let actuary: SignedInAgent;
+let admin: SignedInAgent;
+let runId: string;
+let result: RunResult;
+
+const binary = (res: request.Response, cb: (err: Error | null, body: Buffer) => void) => {
+  const chunks: Buffer[] = [];
+  res.on("data", (c: Buffer) => chunks.push(c));
+  res.on("end", () => cb(null, Buffer.concat(chunks)));
+};
+
+beforeAll(async () => {
+  t = await createTestContext();
+  [analyst, actuary, admin] = await Promise.all([signIn(t.app, "analyst"), signIn(t.app, "actuary"), signIn(t.app, "admin")]);
+  const row = (await t.ctx.models.User.findByPk(t.userIds.analyst))!;
+  const user = { id: row.id, email: row.email, name: row.name, role: row.role, mustChangePassword: false };
+  // A name a spreadsheet would run as a formula: it must come out as text.
+  const pathway = await createPathway(t.ctx, user, testPathwayBody('=HYPERLINK("http://evil.example","x")'));
+  const version = await createModelVersion(t.ctx, user, testModelVersionBody({ name: "@draft assumptions" }));
+  const res = await analyst.post("/api/runs").send({ modelVersionId: version.id, pathwayIds: [pathway.id], members: 300, seed: "export", sampling: "monte-carlo" });
+  runId = res.body.id;
+  const thread = new EngineThread("export-test");
+  try {
+    expect(await processNextRunJob(t.ctx, createSqlJobQueue(t.ctx.models.Job), "export-test", thread)).toBe("succeeded");
+  } finally {
+    await thread.terminate();
+  }
+  result = (await analyst.get(`/api/runs/${runId}/result`)).body;
+});
+afterAll(async () => t.close());
+
+describe("GET /api/runs/:id/workbook.xlsx", () => {
+  let workbook: ExcelJS.Workbook;
+
+  it("returns a workbook with the manifest first; its numbers equal the JSON result", async () => {
+    const res = await actuary.get(`/api/runs/${runId}/workbook.xlsx`).buffer(true).parse(binary);
+    expect(res.status).toBe(200);
+    expect(res.headers["content-disposition"]).toContain("EXPLORATORY");
+    workbook = new ExcelJS.Workbook();
+    await workbook.xlsx.load(res.body as unknown as ArrayBuffer);
+    expect(workbook.worksheets.map((w) => w.name)).toEqual([
+      "Manifest", "Temperature", "Horizons", "Exceedance", "Crossing years", "Sensitivity", "Forcing", "Imbalance", "Inputs", "Cautions",
+    ]);
+    const temperature = workbook.getWorksheet("Temperature")!;
+    const header = (temperature.getRow(2).values as unknown[]).slice(1);
+    expect(header).toEqual(["pathway_id", "pathway_name", "year", "p5", "p17", "p50", "p83", "p95", "mean"]);
+    const p = result.pathways[0]!;
+    for (const year of [1850, 2030, 2100]) {
+      const i = p.years.indexOf(year);
+      const row = temperature.getRow(3 + i).values as unknown[];
+      expect(row[3]).toBe(year);
+      expect(row.slice(4)).toEqual(["p5", "p17", "p50", "p83", "p95", "mean"].map((k) => p.temperature[k]![i]));
+    }
+    const horizons = workbook.getWorksheet("Horizons")!;
+    const h2100 = p.horizons.find((h) => h.year === 2100)!;
+    const hRow = horizons.getRow(3 + p.horizons.indexOf(h2100)).values as unknown[];
+    expect(hRow.slice(3, 9)).toEqual([2100, h2100.temperature.p5, h2100.temperature.p17, h2100.temperature.p50, h2100.temperature.p83, h2100.temperature.p95]);
+  });
+
+  it("states EXPLORATORY in bold on the manifest with the hashes, checksums and cautions", () => {
+    const manifest = workbook.getWorksheet("Manifest")!;
+    const status = manifest.getRow(1).getCell(2);
+    expect(String(status.value)).toMatch(/^EXPLORATORY/);
+    expect(status.font?.bold).toBe(true);
+    const values = manifest.getSheetValues().flat().map(String);
+    expect(values).toContain(result.resultHash);
+    expect(values).toContain(result.inputHash);
+    expect(values).toContain(result.engineVersion);
+    expect(values.some((v) => /^[0-9a-f]{64}$/.test(v))).toBe(true); // pathway checksum
+    const cautions = workbook.getWorksheet("Cautions")!.getSheetValues().flat().map(String);
+    for (const c of RESULT_CAUTIONS) expect(cautions).toContain(c);
+  });
+
+  it("neutralises text that a spreadsheet would run as a formula", () => {
+    // OWASP CSV-injection guidance: prefix = + - @ with an apostrophe so the cell stays text.
+    const temperature = workbook.getWorksheet("Temperature")!;
+    expect(temperature.getRow(3).getCell(2).value).toBe(`'=HYPERLINK("http://evil.example","x")`);
+    const manifestText = workbook.getWorksheet("Manifest")!.getSheetValues().flat().map(String);
+    expect(manifestText.some((v) => v.startsWith("'@draft assumptions"))).toBe(true);
+    expect(manifestText.some((v) => v.startsWith("=") || v.startsWith("@"))).toBe(false);
+  });
+
+  it("records the export (exports table + audit) and lists it", async () => {
+    const list = await actuary.get("/api/exports?mine=true");
+    expect(list.status).toBe(200);
+    expect(list.body[0]).toMatchObject({ runId, format: "xlsx", table: "workbook", exploratory: true, resultHash: result.resultHash });
+    expect(list.body[0].checksum).toMatch(/^[0-9a-f]{64}$/);
+    expect(await t.ctx.models.AuditEvent.count({ where: { action: "export.created", entityId: runId } })).toBe(1);
+  });
+
+  it("answers 401, 403 (admin lacks exports:create), 404 and 409", async () => {
+    expect((await request(t.app).get(`/api/runs/${runId}/workbook.xlsx`)).status).toBe(401);
+    const denied = await admin.get(`/api/runs/${runId}/workbook.xlsx`);
+    expect(denied.status).toBe(403);
+    expect(denied.body.error.message).toContain("exports:create");
+    expect((await actuary.get("/api/runs/missing/workbook.xlsx")).status).toBe(404);
+    expect((await request(t.app).get("/api/exports")).status).toBe(401);
+    expect((await actuary.get("/api/exports?mine=maybe")).status).toBe(400);
+  });
+});
+
+describe("GET /api/runs/:id/tables/:table.csv", () => {
+  it("writes each table as CSV whose numbers read back equal the JSON", async () => {
+    const res = await actuary.get(`/api/runs/${runId}/tables/exceedance.csv`);
+    expect(res.status).toBe(200);
+    expect(res.headers["content-type"]).toContain("text/csv");
+    const rows = parse(res.text, { columns: true }) as Array<Record<string, string>>;
+    const p = result.pathways[0]!;
+    const i = p.years.indexOf(2100);
+    expect(Number(rows[i]!.year)).toBe(2100);
+    expect(Number(rows[i]!.p_exceed_2K)).toBe(p.exceedance["2"]![i]);
+    expect(rows[0]!.pathway_name).toBe(`'=HYPERLINK("http://evil.example","x")`);
+    for (const table of ["temperature", "forcing", "imbalance", "horizons", "crossing", "sensitivity"])
+      expect((await actuary.get(`/api/runs/${runId}/tables/${table}.csv`)).status).toBe(200);
+    expect((await t.ctx.models.ExportRecord.count({ where: { runId, format: "csv" } }))).toBe(7);
+  });
+
+  it("answers 400 for an unknown table, 401 and 404", async () => {
+    const bad = await actuary.get(`/api/runs/${runId}/tables/losses.csv`);
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.details[0].path).toBe("table");
+    expect((await request(t.app).get(`/api/runs/${runId}/tables/temperature.csv`)).status).toBe(401);
+    expect((await actuary.get("/api/runs/missing/tables/temperature.csv")).status).toBe(404);
+  });
+});
