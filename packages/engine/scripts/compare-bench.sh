@@ -1,0 +1,33 @@
+#!/usr/bin/env bash
+# Times benchmark workload W1 (/work/shared/bench/W1.md) for the engine and both reference
+# programs in the same session, RUNS times each (interleaved, so machine load hits all three
+# alike), and prints the median total_s of each, the engine's ratios to the references, and
+# the check values. Usage: scripts/compare-bench.sh [MEMBERS=100000] [RUNS=3]
+set -euo pipefail
+MEMBERS="${1:-100000}"
+RUNS="${2:-3}"
+HERE="$(cd "$(dirname "$0")/.." && pwd)"
+BENCH_DIR="${BENCH_DIR:-/work/shared/bench}"
+C_BIN="$(mktemp -d)/ebm_ref"
+gcc -O3 -march=native -o "$C_BIN" "$BENCH_DIR/ebm_ref.c" -lm
+node "$HERE/bin/plumeline-engine.mjs" bench --members 1000 >/dev/null # builds dist if needed, warms caches
+OUT="$(mktemp)"
+for _ in $(seq "$RUNS"); do
+  node "$HERE/bin/plumeline-engine.mjs" bench --members "$MEMBERS" >>"$OUT"
+  "$C_BIN" "$MEMBERS" >>"$OUT"
+  python3 "$BENCH_DIR/ebm_ref.py" "$MEMBERS" >>"$OUT"
+done
+python3 - "$OUT" <<'PY'
+import json, statistics, sys
+rows = [json.loads(line) for line in open(sys.argv[1]) if line.strip()]
+by = {}
+for r in rows:
+    by.setdefault(r["impl"], []).append(r)
+med = {k: statistics.median(r["total_s"] for r in v) for k, v in by.items()}
+for k, v in by.items():
+    print(f"{k:14s} median total_s {med[k]:.4f}  runs {[r['total_s'] for r in v]}  check {v[0]['check']:.4f}")
+ts = med.get("plumeline-ts")
+if ts:
+    if "c-scalar" in med: print(f"plumeline-ts / c-scalar = {ts / med['c-scalar']:.3f}  (target ≤ 0.5)")
+    if "numpy" in med: print(f"plumeline-ts / numpy    = {ts / med['numpy']:.3f}  (target ≤ 0.25)")
+PY
