@@ -2,6 +2,7 @@ import { createBrowserRouter, type RouteObject } from "react-router-dom";
 import { paths, type RouteKey } from "@/config/paths";
 import { AppShell } from "./layout/app-shell";
 import { RouteErrorBoundary } from "./error-boundary";
+import { LoadingState } from "@/components/ui/states";
 
 type PageModule = Promise<{ default: React.ComponentType }>;
 
@@ -20,10 +21,12 @@ export const routes: RouteObject[] = [
     path: paths.signIn.path,
     lazy: async () => ({ Component: (await import("./routes/sign-in-page")).default }),
     errorElement: <RouteErrorBoundary />,
+    HydrateFallback: () => <LoadingState label="Loading…" />,
   },
   {
     element: <AppShell />,
     errorElement: <RouteErrorBoundary />,
+    HydrateFallback: () => <LoadingState label="Loading…" />,
     children: [
       {
         errorElement: <RouteErrorBoundary />,

@@ -97,6 +97,7 @@ export default function RunPage() {
                   runId={r.id}
                   exploratory={r.exploratory}
                   canWorkbook={can("exports:create")}
+                  hasPerils={r.perilProfileIds.length > 0}
                   onExported={() => queryClient.invalidateQueries({ queryKey: exportsRootKey })}
                 />
               </CardBody>

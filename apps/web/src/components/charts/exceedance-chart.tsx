@@ -12,8 +12,8 @@ export interface ExceedanceCurve {
   probability: number[];
 }
 
-/** Threshold colours step up the ember ramp: a hotter threshold reads as a deeper colour. */
-const THRESHOLD_COLORS = ["var(--pl-ember-400)", "var(--pl-ember-600)", "var(--pl-danger)", "var(--pl-ember-800)", "var(--pl-series-3)"];
+/** Threshold colours step from gold through ember to red: a hotter threshold reads as a hotter colour. */
+const THRESHOLD_COLORS = ["var(--pl-gold)", "var(--pl-ember-600)", "var(--pl-danger)", "var(--pl-ember-800)", "var(--pl-series-3)"];
 
 /**
  * Probability of exceeding each warming threshold, per year (0–100 %). Thresholds are

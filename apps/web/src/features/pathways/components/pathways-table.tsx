@@ -31,7 +31,11 @@ export function PathwaysTable({ pathways }: { pathways: PathwaySummary[] }) {
               )}
               {p.description && <p className="mt-0.5 line-clamp-1 text-xs text-muted">{p.description}</p>}
             </Td>
-            <Td className="max-w-64 text-muted">{p.source}</Td>
+            <Td className="max-w-80 text-xs text-muted">
+              <span className="line-clamp-3" title={p.source}>
+                {p.source}
+              </span>
+            </Td>
             <Td className="whitespace-nowrap">{p.vintage}</Td>
             <Td numeric className="whitespace-nowrap">
               {p.startYear}–{p.endYear}

@@ -7,7 +7,20 @@ import { tableCsvUrl, workbookUrl } from "../api/export-urls";
  * One-click workbook (manifest sheet first) and a CSV per table. Each download is recorded
  * by the server; `onExported` lets the page refresh the exports list afterwards.
  */
-export function ExportPanel({ runId, exploratory, canWorkbook, onExported }: { runId: string; exploratory: boolean; canWorkbook: boolean; onExported?: () => void }) {
+export function ExportPanel({
+  runId,
+  exploratory,
+  canWorkbook,
+  hasPerils,
+  onExported,
+}: {
+  runId: string;
+  exploratory: boolean;
+  canWorkbook: boolean;
+  /** Peril tables are offered only when the run applied the peril lens. */
+  hasPerils: boolean;
+  onExported?: () => void;
+}) {
   const later = () => window.setTimeout(() => onExported?.(), 1500);
   return (
     <div className="flex flex-col gap-3 text-sm">
@@ -29,7 +42,7 @@ export function ExportPanel({ runId, exploratory, canWorkbook, onExported }: { r
       <div>
         <p className="mb-1 text-xs font-medium uppercase tracking-wider text-muted">CSV tables</p>
         <div className="flex flex-wrap gap-1.5">
-          {RESULT_TABLES.map((t) => (
+          {RESULT_TABLES.filter((t) => hasPerils || !t.startsWith("peril")).map((t) => (
             <a key={t} href={tableCsvUrl(runId, t)} download className={buttonClass("secondary", "sm")} onClick={later}>
               {t}.csv
             </a>

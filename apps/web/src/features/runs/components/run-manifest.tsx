@@ -37,8 +37,9 @@ export function RunManifest({ run }: { run: Run }) {
               <Link to={paths.pathway.build(p.id)} className="font-medium text-accent hover:underline">
                 {p.name}
               </Link>{" "}
-              <span className="text-muted">
-                — {p.source}, {p.vintage}
+              <span className="text-muted">— {p.vintage}</span>
+              <span className="line-clamp-2 text-xs text-muted" title={p.source}>
+                {p.source}
               </span>
               <code className="num block truncate text-[11px] text-faint" title={p.checksum}>
                 {p.checksum}
