@@ -5,7 +5,7 @@ import { paths } from "@/config/paths";
 import { PERMISSION_HOLDERS, type Permission } from "@/config/permissions";
 import { onUnauthorized } from "@/lib/api-client";
 import { isApiError } from "@/lib/api-error";
-import { useMe } from "@/features/auth/api/get-me";
+import { getMeQueryOptions, useMe } from "@/features/auth/api/get-me";
 import { useSignOut } from "@/features/auth/api/sign-in";
 import { Logo } from "@/components/ui/logo";
 import { RoleBadge } from "@/components/ui/badges";
@@ -30,10 +30,12 @@ export function AppShell() {
   const signOut = useSignOut();
   const matches = useMatches();
 
-  // A 401 from any request means the session ended: back to sign-in, remembering where we were.
+  // A 401 after we had a session means it ended: back to sign-in, remembering where we were.
+  // (A visitor who never signed in is sent to sign-in below, without the "session ended" note.)
   useEffect(
     () =>
       onUnauthorized(() => {
+        if (!queryClient.getQueryData(getMeQueryOptions().queryKey)) return;
         queryClient.clear();
         navigate(paths.signIn.build(location.pathname + location.search, true), { replace: true });
       }),

@@ -11,6 +11,7 @@ import { ReplayPanel } from "@/features/runs/components/replay-panel";
 import { ResultView } from "@/features/runs/components/result-view";
 import { RunManifest } from "@/features/runs/components/run-manifest";
 import { RunProgress } from "@/features/runs/components/run-progress";
+import { RunPerilSection } from "@/features/peril/components/run-peril-section";
 import { ApprovedSeal, ExploratoryStamp } from "@/components/ui/badges";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
@@ -81,6 +82,7 @@ export default function RunPage() {
         ) : (
           <ResultView run={r} result={result.data} />
         ))}
+      {succeeded && result.data && <RunPerilSection run={r} result={result.data} />}
       <div className="mt-6 grid gap-6 xl:grid-cols-[2fr_1fr]">
         <Card>
           <CardHeader title="Manifest" subtitle="Everything needed to reproduce this run." />

@@ -1,0 +1,2 @@
+import { PortfolioDetailRoute } from "@/features/peril/routes/portfolio-detail";
+export default PortfolioDetailRoute;

@@ -1,0 +1,2 @@
+import { PortfolioUploadRoute } from "@/features/peril/routes/portfolio-upload";
+export default PortfolioUploadRoute;
