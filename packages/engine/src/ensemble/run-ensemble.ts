@@ -1,10 +1,12 @@
 import { RunCancelledError } from "../spec/spec-error.js";
+import type { PathwayPerilResult } from "../peril/types.js";
 import type { PathwayResult, PercentileSet, RunResult, RunSpec, RunSpecInput } from "../spec/types.js";
 import { advanceReportedYear } from "./advance-year.js";
 import { assembleResult } from "./assemble-result.js";
 import { finishPathway } from "./finish-pathway.js";
 import { impliedSensitivities } from "./implied-sensitivity.js";
 import { firstPassYears, horizonsByYear, resetForReporting, runBaselinePass } from "./pathway-passes.js";
+import { pathwayPerils, runPerils } from "./pathway-perils.js";
 import { weighPathway } from "./pathway-weights.js";
 import { preparePlan } from "./prepare-plan.js";
 import { YearSummariser } from "./summarise-year.js";
@@ -54,6 +56,7 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
     options.onProgress?.(done / totalYears);
   };
   const pathways: PathwayResult[] = [];
+  const perils: (PathwayPerilResult | null)[] = [];
   let implied: { ecs: PercentileSet; tcr: PercentileSet } | null = null;
   const inputRanks = new Map<number, Float64Array>();
   const summariser = new YearSummariser(plan);
@@ -72,11 +75,12 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
       tick();
     }
     pathways.push(finishPathway(spec, plan, p, weighting, inputRanks));
+    perils.push(pathwayPerils(spec, plan, p, weighting));
     if (p === 0) implied = impliedSensitivities(plan, spec.percentiles, weighting);
     lap("finish");
   });
   options.onProgress?.(1);
-  const result = assembleResult(spec, pathways, implied!);
+  const result = assembleResult(spec, pathways, implied!, runPerils(spec, perils));
   lap("finish");
   return result;
 }

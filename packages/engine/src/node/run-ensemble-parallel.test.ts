@@ -4,17 +4,30 @@ import { baseSpec, rampPathway } from "../ensemble/test-support/specs.js";
 import { runEnsembleParallel } from "./run-ensemble-parallel.js";
 
 describe("runEnsembleParallel", () => {
-  it("gives results bit-identical to one thread, with and without a constraint", async () => {
-    // Two pathways, a constraint (weighted summaries) and an odd member count split over 2 and 3 threads.
+  it("gives results bit-identical to one thread, with and without a constraint, peril lens included", async () => {
+    // Two pathways, a constraint (weighted summaries), a peril profile per pathway's horizons
+    // and an odd member count split over 2 and 3 threads.
     const spec = baseSpec({
       members: 2_001,
       pathways: [rampPathway("a"), rampPathway("b", 1800, 301)],
+      perils: [
+        {
+          id: "flood",
+          name: "Flood",
+          peril: "flood-heavy-rainfall",
+          region: "Test Region",
+          metric: "frequency",
+          baselineWarming: 1.1,
+          scaling: { kind: "per-kelvin", rate: { type: "normal", mean: 0.07, sd: 0.01 } },
+        },
+      ],
       model: { ...baseSpec().model, constraint: { from: 2011, to: 2020, observed: 1.0, sd: 0.1 } },
     });
     const single = runEnsemble(spec);
     const two = await runEnsembleParallel(spec, { threads: 2 });
     expect(two).toEqual(single);
     expect(two.resultHash).toBe(single.resultHash);
+    expect(two.perils!.pathways).toHaveLength(2);
     const unconstrained = { ...spec, model: { ...spec.model, constraint: null } };
     const three = await runEnsembleParallel(unconstrained, { threads: 3 });
     expect(three.resultHash).toBe(runEnsemble(unconstrained).resultHash);

@@ -5,9 +5,11 @@ import type { EnsemblePlan } from "../ensemble/ensemble-plan.js";
 import { finishPathway } from "../ensemble/finish-pathway.js";
 import { impliedSensitivities } from "../ensemble/implied-sensitivity.js";
 import { firstPassYears, horizonsByYear } from "../ensemble/pathway-passes.js";
+import { pathwayPerils, runPerils } from "../ensemble/pathway-perils.js";
 import { weighPathway } from "../ensemble/pathway-weights.js";
 import { preparePlan } from "../ensemble/prepare-plan.js";
 import { runEnsemble, type StageTimes } from "../ensemble/run-ensemble.js";
+import type { PathwayPerilResult } from "../peril/types.js";
 import { RunCancelledError } from "../spec/spec-error.js";
 import type { PathwayResult, PercentileSet, RunResult, RunSpec, RunSpecInput } from "../spec/types.js";
 import { CANCEL_FLAG, createPipelineControl, type PipelineControl } from "./pipeline-control.js";
@@ -84,6 +86,7 @@ async function runWithPool(spec: RunSpec, plan: EnsemblePlan, pool: WorkerPool, 
       hi: Math.floor((n * (w + 1)) / count),
     }));
     const pathways: PathwayResult[] = [];
+    const perils: (PathwayPerilResult | null)[] = [];
     let implied: { ecs: PercentileSet; tcr: PercentileSet } | null = null;
     const inputRanks = new Map<number, Float64Array>();
     const times = options.stageTimes;
@@ -113,12 +116,13 @@ async function runWithPool(spec: RunSpec, plan: EnsemblePlan, pool: WorkerPool, 
       finishedYears += plan.pathways[p]!.years;
       control.summarised.fill(0);
       pathways.push(finishPathway(spec, plan, p, weighting, inputRanks));
+      perils.push(pathwayPerils(spec, plan, p, weighting));
       if (p === 0) implied = impliedSensitivities(plan, spec.percentiles, weighting);
       if (times) times.finish += (performance.now() - finishStart) / 1000;
     }
     options.onProgress?.(1);
     const finishStart = performance.now();
-    const result = assembleResult(spec, pathways, implied!);
+    const result = assembleResult(spec, pathways, implied!, runPerils(spec, perils));
     if (times) times.finish += (performance.now() - finishStart) / 1000;
     return result;
   } finally {

@@ -4,11 +4,13 @@ import type { RunSpec, RunSpecInput } from "./types.js";
  * The spec with every default filled in, as DESIGN.md states them: baseline 1850–1900,
  * percentiles 5/17/50/83/95, thresholds 1.5/2/3 K, horizons 2030/2050/2100, no
  * correlations, no constraint, the AR6 concentration expression. The input hash is taken
- * of this form, so writing a default out or leaving it out gives the same hash.
+ * of this form, so writing a default out or leaving it out gives the same hash. The peril
+ * lens parts (`perils`, `portfolio`) are copied only when given, so specs without them keep
+ * the hashes they had before the lens existed; when given they are part of the hash.
  */
 export function applyDefaults(input: RunSpecInput | RunSpec): RunSpec {
   const model = input.model;
-  return {
+  const spec: RunSpec = {
     seed: input.seed,
     members: input.members,
     sampling: input.sampling,
@@ -25,4 +27,7 @@ export function applyDefaults(input: RunSpecInput | RunSpec): RunSpec {
       forcingExpression: model.forcingExpression ?? "ar6",
     },
   };
+  if (input.perils !== undefined) spec.perils = input.perils;
+  if (input.portfolio !== undefined && input.portfolio !== null) spec.portfolio = input.portfolio;
+  return spec;
 }

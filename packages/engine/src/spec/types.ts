@@ -3,6 +3,7 @@
  * (packages/contracts/src/engine) field for field, but the engine library imports nothing
  * of ours, so the shapes are restated here. DESIGN.md "Engine contract" fixes the names.
  */
+import type { PerilProfile, PerilResult, Portfolio } from "../peril/types.js";
 
 /** One uncertain input. Units follow the input it describes. */
 export type Distribution =
@@ -96,6 +97,10 @@ export interface RunSpec {
   horizons: number[];
   pathways: PathwaySpec[];
   model: ModelSpec;
+  /** Peril lens (peril/): profiles applied at the horizons; absent when none are asked for. */
+  perils?: PerilProfile[];
+  /** Portfolio baseline the profiles project; only with perils. */
+  portfolio?: Portfolio;
 }
 
 /** A run spec as a user may write it: the optional parts may be left out. */
@@ -104,6 +109,8 @@ export type RunSpecInput = Omit<RunSpec, "baseline" | "percentiles" | "threshold
   percentiles?: number[];
   thresholds?: number[];
   horizons?: number[];
+  perils?: PerilProfile[];
+  portfolio?: Portfolio;
   model: Omit<ModelSpec, "agents" | "correlations" | "constraint" | "forcingExpression"> & {
     agents?: ModelSpec["agents"];
     correlations?: Correlation[];
@@ -169,4 +176,6 @@ export interface RunResult {
   effectiveMembers: number;
   implied: { ecs: PercentileSet; tcr: PercentileSet };
   pathways: PathwayResult[];
+  /** Peril lens results; present only when the spec carried at least one peril profile. */
+  perils?: PerilResult;
 }

@@ -1,4 +1,5 @@
 import { validateDistribution } from "../distributions/index.js";
+import { validatePerilInputs } from "../peril/validate-peril-inputs.js";
 import { MAX_MEMBERS, MAX_PATHWAY_YEARS } from "./limits.js";
 import { SpecError } from "./spec-error.js";
 import {
@@ -47,6 +48,7 @@ export function validateSpec(spec: RunSpec): void {
     ids.add(pathway.id);
     validatePathwayYears(spec, i, validatePathwaySeries(spec, i));
   });
+  validatePerilInputs(spec.perils, spec.portfolio, spec.baseline);
 }
 
 export function validateMembers(members: number): void {
