@@ -60,6 +60,10 @@ export const paths = {
   run: route({ path: "/runs/:runId", build: (id: string) => `/runs/${id}`, permission: "runs:read", purpose: "Reading runs" }),
 
   perils: route({ path: "/peril-lens", build: () => "/peril-lens", permission: "perils:read", purpose: "The peril lens" }),
+  perilProfileNew: route({ path: "/peril-lens/profiles/new", build: () => "/peril-lens/profiles/new", permission: "perils:write", purpose: "Writing peril profiles" }),
+  perilProfile: route({ path: "/peril-lens/profiles/:profileId", build: (id: string) => `/peril-lens/profiles/${id}`, permission: "perils:read", purpose: "The peril lens" }),
+  portfolioUpload: route({ path: "/peril-lens/portfolios/upload", build: () => "/peril-lens/portfolios/upload", permission: "perils:write", purpose: "Uploading portfolios" }),
+  portfolio: route({ path: "/peril-lens/portfolios/:portfolioId", build: (id: string) => `/peril-lens/portfolios/${id}`, permission: "perils:read", purpose: "The peril lens" }),
 
   exports: route({ path: "/exports", build: () => "/exports", permission: "runs:read", purpose: "Reading exports" }),
 

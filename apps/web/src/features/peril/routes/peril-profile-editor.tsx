@@ -1,0 +1,152 @@
+import { useMemo, useState } from "react";
+import { useNavigate, useParams } from "react-router-dom";
+import type { PerilProfileBody, PerilProfileRecord } from "@plumeline/contracts";
+import { paths } from "@/config/paths";
+import { Button, ButtonLink } from "@/components/ui/button";
+import { Card, CardBody, CardHeader } from "@/components/ui/card";
+import { PageHeader } from "@/components/ui/page-header";
+import { PanelErrorBoundary } from "@/components/ui/panel-error-boundary";
+import { ErrorState, InlineError, LoadingState, Spinner } from "@/components/ui/states";
+import { isApiError } from "@/lib/api-error";
+import { usePerilCurvePreview } from "../api/get-peril-curve";
+import { usePerilProfile } from "../api/get-peril-profile";
+import { useCopyPerilProfile, useCreatePerilProfile, useDeletePerilProfile, useUpdatePerilProfile } from "../api/save-peril-profile";
+import { PerilCurveChart } from "../components/peril-curve-chart";
+import { PerilProfileForm } from "../components/peril-profile-form";
+import { draftFromRecord, emptyDraft, toProfileBody, type ProfileDraft } from "../lib/profile-draft";
+import { useDebouncedValue } from "../lib/use-debounced-value";
+import type { PerilViewer } from "./viewer";
+
+/** Server messages keyed by field path, with the preview's "profile." prefix removed. */
+function fieldMessages(error: unknown, prefix = ""): Record<string, string> {
+  if (!isApiError(error)) return {};
+  const out: Record<string, string> = {};
+  for (const [path, message] of Object.entries(error.fieldMessages())) out[path.startsWith(prefix) ? path.slice(prefix.length) : path] = message;
+  return out;
+}
+
+/** The draft as the preview sends it: blank name and region filled in, so the curve shows from the first keystroke. */
+function previewBody(body: PerilProfileBody | null): PerilProfileBody | null {
+  if (!body) return null;
+  return { ...body, name: body.name.trim() || "Draft", region: body.region.trim() || "Draft" };
+}
+
+function lockReason(p: PerilProfileRecord): string {
+  const versions = p.lockedBy.modelVersions.map((v) => `${v.status} model version “${v.name}” v${v.versionNumber}`);
+  const runs = p.lockedBy.runIds.length ? [`${p.lockedBy.runIds.length} run${p.lockedBy.runIds.length === 1 ? "" : "s"}`] : [];
+  return [...versions, ...runs].join(" and ");
+}
+
+function Editor({ record, viewer }: { record: PerilProfileRecord | undefined; viewer: PerilViewer }) {
+  const navigate = useNavigate();
+  const [draft, setDraft] = useState<ProfileDraft>(() => (record ? draftFromRecord(record) : emptyDraft()));
+  const settled = useDebouncedValue(draft);
+  const parsed = useMemo(() => toProfileBody(settled), [settled]);
+  const curve = usePerilCurvePreview(previewBody(parsed.body));
+  const create = useCreatePerilProfile();
+  const update = useUpdatePerilProfile();
+  const copy = useCopyPerilProfile();
+  const remove = useDeletePerilProfile();
+
+  const owner = !record || record.createdBy === viewer.userId;
+  const readOnly = !viewer.canWrite || Boolean(record?.locked) || !owner;
+  const saveError = create.error ?? update.error;
+  const errors = { ...fieldMessages(curve.error, "profile."), ...fieldMessages(saveError), ...(toProfileBody(draft).errors ?? {}) };
+  if (draft.name.trim() !== "" || !saveError) delete errors.name;
+  if (!saveError) delete errors.region;
+
+  async function save() {
+    const out = toProfileBody(draft);
+    if (!out.body) return;
+    const saved = record ? await update.mutateAsync({ id: record.id, body: out.body }) : await create.mutateAsync(out.body);
+    navigate(paths.perilProfile.build(saved.id), { replace: !record });
+  }
+  async function copyIt() {
+    if (!record) return;
+    const created = await copy.mutateAsync({ id: record.id });
+    navigate(paths.perilProfile.build(created.id));
+  }
+  async function deleteIt() {
+    if (!record || !window.confirm(`Delete the peril profile “${record.name}”?`)) return;
+    await remove.mutateAsync(record.id);
+    navigate(paths.perils.build());
+  }
+
+  return (
+    <>
+      <PageHeader
+        kicker="Peril lens · profile"
+        title={record ? record.name : "New peril profile"}
+        description="How a hazard or loss metric scales with global warming beyond what the firm's risk view already holds."
+        actions={
+          <>
+            <ButtonLink to={paths.perils.build()} variant="secondary">
+              Back to the peril lens
+            </ButtonLink>
+            {record && viewer.canWrite && (
+              <Button variant="secondary" onClick={copyIt} disabled={copy.isPending}>
+                Copy
+              </Button>
+            )}
+            {record && owner && viewer.canWrite && !record.locked && (
+              <Button variant="danger" onClick={deleteIt} disabled={remove.isPending}>
+                Delete
+              </Button>
+            )}
+          </>
+        }
+      />
+      {record?.locked && (
+        <p role="status" className="mb-4 rounded-md border border-line-strong bg-surface-2 px-4 py-2 text-sm">
+          Locked: used by {lockReason(record)}. It stays as it is so those records can be reproduced; copy it to make changes.
+        </p>
+      )}
+      {record && !record.locked && !owner && viewer.canWrite && (
+        <p role="status" className="mb-4 rounded-md border border-line bg-surface-2 px-4 py-2 text-sm">
+          Made by {record.createdByName ?? "someone else"}: only they can edit it. Copy it to make your own.
+        </p>
+      )}
+      <InlineError error={copy.error ?? remove.error} />
+      <div className="grid gap-6 xl:grid-cols-[1fr_1fr]">
+        <Card>
+          <CardHeader title="Profile" />
+          <CardBody>
+            <PerilProfileForm draft={draft} onChange={setDraft} errors={errors} readOnly={readOnly} />
+            {!readOnly && (
+              <div className="mt-4 flex items-center gap-3">
+                <Button onClick={save} disabled={create.isPending || update.isPending || toProfileBody(draft).body === null}>
+                  {record ? "Save changes" : "Create profile"}
+                </Button>
+                {saveError && <InlineError error={saveError} />}
+              </div>
+            )}
+          </CardBody>
+        </Card>
+        <Card>
+          <CardHeader title="Preview" subtitle="Multiplier against warming; the marker is the warming already in the risk view." actions={curve.isFetching ? <Spinner /> : null} />
+          <CardBody>
+            <PanelErrorBoundary resetKey={JSON.stringify(settled)}>
+              {curve.data ? (
+                <PerilCurveChart curve={curve.data} />
+              ) : curve.isError ? (
+                <ErrorState error={curve.error} title="The preview needs a valid profile" />
+              ) : (
+                <LoadingState label="Drawing the curve…" />
+              )}
+            </PanelErrorBoundary>
+            {curve.data && curve.isError && <p className="mt-2 text-xs text-danger">The curve shows the last valid draft; fix the marked fields.</p>}
+          </CardBody>
+        </Card>
+      </div>
+    </>
+  );
+}
+
+/** New profile (no id in the URL) or an existing one: editable by its creator while unlocked. */
+export function PerilProfileEditorRoute({ viewer }: { viewer: PerilViewer }) {
+  const { profileId } = useParams();
+  const existing = usePerilProfile(profileId);
+  if (profileId && existing.isPending) return <LoadingState label="Loading profile…" />;
+  if (profileId && existing.isError) return <ErrorState error={existing.error} retry={() => existing.refetch()} />;
+  return <Editor key={profileId ?? "new"} record={existing.data} viewer={viewer} />;
+}
