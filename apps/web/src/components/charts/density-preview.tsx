@@ -54,7 +54,7 @@ export function DensityPreview({
             {t}
           </text>
         ))}
-        <text x={iw} y={ih + 13} textAnchor="end" className="fill-faint text-[10px]">
+        <text x={iw} y={4} textAnchor="end" className="fill-faint text-[10px]">
           {unit}
         </text>
       </g>

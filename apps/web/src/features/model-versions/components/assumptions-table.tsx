@@ -36,7 +36,7 @@ export function AssumptionsTable({ model }: { model: ModelSpec }) {
             <Td className="whitespace-nowrap">
               {inputLabel(key)} <span className="text-xs text-muted">({unit})</span>
             </Td>
-            <Td className="text-xs text-muted">{describe(d)}</Td>
+            <Td className="min-w-56 text-xs text-muted">{describe(d)}</Td>
             {percentileValues(d).map((v) => (
               <Td key={v.p} numeric className={v.p === 50 ? "font-semibold" : undefined}>
                 {Math.abs(v.value) >= 100 ? v.value.toFixed(1) : v.value.toFixed(3)}

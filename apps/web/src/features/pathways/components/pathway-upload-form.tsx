@@ -106,7 +106,7 @@ export function PathwayUploadForm({ onSaved }: { onSaved: (p: Pathway) => void }
             <thead>
               <tr>
                 {Object.keys(result.rows[0] ?? {}).map((k) => (
-                  <Th key={k} numeric={k !== "year"}>
+                  <Th key={k} numeric={k !== "year"} className="normal-case tracking-normal">
                     {k}
                   </Th>
                 ))}
@@ -116,7 +116,7 @@ export function PathwayUploadForm({ onSaved }: { onSaved: (p: Pathway) => void }
               {result.rows.map((row, i) => (
                 <tr key={i}>
                   {Object.entries(row).map(([k, v]) => (
-                    <Td key={k} numeric>
+                    <Td key={k} numeric className={k === "year" ? "text-left" : undefined}>
                       {k === "year" ? v : v.toFixed(3)}
                     </Td>
                   ))}
