@@ -1,7 +1,12 @@
 import { demoPortfolioCsv } from "@plumeline/seeds";
+import ExcelJS from "exceljs";
+import { parse } from "csv-parse/sync";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { signIn, type SignedInAgent } from "../../test-support/sign-in.js";
 import { createTestContext, type TestContext } from "../../test-support/test-context.js";
+import { createSqlJobQueue } from "../../queue/sql-job-queue.js";
+import { EngineThread } from "../../workers/engine-thread-client.js";
+import { processNextRunJob } from "../../workers/process-run-job.js";
 import { testModelVersionBody, testPathwayBody } from "../runs/runs.fixtures.js";
 
 let t: TestContext;
@@ -74,5 +79,57 @@ describe("runs with the peril lens", () => {
     expect(alone.body.error.details).toEqual([{ path: "portfolioId", message: expect.stringContaining("at least one peril profile") }]);
     expect(await t.ctx.models.Run.count()).toBe(before);
     expect((await actuary.get(`/api/peril-profiles/${profile.id}`)).body.locked).toBe(false);
+  });
+});
+
+describe("a finished run with the peril lens (worker step, result, CSV, workbook, replay)", () => {
+  it("returns the perils block, exports it as CSV and workbook sheets equal to the JSON, and replays to the same hash", async () => {
+    const profile = (await actuary.post("/api/peril-profiles").send({ ...flood, name: "Flood e2e" })).body;
+    // Only this run in the queue: earlier tests' runs are cancelled first.
+    for (const run of await t.ctx.models.Run.findAll({ where: { status: "queued" } })) await actuary.post(`/api/runs/${run.id}/cancel`);
+    const created = await actuary.post("/api/runs").send(runBody({ perilProfileIds: [profile.id], portfolioId, members: 60, seed: "peril-e2e" }));
+    expect(created.status).toBe(201);
+    const thread = new EngineThread("peril-e2e");
+    try {
+      expect(await processNextRunJob(t.ctx, createSqlJobQueue(t.ctx.models.Job), "peril-test", thread, { progressWriteMs: 20 })).toBe("succeeded");
+    } finally {
+      await thread.terminate();
+    }
+    const result = (await actuary.get(`/api/runs/${created.body.id}/result`)).body;
+    expect(result.perils.portfolioId).toBe(portfolioId);
+    // The demo file has five rows; one profile (flood, Northmere Coast) projects one of them.
+    expect(result.perils.unmatchedRows).toHaveLength(4);
+    const flood2100 = result.perils.pathways[0].profiles[0].horizons.find((h: { year: number }) => h.year === 2100);
+    expect(flood2100.losses[0]).toMatchObject({ region: "Northmere Coast", peril: "flood-heavy-rainfall", currency: "EUR" });
+    // Fixed 7 %/K: each member's multiplier is 1.07^(its warming − 1.1), a monotone map, so the median multiplier is
+    // 1.07^(median warming − 1.1) up to R-7's interpolation between the two middle members (60 members).
+    const t2100 = result.pathways[0].horizons.find((h: { year: number }) => h.year === 2100).temperature.p50;
+    expect(flood2100.multiplier.p50 / 1.07 ** (t2100 - 1.1) - 1).toBeLessThan(1e-3);
+    expect(flood2100.multiplier.p50 / 1.07 ** (t2100 - 1.1) - 1).toBeGreaterThan(-1e-3);
+
+    const csv = await actuary.get(`/api/runs/${created.body.id}/tables/peril-losses.csv`);
+    expect(csv.status).toBe(200);
+    const rows = parse(csv.text, { columns: true }) as Array<Record<string, string>>;
+    const aal2100 = rows.find((r) => r.year === "2100" && r.measure === "aal")!;
+    expect(Number(aal2100.loss_p50)).toBe(flood2100.losses[0].aal.p50);
+
+    const xlsx = await actuary.get(`/api/runs/${created.body.id}/workbook.xlsx`).buffer(true).parse((res, cb) => {
+      const chunks: Buffer[] = [];
+      res.on("data", (c: Buffer) => chunks.push(c));
+      res.on("end", () => cb(null, Buffer.concat(chunks)));
+    });
+    expect(xlsx.status).toBe(200);
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.load(xlsx.body as ArrayBuffer);
+    const sheet = wb.getWorksheet("Peril multipliers")!;
+    const header = (sheet.getRow(2).values as unknown[]).slice(1) as string[];
+    const row2100 = sheet.getRows(3, sheet.rowCount - 2)!.find((r) => r.getCell(header.indexOf("year") + 1).value === 2100)!;
+    expect(row2100.getCell(header.indexOf("multiplier_p50") + 1).value).toBe(flood2100.multiplier.p50);
+    expect(wb.getWorksheet("Projected losses")).toBeDefined();
+    expect(wb.getWorksheet("Return periods")).toBeDefined();
+
+    const replay = await actuary.post(`/api/runs/${created.body.id}/replay`);
+    expect(replay.status).toBe(200);
+    expect(replay.body.matched).toBe(true);
   });
 });
