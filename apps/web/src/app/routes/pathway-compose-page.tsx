@@ -15,6 +15,11 @@ const EMPTY = {
   agents: { co2: { erf: [0, 0.01, 0.02] } },
 };
 
+/** Pretty JSON with each series on one line, so a 350-year pathway stays readable and editable. */
+function compactJson(value: unknown): string {
+  return JSON.stringify(value, null, 2).replace(/\[\s*(-?[\d.e+-]+(?:,\s*-?[\d.e+-]+)*)\s*\]/g, (_, nums: string) => `[${nums.split(/,\s*/).join(", ")}]`);
+}
+
 export default function PathwayComposePage() {
   const [params] = useSearchParams();
   const fromId = params.get("from") ?? undefined;
@@ -22,12 +27,15 @@ export default function PathwayComposePage() {
   const navigate = useNavigate();
   const body =
     fromId && from.data
-      ? JSON.stringify(
-          { name: `${from.data.name} (variant)`, description: from.data.description, source: from.data.source, vintage: from.data.vintage, startYear: from.data.startYear, agents: from.data.agents },
-          null,
-          1,
-        )
-      : JSON.stringify(EMPTY, null, 1);
+      ? compactJson({
+          name: `${from.data.name} (variant)`,
+          description: from.data.description,
+          source: from.data.source,
+          vintage: from.data.vintage,
+          startYear: from.data.startYear,
+          agents: from.data.agents,
+        })
+      : compactJson(EMPTY);
   return (
     <>
       <PageHeader

@@ -27,8 +27,8 @@ export function CompareView({ a, b, fromYear = 1850 }: { a: CompareSide; b: Comp
   const common = pa.horizons.map((h) => h.year).filter((y) => pb.horizons.some((h) => h.year === y));
   const strips: PercentileStrip[] = common.flatMap((year) =>
     [
-      { side: "a", label: a.label, p: pa, color: seriesColor(0) },
-      { side: "b", label: b.label, p: pb, color: seriesColor(1) },
+      { side: "a", label: "left", p: pa, color: seriesColor(0) },
+      { side: "b", label: "right", p: pb, color: seriesColor(1) },
     ].map(({ side, label, p, color }) => {
       const t = p.horizons.find((h) => h.year === year)!.temperature;
       return { id: `${year}-${side}`, label: `${year} · ${label}`, p5: t.p5!, p17: t.p17!, p50: t.p50!, p83: t.p83!, p95: t.p95!, color };
@@ -42,7 +42,14 @@ export function CompareView({ a, b, fromYear = 1850 }: { a: CompareSide; b: Comp
         ))}
       </div>
       <FanChart title="Both on one chart" series={[sa, sb]} yLabel="Warming above baseline (K)" unit="K" fromYear={fromYear} toYear={toYear} yDomain={shared} height={340} />
-      {strips.length > 0 && <PercentileStrips title="Warming at the shared horizons" strips={strips} axisLabel="Warming above baseline (K)" />}
+      {strips.length > 0 && (
+        <PercentileStrips
+          title="Warming at the shared horizons"
+          description={`Left: ${sa.name}. Right: ${sb.name}.`}
+          strips={strips}
+          axisLabel="Warming above baseline (K)"
+        />
+      )}
     </div>
   );
 }
