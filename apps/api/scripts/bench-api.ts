@@ -122,12 +122,15 @@ async function main() {
     listMaxMs: Number((sorted[sorted.length - 1] ?? NaN).toFixed(1)),
     listP95TargetMs: 100,
     sameResultHash: cliHash === run.body.manifest.resultHash,
+    // The machine may be shared: the 1-minute load average says how busy it was.
+    loadAverage: Number(os.loadavg()[0]!.toFixed(2)),
+    cores: os.availableParallelism(),
   };
   console.log(
     `API: ${members} members x ${three.length} pathways, request -> result stored ${report.apiSeconds} s; ` +
       `engine CLI same spec ${report.cliSeconds} s; ratio ${report.ratio} (target <= 1.5)\n` +
       `GET /api/runs while running: ${report.listSamples} requests, p50 ${report.listP50Ms} ms, p95 ${report.listP95Ms} ms, max ${report.listMaxMs} ms (target p95 < 100 ms)\n` +
-      `result hash API == CLI: ${report.sameResultHash}`,
+      `result hash API == CLI: ${report.sameResultHash}; load average ${report.loadAverage} on ${report.cores} cores`,
   );
   console.log(JSON.stringify(report));
 }

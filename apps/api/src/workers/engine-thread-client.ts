@@ -5,7 +5,7 @@ import { Worker } from "node:worker_threads";
 import type { RunResult, RunSpec } from "@plumeline/contracts";
 import type { FromEngineThread } from "./engine-thread-protocol.js";
 
-export type EngineOutcome = { kind: "done"; result: RunResult } | { kind: "cancelled" } | { kind: "failed"; message: string };
+export type EngineOutcome = { kind: "done"; result: RunResult; contractWarning?: string } | { kind: "cancelled" } | { kind: "failed"; message: string };
 
 /** Thrown when the thread itself dies (crash, out of memory, terminated): the job may be retried. */
 export class EngineThreadCrashed extends Error {
@@ -77,7 +77,8 @@ export class EngineThread {
     if (!busy) return;
     if (message.type === "progress") return busy.onProgress(message.fraction);
     this.busy = null;
-    if (message.type === "done") busy.settle({ kind: "done", result: message.result });
+    if (message.type === "done")
+      busy.settle({ kind: "done", result: message.result, ...(message.contractWarning ? { contractWarning: message.contractWarning } : {}) });
     else if (message.type === "cancelled") busy.settle({ kind: "cancelled" });
     else busy.settle({ kind: "failed", message: message.message });
   }

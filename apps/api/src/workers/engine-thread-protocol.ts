@@ -10,7 +10,8 @@ export type ToEngineThread = {
 
 export type FromEngineThread =
   | { type: "progress"; fraction: number }
-  | { type: "done"; result: RunResult }
+  /** `contractWarning`: where the result deviates from the contracts schema (checked here, off the server thread). */
+  | { type: "done"; result: RunResult; contractWarning?: string }
   | { type: "cancelled" }
   /** The engine refused or failed on this spec: deterministic, so not worth a retry. */
   | { type: "failed"; message: string };

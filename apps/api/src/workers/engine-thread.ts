@@ -7,7 +7,7 @@
  * engine as an AbortSignal, which it checks between simulated years.
  */
 import { parentPort } from "node:worker_threads";
-import type { RunResult } from "@plumeline/contracts";
+import { runResultSchema, type RunResult } from "@plumeline/contracts";
 import { runEnsembleParallel } from "@plumeline/engine/node";
 import type { FromEngineThread, ToEngineThread } from "./engine-thread-protocol.js";
 
@@ -15,6 +15,7 @@ const PROGRESS_EVERY_MS = 200;
 const CANCEL_POLL_MS = 50;
 
 if (!parentPort) throw new Error("engine-thread.ts must run as a worker thread");
+
 const port = parentPort;
 const post = (message: FromEngineThread) => port.postMessage(message);
 
@@ -41,8 +42,15 @@ async function run(message: ToEngineThread): Promise<void> {
         post({ type: "progress", fraction: Math.min(1, Math.max(0, fraction)) });
       },
     });
-    // The engine's own RunResult type is the contract's shape; the worker re-checks it on arrival.
-    post(cancelled() ? { type: "cancelled" } : { type: "done", result: result as unknown as RunResult });
+    if (cancelled()) return post({ type: "cancelled" });
+    // Checked against the contracts schema here, so a large result never stalls the server thread.
+    const checked = runResultSchema.safeParse(result);
+    const issue = checked.success ? null : checked.error.issues[0];
+    post({
+      type: "done",
+      result: result as unknown as RunResult,
+      ...(issue ? { contractWarning: `${issue.path.join(".")}: ${issue.message}` } : {}),
+    });
   } catch (error) {
     if (cancelled()) post({ type: "cancelled" });
     else post({ type: "failed", message: error instanceof Error ? error.message : String(error) });

@@ -2,8 +2,8 @@ import type { RunResult } from "@plumeline/contracts";
 import type { Transaction } from "sequelize";
 import type { Models } from "../../db/models.js";
 
-/** Rows per INSERT: keeps each statement small enough for SQLite and quick to build. */
-const CHUNK = 2000;
+/** Rows per INSERT: small statements, so the server thread gets turns between them. */
+const CHUNK = 500;
 
 export interface ResultRowInput {
   runId: string;
