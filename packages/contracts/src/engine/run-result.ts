@@ -13,8 +13,11 @@ export type PercentileSet = z.infer<typeof percentileSetSchema>;
 export const percentileSeriesSchema = z.record(z.string(), z.array(z.number()));
 export type PercentileSeries = z.infer<typeof percentileSeriesSchema>;
 
-/** Distribution-free 95 % interval for each reported percentile (order statistics, CHECKS.md §7.3). */
-export const precisionSchema = z.record(z.string(), z.tuple([z.number(), z.number()]));
+/**
+ * Distribution-free 95 % interval for each reported percentile (order statistics, CHECKS.md §7.3);
+ * null when the ensemble is too small for such an interval to exist.
+ */
+export const precisionSchema = z.record(z.string(), z.tuple([z.number(), z.number()]).nullable());
 
 export const crossingSchema = z.record(
   z.string(),
