@@ -1,7 +1,11 @@
+import { useState } from "react";
 import { useNavigate, useSearchParams } from "react-router-dom";
 import { paths } from "@/config/paths";
 import { useModelVersions } from "@/features/model-versions/api/get-model-versions";
 import { usePathways } from "@/features/pathways/api/get-pathways";
+import { usePerilProfiles } from "@/features/peril/api/get-peril-profiles";
+import { usePortfolios } from "@/features/peril/api/get-portfolios";
+import { PerilRunPicker, type PerilRunChoice } from "@/features/peril/components/peril-run-picker";
 import { RunForm } from "@/features/runs/components/run-form";
 import { Card, CardBody } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
@@ -14,6 +18,9 @@ export default function RunNewPage() {
   const versions = useModelVersions();
   const pathways = usePathways();
   const usable = versions.data?.filter((v) => v.status !== "rejected" && v.status !== "retired") ?? [];
+  const perilProfiles = usePerilProfiles();
+  const portfolios = usePortfolios();
+  const [lens, setLens] = useState<PerilRunChoice>({ perilProfileIds: [], portfolioId: null });
   return (
     <>
       <PageHeader kicker="Runs" title="New run" description="Pick a model version and pathways, then queue the ensemble. Seed and settings are recorded so the run can be replayed." />
@@ -31,6 +38,8 @@ export default function RunNewPage() {
               pathways={pathways.data}
               initialVersionId={params.get("version") ?? undefined}
               onCreated={(run) => navigate(paths.run.build(run.id))}
+              lens={lens}
+              lensFields={perilProfiles.data && portfolios.data && <PerilRunPicker profiles={perilProfiles.data} portfolios={portfolios.data} value={lens} onChange={setLens} />}
             />
           )}
         </CardBody>

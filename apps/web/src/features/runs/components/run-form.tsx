@@ -1,4 +1,4 @@
-import { useMemo, useState, type FormEvent } from "react";
+import { useMemo, useState, type FormEvent, type ReactNode } from "react";
 import { createRunBodySchema, type CreateRunBody, type ModelVersionStatus, type RunSummary } from "@plumeline/contracts";
 import { Button } from "@/components/ui/button";
 import { ExploratoryStamp } from "@/components/ui/badges";
@@ -37,11 +37,16 @@ export function RunForm({
   pathways,
   initialVersionId,
   onCreated,
+  lens,
+  lensFields,
 }: {
   versions: VersionOption[];
   pathways: PathwayOption[];
   initialVersionId?: string;
   onCreated: (run: RunSummary) => void;
+  /** Peril lens choices (perilProfileIds, portfolioId) and the fields that make them, composed by the app layer. */
+  lens?: Pick<CreateRunBody, "perilProfileIds" | "portfolioId">;
+  lensFields?: ReactNode;
 }) {
   const createRun = useCreateRun();
   const [versionId, setVersionId] = useState(initialVersionId ?? versions.find((v) => v.status === "approved")?.id ?? versions[0]?.id ?? "");
@@ -70,6 +75,7 @@ export function RunForm({
       sampling,
       horizons: "values" in horizons && horizons.values.length ? horizons.values : undefined,
       thresholds: "values" in thresholds && thresholds.values.length ? thresholds.values : undefined,
+      ...lens,
     };
     const parsed = createRunBodySchema.safeParse(body);
     if (!parsed.success) {
@@ -170,6 +176,7 @@ export function RunForm({
           {(p) => <Input {...p} key={`t-${versionId}`} name="thresholds" defaultValue={defaults.thresholds.join(", ")} className="num" />}
         </Field>
       </div>
+      {lensFields && <div className="lg:col-span-2">{lensFields}</div>}
       {createRun.error && !(isApiError(createRun.error) && createRun.error.status === 400) && (
         <div className="lg:col-span-2">
           <ErrorState error={createRun.error} />
