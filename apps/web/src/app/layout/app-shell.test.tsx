@@ -33,6 +33,8 @@ describe("app shell", () => {
     const labels = [...nav.querySelectorAll("a")].map((a) => a.textContent);
     // manager: audit:read gives Admin (audit log); no pathways:write needed to see Pathways (read).
     expect(labels).toEqual(["Desk", "Pathways", "Model versions", "Runs", "Peril lens", "Exports", "Admin"]);
+    // A manager may read the audit log but not manage users: Admin opens the audit log.
+    expect(nav.querySelector("a:last-child")).toHaveAttribute("href", "/admin/audit");
   });
 
   it("sends a signed-out visitor to sign-in, remembering the page", async () => {

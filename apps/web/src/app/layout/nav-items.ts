@@ -8,6 +8,8 @@ export interface NavItem {
   anyOf: Permission[];
   icon: string;
   end?: boolean;
+  /** Where the link goes, by permission, when the area has several pages (first match wins). */
+  targets?: Array<[Permission, string]>;
 }
 
 /** Plumeline's own vocabulary for the places in the app. */
@@ -23,9 +25,18 @@ export const NAV_ITEMS: NavItem[] = [
     to: paths.adminUsers.build(),
     anyOf: ["users:manage", "audit:read", "outbox:read"],
     icon: "M12 3l7 3v5c0 5-3 8-7 10-4-2-7-5-7-10V6z",
+    targets: [
+      ["users:manage", paths.adminUsers.build()],
+      ["audit:read", paths.adminAudit.build()],
+      ["outbox:read", paths.adminOutbox.build()],
+    ],
   },
 ];
 
+/** The items a role may use, each pointing at the first page of its area the role may open. */
 export function visibleNavItems(permissions: readonly string[]): NavItem[] {
-  return NAV_ITEMS.filter((item) => item.anyOf.length === 0 || item.anyOf.some((p) => permissions.includes(p)));
+  return NAV_ITEMS.filter((item) => item.anyOf.length === 0 || item.anyOf.some((p) => permissions.includes(p))).map((item) => {
+    const target = item.targets?.find(([p]) => permissions.includes(p));
+    return target ? { ...item, to: target[1] } : item;
+  });
 }

@@ -15,7 +15,11 @@ export async function signIn({ email, password }: SignInInput): Promise<void> {
     throw new ApiError(
       status,
       error.code ?? "sign_in_failed",
-      status === 401 || status === 400 ? "Email or password is not right." : (error.message ?? "Sign-in failed"),
+      status === 401 || status === 400
+        ? "Email or password is not right."
+        : status === 429
+          ? "Too many sign-in attempts. Wait a minute, then try again."
+          : (error.message ?? "Sign-in failed"),
     );
   }
 }
