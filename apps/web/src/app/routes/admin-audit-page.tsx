@@ -67,7 +67,7 @@ export default function AdminAuditPage() {
                       {e.entityType}
                       {e.entityId && <span className="num block max-w-40 truncate">{e.entityId}</span>}
                     </Td>
-                    <Td className="text-sm">{e.summary}</Td>
+                    <Td className="min-w-72 text-sm [overflow-wrap:anywhere]">{e.summary}</Td>
                   </tr>
                 ))}
               </tbody>
