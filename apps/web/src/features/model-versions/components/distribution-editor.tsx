@@ -72,7 +72,7 @@ export function DistributionEditor({
 
   const presets = PRESETS[id] ?? [];
   return (
-    <div className={cx("grid gap-4 rounded-md border bg-surface p-3 md:grid-cols-[minmax(0,1fr)_18rem]", valid ? "border-line" : "border-danger/60")} data-input={id}>
+    <div className={cx("grid gap-4 rounded-md border bg-surface p-3 md:grid-cols-[minmax(0,1fr)_18rem]", valid ? "border-line" : "border-danger/60")} data-input={id} role="group" aria-label={label}>
       <div className="flex min-w-0 flex-col gap-2">
         <div className="flex flex-wrap items-baseline justify-between gap-2">
           <h4 className="text-sm font-semibold text-ink">
