@@ -1,8 +1,10 @@
 import type { Transaction } from "sequelize";
 
 /**
- * The queue interface the runs service and the workers use. The SQLite table implementation
- * (sql-job-queue.ts) serves one machine; a distributed queue can implement the same methods.
+ * The queue interface the runs service and the workers use. The table (sql-job-queue.ts) is
+ * the durable record in both queue modes: QUEUE=sqlite workers poll it with `claimNext`;
+ * QUEUE=bullmq carries each job's id over Redis (bullmq-transport.ts) and the worker that
+ * receives it takes the row with `claim` — the same guarded update. See apps/api/QUEUE.md.
  */
 export interface ClaimedJob {
   id: string;
@@ -13,11 +15,18 @@ export interface ClaimedJob {
   lockedBy: string;
 }
 
+export interface AbandonedFilter {
+  heartbeatBefore?: Date;
+  lockedByDeadProcess?: (lockedBy: string) => boolean;
+}
+
 export interface JobQueue {
   /** Adds a job inside the caller's transaction, so it exists only if the caller's rows do. */
   enqueue(type: string, payload: unknown, transaction: Transaction, options?: { maxAttempts?: number }): Promise<string>;
   /** Takes the oldest queued job of these types for `workerId`, or null when none is left. */
   claimNext(workerId: string, types: readonly string[]): Promise<ClaimedJob | null>;
+  /** Takes this one job if it is still queued (a BullMQ delivery); null when someone else has it or it ended. */
+  claim(jobId: string, workerId: string): Promise<ClaimedJob | null>;
   /** Records progress and a heartbeat; tells the worker whether cancellation was asked for. */
   heartbeat(jobId: string, workerId: string, progress: number): Promise<{ cancelRequested: boolean; stillOwned: boolean }>;
   /** Marks the job finished ("succeeded" or "cancelled") inside the transaction that stores its outcome. */
@@ -34,6 +43,11 @@ export interface JobQueue {
   ): Promise<"queued" | "failed" | "cancelled" | null>;
   /** Asks for cancellation; a queued job is cancelled at once (returns "cancelled"), a running one when its worker next checks. */
   requestCancel(jobId: string, transaction?: Transaction): Promise<"cancelled" | "requested" | "finished">;
-  /** On start-up: jobs left running by a dead process go back to the queue (or fail when out of attempts). */
-  requeueAbandoned(olderThan?: Date): Promise<Array<{ id: string; status: "queued" | "failed" }>>;
+  /**
+   * Jobs left running by a dead worker go back to the queue (or fail when out of attempts).
+   * With no filter every running job counts as abandoned (one process: on its start-up nothing
+   * can still be running). With several processes a job is abandoned when its heartbeat is older
+   * than `heartbeatBefore` or its `locked_by` names a process known to be dead.
+   */
+  requeueAbandoned(filter?: AbandonedFilter): Promise<Array<{ id: string; status: "queued" | "failed" }>>;
 }

@@ -19,6 +19,8 @@ export class JobModel extends Model {
   declare lastError: string | null;
   declare startedAt: Date | null;
   declare finishedAt: Date | null;
+  /** QUEUE=bullmq only: when the row was published to BullMQ; null = still to publish (outbox). */
+  declare dispatchedAt: Date | null;
   declare createdAt: Date;
   declare updatedAt: Date;
 }
@@ -40,6 +42,7 @@ export function initJobModel(sequelize: Sequelize): typeof JobModel {
       lastError: { type: DataTypes.TEXT, allowNull: true },
       startedAt: { type: DataTypes.DATE, allowNull: true },
       finishedAt: { type: DataTypes.DATE, allowNull: true },
+      dispatchedAt: { type: DataTypes.DATE, allowNull: true },
     },
     { sequelize, tableName: "jobs", modelName: "Job", underscored: true },
   );

@@ -13,7 +13,7 @@ const DEFAULT_MAX_ATTEMPTS = 3;
  * cannot overwrite the new owner's state.
  */
 export function createSqlJobQueue(Job: typeof JobModel): JobQueue {
-  return {
+  const queue: JobQueue = {
     async enqueue(type, payload, transaction, options = {}) {
       const id = randomUUID();
       await Job.create(
@@ -34,25 +34,29 @@ export function createSqlJobQueue(Job: typeof JobModel): JobQueue {
         });
         if (candidates.length === 0) return null;
         for (const { id } of candidates) {
-          const now = new Date();
-          const [claimed] = await Job.update(
-            {
-              status: "running",
-              lockedBy: workerId,
-              lockedAt: now,
-              heartbeatAt: now,
-              startedAt: now,
-              attempts: Job.sequelize!.literal("attempts + 1"),
-            },
-            { where: { id, status: "queued" } },
-          );
-          if (claimed === 1) {
-            const row = await Job.findByPk(id);
-            if (!row) continue;
-            return { id, type: row.type, payload: row.payload, attempts: row.attempts, maxAttempts: row.maxAttempts, lockedBy: workerId } satisfies ClaimedJob;
-          }
+          const claimed = await queue.claim(id, workerId);
+          if (claimed) return claimed;
         }
       }
+    },
+
+    async claim(jobId, workerId) {
+      const now = new Date();
+      const [claimed] = await Job.update(
+        {
+          status: "running",
+          lockedBy: workerId,
+          lockedAt: now,
+          heartbeatAt: now,
+          startedAt: now,
+          attempts: Job.sequelize!.literal("attempts + 1"),
+        },
+        { where: { id: jobId, status: "queued" } },
+      );
+      if (claimed !== 1) return null;
+      const row = await Job.findByPk(jobId);
+      if (!row || row.lockedBy !== workerId) return null;
+      return { id: jobId, type: row.type, payload: row.payload, attempts: row.attempts, maxAttempts: row.maxAttempts, lockedBy: workerId } satisfies ClaimedJob;
     },
 
     async heartbeat(jobId, workerId, progress) {
@@ -86,6 +90,8 @@ export function createSqlJobQueue(Job: typeof JobModel): JobQueue {
           lockedAt: null,
           lastError: reason,
           finishedAt: status === "queued" ? null : new Date(),
+          // Queued again: QUEUE=bullmq must publish it again (its earlier delivery is used up).
+          dispatchedAt: null,
         },
         { where: { id: jobId, lockedBy: workerId, status: "running" } },
       );
@@ -104,11 +110,15 @@ export function createSqlJobQueue(Job: typeof JobModel): JobQueue {
       return flagged === 1 ? "requested" : "finished";
     },
 
-    async requeueAbandoned(olderThan) {
-      const where = olderThan
-        ? { status: "running", heartbeatAt: { [Op.lt]: olderThan } }
-        : { status: "running" };
-      const rows = await Job.findAll({ where });
+    async requeueAbandoned(filter) {
+      const running = await Job.findAll({ where: { status: "running" } });
+      const rows = filter
+        ? running.filter(
+            (row) =>
+              (filter.heartbeatBefore && (row.heartbeatAt ?? row.lockedAt ?? new Date(0)) < filter.heartbeatBefore) ||
+              (filter.lockedByDeadProcess && row.lockedBy && filter.lockedByDeadProcess(row.lockedBy)),
+          )
+        : running;
       const out: Array<{ id: string; status: "queued" | "failed" }> = [];
       for (const row of rows) {
         const status = row.attempts >= row.maxAttempts ? "failed" : "queued";
@@ -119,6 +129,7 @@ export function createSqlJobQueue(Job: typeof JobModel): JobQueue {
             lockedAt: null,
             lastError: `worker ${row.lockedBy ?? "?"} stopped while running the job (attempt ${row.attempts} of ${row.maxAttempts})`,
             finishedAt: status === "failed" ? new Date() : null,
+            dispatchedAt: null,
           },
           { where: { id: row.id, status: "running", lockedBy: row.lockedBy } },
         );
@@ -127,4 +138,5 @@ export function createSqlJobQueue(Job: typeof JobModel): JobQueue {
       return out;
     },
   };
+  return queue;
 }

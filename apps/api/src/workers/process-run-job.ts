@@ -22,9 +22,7 @@ export type StepOutcome = "idle" | "succeeded" | "failed" | "cancelled" | "reque
 
 /**
  * One worker step (STYLE.md example 5): claim the oldest queued run job, run the engine in
- * `thread`, and write the outcome. The result, the run's new state, the job's end and the
- * audit row commit in ONE transaction, so a run is never "succeeded" without its result.
- * A thread crash gives the job back to the queue (or fails it after its last attempt).
+ * `thread`, and write the outcome (QUEUE=sqlite: the poller's step).
  */
 export async function processNextRunJob(
   ctx: WorkerContext,
@@ -35,10 +33,27 @@ export async function processNextRunJob(
 ): Promise<StepOutcome> {
   const job = await queue.claimNext(workerId, [RUN_JOB_TYPE]);
   if (!job) return "idle";
-  const payload = runJobPayloadSchema.safeParse(job.payload);
-  const run = payload.success ? await ctx.models.Run.findByPk(payload.data.runId) : null;
+  return processClaimedRunJob(ctx, queue, job, thread, options);
+}
+
+/**
+ * Runs a job this worker has claimed (from the poller above, or from a BullMQ delivery) in
+ * `thread`. The result, the run's new state, the job's end and the audit row commit in ONE
+ * transaction, so a run is never "succeeded" without its result. A thread crash gives the job
+ * back to the queue (or fails it after its last attempt).
+ */
+export async function processClaimedRunJob(
+  ctx: WorkerContext,
+  queue: JobQueue,
+  job: ClaimedJob,
+  thread: EngineThread,
+  options: StepOptions = {},
+): Promise<StepOutcome> {
+  const workerId = job.lockedBy;
+  const payload = job.type === RUN_JOB_TYPE ? runJobPayloadSchema.safeParse(job.payload) : null;
+  const run = payload?.success ? await ctx.models.Run.findByPk(payload.data.runId) : null;
   if (!run) {
-    const reason = payload.success ? `run ${payload.data.runId} no longer exists` : "job payload is not a run job";
+    const reason = payload?.success ? `run ${payload.data.runId} no longer exists` : "job payload is not a run job";
     await ctx.sequelize.transaction((t) => queue.finish(job.id, workerId, "failed", t, reason));
     return "failed";
   }
