@@ -38,20 +38,22 @@ export interface EnsemblePlan {
   horizons: number[];
   /** Member blocks that write each year (1, or the number of worker threads). */
   chunks: number;
+  /** Reported years simulated together before being summarised (year-spans.ts). */
+  spanYears: number;
   state: EnsembleState;
 }
 
 export interface EnsembleState {
-  upper: Float64Array;
-  deep: Float64Array;
-  /** Pass 1 sums, turned into each member's baseline and constraint-window mean anomaly. */
+  /** Per member: propagator, baseline, state and crossings, packed (member-records.ts). */
+  records: Float64Array;
+  /** Each member's baseline-period mean (a copy of the record's, for the summaries). */
   baselineMean: Float64Array;
+  /** Pass 1 sums, turned into each member's constraint-window mean anomaly. */
   windowMean: Float64Array;
   /** Constraint weights of the current pathway (all 1 without a constraint). */
   weights: Float64Array;
   /** Per ascending threshold: each member's first year index above it, −1 while never. */
   crossing: Float64Array[];
-  crossedCount: Float64Array;
   /** Ring of year slots: the simulation writes year t into slot t mod ring size. */
   slots: YearSlot[];
   /** Varying agent scales, member-major (member-forcing.ts); width of the widest pathway. */
@@ -65,6 +67,7 @@ export interface EnsembleState {
 }
 
 export function allocateState(
+  records: Float64Array,
   members: number,
   thresholds: number,
   horizons: number,
@@ -76,13 +79,11 @@ export function allocateState(
 ): EnsembleState {
   const many = (count: number) => Array.from({ length: count }, () => allocate(members));
   return {
-    upper: allocate(members),
-    deep: allocate(members),
+    records,
     baselineMean: allocate(members),
     windowMean: allocate(members),
     weights: allocate(members),
     crossing: many(thresholds),
-    crossedCount: allocate(members),
     slots: Array.from({ length: ringSize }, () => ({
       anomaly: allocate(members),
       forcing: allocate(members),

@@ -1,6 +1,7 @@
-import { advanceBaselineYear } from "./advance-year.js";
+import { advanceBaselineYears } from "./advance-year.js";
 import type { EnsemblePlan } from "./ensemble-plan.js";
 import { fillMemberScales } from "./member-forcing.js";
+import { BASELINE, CROSSED, DEEP, RECORD, UPPER } from "./member-records.js";
 
 /**
  * The two passes over one pathway, for members [lo, hi). Anomalies are against each
@@ -15,34 +16,47 @@ export function firstPassYears(plan: EnsemblePlan, pathwayIndex: number): number
   return lastYear - pathway.startYear + 1;
 }
 
-/** Runs the first pass for members [lo, hi), leaving baseline and window mean anomalies. */
+/**
+ * Runs the first pass for members [lo, hi), leaving baseline and window mean anomalies.
+ * onYear is called once per first-pass year when the pass is done (progress counting).
+ */
 export function runBaselinePass(
   plan: EnsemblePlan,
   pathwayIndex: number,
   lo: number,
   hi: number,
-  chunk: number,
   onYear?: () => void,
 ): void {
   const pathway = plan.pathways[pathwayIndex]!;
   fillMemberScales(plan, pathway, lo, hi);
-  const { upper, deep, baselineMean, windowMean } = plan.state;
-  upper.fill(0, lo, hi);
-  deep.fill(0, lo, hi);
-  baselineMean.fill(0, lo, hi);
+  const { records, baselineMean, windowMean } = plan.state;
+  for (let m = lo; m < hi; m++) {
+    const o = m * RECORD;
+    records[o + BASELINE] = 0;
+    records[o + UPPER] = 0;
+    records[o + DEEP] = 0;
+  }
   windowMean.fill(0, lo, hi);
   const [b0, b1] = plan.baseline;
   const c = plan.constraint;
   const years = firstPassYears(plan, pathwayIndex);
-  for (let t = 0; t < years; t++) {
-    const year = pathway.startYear + t;
-    advanceBaselineYear(plan, pathway, t, lo, hi, chunk, year >= b0 && year <= b1, c !== null && year >= c.from && year <= c.to);
-    onYear?.();
-  }
+  const start = pathway.startYear;
+  advanceBaselineYears(
+    plan,
+    pathway,
+    0,
+    years,
+    lo,
+    hi,
+    (t) => start + t >= b0 && start + t <= b1,
+    (t) => c !== null && start + t >= c.from && start + t <= c.to,
+  );
+  if (onYear) for (let t = 0; t < years; t++) onYear();
   const baselineYears = b1 - b0 + 1;
   const windowYears = c ? c.to - c.from + 1 : 1;
   for (let m = lo; m < hi; m++) {
-    const baseline = baselineMean[m]! / baselineYears;
+    const baseline = records[m * RECORD + BASELINE]! / baselineYears;
+    records[m * RECORD + BASELINE] = baseline;
     baselineMean[m] = baseline;
     windowMean[m] = c ? windowMean[m]! / windowYears - baseline : 0;
   }
@@ -50,10 +64,13 @@ export function runBaselinePass(
 
 /** Clears the state of members [lo, hi) for the reporting pass. */
 export function resetForReporting(plan: EnsemblePlan, lo: number, hi: number): void {
-  const { upper, deep, crossing, crossedCount } = plan.state;
-  upper.fill(0, lo, hi);
-  deep.fill(0, lo, hi);
-  crossedCount.fill(0, lo, hi);
+  const { records, crossing } = plan.state;
+  for (let m = lo; m < hi; m++) {
+    const o = m * RECORD;
+    records[o + UPPER] = 0;
+    records[o + DEEP] = 0;
+    records[o + CROSSED] = 0;
+  }
   for (const years of crossing) years.fill(-1, lo, hi);
 }
 

@@ -4,19 +4,23 @@ import type { RunSpec, RunSpecInput } from "../spec/types.js";
 import { validateSpec } from "../spec/validate-spec.js";
 import { allocateState, type EnsemblePlan } from "./ensemble-plan.js";
 import { buildMemberClimate } from "./member-climate.js";
+import { buildMemberRecords } from "./member-records.js";
 import { buildPathwayForcing } from "./pathway-forcing.js";
 import { allocateLocal, sampleInputs, type Allocate } from "./sample-inputs.js";
 import { listModelInputs } from "./uncertain-inputs.js";
+import { spanYears } from "./year-spans.js";
 import { yearlyLength } from "./yearly-layout.js";
 
 /**
  * Validates the spec, samples every input once and builds each member's propagator and
  * each pathway's forcing: all the deterministic set-up of a run, shared by the one-thread
  * and the worker-thread runners (which only differ in who advances which members).
+ * spansInRing: how many spans of year slots exist at once (1 for one thread; 2 lets
+ * workers simulate the next span while the last one is being summarised).
  */
 export function preparePlan(
   input: RunSpecInput | RunSpec,
-  ringSize = 1,
+  spansInRing = 1,
   allocate: Allocate = allocateLocal,
   chunks = 1,
 ): { spec: RunSpec; plan: EnsemblePlan } {
@@ -46,11 +50,13 @@ export function preparePlan(
   const pathways = spec.pathways.map((_, i) => buildPathwayForcing(spec, i, names));
   const maxYears = Math.max(...pathways.map((p) => p.years));
   const probs = spec.percentiles.map((p) => p / 100);
+  const span = spanYears(spec.members, spansInRing);
   const state = allocateState(
+    buildMemberRecords(climate, spec.members, allocate),
     spec.members,
     spec.thresholds.length,
     spec.horizons.length,
-    ringSize,
+    span * spansInRing,
     chunks,
     Math.max(...pathways.map((p) => p.scaleWidth)),
     yearlyLength(probs.length, spec.thresholds.length, maxYears),
@@ -69,6 +75,7 @@ export function preparePlan(
     constraint: spec.model.constraint,
     horizons: [...spec.horizons],
     chunks,
+    spanYears: span,
     state,
   };
   return { spec, plan };

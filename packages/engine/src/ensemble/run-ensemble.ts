@@ -1,7 +1,7 @@
 import { RunCancelledError } from "../spec/spec-error.js";
 import type { PathwayPerilResult } from "../peril/types.js";
 import type { PathwayResult, PercentileSet, RunResult, RunSpec, RunSpecInput } from "../spec/types.js";
-import { advanceReportedYear } from "./advance-year.js";
+import { advanceReportedYears } from "./advance-year.js";
 import { assembleResult } from "./assemble-result.js";
 import { finishPathway } from "./finish-pathway.js";
 import { impliedSensitivities } from "./implied-sensitivity.js";
@@ -60,19 +60,23 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
   let implied: { ecs: PercentileSet; tcr: PercentileSet } | null = null;
   const inputRanks = new Map<number, Float64Array>();
   const summariser = new YearSummariser(plan);
-  const slot = plan.state.slots[0]!;
+  const slots = plan.state.slots;
+  const span = plan.spanYears;
   plan.pathways.forEach((pathway, p) => {
-    runBaselinePass(plan, p, 0, n, 0, tick);
+    runBaselinePass(plan, p, 0, n, tick);
     const weighting = weighPathway(plan);
     resetForReporting(plan, 0, n);
     const byYear = horizonsByYear(plan, p);
     lap("simulate");
-    for (let t = 0; t < pathway.years; t++) {
-      advanceReportedYear(plan, pathway, t, 0, n, 0, slot);
+    for (let t0 = 0; t0 < pathway.years; t0 += span) {
+      const t1 = Math.min(pathway.years, t0 + span);
+      advanceReportedYears(plan, pathway, t0, t1, 0, n, 0);
       if (times) lap("simulate");
-      summariser.summarise(t, pathway.years, slot, weighting.weights, weighting.totalWeight, byYear[t]!);
+      for (let t = t0; t < t1; t++) {
+        summariser.summarise(t, pathway.years, slots[t % slots.length]!, weighting.weights, weighting.totalWeight, byYear[t]!);
+        tick();
+      }
       if (times) lap("summarise");
-      tick();
     }
     pathways.push(finishPathway(spec, plan, p, weighting, inputRanks));
     perils.push(pathwayPerils(spec, plan, p, weighting));

@@ -1,5 +1,5 @@
 import { parentPort } from "node:worker_threads";
-import { advanceReportedYear } from "../ensemble/advance-year.js";
+import { advanceReportedYears } from "../ensemble/advance-year.js";
 import type { EnsemblePlan } from "../ensemble/ensemble-plan.js";
 import { resetForReporting, runBaselinePass } from "../ensemble/pathway-passes.js";
 import { YearSummariser } from "../ensemble/summarise-year.js";
@@ -7,9 +7,10 @@ import { CANCEL_FLAG, addAndWake, waitUntilAtLeast, type PipelineControl } from 
 import type { FromWorker, ToWorker } from "./worker-messages.js";
 
 /**
- * One worker of the parallel runner. It advances its own members [lo, hi) and, in the
- * reporting pass, summarises every year t with t mod workers = its number once all workers
- * have written year t, so simulation is split by member and summaries by year. Summaries
+ * One worker of the parallel runner. It advances its own members [lo, hi) a span of years
+ * at a time and, in the reporting pass, summarises every year t of the span with
+ * t mod workers = its number once all workers have written year t, so simulation is split
+ * by member and summaries by year. Summaries
  * read whole years in member order, hence results identical to one thread.
  */
 let plan: EnsemblePlan;
@@ -33,7 +34,7 @@ port.on("message", (message: ToWorker) => {
       send({ kind: "ready" });
     } else if (message.kind === "baseline") {
       const start = performance.now();
-      runBaselinePass(plan, message.pathway, lo, hi, me);
+      runBaselinePass(plan, message.pathway, lo, hi);
       send({ kind: "done", simulateSeconds: (performance.now() - start) / 1000, summariseSeconds: 0 });
     } else if (message.kind === "report") {
       simulateSeconds = 0;
@@ -54,21 +55,24 @@ function reportPathway(message: Extract<ToWorker, { kind: "report" }>): boolean 
   const ring = plan.state.slots.length;
   const weights = message.weighted ? plan.state.weights : null;
   resetForReporting(plan, lo, hi);
-  for (let t = 0; t < pathway.years; t++) {
+  const span = plan.spanYears;
+  for (let t0 = 0; t0 < pathway.years; t0 += span) {
+    const t1 = Math.min(pathway.years, t0 + span);
     if (Atomics.load(control.flags, CANCEL_FLAG) !== 0) return false;
-    // The slot of year t last held year t − ring: it must have been summarised.
-    if (t >= ring && !waitUntilAtLeast(control, control.summarised, t - ring, 1)) return false;
-    const slot = plan.state.slots[t % ring]!;
+    // The slots of years t0..t1 last held years t − ring: those must have been summarised.
+    for (let t = Math.max(t0, ring); t < t1; t++) if (!waitUntilAtLeast(control, control.summarised, t - ring, 1)) return false;
     const start = performance.now();
-    advanceReportedYear(plan, pathway, t, lo, hi, me, slot);
+    advanceReportedYears(plan, pathway, t0, t1, lo, hi, me);
     simulateSeconds += (performance.now() - start) / 1000;
-    addAndWake(control.simulated, t, 1);
-    if (t % workers !== me) continue;
-    if (!waitUntilAtLeast(control, control.simulated, t, workers)) return false;
-    const summaryStart = performance.now();
-    summariser.summarise(t, pathway.years, slot, weights, message.totalWeight, message.horizonsByYear[t]!);
-    summariseSeconds += (performance.now() - summaryStart) / 1000;
-    addAndWake(control.summarised, t, 1);
+    for (let t = t0; t < t1; t++) addAndWake(control.simulated, t, 1);
+    for (let t = t0; t < t1; t++) {
+      if (t % workers !== me) continue;
+      if (!waitUntilAtLeast(control, control.simulated, t, workers)) return false;
+      const summaryStart = performance.now();
+      summariser.summarise(t, pathway.years, plan.state.slots[t % ring]!, weights, message.totalWeight, message.horizonsByYear[t]!);
+      summariseSeconds += (performance.now() - summaryStart) / 1000;
+      addAndWake(control.summarised, t, 1);
+    }
   }
   // Each worker has summarised all of its years; once all report done, the pathway is complete.
   return true;

@@ -53,7 +53,7 @@ export async function runEnsembleParallel(input: RunSpecInput | RunSpec, options
   const pool = new WorkerPool(threads);
   try {
     const start = performance.now();
-    const { spec, plan } = preparePlan(input, threads + 2, sharedAllocate, threads);
+    const { spec, plan } = preparePlan(input, 2, sharedAllocate, threads);
     if (options.stageTimes) options.stageTimes.sample += (performance.now() - start) / 1000;
     return await runWithPool(spec, plan, pool, options);
   } finally {

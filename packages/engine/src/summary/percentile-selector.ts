@@ -65,10 +65,7 @@ export class PercentileSelector {
     const counts = this.counts;
     const scale = buckets / (max - min);
     const last = buckets - 1;
-    for (let i = 0; i < n; i++) {
-      const b = ((values[i]! - min) * scale) | 0;
-      counts[b > last ? last : b]!++;
-    }
+    countIntoBuckets(values, n, min, scale, last, counts);
     const located = this.locateRanks(ranks, buckets);
     this.gatherAndSort(values, null, n, min, scale, last);
     for (let j = 0; j < ranks.length; j++) out[j] = this.gathered[located[j]!]!;
@@ -98,13 +95,7 @@ export class PercentileSelector {
     const counts = this.counts;
     const scale = buckets / (max - min);
     const last = buckets - 1;
-    let sum = 0;
-    for (let i = 0; i < n; i++) {
-      const v = values[i]!;
-      sum += v;
-      const b = ((v - min) * scale) | 0;
-      counts[b > last ? last : b]!++;
-    }
+    const sum = countIntoBuckets(values, n, min, scale, last, counts);
     // Ranks (0-based) each percentile reads: floor(h) and floor(h) + 1, h = (n − 1)p.
     const wanted: number[] = [];
     for (let j = 0; j < probs.length; j++) {
@@ -207,12 +198,7 @@ export class PercentileSelector {
       }
       return;
     }
-    for (let i = 0; i < n; i++) {
-      const v = values[i]!;
-      let b = ((v - min) * scale) | 0;
-      if (b > last) b = last;
-      if (slot[b]! >= 0) gathered[cursor[b]!++] = v;
-    }
+    gatherWanted(values, n, min, scale, last, slot, cursor, gathered);
     for (const [start, count] of starts) gathered.subarray(start, start + count).sort();
   }
 
@@ -352,5 +338,42 @@ export class PercentileSelector {
       else unresolved = true;
     }
     return !unresolved;
+  }
+}
+
+/*
+ * The two hot loops live in small functions of their own: inside the class methods V8
+ * optimised them on-stack and then deoptimised at the code after the loop, over a thousand
+ * times per W1 run, so most years were counted by unoptimised code.
+ */
+
+/** Counts values[0..n) into buckets floor((v − min)·scale) (the top one clamped to last); returns Σ v in index order. */
+function countIntoBuckets(values: Float64Array, n: number, min: number, scale: number, last: number, counts: Int32Array): number {
+  let sum = 0;
+  for (let i = 0; i < n; i++) {
+    const v = values[i]!;
+    sum += v;
+    const b = ((v - min) * scale) | 0;
+    counts[b > last ? last : b]!++;
+  }
+  return sum;
+}
+
+/** Copies each value whose bucket is wanted (slot ≥ 0) to gathered[cursor[bucket]++], in index order. */
+function gatherWanted(
+  values: Float64Array,
+  n: number,
+  min: number,
+  scale: number,
+  last: number,
+  slot: Int32Array,
+  cursor: Int32Array,
+  gathered: Float64Array,
+): void {
+  for (let i = 0; i < n; i++) {
+    const v = values[i]!;
+    let b = ((v - min) * scale) | 0;
+    if (b > last) b = last;
+    if (slot[b]! >= 0) gathered[cursor[b]!++] = v;
   }
 }

@@ -1,0 +1,15 @@
+/**
+ * How many reported years the simulation writes before they are summarised (a "span"), so
+ * each member block can run through several years while its inputs are in cache
+ * (advance-year.ts). The slots of a span hold 3 values per member-year (anomaly, forcing,
+ * imbalance); the span shrinks with the ensemble so those slots stay within RING_BYTES
+ * (memory stays O(members), never members × all years).
+ */
+const RING_BYTES = 128 * 2 ** 20;
+export const MAX_SPAN_YEARS = 16;
+
+/** Years per span for `members`, with `spansInRing` spans of slots held at once. */
+export function spanYears(members: number, spansInRing: number): number {
+  const fit = Math.floor(RING_BYTES / (3 * 8 * members * spansInRing));
+  return Math.max(1, Math.min(MAX_SPAN_YEARS, fit));
+}
