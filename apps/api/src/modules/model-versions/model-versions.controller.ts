@@ -1,6 +1,7 @@
-import type { ChangeClass, CreateModelVersionBody, ModelVersionStatus, UpdateModelVersionBody } from "@plumeline/contracts";
+import type { ChangeClass, CreateModelVersionBody, ModelVersionImpactBody, ModelVersionStatus, UpdateModelVersionBody } from "@plumeline/contracts";
 import type { Request, Response } from "express";
 import { contextOf, currentUser } from "../../middleware/request-context.js";
+import { modelVersionImpact } from "./model-version-impact.service.js";
 import {
   createModelVersion,
   decideModelVersion,
@@ -29,6 +30,9 @@ export const modelVersionsController = {
   },
   async diff(req: Request, res: Response) {
     res.json(await diffModelVersion(contextOf(req), idOf(req), (req.query as { against?: string }).against));
+  },
+  async impact(req: Request, res: Response) {
+    res.json(await modelVersionImpact(contextOf(req), idOf(req), req.body as ModelVersionImpactBody));
   },
   async submit(req: Request, res: Response) {
     const body = req.body as { changeClass: ChangeClass; note?: string };

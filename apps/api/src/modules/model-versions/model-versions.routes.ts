@@ -3,6 +3,7 @@ import {
   decideModelVersionBodySchema,
   diffModelVersionQuerySchema,
   listModelVersionsQuerySchema,
+  modelVersionImpactBodySchema,
   retireModelVersionBodySchema,
   submitModelVersionBodySchema,
   updateModelVersionBodySchema,
@@ -21,6 +22,8 @@ export const modelVersionsRouter: Router = Router();
 modelVersionsRouter.get("/", authenticate, requirePermission("model-versions:read"), validate({ query: listModelVersionsQuerySchema }), c.list);
 modelVersionsRouter.get("/:id", authenticate, requirePermission("model-versions:read"), validate({ params }), c.get);
 modelVersionsRouter.get("/:id/diff", authenticate, requirePermission("model-versions:read"), validate({ params, query: diffModelVersionQuerySchema }), c.diff);
+// Read-only preview: runs two small ensembles in an engine thread (no audit; nothing is stored).
+modelVersionsRouter.post("/:id/impact", authenticate, requirePermission("model-versions:read"), validate({ params, body: modelVersionImpactBodySchema }), c.impact);
 modelVersionsRouter.post("/", authenticate, requirePermission("model-versions:write"), validate({ body: createModelVersionBodySchema }), c.create);
 modelVersionsRouter.patch("/:id", authenticate, requirePermission("model-versions:write"), validate({ params, body: updateModelVersionBodySchema }), c.update);
 modelVersionsRouter.post("/:id/submit", authenticate, requirePermission("model-versions:write"), validate({ params, body: submitModelVersionBodySchema }), c.submit);

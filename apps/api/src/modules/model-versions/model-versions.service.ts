@@ -87,21 +87,46 @@ export async function getModelVersion(ctx: Ctx, id: string): Promise<ModelVersio
   return presentModelVersion(ctx, await findModelVersion(ctx, id));
 }
 
+/** Pinned ids must exist and not repeat: every missing or repeated one is named by its list field. */
+async function checkPinned(
+  field: "pathwayIds" | "perilProfileIds",
+  noun: string,
+  ids: string[] | undefined,
+  findExisting: (ids: string[]) => Promise<Array<{ id: string }>>,
+): Promise<ErrorDetail[]> {
+  if (!ids || ids.length === 0) return [];
+  const have = new Set((await findExisting(ids)).map((r) => r.id));
+  const firstAt = new Map<string, number>();
+  return ids.flatMap((id, i) => {
+    const first = firstAt.get(id);
+    if (first !== undefined) return [{ path: `${field}[${i}]`, message: `repeats ${noun} ${id} (already ${field}[${first}])` }];
+    firstAt.set(id, i);
+    return have.has(id) ? [] : [{ path: `${field}[${i}]`, message: `${noun} ${id} does not exist` }];
+  });
+}
+
 /** Referenced ids must exist: every missing one is named. */
-async function checkReferences(ctx: Ctx, parentId: string | null | undefined, pathwayIds: string[] | undefined, transaction: Transaction) {
+async function checkReferences(
+  ctx: Ctx,
+  parentId: string | null | undefined,
+  pathwayIds: string[] | undefined,
+  perilProfileIds: string[] | undefined,
+  transaction: Transaction,
+) {
   const errors: ErrorDetail[] = [];
   let parent: ModelVersionModel | null = null;
   if (parentId) {
     parent = await ctx.models.ModelVersion.findByPk(parentId, { transaction });
     if (!parent) errors.push({ path: "parentId", message: `model version ${parentId} does not exist` });
   }
-  if (pathwayIds && pathwayIds.length > 0) {
-    const found = await ctx.models.Pathway.findAll({ where: { id: { [Op.in]: pathwayIds } }, attributes: ["id"], transaction });
-    const have = new Set(found.map((p) => p.id));
-    pathwayIds.forEach((id, i) => {
-      if (!have.has(id)) errors.push({ path: `pathwayIds[${i}]`, message: `pathway ${id} does not exist` });
-    });
-  }
+  errors.push(
+    ...(await checkPinned("pathwayIds", "pathway", pathwayIds, (ids) =>
+      ctx.models.Pathway.findAll({ where: { id: { [Op.in]: ids } }, attributes: ["id"], transaction }),
+    )),
+    ...(await checkPinned("perilProfileIds", "peril profile", perilProfileIds, (ids) =>
+      ctx.models.PerilProfile.findAll({ where: { id: { [Op.in]: ids } }, attributes: ["id"], transaction }),
+    )),
+  );
   if (errors.length > 0) throw badRequest(errors);
   return parent;
 }
@@ -109,7 +134,7 @@ async function checkReferences(ctx: Ctx, parentId: string | null | undefined, pa
 export async function createModelVersion(ctx: Ctx, user: RequestUser, body: CreateModelVersionBody): Promise<ModelVersion> {
   const input = createModelVersionBodySchema.parse(body);
   const row = await ctx.sequelize.transaction(async (transaction) => {
-    const parent = await checkReferences(ctx, input.parentId, input.pathwayIds, transaction);
+    const parent = await checkReferences(ctx, input.parentId, input.pathwayIds, input.perilProfileIds, transaction);
     const id = randomUUID();
     const familyId = parent?.familyId ?? id;
     const highest = (await ctx.models.ModelVersion.max("versionNumber", { where: { familyId }, transaction })) as number | null;
@@ -160,7 +185,7 @@ export async function updateModelVersion(ctx: Ctx, user: RequestUser, id: string
     const row = await findModelVersion(ctx, id, transaction);
     refuseUnlessEditableDraft(row, user, "edited");
     if (body.parentId === id) throw badRequest([{ path: "parentId", message: "cannot be the version itself" }]);
-    await checkReferences(ctx, body.parentId, body.pathwayIds, transaction);
+    await checkReferences(ctx, body.parentId, body.pathwayIds, body.perilProfileIds, transaction);
     const changes = Object.fromEntries(Object.entries(body).filter(([, v]) => v !== undefined));
     await row.update(changes, { transaction });
     await recordAudit(

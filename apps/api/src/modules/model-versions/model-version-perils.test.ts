@@ -1,0 +1,69 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { signIn, type SignedInAgent } from "../../test-support/sign-in.js";
+import { createTestContext, type TestContext } from "../../test-support/test-context.js";
+import { testModelVersionBody, testPathwayBody } from "../runs/runs.fixtures.js";
+
+let t: TestContext;
+let analyst: SignedInAgent;
+let actuary: SignedInAgent;
+let pathwayId: string;
+let profileId: string;
+
+/** A hand-made profile (7 %/K is the Clausius–Clapeyron rate of common practice; the region is invented). */
+const rainfall = {
+  name: "Heavy rainfall, Northmere",
+  peril: "flood-heavy-rainfall",
+  region: "Northmere Coast",
+  metric: "severity",
+  baselineWarming: 1.1,
+  scaling: { kind: "per-kelvin", rate: { type: "fixed", value: 0.07 } },
+} as const;
+
+beforeAll(async () => {
+  t = await createTestContext();
+  [analyst, actuary] = await Promise.all([signIn(t.app, "analyst"), signIn(t.app, "actuary")]);
+  pathwayId = (await analyst.post("/api/pathways").send(testPathwayBody())).body.id;
+  profileId = (await actuary.post("/api/peril-profiles").send(rainfall)).body.id;
+});
+afterAll(async () => t.close());
+
+describe("peril profiles pinned by a model version", () => {
+  let versionId: string;
+
+  it("refuses unknown or repeated profile ids with 400 naming each", async () => {
+    const res = await analyst.post("/api/model-versions").send(testModelVersionBody({ perilProfileIds: [profileId, "ghost", profileId] }));
+    expect(res.status).toBe(400);
+    expect(res.body.error.details).toEqual([
+      { path: "perilProfileIds[1]", message: "peril profile ghost does not exist" },
+      { path: "perilProfileIds[2]", message: `repeats peril profile ${profileId} (already perilProfileIds[0])` },
+    ]);
+    const draft = (await analyst.post("/api/model-versions").send(testModelVersionBody())).body.id;
+    const patch = await analyst.patch(`/api/model-versions/${draft}`).send({ perilProfileIds: ["ghost"] });
+    expect(patch.status).toBe(400);
+    expect(patch.body.error.details[0]).toMatchObject({ path: "perilProfileIds[0]" });
+  });
+
+  it("pins existing profiles, shows them on the version and in the diff against its parent", async () => {
+    const parent = (await analyst.post("/api/model-versions").send(testModelVersionBody())).body.id;
+    const res = await analyst.post("/api/model-versions").send(testModelVersionBody({ parentId: parent, perilProfileIds: [profileId] }));
+    expect(res.status).toBe(201);
+    versionId = res.body.id;
+    expect((await actuary.get(`/api/model-versions/${versionId}`)).body.perilProfileIds).toEqual([profileId]);
+    const diff = await actuary.get(`/api/model-versions/${versionId}/diff`);
+    expect(diff.body.changes).toContainEqual({ path: "perilProfileIds", before: [], after: [profileId] });
+  });
+
+  it("gives a run that names no profiles the version's pinned ones; an explicit [] opts out", async () => {
+    const base = { modelVersionId: versionId, pathwayIds: [pathwayId], members: 20, seed: "pinned", sampling: "monte-carlo" };
+    const inherited = await actuary.post("/api/runs").send(base);
+    expect(inherited.status).toBe(201);
+    expect(inherited.body.perilProfileIds).toEqual([profileId]);
+    const spec = (await actuary.get(`/api/runs/${inherited.body.id}`)).body.manifest.spec;
+    expect(spec.perils).toEqual([{ id: profileId, ...rainfall }]);
+
+    const optedOut = await actuary.post("/api/runs").send({ ...base, perilProfileIds: [] });
+    expect(optedOut.status).toBe(201);
+    expect(optedOut.body.perilProfileIds).toEqual([]);
+    expect((await actuary.get(`/api/runs/${optedOut.body.id}`)).body.manifest.spec.perils).toBeUndefined();
+  });
+});
