@@ -115,7 +115,9 @@ export async function createRun(ctx: Ctx, user: RequestUser, body: CreateRunBody
     body.pathwayIds.forEach((id, i) => {
       if (!byId.has(id)) errors.push({ path: `pathwayIds[${i}]`, message: `pathway ${id} does not exist` });
     });
-    const peril = await resolvePerilLens(ctx, body, transaction); // peril lens: profiles + portfolio rows copied into the spec
+    // A run that does not name peril profiles uses the ones its model version pins ([] opts out).
+    const perilProfileIds = body.perilProfileIds ?? version?.perilProfileIds ?? [];
+    const peril = await resolvePerilLens(ctx, { ...body, perilProfileIds }, transaction); // peril lens: profiles + portfolio rows copied into the spec
     errors.push(...peril.errors);
     if (errors.length > 0 || !version) throw badRequest(errors);
     if (version.status === "retired")
@@ -141,7 +143,7 @@ export async function createRun(ctx: Ctx, user: RequestUser, body: CreateRunBody
         exploratory,
         status: "queued",
         progress: 0,
-        perilProfileIds: body.perilProfileIds ?? [],
+        perilProfileIds,
         portfolioId: body.portfolioId ?? null,
         createdBy: user.id,
       },
