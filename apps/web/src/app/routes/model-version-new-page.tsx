@@ -30,7 +30,11 @@ export default function ModelVersionNewPage() {
         submitLabel="Save draft"
         pending={create.isPending}
         serverError={create.error}
-        onSave={(body) => create.mutate(body, { onSuccess: (v) => navigate(paths.modelVersion.build(v.id)) })}
+        onSave={(body) => {
+          // The editor does not show what a version pins; a copy keeps its parent's pins, so the diff shows only real edits.
+          const pins = parent.data ? { pathwayIds: parent.data.pathwayIds, perilProfileIds: parent.data.perilProfileIds } : {};
+          create.mutate({ ...body, ...pins }, { onSuccess: (v) => navigate(paths.modelVersion.build(v.id)) });
+        }}
       />
     </>
   );
