@@ -38,6 +38,8 @@ export function createBullmqTransport(Job: typeof JobModel, options: { redisUrl:
   const connect = () => new Redis(options.redisUrl, { maxRetriesPerRequest: null });
   const queueConnection = connect();
   const queue = new Queue<DeliveredJob>(name, { connection: queueConnection });
+  const logError = throttledErrorLog();
+  queue.on("error", logError);
   let worker: Worker<DeliveredJob> | null = null;
   let workerConnection: Redis | null = null;
   // Publishing runs one sweep at a time per process; sweeps in other processes may overlap,
@@ -74,15 +76,33 @@ export function createBullmqTransport(Job: typeof JobModel, options: { redisUrl:
       if (worker) throw new Error("this transport is already consuming");
       workerConnection = connect();
       worker = new Worker<DeliveredJob>(name, async (job) => deliver(job.data), { connection: workerConnection, concurrency });
-      worker.on("error", (error) => console.error(`[bullmq] worker error: ${error.message}`));
+      worker.on("error", logError);
     },
     async close() {
-      await worker?.close();
-      await sweeping.catch(() => 0);
-      await queue.close();
+      // With Redis unreachable a graceful close would wait for ever: give it a few seconds.
+      const graceful = (async () => {
+        await worker?.close();
+        await sweeping.catch(() => 0);
+        await queue.close();
+      })();
+      const wait = queueConnection.status === "ready" ? CLOSE_TIMEOUT_MS : 0;
+      await Promise.race([graceful.catch(() => undefined), new Promise((resolve) => setTimeout(resolve, wait).unref())]);
       for (const connection of [workerConnection, queueConnection]) {
-        if (connection && connection.status !== "end") await connection.quit().catch(() => connection.disconnect());
+        if (connection && connection.status !== "end") connection.disconnect();
       }
     },
+  };
+}
+
+const CLOSE_TIMEOUT_MS = 5_000;
+
+/** Redis errors repeat on every reconnect attempt: log the first and then one a minute at most. */
+function throttledErrorLog(): (error: Error) => void {
+  let last = 0;
+  return (error) => {
+    const now = Date.now();
+    if (now - last < 60_000) return;
+    last = now;
+    console.error(`[bullmq] ${error.message} (Redis errors are logged at most once a minute; ioredis keeps reconnecting)`);
   };
 }

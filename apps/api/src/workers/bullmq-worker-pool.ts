@@ -48,22 +48,22 @@ export async function startBullmqWorkerPool(ctx: WorkerContext, queue: JobQueue,
   let stopping = false;
   let stopped: Promise<void> | undefined;
 
+  const abandonedFilter = () => ({ heartbeatBefore: new Date(Date.now() - staleAfterMs), lockedByDeadProcess: lockedByDeadLocalProcess });
   const sweep = async () => {
-    const requeued = await queue.requeueAbandoned({
-      heartbeatBefore: new Date(Date.now() - staleAfterMs),
-      lockedByDeadProcess: lockedByDeadLocalProcess,
-    });
-    await syncRunsWithRequeuedJobs(ctx, requeued);
+    await syncRunsWithRequeuedJobs(ctx, await queue.requeueAbandoned(abandonedFilter()));
     await transport.publishPending();
   };
   const sweepLogged = () => sweep().catch((error) => console.error("[bullmq] sweep failed:", error));
 
+  // Re-queueing is SQL and finishes before any delivery; publishing waits for Redis, so it
+  // does not hold up the server's start when Redis is not reachable yet.
   try {
-    await sweep();
+    await syncRunsWithRequeuedJobs(ctx, await queue.requeueAbandoned(abandonedFilter()));
   } catch (error) {
     await transport.close();
     throw error;
   }
+  void transport.publishPending().catch((error) => console.error("[bullmq] publish failed:", error));
 
   // One engine thread per slot; BullMQ never runs more than `size` deliveries at once here.
   const slots = Array.from({ length: options.size }, (_, slot) => ({ id: workerIdFor(prefix, slot), thread: null as EngineThread | null, busy: false }));
