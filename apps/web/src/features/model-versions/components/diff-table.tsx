@@ -4,8 +4,16 @@ import { EmptyState } from "@/components/ui/states";
 
 const show = (v: unknown) => (v === null || v === undefined ? "—" : typeof v === "object" ? JSON.stringify(v) : String(v));
 
+/** Pinned peril profiles read as names when the caller knows them (ids otherwise). */
+const showValue = (path: string, v: unknown, profileNames?: ReadonlyMap<string, string>) =>
+  path === "perilProfileIds" && Array.isArray(v) && profileNames
+    ? v.length === 0
+      ? "none"
+      : v.map((id) => profileNames.get(String(id)) ?? String(id)).join("; ")
+    : show(v);
+
 /** What changed against the parent (or another version), one line per changed field. */
-export function DiffTable({ diff }: { diff: ModelVersionDiff }) {
+export function DiffTable({ diff, profileNames }: { diff: ModelVersionDiff; profileNames?: ReadonlyMap<string, string> }) {
   if (!diff.against) return <p className="text-sm text-muted">This version has no parent: everything in it is new.</p>;
   if (diff.changes.length === 0) return <EmptyState title={`No differences from ${diff.against.name} v${diff.against.versionNumber}`} />;
   return (
@@ -27,10 +35,10 @@ export function DiffTable({ diff }: { diff: ModelVersionDiff }) {
               <code className="text-xs">{c.path}</code>
             </Td>
             <Td className="num max-w-sm break-all text-xs">
-              <span className="rounded bg-danger-soft px-1">{show(c.before)}</span>
+              <span className="rounded bg-danger-soft px-1">{showValue(c.path, c.before, profileNames)}</span>
             </Td>
             <Td className="num max-w-sm break-all text-xs">
-              <span className="rounded bg-ok-soft px-1">{show(c.after)}</span>
+              <span className="rounded bg-ok-soft px-1">{showValue(c.path, c.after, profileNames)}</span>
             </Td>
           </tr>
         ))}

@@ -19,6 +19,7 @@ import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import { ErrorState } from "@/components/ui/states";
 import { CLIMATE_INPUT_LABELS, inputLabel } from "@/lib/input-labels";
 import { DistributionEditor } from "./distribution-editor";
+import { PinnedPerilProfilesPicker, type PinnableProfile } from "./pinned-peril-profiles";
 import { parseNumbers } from "@/lib/parse-numbers";
 
 export interface ModelDraft {
@@ -27,6 +28,8 @@ export interface ModelDraft {
   parentId: string | null;
   model: ModelSpec;
   defaults: ModelVersionDefaults;
+  /** Peril profiles the version pins (runs that name none use these). */
+  perilProfileIds?: string[];
 }
 
 const EXPRESSION_LABELS: Record<string, string> = {
@@ -47,12 +50,15 @@ export function ModelEditor({
   pending,
   serverError,
   onSave,
+  perilProfiles,
 }: {
   initial: ModelDraft;
   submitLabel: string;
   pending: boolean;
   serverError: unknown;
   onSave: (body: CreateModelVersionBody) => void;
+  /** Profiles that may be pinned (the picker shows once the list is known; the pins are always sent). */
+  perilProfiles?: readonly PinnableProfile[];
 }) {
   const [name, setName] = useState(initial.name);
   const [notes, setNotes] = useState(initial.notes);
@@ -73,6 +79,7 @@ export function ModelEditor({
     horizons: initial.defaults.horizons.join(", "),
     baseline: initial.defaults.baseline.join(", "),
   });
+  const [perilProfileIds, setPerilProfileIds] = useState<string[]>(initial.perilProfileIds ?? []);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [addAgent, setAddAgent] = useState<ForcingAgent | "">("");
   const inputs = [...CLIMATE_INPUTS, ...FORCING_AGENTS];
@@ -97,6 +104,7 @@ export function ModelEditor({
         forcingExpression: expression,
       },
       defaults: Object.fromEntries(Object.entries(lists).map(([k, v]) => [k, "values" in v ? v.values : []])),
+      perilProfileIds,
     };
     if (Object.keys(next).length === 0) {
       const parsed = createModelVersionBodySchema.safeParse(body);
@@ -301,6 +309,16 @@ export function ModelEditor({
           ))}
         </CardBody>
       </Card>
+
+      {perilProfiles && (
+        <Card>
+          <CardHeader title="Pinned peril profiles" subtitle="Reviewed with this version; a run of it that names no profiles applies these." />
+          <CardBody>
+            <PinnedPerilProfilesPicker profiles={perilProfiles} value={perilProfileIds} onChange={setPerilProfileIds} />
+            {err("perilProfileIds") && <p className="mt-2 text-sm text-danger">{err("perilProfileIds")}</p>}
+          </CardBody>
+        </Card>
+      )}
 
       {errorList.length > 0 && (
         <div role="alert" className="rounded-md border border-danger/40 bg-danger-soft px-4 py-3 text-sm">
