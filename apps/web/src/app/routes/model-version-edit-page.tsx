@@ -4,6 +4,7 @@ import { useMe } from "@/features/auth/api/get-me";
 import { useModelVersion } from "@/features/model-versions/api/get-model-version";
 import { useUpdateModelVersion } from "@/features/model-versions/api/save-model-version";
 import { ModelEditor } from "@/features/model-versions/components/model-editor";
+import { usePerilProfiles } from "@/features/peril/api/get-peril-profiles";
 import { PageHeader } from "@/components/ui/page-header";
 import { ErrorState, LoadingState } from "@/components/ui/states";
 
@@ -12,6 +13,7 @@ export default function ModelVersionEditPage() {
   const me = useMe();
   const version = useModelVersion(versionId);
   const update = useUpdateModelVersion();
+  const profiles = usePerilProfiles();
   const navigate = useNavigate();
   if (version.isPending) return <LoadingState />;
   if (version.isError) return <ErrorState error={version.error} />;
@@ -27,7 +29,8 @@ export default function ModelVersionEditPage() {
     <>
       <PageHeader kicker="Model versions" title={`Edit ${v.name} v${v.versionNumber}`} description="Drafts can change freely until they are submitted for review." />
       <ModelEditor
-        initial={{ name: v.name, notes: v.notes, parentId: v.parentId, model: v.model, defaults: v.defaults }}
+        initial={{ name: v.name, notes: v.notes, parentId: v.parentId, model: v.model, defaults: v.defaults, perilProfileIds: v.perilProfileIds }}
+        perilProfiles={profiles.data}
         submitLabel="Save changes"
         pending={update.isPending}
         serverError={update.error}

@@ -4,6 +4,7 @@ import { useModelVersion } from "@/features/model-versions/api/get-model-version
 import { useCreateModelVersion } from "@/features/model-versions/api/save-model-version";
 import { ModelEditor, type ModelDraft } from "@/features/model-versions/components/model-editor";
 import { STARTING_DRAFT } from "@/features/model-versions/lib/starting-draft";
+import { usePerilProfiles } from "@/features/peril/api/get-peril-profiles";
 import { PageHeader } from "@/components/ui/page-header";
 import { ErrorState, LoadingState } from "@/components/ui/states";
 
@@ -12,11 +13,12 @@ export default function ModelVersionNewPage() {
   const fromId = params.get("from") ?? undefined;
   const parent = useModelVersion(fromId);
   const create = useCreateModelVersion();
+  const profiles = usePerilProfiles();
   const navigate = useNavigate();
   if (fromId && parent.isPending) return <LoadingState />;
   if (fromId && parent.isError) return <ErrorState error={parent.error} />;
   const initial: ModelDraft = parent.data
-    ? { name: parent.data.name, notes: parent.data.notes, parentId: parent.data.id, model: parent.data.model, defaults: parent.data.defaults }
+    ? { name: parent.data.name, notes: parent.data.notes, parentId: parent.data.id, model: parent.data.model, defaults: parent.data.defaults, perilProfileIds: parent.data.perilProfileIds }
     : STARTING_DRAFT;
   return (
     <>
@@ -28,6 +30,7 @@ export default function ModelVersionNewPage() {
       <ModelEditor
         initial={initial}
         submitLabel="Save draft"
+        perilProfiles={profiles.data}
         pending={create.isPending}
         serverError={create.error}
         onSave={(body) => {

@@ -5,6 +5,9 @@ import { useModelVersion } from "@/features/model-versions/api/get-model-version
 import { useModelVersionDiff } from "@/features/model-versions/api/get-model-version-diff";
 import { AssumptionsTable } from "@/features/model-versions/components/assumptions-table";
 import { DiffTable } from "@/features/model-versions/components/diff-table";
+import { ImpactPanel } from "@/features/model-versions/components/impact-panel";
+import { PinnedPerilProfilesList, profileNames } from "@/features/model-versions/components/pinned-peril-profiles";
+import { usePerilProfiles } from "@/features/peril/api/get-peril-profiles";
 import { SubmitPanel } from "@/features/model-versions/components/submit-panel";
 import { StatusBadge } from "@/components/ui/badges";
 import { ButtonLink } from "@/components/ui/button";
@@ -18,6 +21,7 @@ export default function ModelVersionPage() {
   const me = useMe();
   const version = useModelVersion(versionId);
   const diff = useModelVersionDiff(versionId);
+  const profiles = usePerilProfiles();
   if (version.isPending) return <LoadingState />;
   if (version.isError) return <ErrorState error={version.error} retry={() => version.refetch()} />;
   const v = version.data;
@@ -102,7 +106,19 @@ export default function ModelVersionPage() {
         </Card>
         <Card>
           <CardHeader title="Changes against the parent" />
-          <CardBody>{diff.isPending ? <LoadingState /> : diff.isError ? <ErrorState error={diff.error} /> : <DiffTable diff={diff.data} />}</CardBody>
+          <CardBody>{diff.isPending ? <LoadingState /> : diff.isError ? <ErrorState error={diff.error} /> : <DiffTable diff={diff.data} profileNames={profileNames(profiles.data)} />}</CardBody>
+        </Card>
+        <Card>
+          <CardHeader title="Effect on key outputs" subtitle="A preview ensemble of this version and its parent, side by side." />
+          <CardBody>
+            <ImpactPanel versionId={v.id} parentId={v.parentId} autoStart={false} />
+          </CardBody>
+        </Card>
+        <Card>
+          <CardHeader title="Pinned peril profiles" />
+          <CardBody>
+            <PinnedPerilProfilesList ids={v.perilProfileIds} profiles={profiles.data} />
+          </CardBody>
         </Card>
         <Card>
           <CardHeader title="Notes" />

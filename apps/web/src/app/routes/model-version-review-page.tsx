@@ -5,6 +5,9 @@ import { useModelVersionDiff } from "@/features/model-versions/api/get-model-ver
 import { AssumptionsTable } from "@/features/model-versions/components/assumptions-table";
 import { DecisionPanel } from "@/features/model-versions/components/decision-panel";
 import { DiffTable } from "@/features/model-versions/components/diff-table";
+import { ImpactPanel } from "@/features/model-versions/components/impact-panel";
+import { profileNames } from "@/features/model-versions/components/pinned-peril-profiles";
+import { usePerilProfiles } from "@/features/peril/api/get-peril-profiles";
 import { StatusBadge } from "@/components/ui/badges";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
@@ -15,6 +18,7 @@ export default function ModelVersionReviewPage() {
   const me = useMe();
   const version = useModelVersion(versionId);
   const diff = useModelVersionDiff(versionId);
+  const profiles = usePerilProfiles();
   if (version.isPending) return <LoadingState />;
   if (version.isError) return <ErrorState error={version.error} />;
   const v = version.data;
@@ -33,7 +37,13 @@ export default function ModelVersionReviewPage() {
         <div className="flex min-w-0 flex-col gap-6">
           <Card>
             <CardHeader title="What changed" />
-            <CardBody>{diff.isPending ? <LoadingState /> : diff.isError ? <ErrorState error={diff.error} /> : <DiffTable diff={diff.data} />}</CardBody>
+            <CardBody>{diff.isPending ? <LoadingState /> : diff.isError ? <ErrorState error={diff.error} /> : <DiffTable diff={diff.data} profileNames={profileNames(profiles.data)} />}</CardBody>
+          </Card>
+          <Card>
+            <CardHeader title="Effect on key outputs" subtitle="The same preview ensemble of this version and the one it replaces, side by side." />
+            <CardBody>
+              <ImpactPanel versionId={v.id} parentId={v.parentId} autoStart />
+            </CardBody>
           </Card>
           <Card>
             <CardHeader title="Assumptions as submitted" />
