@@ -1,8 +1,8 @@
 import { createRandom, deriveSeed } from "../random/create-random.js";
-import { quantileOf } from "../distributions/index.js";
 import { latinHypercube, monteCarloUniforms, imanConover } from "../sampling/index.js";
 import { SpecError } from "../spec/spec-error.js";
 import type { RunSpec } from "../spec/types.js";
+import { columnQuantiles } from "./column-quantiles.js";
 import type { ModelInput } from "./uncertain-inputs.js";
 
 export type Allocate = (length: number) => Float64Array;
@@ -34,8 +34,7 @@ export function sampleInputs(spec: RunSpec, inputs: ModelInput[], allocate: Allo
       column.fill(d.value);
       return column;
     }
-    const u = uniforms[i]!;
-    for (let m = 0; m < n; m++) column[m] = quantileOf(d, u[m]!);
+    columnQuantiles(d, uniforms[i]!, column);
     return column;
   });
 }

@@ -2,6 +2,13 @@ import { PercentileSelector } from "../summary/percentile-selector.js";
 import type { EnsemblePlan, YearSlot } from "./ensemble-plan.js";
 import { exceedanceRow, summaryRow } from "./yearly-layout.js";
 
+interface PercentileTrack {
+  year: number;
+  values: Float64Array;
+  earlierYear: number;
+  earlier: Float64Array;
+}
+
 /**
  * Summarises one reported year from its slot: percentiles and mean of the anomaly, total
  * forcing and imbalance, and the probability of exceeding each threshold (weighted when a
@@ -12,9 +19,17 @@ import { exceedanceRow, summaryRow } from "./yearly-layout.js";
 export class YearSummariser {
   private readonly selector = new PercentileSelector();
   private readonly out: Float64Array;
+  /** Per quantity, the percentiles of the last two years this summariser did (guesses for the next). */
+  private readonly recent: PercentileTrack[];
+  private readonly guess: Float64Array;
+  private readonly spread: Float64Array;
 
   constructor(private readonly plan: EnsemblePlan) {
-    this.out = new Float64Array(plan.probs.length);
+    const p = plan.probs.length;
+    this.out = new Float64Array(p);
+    this.guess = new Float64Array(p);
+    this.spread = new Float64Array(p);
+    this.recent = Array.from({ length: 3 }, () => ({ year: -1, values: new Float64Array(p), earlierYear: -1, earlier: new Float64Array(p) }));
   }
 
   /**
@@ -71,12 +86,37 @@ export class YearSummariser {
       max = Math.max(max, extremes[6 * chunk + at + 1]!);
     }
     const percentiles = this.plan.probs.length;
-    const sum = this.selector.select(values, n, this.plan.probs, this.out, min, max, weights, totalWeight);
+    const track = this.recent[quantity]!;
+    if (track.year >= t) track.year = track.earlierYear = -1; // a new pathway: no guesses yet
+    const sum =
+      weights || track.year < 0
+        ? this.selector.select(values, n, this.plan.probs, this.out, min, max, weights, totalWeight)
+        : this.selectNearRecent(track, t, values, min, max);
+    track.earlierYear = track.year;
+    track.earlier.set(track.values);
+    track.year = t;
+    track.values.set(this.out);
     const yearly = this.plan.state.yearly;
     for (let j = 0; j < percentiles; j++) yearly[summaryRow(quantity, j, percentiles) * years + t] = this.out[j]!;
     // Mean in member order (the selector sums during its counting pass); a constant is its own mean.
     const mean = min === max ? min : weights ? sum / totalWeight : sum / n;
     yearly[summaryRow(quantity, percentiles, percentiles) * years + t] = mean;
+  }
+
+  /**
+   * Unweighted percentiles with guesses: each percentile's path extrapolated linearly from
+   * the last two years done, ± the extrapolated step (plus the selector's own margin).
+   * Exact whatever the guesses (PercentileSelector.selectNear); they only save a pass.
+   */
+  private selectNearRecent(track: PercentileTrack, t: number, values: Float64Array, min: number, max: number): number {
+    const gap = t - track.year;
+    for (let j = 0; j < this.guess.length; j++) {
+      const last = track.values[j]!;
+      const slope = track.earlierYear >= 0 ? (last - track.earlier[j]!) / (track.year - track.earlierYear) : 0;
+      this.guess[j] = last + slope * gap;
+      this.spread[j] = Math.abs(slope * gap);
+    }
+    return this.selector.selectNear(values, this.plan.members, this.plan.probs, this.out, min, max, this.guess, this.spread);
   }
 
   /** Committed warming: equilibrium F/λ minus the current warming, both from the pathway start. */

@@ -41,6 +41,27 @@ describe("PercentileSelector (R type 7 without a full sort)", () => {
     }
   });
 
+  it("selectNear equals d3-array quantileSorted (R-7) whatever the guesses: good, far off, empty, NaN", () => {
+    // Reference: d3-array quantileSorted (R type 7). Guesses only decide which buckets are
+    // copied in the first pass; a miss costs a second pass, never a different answer.
+    const random = seedrandom("near");
+    const selector = new PercentileSelector();
+    for (const n of [1, 2, 10, 1000, 20_001]) {
+      const values = Float64Array.from({ length: n }, () => (random() - 0.3) ** 3 * 10);
+      const sorted = Array.from(Float64Array.from(values).sort());
+      const exact = probs.map((p) => quantileSorted(sorted, p)!);
+      const [min, max] = extremes(values);
+      const spread = probs.map(() => 1e-3);
+      const guesses = [exact, exact.map((v) => v + 0.05), exact.map(() => max + 100), exact.map(() => Number.NaN), [exact[0]!, -1e9, exact[2]!, 1e9, exact[4]!]];
+      for (const guess of guesses) {
+        const out = new Float64Array(probs.length);
+        const sum = selector.selectNear(values, n, probs, out, min, max, guess, spread);
+        probs.forEach((p, j) => expect(out[j]).toBe(exact[j]));
+        if (max > min) expect(sum).toBe(values.reduce((s, v) => s + v, 0));
+      }
+    }
+  });
+
   it("handles ties, a constant ensemble and p at the ends", () => {
     const selector = new PercentileSelector();
     const values = Float64Array.from([2, 2, 2, 5, 5, 1, 1, 1, 1, 9]);

@@ -25,6 +25,10 @@ export class PercentileSelector {
   private gathered = new Float64Array(0);
   private gatheredWeights = new Float64Array(0);
   private order = new Uint32Array(0);
+  private hinted = new Uint8Array(0);
+  private readonly tally = new Float64Array(1);
+  private early = new Float64Array(0);
+  private earlyBucket = new Int32Array(0);
 
   /**
    * Writes the percentiles `probs` (each in [0, 1]) of values[0..n) into out[0..probs.length).
@@ -50,6 +54,75 @@ export class PercentileSelector {
     }
     if (weights) return this.selectWeighted(values, n, probs, out, min, max, weights, totalWeight);
     return this.selectUnweighted(values, n, probs, out, min, max);
+  }
+
+  /**
+   * select() for an unweighted ensemble in one pass over the values when good guesses of the
+   * percentiles are at hand (e.g. the same quantity's percentiles in a recent year):
+   * guess[j] ± spread[j] marks the buckets whose members are copied during the counting
+   * pass. If every wanted order statistic falls in a marked bucket, those buckets are
+   * sorted and read; otherwise the missing buckets are gathered by a second pass, as
+   * select() does. Either way the result is exactly select()'s: guesses only change speed.
+   * Returns Σ values in index order.
+   */
+  selectNear(
+    values: Float64Array,
+    n: number,
+    probs: ArrayLike<number>,
+    out: Float64Array,
+    min: number,
+    max: number,
+    guess: ArrayLike<number>,
+    spread: ArrayLike<number>,
+  ): number {
+    if (n === 0) throw new RangeError("values must not be empty");
+    if (!(max > min)) {
+      for (let i = 0; i < probs.length; i++) out[i] = min;
+      return 0;
+    }
+    const buckets = this.prepare(n);
+    const scale = buckets / (max - min);
+    const last = buckets - 1;
+    if (this.hinted.length < buckets) this.hinted = new Uint8Array(buckets);
+    const hinted = this.hinted;
+    hinted.fill(0, 0, buckets);
+    for (let j = 0; j < probs.length; j++) {
+      // Two buckets either side of the guess on top of its spread.
+      const from = Math.max(0, Math.min(last, Math.floor((guess[j]! - spread[j]! - min) * scale) - 2));
+      const to = Math.max(0, Math.min(last, Math.floor((guess[j]! + spread[j]! - min) * scale) + 2));
+      for (let b = from; b <= to; b++) hinted[b] = 1;
+    }
+    if (this.early.length < n) {
+      this.early = new Float64Array(n);
+      this.earlyBucket = new Int32Array(n);
+    }
+    const copied = countAndCopyHinted(values, n, min, scale, last, this.counts, hinted, this.early, this.earlyBucket, this.tally);
+    const sum = this.tally[0]!;
+    const wanted = wantedRanks(n, probs);
+    const located = this.locateRanks(wanted, buckets);
+    const slot = this.slotOfBucket;
+    let missed = false;
+    for (let b = 0; b < buckets; b++) if (slot[b]! >= 0 && hinted[b] === 0) missed = true;
+    if (missed) this.gatherAndSort(values, null, n, min, scale, last);
+    else {
+      const cursor = new Int32Array(buckets);
+      const starts: Array<[number, number]> = [];
+      for (let b = 0; b < buckets; b++) {
+        if (slot[b]! < 0) continue;
+        cursor[b] = slot[b]!;
+        starts.push([slot[b]!, this.counts[b]!]);
+      }
+      const gathered = this.gathered;
+      const early = this.early;
+      const earlyBucket = this.earlyBucket;
+      for (let i = 0; i < copied; i++) {
+        const b = earlyBucket[i]!;
+        if (slot[b]! >= 0) gathered[cursor[b]!++] = early[i]!;
+      }
+      for (const [start, count] of starts) gathered.subarray(start, start + count).sort();
+    }
+    this.interpolate(n, probs, located, out);
+    return sum;
   }
 
   /**
@@ -96,15 +169,14 @@ export class PercentileSelector {
     const scale = buckets / (max - min);
     const last = buckets - 1;
     const sum = countIntoBuckets(values, n, min, scale, last, counts);
-    // Ranks (0-based) each percentile reads: floor(h) and floor(h) + 1, h = (n − 1)p.
-    const wanted: number[] = [];
-    for (let j = 0; j < probs.length; j++) {
-      const h = (n - 1) * probs[j]!;
-      const lo = Math.floor(h);
-      wanted.push(lo, Math.min(lo + 1, n - 1));
-    }
-    const located = this.locateRanks(wanted, buckets);
+    const located = this.locateRanks(wantedRanks(n, probs), buckets);
     this.gatherAndSort(values, null, n, min, scale, last);
+    this.interpolate(n, probs, located, out);
+    return sum;
+  }
+
+  /** R-7 between the two order statistics of each percentile, read from the sorted buckets. */
+  private interpolate(n: number, probs: ArrayLike<number>, located: number[], out: Float64Array): void {
     for (let j = 0; j < probs.length; j++) {
       const h = (n - 1) * probs[j]!;
       const lo = Math.floor(h);
@@ -113,7 +185,6 @@ export class PercentileSelector {
       // Same expression as d3-array quantileSorted (R-7).
       out[j] = value0 + (value1 - value0) * (h - lo);
     }
-    return sum;
   }
 
   /** For each wanted rank: its index in the gathered buffer once wanted buckets are sorted. */
@@ -348,6 +419,16 @@ export class PercentileSelector {
  */
 
 /** Counts values[0..n) into buckets floor((v − min)·scale) (the top one clamped to last); returns Σ v in index order. */
+/** Ranks (0-based) each percentile reads: floor(h) and floor(h) + 1 (capped at n − 1), h = (n − 1)p. */
+function wantedRanks(n: number, probs: ArrayLike<number>): number[] {
+  const wanted: number[] = [];
+  for (let j = 0; j < probs.length; j++) {
+    const lo = Math.floor((n - 1) * probs[j]!);
+    wanted.push(lo, Math.min(lo + 1, n - 1));
+  }
+  return wanted;
+}
+
 function countIntoBuckets(values: Float64Array, n: number, min: number, scale: number, last: number, counts: Int32Array): number {
   let sum = 0;
   for (let i = 0; i < n; i++) {
@@ -376,4 +457,37 @@ function gatherWanted(
     if (b > last) b = last;
     if (slot[b]! >= 0) gathered[cursor[b]!++] = v;
   }
+}
+
+/**
+ * Counting pass that also copies each value in a hinted bucket (with its bucket) to
+ * copy/copyBucket; writes Σ v (index order) to sum[0] and returns how many were copied.
+ */
+function countAndCopyHinted(
+  values: Float64Array,
+  n: number,
+  min: number,
+  scale: number,
+  last: number,
+  counts: Int32Array,
+  hinted: Uint8Array,
+  copy: Float64Array,
+  copyBucket: Int32Array,
+  total: Float64Array,
+): number {
+  let sum = 0;
+  let k = 0;
+  for (let i = 0; i < n; i++) {
+    const v = values[i]!;
+    sum += v;
+    let b = ((v - min) * scale) | 0;
+    if (b > last) b = last;
+    counts[b]!++;
+    if (hinted[b] !== 0) {
+      copy[k] = v;
+      copyBucket[k++] = b;
+    }
+  }
+  total[0] = sum;
+  return k;
 }
