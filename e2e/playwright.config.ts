@@ -8,20 +8,26 @@ import path from "node:path";
  */
 const port = Number(process.env.E2E_PORT ?? 4173);
 const dataDir = process.env.E2E_DATA_DIR ?? path.join(os.tmpdir(), `plumeline-e2e-${process.pid}`);
-export const baseURL = `http://localhost:${port}`;
+/** Set E2E_BASE_URL to point the suite at a server you started yourself (no fresh seed then). */
+const external = process.env.E2E_BASE_URL;
+export const baseURL = external ?? `http://localhost:${port}`;
 
 export default defineConfig({
   testDir: "./specs",
   outputDir: "./artifacts/results",
+  // The flows build on each other's data (01 drafts, 02 approves, 03 runs, …): one worker,
+  // files in name order, no retries (a retry would meet the first attempt's data).
   fullyParallel: false,
   workers: 1,
-  timeout: 90_000,
-  expect: { timeout: 15_000 },
-  retries: process.env.CI ? 1 : 0,
+  retries: 0,
+  timeout: 120_000,
+  expect: { timeout: 20_000 },
   reporter: [["list"], ["html", { outputFolder: "./artifacts/report", open: "never" }]],
   use: {
     baseURL,
     trace: "retain-on-failure",
+    actionTimeout: 20_000,
+    navigationTimeout: 30_000,
     screenshot: "only-on-failure",
     viewport: { width: 1440, height: 900 },
     launchOptions: {
@@ -36,7 +42,9 @@ export default defineConfig({
       ],
     },
   },
-  webServer: {
+  webServer: external
+    ? undefined
+    : {
     command: "pnpm -w start",
     cwd: "..",
     url: `${baseURL}/api/health`,
