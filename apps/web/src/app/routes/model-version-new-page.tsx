@@ -34,8 +34,8 @@ export default function ModelVersionNewPage() {
         pending={create.isPending}
         serverError={create.error}
         onSave={(body) => {
-          // The editor does not show what a version pins; a copy keeps its parent's pins, so the diff shows only real edits.
-          const pins = parent.data ? { pathwayIds: parent.data.pathwayIds, perilProfileIds: parent.data.perilProfileIds } : {};
+          // The editor does not show pinned pathways; a copy keeps its parent's, so the diff shows only real edits.
+          const pins = parent.data ? { pathwayIds: parent.data.pathwayIds } : {};
           create.mutate({ ...body, ...pins }, { onSuccess: (v) => navigate(paths.modelVersion.build(v.id)) });
         }}
       />
