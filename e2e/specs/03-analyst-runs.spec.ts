@@ -1,0 +1,129 @@
+import { expect, test } from "@playwright/test";
+import { members, names, seededPathways, seededVersionName } from "../support/names";
+import { openFromNav } from "../support/navigation";
+import { chooseVersion, pathwayIds, runIdFromUrl, waitForRun, type RunResult, type RunSummary, type VersionSummary } from "../support/runs";
+import { snap } from "../support/screenshots";
+import { apiAs, getJson, postJson, signIn } from "../support/sign-in";
+
+/**
+ * Analyst: runs an ensemble on the newly approved version, watches it progress, reads the
+ * fan chart and horizon table, and compares it with the same pathways under the previous
+ * version. Also checks that a run on an unapproved version is marked exploratory.
+ */
+test.describe.configure({ mode: "serial" });
+
+const seed = "e2e-orsa-2025";
+
+test.beforeAll(async ({ baseURL }) => {
+  // The previous version's run to compare against: same pathways, members and seed.
+  const api = await apiAs("analyst", baseURL!);
+  const v1 = (await getJson<VersionSummary[]>(api, "/api/model-versions?status=approved")).find((v) => v.name === seededVersionName)!;
+  const run = await postJson<RunSummary>(api, "/api/runs", {
+    name: names.runOnPrevious,
+    modelVersionId: v1.id,
+    pathwayIds: await pathwayIds(api, seededPathways),
+    members,
+    seed,
+    sampling: "latin-hypercube",
+  });
+  await waitForRun(api, run.id);
+  await api.dispose();
+});
+
+test("analyst runs the approved version, reads the fan chart and horizons, compares with v1", async ({ page }, testInfo) => {
+  await signIn(page, "analyst");
+  await openFromNav(page, "Runs");
+  await page.getByRole("link", { name: "New run" }).click();
+  await expect(page.getByRole("heading", { level: 1, name: "New run" })).toBeVisible();
+
+  await page.getByLabel("Name (optional)").fill(names.runOnWider);
+  await chooseVersion(page, names.widerDraft);
+  await expect(page.getByText(/will be exploratory/)).toHaveCount(0);
+  for (const p of seededPathways) await page.getByRole("checkbox", { name: new RegExp(`^${p} \\d{4}–`) }).check();
+  await page.getByLabel("Members").fill(String(members));
+  await page.getByLabel("Seed").fill(seed);
+  await page.getByRole("radio", { name: "Latin hypercube" }).check();
+  await snap(page, testInfo, "run-form", "run-form.png");
+  await page.getByRole("button", { name: "Queue run" }).click();
+
+  // Progress: the page follows the run by itself (no reload) from queued/running to the result.
+  await expect(page).toHaveURL(/\/runs\/[0-9a-f-]{36}$/);
+  const runId = runIdFromUrl(page.url());
+  const progress = page.getByRole("progressbar", { name: `Progress of ${names.runOnWider}` });
+  const fan = page.getByRole("figure", { name: "Warming above 1850–1900 (K)" });
+  await expect(progress.or(fan)).toBeVisible();
+  if (await progress.isVisible()) {
+    testInfo.annotations.push({ type: "progress", description: `progress bar seen at ${await progress.getAttribute("aria-valuenow")}` });
+    await snap(page, testInfo, "run-in-progress");
+  }
+  await expect(fan).toBeVisible({ timeout: 90_000 });
+  await expect(progress).toHaveCount(0);
+  await expect(page.getByText("Made with an approved model version.")).toBeVisible();
+  await expect(page.getByRole("complementary", { name: "Cautions" })).toBeVisible();
+
+  // The fan chart draws a band pair and a median per pathway, with a toggle per pathway.
+  for (const p of seededPathways) await expect(fan.getByRole("button", { name: p, exact: true })).toHaveAttribute("aria-pressed", "true");
+  expect(await fan.locator("svg path").count()).toBeGreaterThanOrEqual(3 * seededPathways.length);
+  const plot = fan.getByRole("img");
+  const box = (await plot.boundingBox())!;
+  await plot.hover({ position: { x: box.width * 0.8, y: box.height * 0.5 } });
+  await snap(page, testInfo, "run-result", "run-result.png");
+
+  // The horizon table shows what the API computed (2 decimals, K).
+  const api = page.request;
+  const result = await (await api.get(`/api/runs/${runId}/result`)).json() as RunResult;
+  await page.getByRole("radiogroup", { name: "Pathway" }).getByRole("radio", { name: "Harbourline High" }).check();
+  const table = page.getByRole("table", { name: "Warming percentiles at the horizons for Harbourline High" });
+  const high = result.pathways.find((p) => p.name === "Harbourline High")!;
+  for (const year of [2050, 2100]) {
+    const t = high.horizons.find((h) => h.year === year)!.temperature;
+    const row = table.getByRole("row", { name: new RegExp(`^${year} `) });
+    await expect(row.getByRole("cell").nth(0)).toHaveText(new RegExp(`^${t.p5!.toFixed(2)}`));
+    await expect(row.getByRole("cell").nth(2)).toHaveText(new RegExp(`^${t.p50!.toFixed(2)}`));
+    await expect(row.getByRole("cell").nth(4)).toHaveText(new RegExp(`^${t.p95!.toFixed(2)}`));
+  }
+  await table.scrollIntoViewIfNeeded();
+  await snap(page, testInfo, "run-horizons-high");
+
+  // Compare with the previous version: same pathways, same seed, wider aerosol–cloud range.
+  await page.getByRole("link", { name: "Compare…" }).click();
+  await expect(page.getByRole("heading", { level: 1, name: "Compare" })).toBeVisible();
+  const right = page.getByLabel("Right: run");
+  const previous = right.locator("option").filter({ hasText: names.runOnPrevious });
+  await right.selectOption((await previous.getAttribute("value"))!);
+  await page.getByLabel("Left: pathway").selectOption({ label: "Harbourline High" });
+  await page.getByLabel("Right: pathway").selectOption({ label: "Harbourline High" });
+  await expect(page.getByRole("figure", { name: `${names.runOnWider}: Harbourline High` })).toBeVisible();
+  await expect(page.getByRole("figure", { name: `${names.runOnPrevious}: Harbourline High` })).toBeVisible();
+  await expect(page.getByRole("figure", { name: "Both on one chart" })).toBeVisible();
+  await expect(page.getByRole("figure", { name: "Warming at the shared horizons" })).toBeVisible();
+  await snap(page, testInfo, "compare-versions", "compare.png");
+});
+
+test("a run on an unapproved version is marked exploratory on its page and on the desk", async ({ page, baseURL }, testInfo) => {
+  // The seeded v2 draft (observational constraint) is not approved: any run of it is exploratory.
+  const api = await apiAs("analyst", baseURL!);
+  const draft = (await getJson<VersionSummary[]>(api, "/api/model-versions?status=draft")).find((v) => v.name === seededVersionName)!;
+  const run = await postJson<RunSummary>(api, "/api/runs", {
+    name: "Constraint trial (draft v2)",
+    modelVersionId: draft.id,
+    pathwayIds: await pathwayIds(api, ["Harbourline Middle"]),
+    members: 2000,
+    seed: "e2e-draft",
+    sampling: "latin-hypercube",
+  });
+  expect(run.exploratory).toBe(true);
+  await waitForRun(api, run.id);
+  await api.dispose();
+
+  await signIn(page, "analyst");
+  await expect(page.getByRole("heading", { name: "Exploratory results" })).toBeVisible();
+  const flagged = page.getByRole("listitem").filter({ has: page.getByRole("link", { name: "Constraint trial (draft v2)" }) });
+  await expect(flagged.first()).toContainText("Exploratory");
+  await snap(page, testInfo, "desk-exploratory");
+  await page.goto(`/runs/${run.id}`);
+  await expect(page.getByText(/EXPLORATORY/).first()).toBeVisible();
+  await expect(page.getByText(/Do not use for filings/)).toBeVisible();
+  await expect(page.getByRole("heading", { name: "Observational constraint" })).toBeVisible();
+  await snap(page, testInfo, "run-exploratory", "run-exploratory.png");
+});

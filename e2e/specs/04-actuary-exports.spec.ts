@@ -1,0 +1,99 @@
+import { expect, test } from "@playwright/test";
+import { members, names } from "../support/names";
+import { openFromNav } from "../support/navigation";
+import { chooseVersion, runIdFromUrl, type RunResult } from "../support/runs";
+import { snap } from "../support/screenshots";
+import { signIn } from "../support/sign-in";
+import { manifestPairs, readWorkbook, tableRows } from "../support/workbook";
+
+/**
+ * Actuary: runs the approved version through the demo peril profiles and portfolio, reads
+ * the peril tables, downloads the workbook, and the test reads that file with exceljs: the
+ * manifest and the numbers must be the ones the API serves as JSON.
+ */
+const seed = "e2e-actuary-q3";
+const floodProfile = "Heavy-rainfall flood, Northmere Coast";
+const heatProfile = "Hot-day frequency, Vellan Basin";
+
+test("actuary applies the peril profiles and portfolio, exports the workbook, which matches the API", async ({ page }, testInfo) => {
+  await signIn(page, "actuary");
+  await snap(page, testInfo, "desk-actuary");
+  await openFromNav(page, "Peril lens");
+  await expect(page.getByRole("table", { name: "Peril profiles" }).getByRole("link", { name: floodProfile })).toBeVisible();
+  await expect(page.getByRole("table", { name: "Portfolio baselines" })).toContainText("Harbourline Mutual property baseline");
+  await snap(page, testInfo, "peril-lens", "peril-lens.png");
+
+  await openFromNav(page, "Runs");
+  await page.getByRole("link", { name: "New run" }).click();
+  await page.getByLabel("Name (optional)").fill(names.actuaryRun);
+  await chooseVersion(page, names.widerDraft);
+  for (const p of ["Harbourline Middle", "Harbourline Low"]) await page.getByRole("checkbox", { name: new RegExp(`^${p} \\d{4}–`) }).check();
+  await page.getByLabel("Members").fill(String(members));
+  await page.getByLabel("Seed").fill(seed);
+  const profiles = page.getByRole("group", { name: "Peril profiles" });
+  await profiles.getByRole("checkbox", { name: new RegExp(`^${floodProfile}`) }).check();
+  await profiles.getByRole("checkbox", { name: new RegExp(`^${heatProfile}`) }).check();
+  const portfolio = page.getByLabel("Portfolio baseline");
+  await expect(portfolio).toBeEnabled();
+  const option = portfolio.locator("option").filter({ hasText: "Harbourline Mutual property baseline" });
+  await portfolio.selectOption((await option.getAttribute("value"))!);
+  await page.getByRole("button", { name: "Queue run" }).click();
+
+  await expect(page).toHaveURL(/\/runs\/[0-9a-f-]{36}$/);
+  const runId = runIdFromUrl(page.url());
+  const lens = page.getByRole("region", { name: "Peril lens" });
+  await expect(lens).toBeVisible({ timeout: 90_000 });
+  await expect(lens.getByRole("complementary", { name: "Peril cautions" })).toContainText("Not a catastrophe model");
+  await expect(lens.getByRole("table", { name: `Multipliers — ${floodProfile}` })).toBeVisible();
+  await expect(lens.getByRole("table", { name: /^Projected losses — Northmere Coast/ })).toContainText("Average annual loss");
+  await lens.scrollIntoViewIfNeeded();
+  await snap(page, testInfo, "run-peril-lens", "run-peril-lens.png");
+
+  // What the API serves for this run, to hold the workbook against.
+  const run = await (await page.request.get(`/api/runs/${runId}`)).json() as { seed: string; members: number; manifest: { resultHash: string; engineVersion: string } };
+  const result = await (await page.request.get(`/api/runs/${runId}/result`)).json() as RunResult;
+
+  const downloadStarted = page.waitForEvent("download");
+  await page.getByRole("link", { name: "Workbook (.xlsx)" }).click();
+  const download = await downloadStarted;
+  expect(download.suggestedFilename()).toMatch(/\.xlsx$/);
+  const file = testInfo.outputPath(download.suggestedFilename());
+  await download.saveAs(file);
+  const workbook = await readWorkbook(file);
+
+  // Manifest first, naming the approved version, seed, members and the result hash.
+  expect(workbook.worksheets[0]!.name).toBe("Manifest");
+  const manifest = manifestPairs(workbook);
+  expect(manifest.get("Status")).toMatch(/^APPROVED/);
+  expect(manifest.get("Model version")).toContain(names.widerDraft);
+  expect(manifest.get("Model version status (now)")).toBe("approved");
+  expect(manifest.get("Seed")).toBe(seed);
+  expect(Number(manifest.get("Members"))).toBe(members);
+  expect(run.seed).toBe(seed);
+  expect(manifest.get("Result hash")).toBe(run.manifest.resultHash);
+  expect(manifest.get("Result hash")).toBe(result.resultHash);
+  expect(manifest.get("Engine version")).toBe(run.manifest.engineVersion);
+
+  // A percentile: the 95th of warming in 2100 for the Middle pathway, exactly as in the JSON.
+  const middle = result.pathways.find((p) => p.name === "Harbourline Middle")!;
+  const h2100 = middle.horizons.find((h) => h.year === 2100)!;
+  const horizonRow = tableRows(workbook, "Horizons").find((r) => r.pathway_name === "Harbourline Middle" && r.year === 2100)!;
+  expect(horizonRow.temperature_p95_K).toBe(h2100.temperature.p95);
+  expect(horizonRow.temperature_p50_K).toBe(h2100.temperature.p50);
+
+  // And a peril figure: median projected AAL of the Northmere flood row in 2050.
+  const flood = result.perils!.pathways.find((p) => p.pathwayId === middle.id)!.profiles.find((p) => p.name === floodProfile)!;
+  const aal2050 = flood.horizons.find((h) => h.year === 2050)!.losses[0]!.aal;
+  const lossRow = tableRows(workbook, "Projected losses").find(
+    (r) => r.pathway_name === "Harbourline Middle" && r.profile_name === floodProfile && r.year === 2050 && r.measure === "aal",
+  )!;
+  expect(lossRow.loss_p50).toBe(aal2050.p50);
+  expect(workbook.getWorksheet("Cautions")!.getRow(1).getCell(1).text).toMatch(/^Cautions/);
+
+  // The export is on record.
+  await openFromNav(page, "Exports");
+  const record = page.getByRole("row").filter({ hasText: names.actuaryRun }).first();
+  await expect(record).toBeVisible();
+  await expect(record).toContainText(/xlsx|workbook/i);
+  await snap(page, testInfo, "exports", "exports.png");
+});

@@ -1,0 +1,57 @@
+import { expect, test } from "@playwright/test";
+import { demoUsers } from "../support/demo-users";
+import { names } from "../support/names";
+import { openFromNav } from "../support/navigation";
+import { snap } from "../support/screenshots";
+import { signIn } from "../support/sign-in";
+
+/**
+ * Admin: invites a colleague, changes their role, then reads the audit log (the role change,
+ * the earlier flows' decisions) and the mails the app sent (invitation, review request,
+ * decision, finished runs) in the outbox.
+ */
+test("admin changes a role, reads the audit log and the outbox", async ({ page }, testInfo) => {
+  const newcomer = names.invitedUser;
+  await signIn(page, "admin");
+  await openFromNav(page, "Admin");
+  await expect(page.getByRole("heading", { level: 1, name: "Users and roles" })).toBeVisible();
+
+  await page.getByRole("textbox", { name: "Email" }).fill(newcomer.email);
+  await page.getByRole("textbox", { name: "Name" }).fill(newcomer.name);
+  await page.getByRole("combobox", { name: "Role", exact: true }).selectOption("analyst");
+  await page.getByRole("button", { name: "Invite" }).click();
+  const role = page.getByRole("combobox", { name: `Role of ${newcomer.name}` });
+  await expect(role).toHaveValue("analyst");
+
+  // The role change is saved at once and survives a reload.
+  await role.selectOption("actuary");
+  await expect(role).toBeEnabled();
+  await page.reload();
+  await expect(page.getByRole("combobox", { name: `Role of ${newcomer.name}` })).toHaveValue("actuary");
+  // An admin cannot change their own role (no one removes the last admin by accident).
+  await expect(page.getByRole("combobox", { name: `Role of ${demoUsers.admin.name}` })).toBeDisabled();
+  await snap(page, testInfo, "admin-users", "admin-users.png");
+
+  // Audit log: the role change, filtered by its action.
+  const adminNav = page.getByRole("navigation", { name: "Admin" });
+  await adminNav.getByRole("link", { name: "Audit log" }).click();
+  await expect(page.getByRole("heading", { level: 1, name: "Audit log" })).toBeVisible();
+  await expect(page.getByRole("cell", { name: "model-version.approved" }).first()).toBeVisible();
+  await snap(page, testInfo, "admin-audit", "admin-audit.png");
+  await page.getByLabel("Action").fill("user.role-changed");
+  await page.getByRole("button", { name: "Filter" }).click();
+  const roleChange = page.getByRole("row").filter({ hasText: "user.role-changed" }).filter({ hasText: newcomer.email.split("@")[0]! });
+  await expect(roleChange.or(page.getByRole("row").filter({ hasText: "user.role-changed" }).filter({ hasText: newcomer.name })).first()).toBeVisible();
+  await expect(page.getByRole("row").filter({ hasText: "model-version.approved" })).toHaveCount(0);
+
+  // Outbox: the invitation, the review request to the managers, the decision to the author.
+  await adminNav.getByRole("link", { name: "Outbox" }).click();
+  await expect(page.getByRole("heading", { level: 1, name: "Outbox" })).toBeVisible();
+  await expect(page.getByRole("button", { name: new RegExp(`to ${newcomer.email}`) })).toBeVisible();
+  await expect(page.getByRole("button", { name: new RegExp(`^Review requested: ${names.widerDraft}.*to ${demoUsers.manager.email}`) })).toBeVisible();
+  await expect(page.getByRole("button", { name: new RegExp(`^Run finished: ${names.runOnWider}`) })).toBeVisible();
+  const decision = page.getByRole("button", { name: new RegExp(`^Model version approved: ${names.widerDraft}.*to ${demoUsers.analyst.email}`) });
+  await decision.click();
+  await expect(page.getByText(/Approved as a stress variant/).first()).toBeVisible();
+  await snap(page, testInfo, "admin-outbox", "admin-outbox.png");
+});
