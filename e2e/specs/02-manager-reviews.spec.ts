@@ -63,7 +63,10 @@ test("manager reads the diff, cannot decide their own version, approves the anal
 
   // Her own version: the review page explains why she cannot decide, and the API refuses.
   await openFromNav(page, "Model versions");
-  await page.getByRole("radio", { name: "in review" }).check();
+  // A segmented filter (buttons with role radio): its state follows the URL, so click and wait.
+  const inReview = page.getByRole("radio", { name: "in review" });
+  await inReview.click();
+  await expect(inReview).toHaveAttribute("aria-checked", "true");
   await page.getByRole("link", { name: names.managerOwnDraft }).click();
   await expect(page.getByRole("heading", { level: 1, name: new RegExp(`^${names.managerOwnDraft} v\\d+$`) })).toBeVisible();
   await page.goto(`/model-versions/${ownDraft.id}/review`);

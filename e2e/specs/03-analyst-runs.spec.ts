@@ -72,7 +72,9 @@ test("analyst runs the approved version, reads the fan chart and horizons, compa
   // The horizon table shows what the API computed (2 decimals, K).
   const api = page.request;
   const result = await (await api.get(`/api/runs/${runId}/result`)).json() as RunResult;
-  await page.getByRole("radiogroup", { name: "Pathway" }).getByRole("radio", { name: "Harbourline High" }).check();
+  const highTab = page.getByRole("radiogroup", { name: "Pathway" }).getByRole("radio", { name: "Harbourline High" });
+  await highTab.click();
+  await expect(highTab).toHaveAttribute("aria-checked", "true");
   const table = page.getByRole("table", { name: "Warming percentiles at the horizons for Harbourline High" });
   const high = result.pathways.find((p) => p.name === "Harbourline High")!;
   for (const year of [2050, 2100]) {
