@@ -14,7 +14,7 @@ test.describe.configure({ mode: "serial" });
 
 test("analyst uploads a pathway; a bad file is refused row by row", async ({ page }, testInfo) => {
   await signIn(page, "analyst");
-  await snap(page, testInfo, "desk-analyst", "desk.png");
+  await snap(page, testInfo, "desk-analyst");
 
   await openFromNav(page, "Pathways");
   await expect(page.getByRole("heading", { level: 1, name: "Forcing pathways" })).toBeVisible();
@@ -64,7 +64,8 @@ test("analyst drafts a wider aerosol–cloud range from the approved version and
   await page.getByRole("textbox", { name: "Name", exact: true }).fill(names.widerDraft);
   const notes = page.getByLabel("Notes: sources and justification");
   await notes.press("ControlOrMeta+End");
-  await notes.pressSequentially(" - Aerosol–cloud scale widened to 0.1–2.0 (5–95 %) for a stress view of aerosol uncertainty.");
+  await notes.press("Enter");
+  await notes.pressSequentially("- Aerosol–cloud scale widened to 0.1–2.0 (5–95 %) for a stress view of aerosol uncertainty.");
 
   const aci = page.getByRole("group", { name: "Aerosol–cloud scale" });
   await aci.getByLabel("Low end").fill("0.1");
@@ -73,7 +74,7 @@ test("analyst drafts a wider aerosol–cloud range from the approved version and
   const preview = aci.getByRole("table", { name: /percentiles of the distribution/ });
   await expect(preview.getByRole("cell").first()).toHaveText("0.100");
   await expect(preview.getByRole("cell").last()).toHaveText("2.000");
-  await aci.scrollIntoViewIfNeeded();
+  await aci.evaluate((el) => el.scrollIntoView({ block: "center" })); // clear of the sticky save bar
   await snap(page, testInfo, "model-version-editor", "model-version-editor.png");
 
   await page.getByRole("button", { name: "Save draft" }).click();

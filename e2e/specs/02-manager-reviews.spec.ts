@@ -6,7 +6,7 @@ import { snap } from "../support/screenshots";
 import { apiAs, getJson, postJson, signIn } from "../support/sign-in";
 
 interface User { id: string; email: string; role: string }
-interface Version { id: string; name: string; status: string; versionNumber: number; model: unknown; defaults: unknown; notes: string; authorId: string }
+interface Version { id: string; name: string; status: string; versionNumber: number; model: unknown; defaults: unknown; notes: string; authorId: string; pathwayIds: string[] }
 
 /**
  * Manager: finds the analyst's submission on the desk, reads the diff, cannot decide on a
@@ -37,6 +37,7 @@ test.beforeAll(async ({ baseURL }) => {
     const draft = await postJson<Version>(asMarit, "/api/model-versions", {
       name: names.managerOwnDraft,
       parentId: full.id,
+      pathwayIds: full.pathwayIds,
       model: full.model,
       defaults: { ...(full.defaults as object), horizons: [2030, 2050, 2080, 2100] },
       notes: `${full.notes}\n- Adds 2080 as a default horizon (drafted by Marit while she held the analyst role).`,
@@ -53,12 +54,13 @@ test.beforeAll(async ({ baseURL }) => {
 test("manager reads the diff, cannot decide their own version, approves the analyst's", async ({ page }, testInfo) => {
   await signIn(page, "manager");
 
-  // The desk lists what waits for this manager: the analyst's submission, never her own.
-  const waiting = page.getByRole("heading", { name: "Waiting for your review" }).locator("xpath=..");
+  // The desk lists what waits for review: the analyst's submission, and her own marked as
+  // one another manager decides.
+  await expect(page.getByRole("heading", { name: "Waiting for your review" })).toBeVisible();
   const item = page.getByRole("listitem").filter({ hasText: names.widerDraft });
-  await expect(item).toBeVisible();
   await expect(item).toContainText("major change by Ines Calloway");
-  await expect(waiting.getByText(names.managerOwnDraft)).toHaveCount(0);
+  const own = page.getByRole("listitem").filter({ hasText: names.managerOwnDraft });
+  await expect(own).toContainText("another manager decides");
   await snap(page, testInfo, "desk-manager", "desk-manager.png");
 
   // Her own version: the review page explains why she cannot decide, and the API refuses.
@@ -73,6 +75,7 @@ test("manager reads the diff, cannot decide their own version, approves the anal
   await expect(page.getByRole("note")).toContainText("You are the author of this version");
   await expect(page.getByRole("button", { name: "Approve" })).toBeDisabled();
   await expect(page.getByRole("button", { name: "Reject" })).toBeDisabled();
+  await expect(page.getByText(/Running two .*preview ensembles/)).toHaveCount(0, { timeout: 60_000 });
   await snap(page, testInfo, "review-own-version-refused", "review-own-version.png");
   // The buttons are only the visible half: the server refuses the same request from this session.
   const refused = await page.request.post(`/api/model-versions/${ownDraft.id}/approve`, {
@@ -89,6 +92,9 @@ test("manager reads the diff, cannot decide their own version, approves the anal
   const diff = page.getByRole("table", { name: /^Against Harbourline Core Assumptions v1/ });
   await expect(diff.getByRole("row", { name: /aerosol-cloud\.scale\.low 0\.298 0\.1/ })).toBeVisible();
   await expect(diff.getByRole("row", { name: /aerosol-cloud\.scale\.high 1\.726 2/ })).toBeVisible();
+  await expect(diff.getByRole("row", { name: /^pathwayIds/ })).toHaveCount(0);
+  // The page also runs a small preview ensemble of both versions ("effect on key outputs").
+  await expect(page.getByText(/Running two .*preview ensembles/)).toHaveCount(0, { timeout: 60_000 });
   await snap(page, testInfo, "review-diff", "review-diff.png");
 
   await page.getByLabel("Comment").fill("Approved as a stress variant: only the aerosol–cloud range differs from v1, and the notes say why.");

@@ -64,10 +64,13 @@ test("analyst runs the approved version, reads the fan chart and horizons, compa
   // The fan chart draws a band pair and a median per pathway, with a toggle per pathway.
   for (const p of seededPathways) await expect(fan.getByRole("button", { name: p, exact: true })).toHaveAttribute("aria-pressed", "true");
   expect(await fan.locator("svg path").count()).toBeGreaterThanOrEqual(3 * seededPathways.length);
+  await snap(page, testInfo, "run-result", "run-result.png");
   const plot = fan.getByRole("img");
   const box = (await plot.boundingBox())!;
   await plot.hover({ position: { x: box.width * 0.8, y: box.height * 0.5 } });
-  await snap(page, testInfo, "run-result", "run-result.png");
+  // Hover read-out of the year's percentiles for every pathway shown.
+  await expect(fan.getByText(/^median/).first()).toBeVisible();
+  await snap(page, testInfo, "run-result-hover");
 
   // The horizon table shows what the API computed (2 decimals, K).
   const api = page.request;

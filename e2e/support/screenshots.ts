@@ -8,9 +8,10 @@ const docs = path.resolve(e2eRoot, "..", "docs", "screenshots");
 
 /**
  * Saves a full-page screenshot of a key screen under e2e/artifacts/screenshots/<flow>/ and
- * attaches it to the report. With UPDATE_DOCS_SCREENSHOTS=1 the ones picked for the README
- * (`docsName`) are also written to docs/screenshots/, so ordinary test runs never touch
- * committed files.
+ * attaches it to the report. With UPDATE_DOCS_SCREENSHOTS=1 the ones picked for the docs
+ * (`docsName`) are also written to docs/screenshots/ as they appear in the window (1440×900
+ * at the current scroll), so the sticky sidebar looks as it does to a user; ordinary test
+ * runs never touch committed files.
  */
 export async function snap(page: Page, testInfo: TestInfo, name: string, docsName?: string): Promise<void> {
   const flow = path.basename(testInfo.file, ".spec.ts");
@@ -23,6 +24,6 @@ export async function snap(page: Page, testInfo: TestInfo, name: string, docsNam
   await testInfo.attach(name, { body, contentType: "image/png" });
   if (docsName && process.env.UPDATE_DOCS_SCREENSHOTS === "1") {
     fs.mkdirSync(docs, { recursive: true });
-    fs.copyFileSync(file, path.join(docs, docsName));
+    await page.screenshot({ path: path.join(docs, docsName), animations: "disabled" });
   }
 }
