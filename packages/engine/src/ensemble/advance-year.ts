@@ -77,19 +77,21 @@ export function advanceReportedYears(
   const slots = plan.state.slots;
   const ring = slots.length;
   const at = 6 * chunk;
+  const levels = plan.thresholdsAscending.length + 1;
   for (let t = t0; t < t1; t++) {
-    const extremes = slots[t % ring]!.extremes;
+    const { extremes, aboveCounts } = slots[t % ring]!;
     for (let k = 0; k < 6; k += 2) {
       extremes[at + k] = Infinity;
       extremes[at + k + 1] = -Infinity;
     }
+    aboveCounts.fill(0, levels * chunk, levels * (chunk + 1));
   }
   for (let b = lo; b < hi; b += MEMBER_BLOCK) {
     const bh = Math.min(hi, b + MEMBER_BLOCK);
     for (let t = t0; t < t1; t++) {
       const slot = slots[t % ring]!;
       memberForcing(plan, pathway, t, b, bh, slot.forcing, slot.extremes, at);
-      stepReportedBlock(plan, t, b, bh, at, slot);
+      stepReportedBlock(plan, t, b, bh, at, levels * chunk, slot);
     }
   }
 }
@@ -99,14 +101,15 @@ export function advanceReportedYears(
  * (against its own baseline mean), total forcing and top-of-atmosphere imbalance
  * N = F − λT − (ε − 1)γ(T − T0) (Geoffroy et al. 2013b) into the year's slot, and record
  * first crossings: a member crosses a threshold in the first year whose anomaly exceeds it
- * (strictly). Thresholds are ascending, so one comparison per member-year suffices.
+ * (strictly). The record keeps the next threshold to cross, so one comparison per
+ * member-year suffices. Also counts members by how many thresholds they are above.
  */
-function stepReportedBlock(plan: EnsemblePlan, t: number, lo: number, hi: number, at: number, slot: YearSlot): void {
+function stepReportedBlock(plan: EnsemblePlan, t: number, lo: number, hi: number, at: number, countsAt: number, slot: YearSlot): void {
   const records = plan.state.records;
   const crossing = plan.state.crossing;
   const thresholds = plan.thresholdsAscending;
   const thresholdCount = thresholds.length;
-  const { anomaly, forcing, imbalance, extremes } = slot;
+  const { anomaly, forcing, imbalance, extremes, aboveCounts } = slot;
   let minAnomaly = extremes[at + 2]!;
   let maxAnomaly = extremes[at + 3]!;
   let minImbalance = extremes[at + 4]!;
@@ -128,12 +131,16 @@ function stepReportedBlock(plan: EnsemblePlan, t: number, lo: number, hi: number
     if (a > maxAnomaly) maxAnomaly = a;
     if (n < minImbalance) minImbalance = n;
     if (n > maxImbalance) maxImbalance = n;
-    let c = records[o + 11 /* CROSSED */]!;
-    if (c < thresholdCount && a > thresholds[c]!) {
+    if (a > records[o + 11 /* NEXT_THRESHOLD */]!) {
+      let c = 0;
+      while (thresholds[c]! < records[o + 11 /* NEXT_THRESHOLD */]!) c++;
       do crossing[c++]![m] = t;
       while (c < thresholdCount && a > thresholds[c]!);
-      records[o + 11 /* CROSSED */] = c;
+      records[o + 11 /* NEXT_THRESHOLD */] = c < thresholdCount ? thresholds[c]! : Infinity;
     }
+    let above = 0;
+    while (above < thresholdCount && a > thresholds[above]!) above++;
+    aboveCounts[countsAt + above]!++;
   }
   extremes[at + 2] = minAnomaly;
   extremes[at + 3] = maxAnomaly;

@@ -15,6 +15,12 @@ export interface YearSlot {
    * not depend on the order they are taken in, so chunking cannot change them.
    */
   extremes: Float64Array;
+  /**
+   * Per writer (chunk), how many of its members lie above exactly k of the ascending
+   * thresholds, k = 0 … thresholds (thresholds + 1 counts per chunk): exceedance
+   * probabilities without another pass. Whole numbers, so the split changes nothing.
+   */
+  aboveCounts: Float64Array;
 }
 
 /**
@@ -89,6 +95,7 @@ export function allocateState(
       forcing: allocate(members),
       imbalance: allocate(members),
       extremes: allocate(6 * chunks),
+      aboveCounts: allocate((thresholds + 1) * chunks),
     })),
     memberScales: allocate(members * scaleWidth),
     horizonTemperature: many(horizons),

@@ -8,17 +8,19 @@ import { percentileSet } from "./percentile-set.js";
 /**
  * The ensemble's implied equilibrium sensitivity (ECS = F2x/λ, which is the sampled ECS) and
  * transient response (each member's own TCR, implied-tcr.ts), as percentiles weighted like
- * the first pathway.
+ * the first pathway. `tcr` may be passed in when already computed (the parallel runner
+ * works it out while the workers run the first pathway).
  */
 export function impliedSensitivities(
   plan: EnsemblePlan,
   percentiles: number[],
   weighting: PathwayWeights,
+  tcr: Float64Array = impliedTcr(plan.climate),
 ): { ecs: PercentileSet; tcr: PercentileSet } {
   const selector = new PercentileSelector();
   const { weights, totalWeight } = weighting;
   return {
     ecs: percentileSet(selector, plan.climate.ecs, percentiles, weights, totalWeight),
-    tcr: percentileSet(selector, impliedTcr(plan.climate), percentiles, weights, totalWeight),
+    tcr: percentileSet(selector, tcr, percentiles, weights, totalWeight),
   };
 }

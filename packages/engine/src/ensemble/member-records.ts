@@ -22,8 +22,8 @@ export const EXTRA_UPTAKE = 7;
 export const BASELINE = 8;
 export const UPPER = 9;
 export const DEEP = 10;
-/** How many of the ascending thresholds the member has crossed so far. */
-export const CROSSED = 11;
+/** The lowest ascending threshold the member has not crossed yet (+Infinity once all are). */
+export const NEXT_THRESHOLD = 11;
 
 /** Packs each member's propagator and imbalance terms; state fields start at 0. Cost O(members). */
 export function buildMemberRecords(climate: MemberClimate, members: number, allocate: Allocate): Float64Array {

@@ -1,7 +1,7 @@
 import { advanceBaselineYears } from "./advance-year.js";
 import type { EnsemblePlan } from "./ensemble-plan.js";
 import { fillMemberScales } from "./member-forcing.js";
-import { BASELINE, CROSSED, DEEP, RECORD, UPPER } from "./member-records.js";
+import { BASELINE, DEEP, NEXT_THRESHOLD, RECORD, UPPER } from "./member-records.js";
 
 /**
  * The two passes over one pathway, for members [lo, hi). Anomalies are against each
@@ -65,11 +65,12 @@ export function runBaselinePass(
 /** Clears the state of members [lo, hi) for the reporting pass. */
 export function resetForReporting(plan: EnsemblePlan, lo: number, hi: number): void {
   const { records, crossing } = plan.state;
+  const first = plan.thresholdsAscending[0] ?? Infinity;
   for (let m = lo; m < hi; m++) {
     const o = m * RECORD;
     records[o + UPPER] = 0;
     records[o + DEEP] = 0;
-    records[o + CROSSED] = 0;
+    records[o + NEXT_THRESHOLD] = first;
   }
   for (const years of crossing) years.fill(-1, lo, hi);
 }

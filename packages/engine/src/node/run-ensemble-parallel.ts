@@ -4,6 +4,7 @@ import { assembleResult } from "../ensemble/assemble-result.js";
 import type { EnsemblePlan } from "../ensemble/ensemble-plan.js";
 import { finishPathway } from "../ensemble/finish-pathway.js";
 import { impliedSensitivities } from "../ensemble/implied-sensitivity.js";
+import { impliedTcr } from "../ensemble/implied-tcr.js";
 import { firstPassYears, horizonsByYear } from "../ensemble/pathway-passes.js";
 import { pathwayPerils, runPerils } from "../ensemble/pathway-perils.js";
 import { weighPathway } from "../ensemble/pathway-weights.js";
@@ -105,19 +106,22 @@ async function runWithPool(spec: RunSpec, plan: EnsemblePlan, pool: WorkerPool, 
       const weighting = weighPathway(plan);
       control.simulated.fill(0);
       control.summarised.fill(0);
-      account(await pool.all(() => ({
+      const reporting = pool.all(() => ({
         kind: "report",
         pathway: p,
         weighted: weighting.weights !== null,
         totalWeight: weighting.totalWeight,
         horizonsByYear: horizonsByYear(plan, p),
-      })));
+      }));
+      // This thread is idle while the workers report: work out the members' TCR meanwhile.
+      const tcr = p === 0 ? impliedTcr(plan.climate) : undefined;
+      account(await reporting);
       const finishStart = performance.now();
       finishedYears += plan.pathways[p]!.years;
       control.summarised.fill(0);
       pathways.push(finishPathway(spec, plan, p, weighting, inputRanks));
       perils.push(pathwayPerils(spec, plan, p, weighting));
-      if (p === 0) implied = impliedSensitivities(plan, spec.percentiles, weighting);
+      if (p === 0) implied = impliedSensitivities(plan, spec.percentiles, weighting, tcr);
       if (times) times.finish += (performance.now() - finishStart) / 1000;
     }
     options.onProgress?.(1);

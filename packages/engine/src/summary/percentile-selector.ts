@@ -483,10 +483,10 @@ function countAndCopyHinted(
     let b = ((v - min) * scale) | 0;
     if (b > last) b = last;
     counts[b]!++;
-    if (hinted[b] !== 0) {
-      copy[k] = v;
-      copyBucket[k++] = b;
-    }
+    // Written every time, kept only in hinted buckets: no hard-to-predict branch.
+    copy[k] = v;
+    copyBucket[k] = b;
+    k += hinted[b]!;
   }
   total[0] = sum;
   return k;
