@@ -33,6 +33,14 @@ describe("runEnsembleParallel", () => {
     expect(three.resultHash).toBe(runEnsemble(unconstrained).resultHash);
   }, 60_000);
 
+  it("is bit-identical to one thread when threads and member blocks split members differently", async () => {
+    // 5,001 members: one thread runs member blocks of 2,048, 2,048 and 905; two threads run
+    // 2,500 + 2,501 members, each as a block of 2,048 and a short one.
+    const spec = baseSpec({ members: 5_001, sampling: "monte-carlo", horizons: [2100] });
+    const single = runEnsemble(spec);
+    expect((await runEnsembleParallel(spec, { threads: 2 })).resultHash).toBe(single.resultHash);
+  }, 60_000);
+
   it("rejects a bad spec with the SpecError and honours an aborted signal", async () => {
     await expect(runEnsembleParallel(baseSpec({ members: 0 }), { threads: 2 })).rejects.toThrow("members must be at least 1");
     const controller = new AbortController();
