@@ -22,6 +22,9 @@ export class PercentileSelector {
   private counts = new Int32Array(0);
   private bucketWeights = new Float64Array(0);
   private slotOfBucket = new Int32Array(0);
+  /** Scratch per bucket (write before read, so never cleared): where a bucket's run starts or is filled to. */
+  private bucketStart = new Int32Array(0);
+  private bucketCursor = new Int32Array(0);
   private gathered = new Float64Array(0);
   private gatheredWeights = new Float64Array(0);
   private order = new Uint32Array(0);
@@ -105,7 +108,7 @@ export class PercentileSelector {
     for (let b = 0; b < buckets; b++) if (slot[b]! >= 0 && hinted[b] === 0) missed = true;
     if (missed) this.gatherAndSort(values, null, n, min, scale, last);
     else {
-      const cursor = new Int32Array(buckets);
+      const cursor = this.bucketCursor;
       const starts: Array<[number, number]> = [];
       for (let b = 0; b < buckets; b++) {
         if (slot[b]! < 0) continue;
@@ -150,6 +153,8 @@ export class PercentileSelector {
       this.counts = new Int32Array(buckets);
       this.bucketWeights = new Float64Array(buckets);
       this.slotOfBucket = new Int32Array(buckets);
+      this.bucketStart = new Int32Array(buckets);
+      this.bucketCursor = new Int32Array(buckets);
     }
     this.counts.fill(0, 0, buckets);
     this.slotOfBucket.fill(-1, 0, buckets);
@@ -204,7 +209,7 @@ export class PercentileSelector {
     }
     // Lay the wanted buckets out one after another in the gathered buffer.
     let offset = 0;
-    const start = new Int32Array(buckets);
+    const start = this.bucketStart;
     for (let b = 0; b < buckets; b++) {
       if (slot[b]! < 0) continue;
       slot[b] = offset;
@@ -238,8 +243,7 @@ export class PercentileSelector {
   ): void {
     const slot = this.slotOfBucket;
     const counts = this.counts;
-    const fill = new Map<number, number>();
-    const cursor = new Int32Array(last + 1);
+    const cursor = this.bucketCursor;
     const starts: Array<[number, number]> = [];
     for (let b = 0; b <= last; b++) {
       if (slot[b]! >= 0) {
@@ -247,7 +251,6 @@ export class PercentileSelector {
         starts.push([slot[b]!, counts[b]!]);
       }
     }
-    fill.clear();
     const gathered = this.gathered;
     if (weights) {
       const order = this.order;
