@@ -34,10 +34,10 @@ export function DiffTable({ diff, profileNames }: { diff: ModelVersionDiff; prof
             <Td>
               <code className="text-xs">{c.path}</code>
             </Td>
-            <Td className="num max-w-sm break-all text-xs">
+            <Td className="num max-w-sm text-xs [overflow-wrap:anywhere]">
               <span className="rounded bg-danger-soft px-1">{showValue(c.path, c.before, profileNames)}</span>
             </Td>
-            <Td className="num max-w-sm break-all text-xs">
+            <Td className="num max-w-sm text-xs [overflow-wrap:anywhere]">
               <span className="rounded bg-ok-soft px-1">{showValue(c.path, c.after, profileNames)}</span>
             </Td>
           </tr>
