@@ -45,17 +45,17 @@ export default defineConfig({
   webServer: external
     ? undefined
     : {
-    command: "pnpm -w start",
-    cwd: "..",
-    url: `${baseURL}/api/health`,
-    timeout: 240_000,
-    reuseExistingServer: false,
-    stdout: "pipe",
-    env: {
-      PORT: String(port),
-      PLUMELINE_DATA_DIR: dataDir,
-      WORKERS: "2",
-      SIGN_IN_RATE_LIMIT: "1000",
-    },
-  },
+        command: "pnpm -w start",
+        cwd: "..",
+        url: `${baseURL}/api/health`,
+        timeout: 240_000,
+        reuseExistingServer: false,
+        stdout: "pipe",
+        env: {
+          PORT: String(port),
+          PLUMELINE_DATA_DIR: dataDir,
+          WORKERS: "2",
+          SIGN_IN_RATE_LIMIT: "1000",
+        },
+      },
 });
