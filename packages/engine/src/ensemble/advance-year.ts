@@ -60,39 +60,37 @@ function stepBaselineBlock(plan: EnsemblePlan, lo: number, hi: number, forcing: 
 }
 
 /**
- * Reporting pass, years [t0, t1), members [lo, hi), block by block: year t goes to slot
- * t mod (number of slots). First the extremes of this writer (`chunk`) in those slots are
- * reset, then each block folds its extremes in, so each slot ends with the extremes of the
- * writer's members whatever the block size.
+ * Reporting pass, years [t0, t1), members [lo, hi) with lo on a block boundary: block by
+ * block, year t into slot t mod (number of slots).
  */
-export function advanceReportedYears(
-  plan: EnsemblePlan,
-  pathway: PathwayForcing,
-  t0: number,
-  t1: number,
-  lo: number,
-  hi: number,
-  chunk: number,
-): void {
+export function advanceReportedYears(plan: EnsemblePlan, pathway: PathwayForcing, t0: number, t1: number, lo: number, hi: number): void {
+  for (let b = lo; b < hi; b += MEMBER_BLOCK) advanceReportedBlock(plan, pathway, t0, t1, b / MEMBER_BLOCK);
+}
+
+/**
+ * Member block `block` (members block·MEMBER_BLOCK … at most MEMBER_BLOCK further) through
+ * years [t0, t1). Each block writes its own tallies in each slot (extremes of forcing,
+ * anomaly and imbalance; counts by thresholds passed), so whichever thread runs a block,
+ * the summaries merge the same numbers: min, max and whole counts do not depend on order.
+ */
+export function advanceReportedBlock(plan: EnsemblePlan, pathway: PathwayForcing, t0: number, t1: number, block: number): void {
   const slots = plan.state.slots;
   const ring = slots.length;
-  const at = 6 * chunk;
+  const lo = block * MEMBER_BLOCK;
+  const hi = Math.min(plan.members, lo + MEMBER_BLOCK);
+  const at = 6 * block;
   const levels = plan.thresholdsAscending.length + 1;
+  const countsAt = levels * block;
   for (let t = t0; t < t1; t++) {
-    const { extremes, aboveCounts } = slots[t % ring]!;
+    const slot = slots[t % ring]!;
+    const { extremes, aboveCounts } = slot;
     for (let k = 0; k < 6; k += 2) {
       extremes[at + k] = Infinity;
       extremes[at + k + 1] = -Infinity;
     }
-    aboveCounts.fill(0, levels * chunk, levels * (chunk + 1));
-  }
-  for (let b = lo; b < hi; b += MEMBER_BLOCK) {
-    const bh = Math.min(hi, b + MEMBER_BLOCK);
-    for (let t = t0; t < t1; t++) {
-      const slot = slots[t % ring]!;
-      memberForcing(plan, pathway, t, b, bh, slot.forcing, slot.extremes, at);
-      stepReportedBlock(plan, t, b, bh, at, levels * chunk, slot);
-    }
+    aboveCounts.fill(0, countsAt, countsAt + levels);
+    memberForcing(plan, pathway, t, lo, hi, slot.forcing, extremes, at);
+    stepReportedBlock(plan, t, lo, hi, at, countsAt, slot);
   }
 }
 

@@ -10,15 +10,15 @@ export interface YearSlot {
   forcing: Float64Array;
   imbalance: Float64Array;
   /**
-   * Per member block ("chunk") that wrote the year: min and max of forcing, anomaly and
-   * imbalance (6 numbers per chunk), so summaries need no extremes pass. Min and max do
-   * not depend on the order they are taken in, so chunking cannot change them.
+   * Per member block (advance-year.ts MEMBER_BLOCK): min and max of forcing, anomaly and
+   * imbalance in the year (6 numbers per block), so summaries need no extremes pass. Min
+   * and max do not depend on the order they are taken in, so no split can change them.
    */
   extremes: Float64Array;
   /**
-   * Per writer (chunk), how many of its members lie above exactly k of the ascending
-   * thresholds, k = 0 … thresholds (thresholds + 1 counts per chunk): exceedance
-   * probabilities without another pass. Whole numbers, so the split changes nothing.
+   * Per member block, how many of its members lie above exactly k of the ascending
+   * thresholds, k = 0 … thresholds (thresholds + 1 counts per block): exceedance
+   * probabilities without another pass. Whole numbers, so no split changes them.
    */
   aboveCounts: Float64Array;
 }
@@ -42,8 +42,8 @@ export interface EnsemblePlan {
   baseline: [number, number];
   constraint: RunSpec["model"]["constraint"];
   horizons: number[];
-  /** Member blocks that write each year (1, or the number of worker threads). */
-  chunks: number;
+  /** Member blocks of MEMBER_BLOCK members (the last may be shorter). */
+  blocks: number;
   /** Reported years simulated together before being summarised (year-spans.ts). */
   spanYears: number;
   state: EnsembleState;
@@ -78,7 +78,7 @@ export function allocateState(
   thresholds: number,
   horizons: number,
   ringSize: number,
-  chunks: number,
+  blocks: number,
   scaleWidth: number,
   yearlyLength: number,
   allocate: Allocate,
@@ -94,8 +94,8 @@ export function allocateState(
       anomaly: allocate(members),
       forcing: allocate(members),
       imbalance: allocate(members),
-      extremes: allocate(6 * chunks),
-      aboveCounts: allocate((thresholds + 1) * chunks),
+      extremes: allocate(6 * blocks),
+      aboveCounts: allocate((thresholds + 1) * blocks),
     })),
     memberScales: allocate(members * scaleWidth),
     horizonTemperature: many(horizons),

@@ -2,6 +2,7 @@ import { applyDefaults } from "../spec/apply-defaults.js";
 import { SpecError } from "../spec/spec-error.js";
 import type { RunSpec, RunSpecInput } from "../spec/types.js";
 import { validateSpec } from "../spec/validate-spec.js";
+import { MEMBER_BLOCK } from "./advance-year.js";
 import { allocateState, type EnsemblePlan } from "./ensemble-plan.js";
 import { buildMemberClimate } from "./member-climate.js";
 import { buildMemberRecords } from "./member-records.js";
@@ -22,7 +23,6 @@ export function preparePlan(
   input: RunSpecInput | RunSpec,
   spansInRing = 1,
   allocate: Allocate = allocateLocal,
-  chunks = 1,
 ): { spec: RunSpec; plan: EnsemblePlan } {
   const spec = applyDefaults(input);
   validateSpec(spec);
@@ -51,13 +51,14 @@ export function preparePlan(
   const maxYears = Math.max(...pathways.map((p) => p.years));
   const probs = spec.percentiles.map((p) => p / 100);
   const span = spanYears(spec.members, spansInRing);
+  const blocks = Math.ceil(spec.members / MEMBER_BLOCK);
   const state = allocateState(
     buildMemberRecords(climate, spec.members, allocate),
     spec.members,
     spec.thresholds.length,
     spec.horizons.length,
     span * spansInRing,
-    chunks,
+    blocks,
     Math.max(...pathways.map((p) => p.scaleWidth)),
     yearlyLength(probs.length, spec.thresholds.length, maxYears),
     allocate,
@@ -74,7 +75,7 @@ export function preparePlan(
     baseline: spec.baseline,
     constraint: spec.model.constraint,
     horizons: [...spec.horizons],
-    chunks,
+    blocks,
     spanYears: span,
     state,
   };

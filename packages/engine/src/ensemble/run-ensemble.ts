@@ -70,7 +70,7 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
     lap("simulate");
     for (let t0 = 0; t0 < pathway.years; t0 += span) {
       const t1 = Math.min(pathway.years, t0 + span);
-      advanceReportedYears(plan, pathway, t0, t1, 0, n, 0);
+      advanceReportedYears(plan, pathway, t0, t1, 0, n);
       if (times) lap("simulate");
       for (let t = t0; t < t1; t++) {
         summariser.summarise(t, pathway.years, slots[t % slots.length]!, weighting.weights, weighting.totalWeight, byYear[t]!);

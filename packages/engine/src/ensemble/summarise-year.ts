@@ -58,8 +58,8 @@ export class YearSummariser {
     const ascending = this.plan.thresholdsAscending;
     const levels = ascending.length + 1;
     const atLeast = new Array<number>(levels).fill(0);
-    for (let chunk = 0; chunk < this.plan.chunks; chunk++)
-      for (let k = 1; k < levels; k++) for (let i = 0; i < k; i++) atLeast[i]! += aboveCounts[chunk * levels + k]!;
+    for (let block = 0; block < this.plan.blocks; block++)
+      for (let k = 1; k < levels; k++) for (let i = 0; i < k; i++) atLeast[i]! += aboveCounts[block * levels + k]!;
     return this.plan.thresholds.map((th) => atLeast[ascending.indexOf(th)]!);
   }
 
@@ -94,9 +94,9 @@ export class YearSummariser {
     const n = this.plan.members;
     let min = Infinity;
     let max = -Infinity;
-    for (let chunk = 0; chunk < this.plan.chunks; chunk++) {
-      min = Math.min(min, extremes[6 * chunk + at]!);
-      max = Math.max(max, extremes[6 * chunk + at + 1]!);
+    for (let block = 0; block < this.plan.blocks; block++) {
+      min = Math.min(min, extremes[6 * block + at]!);
+      max = Math.max(max, extremes[6 * block + at + 1]!);
     }
     const percentiles = this.plan.probs.length;
     const track = this.recent[quantity]!;

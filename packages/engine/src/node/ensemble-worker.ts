@@ -1,5 +1,5 @@
 import { parentPort } from "node:worker_threads";
-import { advanceReportedYears } from "../ensemble/advance-year.js";
+import { MEMBER_BLOCK, advanceReportedBlock } from "../ensemble/advance-year.js";
 import type { EnsemblePlan } from "../ensemble/ensemble-plan.js";
 import { resetForReporting, runBaselinePass } from "../ensemble/pathway-passes.js";
 import { YearSummariser } from "../ensemble/summarise-year.js";
@@ -7,35 +7,32 @@ import { CANCEL_FLAG, addAndWake, waitUntilAtLeast, type PipelineControl } from 
 import type { FromWorker, ToWorker } from "./worker-messages.js";
 
 /**
- * One worker of the parallel runner. It advances its own members [lo, hi) a span of years
- * at a time and, in the reporting pass, summarises every year t of the span with
- * t mod workers = its number once all workers have written year t, so simulation is split
- * by member and summaries by year. Summaries
- * read whole years in member order, hence results identical to one thread.
+ * One worker of the parallel runner. In each pass it claims member blocks (MEMBER_BLOCK
+ * members) from a shared counter until none are left; in the reporting pass it does so
+ * span by span, then claims years of the finished span to summarise. Summaries read whole
+ * years in member order, so the results are identical to one thread whoever did what.
  */
 let plan: EnsemblePlan;
 let control: PipelineControl;
-let me = 0;
-let workers = 1;
-let lo = 0;
-let hi = 0;
 let summariser: YearSummariser;
 let simulateSeconds = 0;
 let summariseSeconds = 0;
 
 const port = parentPort!;
 const send = (message: FromWorker) => port.postMessage(message);
+const cancelled = () => Atomics.load(control.flags, CANCEL_FLAG) !== 0;
 
 port.on("message", (message: ToWorker) => {
   try {
     if (message.kind === "plan") {
-      ({ plan, control, worker: me, workers, lo, hi } = message);
+      ({ plan, control } = message);
       summariser = new YearSummariser(plan);
       send({ kind: "ready" });
     } else if (message.kind === "baseline") {
       const start = performance.now();
-      runBaselinePass(plan, message.pathway, lo, hi);
-      send({ kind: "done", simulateSeconds: (performance.now() - start) / 1000, summariseSeconds: 0 });
+      const finished = baselinePass(message.pathway);
+      const seconds = (performance.now() - start) / 1000;
+      send(finished ? { kind: "done", simulateSeconds: seconds, summariseSeconds: 0 } : { kind: "cancelled" });
     } else if (message.kind === "report") {
       simulateSeconds = 0;
       summariseSeconds = 0;
@@ -50,30 +47,51 @@ port.on("message", (message: ToWorker) => {
   }
 });
 
+/** Claims member blocks of the first pass (counter at index `spans` of blockClaims). */
+function baselinePass(pathwayIndex: number): boolean {
+  const n = plan.members;
+  const blocks = Math.ceil(n / MEMBER_BLOCK);
+  const at = control.blockClaims.length - 1;
+  for (;;) {
+    if (cancelled()) return false;
+    const b = Atomics.add(control.blockClaims, at, 1);
+    if (b >= blocks) return true;
+    runBaselinePass(plan, pathwayIndex, b * MEMBER_BLOCK, Math.min(n, (b + 1) * MEMBER_BLOCK));
+  }
+}
+
 function reportPathway(message: Extract<ToWorker, { kind: "report" }>): boolean {
   const pathway = plan.pathways[message.pathway]!;
   const ring = plan.state.slots.length;
   const weights = message.weighted ? plan.state.weights : null;
-  resetForReporting(plan, lo, hi);
+  const n = plan.members;
+  const blocks = Math.ceil(n / MEMBER_BLOCK);
   const span = plan.spanYears;
-  for (let t0 = 0; t0 < pathway.years; t0 += span) {
+  for (let s = 0, t0 = 0; t0 < pathway.years; s++, t0 += span) {
     const t1 = Math.min(pathway.years, t0 + span);
-    if (Atomics.load(control.flags, CANCEL_FLAG) !== 0) return false;
     // The slots of years t0..t1 last held years t − ring: those must have been summarised.
     for (let t = Math.max(t0, ring); t < t1; t++) if (!waitUntilAtLeast(control, control.summarised, t - ring, 1)) return false;
     const start = performance.now();
-    advanceReportedYears(plan, pathway, t0, t1, lo, hi, me);
+    for (;;) {
+      if (cancelled()) return false;
+      const b = Atomics.add(control.blockClaims, s, 1);
+      if (b >= blocks) break;
+      if (s === 0) resetForReporting(plan, b * MEMBER_BLOCK, Math.min(n, (b + 1) * MEMBER_BLOCK));
+      advanceReportedBlock(plan, pathway, t0, t1, b);
+      addAndWake(control.blocksDone, s, 1);
+    }
     simulateSeconds += (performance.now() - start) / 1000;
-    for (let t = t0; t < t1; t++) addAndWake(control.simulated, t, 1);
-    for (let t = t0; t < t1; t++) {
-      if (t % workers !== me) continue;
-      if (!waitUntilAtLeast(control, control.simulated, t, workers)) return false;
-      const summaryStart = performance.now();
+    if (!waitUntilAtLeast(control, control.blocksDone, s, blocks)) return false;
+    const summaryStart = performance.now();
+    for (;;) {
+      const j = Atomics.add(control.yearClaims, s, 1);
+      if (t0 + j >= t1) break;
+      const t = t0 + j;
       summariser.summarise(t, pathway.years, plan.state.slots[t % ring]!, weights, message.totalWeight, message.horizonsByYear[t]!);
-      summariseSeconds += (performance.now() - summaryStart) / 1000;
       addAndWake(control.summarised, t, 1);
     }
+    summariseSeconds += (performance.now() - summaryStart) / 1000;
   }
-  // Each worker has summarised all of its years; once all report done, the pathway is complete.
+  // Every year has been claimed; once all workers report done, all are summarised.
   return true;
 }

@@ -1,24 +1,43 @@
 /**
- * The shared counters that let worker threads stream one pathway's reporting pass together
- * (Int32Array over a SharedArrayBuffer, used with Atomics):
- * - simulated[t]: how many workers have written their members of year t into its slot;
+ * The shared counters that let worker threads run one pathway together (Int32Array over a
+ * SharedArrayBuffer, used with Atomics). Work is handed out by claiming, not by a fixed
+ * split, so a thread that the machine slows down simply takes less of it:
+ * - blockClaims[s] / blocksDone[s]: member blocks of reporting span s claimed / finished
+ *   (the baseline pass uses index `spans`);
+ * - yearClaims[s]: years of span s claimed for summarising;
  * - summarised[t]: 1 once year t has been summarised, so its slot may be reused;
- * - cancel: set to 1 by the main thread to stop every worker at the next year.
+ * - cancel: set to 1 by the main thread to stop every worker at the next check.
+ * Which thread does what never changes a number: blocks are independent, tallies are
+ * order-free (min, max, whole counts) and each year is summarised whole, in member order.
  */
 export interface PipelineControl {
-  simulated: Int32Array;
+  blockClaims: Int32Array;
+  blocksDone: Int32Array;
+  yearClaims: Int32Array;
   summarised: Int32Array;
   flags: Int32Array;
 }
 
 export const CANCEL_FLAG = 0;
 
+const shared = (length: number) => new Int32Array(new SharedArrayBuffer(4 * Math.max(1, length)));
+
 export function createPipelineControl(maxYears: number): PipelineControl {
   return {
-    simulated: new Int32Array(new SharedArrayBuffer(4 * maxYears)),
-    summarised: new Int32Array(new SharedArrayBuffer(4 * maxYears)),
-    flags: new Int32Array(new SharedArrayBuffer(4 * 4)),
+    blockClaims: shared(maxYears + 1),
+    blocksDone: shared(maxYears + 1),
+    yearClaims: shared(maxYears + 1),
+    summarised: shared(maxYears),
+    flags: shared(4),
   };
+}
+
+/** Clears the claim counters before a pass (the main thread does this while workers wait). */
+export function resetPipelineControl(control: PipelineControl): void {
+  control.blockClaims.fill(0);
+  control.blocksDone.fill(0);
+  control.yearClaims.fill(0);
+  control.summarised.fill(0);
 }
 
 /** Blocks the calling worker until cell[index] ≥ value (or cancel is set). Returns false on cancel. */

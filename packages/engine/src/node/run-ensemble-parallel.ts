@@ -13,7 +13,7 @@ import { runEnsemble, type StageTimes } from "../ensemble/run-ensemble.js";
 import type { PathwayPerilResult } from "../peril/types.js";
 import { RunCancelledError } from "../spec/spec-error.js";
 import type { PathwayResult, PercentileSet, RunResult, RunSpec, RunSpecInput } from "../spec/types.js";
-import { CANCEL_FLAG, createPipelineControl, type PipelineControl } from "./pipeline-control.js";
+import { CANCEL_FLAG, createPipelineControl, resetPipelineControl, type PipelineControl } from "./pipeline-control.js";
 import type { FromWorker, ToWorker } from "./worker-messages.js";
 
 /** Below this many members one thread is faster than starting workers. */
@@ -32,8 +32,9 @@ const sharedAllocate = (length: number) => new Float64Array(new SharedArrayBuffe
 
 /**
  * runEnsemble spread over worker threads: sampling happens once on this thread (one seeded
- * stream per input, as in runEnsemble) into shared memory; workers each advance a block of
- * members and take turns summarising years (ensemble-worker.ts). Results are bit-identical
+ * stream per input, as in runEnsemble) into shared memory; workers claim member blocks
+ * and then years to summarise from shared counters (ensemble-worker.ts), so a thread the
+ * machine slows down takes less of the work. Results are bit-identical
  * to runEnsemble for any thread count. Rejects with SpecError for a bad spec and with
  * RunCancelledError when the signal aborts.
  */
@@ -54,7 +55,7 @@ export async function runEnsembleParallel(input: RunSpecInput | RunSpec, options
   const pool = new WorkerPool(threads);
   try {
     const start = performance.now();
-    const { spec, plan } = preparePlan(input, 2, sharedAllocate, threads);
+    const { spec, plan } = preparePlan(input, 2, sharedAllocate);
     if (options.stageTimes) options.stageTimes.sample += (performance.now() - start) / 1000;
     return await runWithPool(spec, plan, pool, options);
   } finally {
@@ -76,16 +77,7 @@ async function runWithPool(spec: RunSpec, plan: EnsemblePlan, pool: WorkerPool, 
       }, 100)
     : null;
   try {
-    const n = plan.members;
-    await pool.all((w, count) => ({
-      kind: "plan",
-      plan,
-      control,
-      worker: w,
-      workers: count,
-      lo: Math.floor((n * w) / count),
-      hi: Math.floor((n * (w + 1)) / count),
-    }));
+    await pool.all(() => ({ kind: "plan", plan, control }));
     const pathways: PathwayResult[] = [];
     const perils: (PathwayPerilResult | null)[] = [];
     let implied: { ecs: PercentileSet; tcr: PercentileSet } | null = null;
@@ -101,11 +93,11 @@ async function runWithPool(spec: RunSpec, plan: EnsemblePlan, pool: WorkerPool, 
     };
     for (let p = 0; p < plan.pathways.length; p++) {
       if (options.signal?.aborted) throw new RunCancelledError();
+      resetPipelineControl(control);
       account(await pool.all(() => ({ kind: "baseline", pathway: p })));
       finishedYears += firstPassYears(plan, p);
       const weighting = weighPathway(plan);
-      control.simulated.fill(0);
-      control.summarised.fill(0);
+      resetPipelineControl(control);
       const reporting = pool.all(() => ({
         kind: "report",
         pathway: p,
