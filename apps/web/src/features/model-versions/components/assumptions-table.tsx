@@ -4,14 +4,18 @@ import { inputLabel } from "@/lib/input-labels";
 import { percentileValues } from "../lib/distribution-math";
 import { DISTRIBUTION_TYPE_LABELS } from "../lib/distribution-fields";
 
-function describe(d: Distribution): string {
-  const { type, ...params } = d;
-  return `${DISTRIBUTION_TYPE_LABELS[type]} (${Object.entries(params)
+function describeParameters(d: Distribution): string {
+  const { type: _type, ...params } = d;
+  return Object.entries(params)
     .map(([k, v]) => `${k} ${v}`)
-    .join(", ")})`;
+    .join(", ");
 }
 
-/** Read-only summary of every input: its distribution and its 5/17/50/83/95 values. */
+/**
+ * Read-only summary of every input: its distribution and its 5/17/50/83/95 values.
+ * Names and distributions wrap (no minimum widths) so all five percentile columns fit in
+ * the review page's main column at 1280–1440 px without a horizontal scroll.
+ */
 export function AssumptionsTable({ model }: { model: ModelSpec }) {
   const rows: Array<{ key: string; unit: string; d: Distribution }> = [
     ...CLIMATE_INPUTS.map((k) => ({ key: k, unit: CLIMATE_INPUT_UNITS[k], d: model.climate[k] })),
@@ -24,7 +28,7 @@ export function AssumptionsTable({ model }: { model: ModelSpec }) {
           <Th>Input</Th>
           <Th>Distribution</Th>
           {[5, 17, 50, 83, 95].map((p) => (
-            <Th key={p} numeric>
+            <Th key={p} numeric className="whitespace-nowrap">
               {p} %
             </Th>
           ))}
@@ -33,12 +37,16 @@ export function AssumptionsTable({ model }: { model: ModelSpec }) {
       <tbody>
         {rows.map(({ key, unit, d }) => (
           <tr key={key}>
-            <Td className="whitespace-nowrap">
-              {inputLabel(key)} <span className="text-xs text-muted">({unit})</span>
+            <Td>
+              {inputLabel(key)} <span className="whitespace-nowrap text-xs text-muted">({unit})</span>
             </Td>
-            <Td className="min-w-56 text-xs text-muted">{describe(d)}</Td>
+            <Td className="text-xs text-muted [overflow-wrap:anywhere]">
+              <span className="text-ink">{DISTRIBUTION_TYPE_LABELS[d.type]}</span>
+              <br />
+              {describeParameters(d)}
+            </Td>
             {percentileValues(d).map((v) => (
-              <Td key={v.p} numeric className={v.p === 50 ? "font-semibold" : undefined}>
+              <Td key={v.p} numeric className={v.p === 50 ? "whitespace-nowrap font-semibold" : "whitespace-nowrap"}>
                 {Math.abs(v.value) >= 100 ? v.value.toFixed(1) : v.value.toFixed(3)}
               </Td>
             ))}
