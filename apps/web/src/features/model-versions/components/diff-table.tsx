@@ -1,6 +1,7 @@
 import type { ModelVersionDiff } from "@plumeline/contracts";
 import { Table, Td, Th } from "@/components/ui/table";
 import { EmptyState } from "@/components/ui/states";
+import { TextLineDiff } from "./text-line-diff";
 
 const show = (v: unknown) => (v === null || v === undefined ? "—" : typeof v === "object" ? JSON.stringify(v) : String(v));
 
@@ -11,6 +12,12 @@ const showValue = (path: string, v: unknown, profileNames?: ReadonlyMap<string, 
       ? "none"
       : v.map((id) => profileNames.get(String(id)) ?? String(id)).join("; ")
     : show(v);
+
+/** Texts of more than one line (the notes) read better as a line diff than as two blocks. */
+const isMultiLineText = (before: unknown, after: unknown) =>
+  (typeof before === "string" || before == null) &&
+  (typeof after === "string" || after == null) &&
+  `${before ?? ""}${after ?? ""}`.includes("\n");
 
 /** What changed against the parent (or another version), one line per changed field. */
 export function DiffTable({ diff, profileNames }: { diff: ModelVersionDiff; profileNames?: ReadonlyMap<string, string> }) {
@@ -29,19 +36,30 @@ export function DiffTable({ diff, profileNames }: { diff: ModelVersionDiff; prof
         </tr>
       </thead>
       <tbody>
-        {diff.changes.map((c) => (
-          <tr key={c.path}>
-            <Td>
-              <code className="text-xs">{c.path}</code>
-            </Td>
-            <Td className="num max-w-sm text-xs [overflow-wrap:anywhere]">
-              <span className="rounded bg-danger-soft px-1">{showValue(c.path, c.before, profileNames)}</span>
-            </Td>
-            <Td className="num max-w-sm text-xs [overflow-wrap:anywhere]">
-              <span className="rounded bg-ok-soft px-1">{showValue(c.path, c.after, profileNames)}</span>
-            </Td>
-          </tr>
-        ))}
+        {diff.changes.map((c) =>
+          isMultiLineText(c.before, c.after) ? (
+            <tr key={c.path}>
+              <Td>
+                <code className="text-xs">{c.path}</code>
+              </Td>
+              <Td colSpan={2}>
+                <TextLineDiff before={String(c.before ?? "")} after={String(c.after ?? "")} />
+              </Td>
+            </tr>
+          ) : (
+            <tr key={c.path}>
+              <Td>
+                <code className="text-xs">{c.path}</code>
+              </Td>
+              <Td className="num max-w-sm text-xs [overflow-wrap:anywhere]">
+                <span className="rounded bg-danger-soft px-1">{showValue(c.path, c.before, profileNames)}</span>
+              </Td>
+              <Td className="num max-w-sm text-xs [overflow-wrap:anywhere]">
+                <span className="rounded bg-ok-soft px-1">{showValue(c.path, c.after, profileNames)}</span>
+              </Td>
+            </tr>
+          ),
+        )}
       </tbody>
     </Table>
   );
