@@ -5,6 +5,7 @@ import { useExports } from "@/features/exports/api/get-exports";
 import { ExportsTable } from "@/features/exports/components/exports-table";
 import { useModelVersions } from "@/features/model-versions/api/get-model-versions";
 import { ModelVersionsTable } from "@/features/model-versions/components/model-versions-table";
+import { ReviewQueue } from "@/features/model-versions/components/review-queue";
 import { useRuns } from "@/features/runs/api/get-runs";
 import { RunsTable } from "@/features/runs/components/runs-table";
 import { ExploratoryStamp } from "@/components/ui/badges";
@@ -112,36 +113,15 @@ function ReviewsWaiting({ userId }: { userId: string }) {
   const versions = useModelVersions("in-review");
   return (
     <Card className="border-l-4 border-l-accent">
-      <CardHeader title="Waiting for your review" subtitle="Versions you did not write; you cannot decide on your own." />
+      <CardHeader title="Waiting for your review" subtitle="Versions others submitted, for you to approve or reject." />
       {versions.isPending ? (
         <LoadingState />
       ) : versions.isError ? (
         <CardBody>
           <ErrorState error={versions.error} />
         </CardBody>
-      ) : versions.data.length === 0 ? (
-        <CardBody>
-          <EmptyState title="Nothing to review" />
-        </CardBody>
       ) : (
-        <ul className="divide-y divide-line">
-          {versions.data.map((v) => (
-            <li key={v.id} className="flex items-center justify-between gap-3 px-4 py-3">
-              <div>
-                <p className="font-medium">
-                  {v.name} <span className="num text-muted">v{v.versionNumber}</span>
-                </p>
-                <p className="text-xs text-muted">
-                  {v.changeClass ?? "–"} change by {v.authorName ?? "–"}
-                  {v.authorId === userId && " (yours: another manager decides)"}
-                </p>
-              </div>
-              <ButtonLink to={paths.modelVersionReview.build(v.id)} size="sm" variant={v.authorId === userId ? "secondary" : "primary"}>
-                Review
-              </ButtonLink>
-            </li>
-          ))}
-        </ul>
+        <ReviewQueue versions={versions.data} userId={userId} />
       )}
     </Card>
   );
