@@ -16,7 +16,12 @@
  */
 import { weightedPosition } from "./weighted-positions.js";
 
-const MAX_BUCKETS = 4096;
+/**
+ * n/32 buckets up to this many: about 32 members per bucket even at 1,000,000 members
+ * (with 4,096 the wanted buckets held ~250 members each and W1 at 1M summarised ~40 %
+ * slower); the count array (128 kB) still fits a core's L2 cache.
+ */
+const MAX_BUCKETS = 32768;
 
 export class PercentileSelector {
   private counts = new Int32Array(0);
