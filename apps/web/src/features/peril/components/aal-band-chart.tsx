@@ -1,11 +1,12 @@
 import { useMemo } from "react";
-import { max, scaleBand, scaleLinear } from "d3";
+import { scaleBand, scaleLinear } from "d3";
 import { AxisLeft } from "@/components/charts/axes";
 import { ChartFrame, DataTable } from "@/components/charts/chart-frame";
 import { DEFAULT_MARGINS, innerSize } from "@/components/charts/margins";
 import { seriesColor } from "@/components/charts/palette";
 import { useChartWidth } from "@/components/charts/use-chart-width";
 import { formatInteger } from "@/lib/format";
+import { lossAxisDomain } from "../lib/loss-axis-domain";
 
 /** One horizon's projected loss: its percentiles ("p5" … "p95") and mean. */
 export interface LossAtHorizon {
@@ -18,7 +19,9 @@ const compact = new Intl.NumberFormat("en-GB", { notation: "compact", maximumFra
 /**
  * Projected average annual loss by horizon: for each horizon a thin 5–95 % bar, a wider
  * 17–83 % bar and a median tick, with the baseline AAL (today's view) as a dashed line, so the
- * change and its uncertainty read at a glance. Plain data in, nothing fetched.
+ * change and its uncertainty read at a glance. The loss axis spans the bands and today's AAL
+ * rather than starting at zero (said in the axis label, with a break mark), so a narrow band
+ * of large losses keeps its shape. Plain data in, nothing fetched.
  */
 export function AalBandChart({
   title,
@@ -41,8 +44,13 @@ export function AalBandChart({
     () => scaleBand<string>().domain(horizons.map((h) => String(h.year))).range([0, innerWidth]).padding(0.35),
     [horizons, innerWidth],
   );
-  const top = Math.max(max(horizons, (h) => h.summary.p95 ?? h.summary.p50 ?? 0) ?? 0, baselineAal ?? 0);
-  const y = useMemo(() => scaleLinear().domain([0, top * 1.08 || 1]).range([innerHeight, 0]).nice(), [top, innerHeight]);
+  // The axis spans the data and today's AAL (not from zero), so the bands have height.
+  const { y, fromZero } = useMemo(() => {
+    const values = horizons.flatMap((h) => [h.summary.p5, h.summary.p50, h.summary.p95]).filter((v): v is number => v !== undefined);
+    if (baselineAal !== undefined && baselineAal !== null) values.push(baselineAal);
+    const scale = scaleLinear().domain(lossAxisDomain(values).domain).range([innerHeight, 0]).nice();
+    return { y: scale, fromZero: scale.domain()[0]! <= 0 };
+  }, [horizons, baselineAal, innerHeight]);
   const color = seriesColor(0);
   const keys = ["p5", "p17", "p50", "p83", "p95", "mean"];
   const table = (
@@ -53,12 +61,20 @@ export function AalBandChart({
     />
   );
   return (
-    <ChartFrame title={title} description="Median tick, 17–83 % (wide) and 5–95 % (thin) bars at each horizon; dashed line: today's AAL." table={table}>
+    <ChartFrame
+      title={title}
+      description={`Median tick, 17–83 % (wide) and 5–95 % (thin) bars at each horizon; dashed line: today's AAL.${fromZero ? "" : " The loss axis spans the projections and today's AAL: it does not start at zero."}`}
+      table={table}
+    >
       <div ref={ref} className="w-full">
         <svg width={width} height={height} role="img" aria-label={`${title}: projected average annual loss by horizon (${currency})`} className="block overflow-visible">
           <g transform={`translate(${m.left},${m.top})`}>
-            <AxisLeft scale={y} width={innerWidth} label={`Average annual loss (${currency})`} format={(v) => compact.format(v)} />
+            <AxisLeft scale={y} width={innerWidth} label={fromZero ? `Average annual loss (${currency})` : `AAL (${currency}), axis not from 0`} format={(v) => compact.format(v)} />
             <line x2={innerWidth} y1={innerHeight} y2={innerHeight} stroke="var(--pl-line-strong)" />
+            {!fromZero && (
+              // The usual broken-axis mark: two short slashes where the axis would go on to zero.
+              <path data-testid="axis-break" d={`M-5,${innerHeight - 2} l10,-5 M-5,${innerHeight + 3} l10,-5`} stroke="var(--pl-muted)" strokeWidth={1.2} fill="none" />
+            )}
             {horizons.map((h) => {
               const cx = (x(String(h.year)) ?? 0) + x.bandwidth() / 2;
               const s = h.summary;
