@@ -30,6 +30,8 @@ export class PercentileSelector {
   /** Scratch per bucket (write before read, so never cleared): where a bucket's run starts or is filled to. */
   private bucketStart = new Int32Array(0);
   private bucketCursor = new Int32Array(0);
+  /** Buckets holding a wanted order statistic, ascending (set by locateRanks). */
+  private readonly wantedBuckets: number[] = [];
   private gathered = new Float64Array(0);
   private gatheredWeights = new Float64Array(0);
   private order = new Uint32Array(0);
@@ -93,34 +95,32 @@ export class PercentileSelector {
     if (this.hinted.length < buckets) this.hinted = new Uint8Array(buckets);
     const hinted = this.hinted;
     hinted.fill(0, 0, buckets);
+    const ranges: number[] = [];
     for (let j = 0; j < probs.length; j++) {
       // Two buckets either side of the guess on top of its spread.
       const from = Math.max(0, Math.min(last, Math.floor((guess[j]! - spread[j]! - min) * scale) - 2));
       const to = Math.max(0, Math.min(last, Math.floor((guess[j]! + spread[j]! - min) * scale) + 2));
-      for (let b = from; b <= to; b++) hinted[b] = 1;
+      if (!(from <= to)) continue; // a NaN guess marks nothing
+      ranges.push(from, to);
+      hinted.fill(1, from, to + 1);
     }
     if (this.early.length < n) this.early = new Float64Array(n);
     // Hinted buckets start their count at HINT_MARK, so one array both counts and says
     // which values to copy (a second array read per value measured ~30 % slower).
     const counts = this.counts;
-    for (let b = 0; b < buckets; b++) if (hinted[b] !== 0) counts[b] = HINT_MARK;
+    for (let r = 0; r < ranges.length; r += 2) counts.fill(HINT_MARK, ranges[r]!, ranges[r + 1]! + 1);
     const copied = countAndCopyHinted(values, n, min, scale, last, counts, this.early, this.tally);
-    for (let b = 0; b < buckets; b++) if (hinted[b] !== 0) counts[b]! -= HINT_MARK;
+    for (let r = 0; r < ranges.length; r += 2)
+      for (let b = ranges[r]!; b <= ranges[r + 1]!; b++) if (counts[b]! >= HINT_MARK) counts[b]! -= HINT_MARK;
     const sum = this.tally[0]!;
     const wanted = wantedRanks(n, probs);
     const located = this.locateRanks(wanted, buckets);
     const slot = this.slotOfBucket;
-    let missed = false;
-    for (let b = 0; b < buckets; b++) if (slot[b]! >= 0 && hinted[b] === 0) missed = true;
-    if (missed) this.gatherAndSort(values, null, n, min, scale, last);
+    const wantedBuckets = this.wantedBuckets;
+    if (wantedBuckets.some((b) => hinted[b] === 0)) this.gatherAndSort(values, null, n, min, scale, last);
     else {
       const cursor = this.bucketCursor;
-      const starts: Array<[number, number]> = [];
-      for (let b = 0; b < buckets; b++) {
-        if (slot[b]! < 0) continue;
-        cursor[b] = slot[b]!;
-        starts.push([slot[b]!, this.counts[b]!]);
-      }
+      for (const b of wantedBuckets) cursor[b] = slot[b]!;
       const gathered = this.gathered;
       const early = this.early;
       for (let i = 0; i < copied; i++) {
@@ -130,7 +130,7 @@ export class PercentileSelector {
         if (b > last) b = last;
         if (slot[b]! >= 0) gathered[cursor[b]!++] = v;
       }
-      for (const [start, count] of starts) gathered.subarray(start, start + count).sort();
+      for (const b of wantedBuckets) gathered.subarray(slot[b]!, slot[b]! + counts[b]!).sort();
     }
     this.interpolate(n, probs, located, out);
     return sum;
@@ -218,11 +218,13 @@ export class PercentileSelector {
     // Lay the wanted buckets out one after another in the gathered buffer.
     let offset = 0;
     const start = this.bucketStart;
+    this.wantedBuckets.length = 0;
     for (let b = 0; b < buckets; b++) {
       if (slot[b]! < 0) continue;
       slot[b] = offset;
       start[b] = offset;
       offset += counts[b]!;
+      this.wantedBuckets.push(b);
     }
     this.ensureGathered(offset);
     return ranks.map((_, i) => start[bucketOfRank[i]!]! + rankInBucket[i]!);
