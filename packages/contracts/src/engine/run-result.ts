@@ -50,6 +50,8 @@ export const pathwayResultSchema = z.object({
   imbalance: percentileSeriesSchema,
   exceedance: z.record(z.string(), z.array(z.number())),
   crossing: crossingSchema,
+  /** Per threshold, per year (aligned with `years`): share of members (0–1) first crossing that year. Optional: newer engines. */
+  crossingShare: z.record(z.string(), z.array(z.number())).optional(),
   horizons: z.array(horizonSchema),
   sensitivity: z.array(sensitivityEntrySchema),
   effectiveMembers: z.number(),
