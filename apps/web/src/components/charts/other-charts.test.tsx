@@ -1,7 +1,7 @@
 import { render } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
 import { pathPoints, tickMap } from "@/testing/svg-geometry";
-import { CrossingHistogram, crossingBins } from "./crossing-histogram";
+import { CrossingHistogram, crossingBins, crossingBinsPerYear } from "./crossing-histogram";
 import { ExceedanceChart } from "./exceedance-chart";
 import { ForcingBreakdownChart } from "./forcing-breakdown-chart";
 import { ForcingStackChart } from "./forcing-stack-chart";
@@ -38,15 +38,41 @@ describe("crossingBins", () => {
     expect(bins.map((b) => b.to)).toEqual([2035, 2045]);
   });
 
-  it("draws a never bar and bars whose area is the share", () => {
+  it("draws bars whose area is the share, and the never share apart on its own scale", () => {
+    const percentiles = { p5: 2030, p17: 2036, p50: 2045, p83: 2060, p95: null };
     const { container } = render(
-      <CrossingHistogram title="Crossing 2 K" crossing={{ threshold: 2, percentiles: { p5: 2030, p17: 2036, p50: 2045, p83: 2060, p95: null }, never: 0.1 }} />,
+      <CrossingHistogram
+        title="Crossing 2 K"
+        crossing={{ threshold: 2, percentiles, never: 0.79, lastYear: 2100, bins: crossingBins(percentiles), binSource: "percentiles" }}
+      />,
     );
-    expect(container.querySelector('[data-testid="never-bar"]')).toHaveTextContent("10%");
     const y = tickMap(container, "y");
     const bar = container.querySelector('[data-bin="2036-2045"]')!;
     // 33 % of members over 9 years -> 3.667 % per year
     expect(Number(bar.getAttribute("y"))).toBeCloseTo(y(33 / 9), 6);
+    // "Never" is a share of all members, not a rate per year: it is not drawn in the histogram's SVG.
+    expect(container.querySelector("svg")!.textContent).not.toContain("never");
+    const never = container.querySelector('[data-testid="never-share"]')!;
+    expect(never).toHaveTextContent("Never cross by 2100");
+    expect(never).toHaveTextContent("79 %");
+    expect(never).toHaveTextContent("of all members");
+    expect(never.querySelector('[role="meter"]')).toHaveAttribute("aria-valuenow", "79");
+  });
+
+  it("draws one bar per year from per-year first-crossing shares", () => {
+    const bins = crossingBinsPerYear([2030, 2031, 2032, 2033], [0, 0.2, 0.5, 0.1]);
+    expect(bins).toEqual([
+      { from: 2031, to: 2032, share: 0.2 },
+      { from: 2032, to: 2033, share: 0.5 },
+      { from: 2033, to: 2034, share: 0.1 },
+    ]);
+    const { container } = render(
+      <CrossingHistogram title="Crossing 2 K" crossing={{ threshold: 2, percentiles: { p50: 2032 }, never: 0.2, bins, binSource: "per-year" }} />,
+    );
+    const y = tickMap(container, "y");
+    // A one-year bar's height is its share in % per year: 0.5 -> 50 % per year.
+    expect(Number(container.querySelector('[data-bin="2032-2033"]')!.getAttribute("y"))).toBeCloseTo(y(50), 6);
+    expect(container.querySelectorAll("[data-bin]")).toHaveLength(3);
   });
 });
 

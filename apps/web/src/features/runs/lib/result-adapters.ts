@@ -1,7 +1,7 @@
 import { AGENT_LABELS, FORCING_AGENTS, type ForcingAgent, type HorizonResult, type PathwayResult } from "@plumeline/contracts";
 import type { AgentForcing } from "@/components/charts/forcing-breakdown-chart";
 import type { FanSeries } from "@/components/charts/fan-chart";
-import type { CrossingDistribution } from "@/components/charts/crossing-histogram";
+import { crossingBins, crossingBinsPerYear, type CrossingDistribution } from "@/components/charts/crossing-histogram";
 import type { ExceedanceCurve } from "@/components/charts/exceedance-chart";
 import type { SensitivityBar } from "@/components/charts/sensitivity-bars";
 import { inputLabel } from "@/lib/input-labels";
@@ -27,11 +27,25 @@ export function toExceedanceCurves(p: PathwayResult): ExceedanceCurve[] {
     .sort((a, b) => a.threshold - b.threshold);
 }
 
+/**
+ * A threshold's first-crossing distribution for the histogram. When the result carries
+ * per-year first-crossing shares (`crossingShare`, newer engines) the bars are those years;
+ * otherwise the members between consecutive percentiles are spread evenly over their years.
+ */
 export function toCrossing(p: PathwayResult, threshold: string): CrossingDistribution {
   const c = p.crossing[threshold] ?? {};
   const percentiles: Record<string, number | null> = {};
   for (const [k, v] of Object.entries(c)) if (/^p\d/.test(k)) percentiles[k] = v;
-  return { threshold: Number(threshold), percentiles, never: c.never ?? 0 };
+  const perYear = p.crossingShare?.[threshold];
+  const usePerYear = Array.isArray(perYear) && perYear.length === p.years.length;
+  return {
+    threshold: Number(threshold),
+    percentiles,
+    never: c.never ?? 0,
+    lastYear: p.years.at(-1),
+    bins: usePerYear ? crossingBinsPerYear(p.years, perYear) : crossingBins(percentiles),
+    binSource: usePerYear ? "per-year" : "percentiles",
+  };
 }
 
 export function toAgentForcing(h: HorizonResult): { agents: AgentForcing[]; total: AgentForcing | undefined } {

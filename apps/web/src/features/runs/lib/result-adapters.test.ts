@@ -1,0 +1,49 @@
+import type { PathwayResult } from "@plumeline/contracts";
+import { describe, expect, it } from "vitest";
+import { toCrossing } from "./result-adapters";
+
+const years = [2030, 2031, 2032, 2033];
+const pathway = (extra: Partial<PathwayResult> = {}): PathwayResult => ({
+  id: "p1",
+  name: "Middle road",
+  years,
+  temperature: {},
+  forcing: {},
+  imbalance: {},
+  exceedance: {},
+  crossing: { "2": { p5: 2031, p17: 2031, p50: 2032, p83: 2033, p95: null, never: 0.1 } },
+  horizons: [],
+  sensitivity: [],
+  effectiveMembers: 100,
+  constraint: null,
+  ...extra,
+});
+
+describe("toCrossing", () => {
+  it("builds the histogram from the per-year first-crossing shares when the result has them", () => {
+    const c = toCrossing(pathway({ crossingShare: { "2": [0, 0.4, 0.35, 0.15] } }), "2");
+    expect(c.binSource).toBe("per-year");
+    expect(c.bins).toEqual([
+      { from: 2031, to: 2032, share: 0.4 },
+      { from: 2032, to: 2033, share: 0.35 },
+      { from: 2033, to: 2034, share: 0.15 },
+    ]);
+    expect(c.never).toBe(0.1);
+    expect(c.lastYear).toBe(2033);
+  });
+
+  it("falls back to spreading members between percentiles without per-year shares", () => {
+    const c = toCrossing(pathway(), "2");
+    expect(c.binSource).toBe("percentiles");
+    // p17 − p5 = 12 % between 2031 and 2031 (same year), 33 % over 2031–2032, 33 % over 2032–2033; p95 never.
+    expect(c.bins.map((b) => [b.from, b.to, Math.round(b.share * 100)])).toEqual([
+      [2031, 2031, 12],
+      [2031, 2032, 33],
+      [2032, 2033, 33],
+    ]);
+  });
+
+  it("falls back too when the shares do not line up with the years", () => {
+    expect(toCrossing(pathway({ crossingShare: { "2": [0.5, 0.5] } }), "2").binSource).toBe("percentiles");
+  });
+});
