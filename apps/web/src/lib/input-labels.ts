@@ -25,6 +25,9 @@ export function inputLabel(input: string, short = true): string {
   return input;
 }
 
+/** Unit of a forcing scale factor (a multiplier of the agent's series), the same on every screen. */
+export const SCALE_FACTOR_UNIT = "×";
+
 export function inputUnit(input: string): string {
-  return input in CLIMATE_INPUT_UNITS ? CLIMATE_INPUT_UNITS[input as ClimateInput] : "× (scale)";
+  return input in CLIMATE_INPUT_UNITS ? CLIMATE_INPUT_UNITS[input as ClimateInput] : SCALE_FACTOR_UNIT;
 }

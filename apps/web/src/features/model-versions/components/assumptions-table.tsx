@@ -1,6 +1,6 @@
 import { CLIMATE_INPUTS, CLIMATE_INPUT_UNITS, FORCING_AGENTS, type Distribution, type ModelSpec } from "@plumeline/contracts";
 import { Table, Td, Th } from "@/components/ui/table";
-import { inputLabel } from "@/lib/input-labels";
+import { inputLabel, SCALE_FACTOR_UNIT } from "@/lib/input-labels";
 import { percentileValues } from "../lib/distribution-math";
 import { DISTRIBUTION_TYPE_LABELS } from "../lib/distribution-fields";
 
@@ -19,7 +19,7 @@ function describeParameters(d: Distribution): string {
 export function AssumptionsTable({ model }: { model: ModelSpec }) {
   const rows: Array<{ key: string; unit: string; d: Distribution }> = [
     ...CLIMATE_INPUTS.map((k) => ({ key: k, unit: CLIMATE_INPUT_UNITS[k], d: model.climate[k] })),
-    ...FORCING_AGENTS.filter((a) => model.agents[a]).map((a) => ({ key: a, unit: "×", d: model.agents[a]!.scale })),
+    ...FORCING_AGENTS.filter((a) => model.agents[a]).map((a) => ({ key: a, unit: SCALE_FACTOR_UNIT, d: model.agents[a]!.scale })),
   ];
   return (
     <Table>

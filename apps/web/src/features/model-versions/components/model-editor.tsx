@@ -17,7 +17,7 @@ import { Button } from "@/components/ui/button";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import { ErrorState } from "@/components/ui/states";
-import { CLIMATE_INPUT_LABELS, inputLabel } from "@/lib/input-labels";
+import { CLIMATE_INPUT_LABELS, inputLabel, SCALE_FACTOR_UNIT } from "@/lib/input-labels";
 import { DistributionEditor } from "./distribution-editor";
 import { PinnedPerilProfilesPicker, type PinnableProfile } from "./pinned-peril-profiles";
 import { parseNumbers } from "@/lib/parse-numbers";
@@ -171,7 +171,7 @@ export function ModelEditor({
               <DistributionEditor
                 id={a}
                 label={`${AGENT_LABELS[a]} scale`}
-                unit="× (scale)"
+                unit={SCALE_FACTOR_UNIT}
                 value={initial.model.agents[a]?.scale ?? { type: "range", p50: 1, low: 0.8, high: 1.2, coverage: 90, shape: "split-normal" }}
                 onChange={(d) => setAgents((s) => ({ ...s, [a]: d }))}
               />
