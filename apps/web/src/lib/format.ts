@@ -1,12 +1,23 @@
 /** Number and date formatting shared by tables and charts, so the same value reads the same everywhere. */
+
+/**
+ * `v.toFixed(digits)` without the minus sign of a value that rounds to zero: -0.0000004 and
+ * -0 both read "0.000", not "-0.000" (which looks like a sign error in the data).
+ * Example: formatFixed(-0.0004, 3) === "0.000"; formatFixed(-0.0006, 3) === "-0.001".
+ */
+export function formatFixed(v: number, digits: number): string {
+  const text = v.toFixed(digits);
+  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
+}
+
 export const formatKelvin = (v: number | null | undefined, digits = 2) =>
-  v === null || v === undefined || !Number.isFinite(v) ? "–" : `${v.toFixed(digits)}`;
+  v === null || v === undefined || !Number.isFinite(v) ? "–" : formatFixed(v, digits);
 
 export const formatNumber = (v: number | null | undefined, digits = 2) =>
-  v === null || v === undefined || !Number.isFinite(v) ? "–" : v.toFixed(digits);
+  v === null || v === undefined || !Number.isFinite(v) ? "–" : formatFixed(v, digits);
 
 export const formatPercent = (share: number | null | undefined, digits = 0) =>
-  share === null || share === undefined || !Number.isFinite(share) ? "–" : `${(share * 100).toFixed(digits)} %`;
+  share === null || share === undefined || !Number.isFinite(share) ? "–" : `${formatFixed(share * 100, digits)} %`;
 
 export const formatInteger = (v: number | null | undefined) =>
   v === null || v === undefined || !Number.isFinite(v) ? "–" : Math.round(v).toLocaleString("en-GB");

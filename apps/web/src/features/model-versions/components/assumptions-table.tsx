@@ -1,5 +1,6 @@
 import { CLIMATE_INPUTS, CLIMATE_INPUT_UNITS, FORCING_AGENTS, type Distribution, type ModelSpec } from "@plumeline/contracts";
 import { Table, Td, Th } from "@/components/ui/table";
+import { formatFixed } from "@/lib/format";
 import { inputLabel, SCALE_FACTOR_UNIT } from "@/lib/input-labels";
 import { percentileValues } from "../lib/distribution-math";
 import { DISTRIBUTION_TYPE_LABELS } from "../lib/distribution-fields";
@@ -47,7 +48,7 @@ export function AssumptionsTable({ model }: { model: ModelSpec }) {
             </Td>
             {percentileValues(d).map((v) => (
               <Td key={v.p} numeric className={v.p === 50 ? "whitespace-nowrap font-semibold" : "whitespace-nowrap"}>
-                {Math.abs(v.value) >= 100 ? v.value.toFixed(1) : v.value.toFixed(3)}
+                {formatFixed(v.value, Math.abs(v.value) >= 100 ? 1 : 3)}
               </Td>
             ))}
           </tr>

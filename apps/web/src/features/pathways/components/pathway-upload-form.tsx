@@ -3,8 +3,8 @@ import { pathwayMetadataSchema, type Pathway, type PathwayPreview } from "@plume
 import { Button } from "@/components/ui/button";
 import { Field, Input, Textarea } from "@/components/ui/field";
 import { ErrorState } from "@/components/ui/states";
-import { Table, Td, Th } from "@/components/ui/table";
 import { isApiError } from "@/lib/api-error";
+import { PathwayPreviewTable } from "./pathway-preview-table";
 import { usePreviewPathwayUpload, useUploadPathway, type PathwayUploadInput } from "../api/upload-pathway";
 
 type FieldName = "file" | "name" | "source" | "vintage" | "description";
@@ -101,29 +101,7 @@ export function PathwayUploadForm({ onSaved }: { onSaved: (p: Pathway) => void }
               </code>
             ))}
           </p>
-          <Table>
-            <caption className="sr-only">First rows of the file as read by the server</caption>
-            <thead>
-              <tr>
-                {Object.keys(result.rows[0] ?? {}).map((k) => (
-                  <Th key={k} numeric={k !== "year"} className="normal-case tracking-normal">
-                    {k}
-                  </Th>
-                ))}
-              </tr>
-            </thead>
-            <tbody>
-              {result.rows.map((row, i) => (
-                <tr key={i}>
-                  {Object.entries(row).map(([k, v]) => (
-                    <Td key={k} numeric className={k === "year" ? "text-left" : undefined}>
-                      {k === "year" ? v : v.toFixed(3)}
-                    </Td>
-                  ))}
-                </tr>
-              ))}
-            </tbody>
-          </Table>
+          <PathwayPreviewTable rows={result.rows} />
           <p className="text-xs text-muted">First {result.rows.length} rows shown.</p>
           {upload.error && <ErrorState error={upload.error} />}
           <div>

@@ -1,0 +1,23 @@
+import { describe, expect, it } from "vitest";
+import { formatFixed, formatNumber, formatPercent } from "./format";
+
+// Expected strings follow Number.prototype.toFixed (ECMAScript spec: -0.0004.toFixed(3) is "-0.000"),
+// with the minus dropped only where the rounded value is zero.
+describe("formatFixed", () => {
+  it("drops the minus of a value that rounds to zero", () => {
+    expect(formatFixed(-0.0004, 3)).toBe("0.000");
+    expect(formatFixed(-0, 3)).toBe("0.000");
+    expect(formatFixed(-1e-12, 0)).toBe("0");
+  });
+
+  it("keeps the minus of a value that does not round to zero", () => {
+    expect(formatFixed(-0.0006, 3)).toBe("-0.001");
+    expect(formatFixed(-10.5, 1)).toBe("-10.5");
+    expect(formatFixed(0.0004, 3)).toBe("0.000");
+  });
+
+  it("is what the shared number and percent formats use", () => {
+    expect(formatNumber(-0.001, 2)).toBe("0.00");
+    expect(formatPercent(-0.00001, 1)).toBe("0.0 %");
+  });
+});
