@@ -79,4 +79,23 @@ describe("FanChart", () => {
     expect(screen.getByRole("table")).toHaveTextContent("50 % (K)");
     expect(screen.getByRole("table")).toHaveTextContent("2100");
   });
+
+  it("draws an outlined series as band edges with a dashed median, on top of a filled one", () => {
+    const filled = fanFixture("a", "Left run");
+    const outlined = { ...fanFixture("b", "Right run", 0.2), treatment: "outline" as const };
+    const { container } = render(<FanChart title="Both" series={[outlined, filled]} yLabel="Warming (K)" unit="K" />);
+    const groups = [...container.querySelectorAll("[data-series]")];
+    // Drawn last, whatever the order given, so its edges are never under the other's tint.
+    expect(groups.map((g) => g.getAttribute("data-series"))).toEqual(["a", "b"]);
+    const b = container.querySelector('[data-series="b"]')!;
+    for (const band of ["p5-p95", "p17-p83"]) expect(b.querySelector(`[data-band="${band}"]`)).toHaveAttribute("fill", "none");
+    expect(b.querySelector('[data-band="p50"]')!.getAttribute("stroke-dasharray")).toBeTruthy();
+    const a = container.querySelector('[data-series="a"]')!;
+    expect(a.querySelector('[data-band="p17-p83"]')!.getAttribute("fill")).not.toBe("none");
+    expect(a.querySelector('[data-band="p50"]')!.getAttribute("stroke-dasharray")).toBeNull();
+    // The legend keys differ too: a dashed line for the outlined series only.
+    const key = (name: RegExp) => screen.getByRole("button", { name }).querySelector("line")!.getAttribute("stroke-dasharray");
+    expect(key(/Right run/)).toBeTruthy();
+    expect(key(/Left run/)).toBeNull();
+  });
 });

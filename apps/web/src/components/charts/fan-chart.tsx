@@ -17,6 +17,12 @@ export interface FanSeries {
   p83: number[];
   p95: number[];
   color?: string;
+  /**
+   * How the bands are drawn: "filled" (default: tinted bands, solid median) or "outline"
+   * (band edges only, dashed median), so two series on one chart neither blend their colours
+   * nor hide each other's median.
+   */
+  treatment?: "filled" | "outline";
 }
 
 export interface ObservedWindow {
@@ -151,6 +157,8 @@ export function FanChart({
             return k < 0 ? null : { s, values: KEYS.map((key) => s[key][k]!) };
           })
           .filter((r): r is { s: FanSeries; values: number[] } => r !== null);
+  // Outlined series go on top of filled ones, so their edges and dashed median stay visible.
+  const drawOrder = [...shapes].sort((a, b) => Number(a.s.treatment === "outline") - Number(b.s.treatment === "outline"));
 
   const table = (
     <DataTable
@@ -188,7 +196,7 @@ export function FanChart({
               }
               className="flex items-center gap-1.5 rounded-full border border-line px-2.5 py-0.5 text-xs aria-pressed:bg-surface-2 aria-[pressed=false]:opacity-50"
             >
-              <span aria-hidden className="h-2.5 w-2.5 rounded-full" style={{ background: color }} />
+              <LegendSwatch color={color} outline={s.treatment === "outline"} />
               {s.name}
             </button>
           ))}
@@ -234,15 +242,23 @@ export function FanChart({
                 </g>
               ) : null,
             )}
-            {shapes
+            {drawOrder
               .filter(({ s }) => !hidden.has(s.id))
-              .map(({ s, color, outer, inner, median }) => (
-                <g key={s.id} data-series={s.id}>
-                  <path data-band="p5-p95" d={outer} fill={color} fillOpacity={0.16} />
-                  <path data-band="p17-p83" d={inner} fill={color} fillOpacity={0.32} />
-                  <path data-band="p50" d={median} fill="none" stroke={color} strokeWidth={2} />
-                </g>
-              ))}
+              .map(({ s, color, outer, inner, median }) =>
+                s.treatment === "outline" ? (
+                  <g key={s.id} data-series={s.id} data-treatment="outline">
+                    <path data-band="p5-p95" d={outer} fill="none" stroke={color} strokeWidth={1} strokeDasharray="2 3" />
+                    <path data-band="p17-p83" d={inner} fill="none" stroke={color} strokeWidth={1.5} />
+                    <path data-band="p50" d={median} fill="none" stroke={color} strokeWidth={2.5} strokeDasharray="7 4" />
+                  </g>
+                ) : (
+                  <g key={s.id} data-series={s.id} data-treatment="filled">
+                    <path data-band="p5-p95" d={outer} fill={color} fillOpacity={0.16} />
+                    <path data-band="p17-p83" d={inner} fill={color} fillOpacity={0.32} />
+                    <path data-band="p50" d={median} fill="none" stroke={color} strokeWidth={2} />
+                  </g>
+                ),
+              )}
             {hoverYear !== null && (
               <line x1={x(hoverYear)} x2={x(hoverYear)} y2={innerHeight} stroke="var(--pl-ink)" strokeOpacity={0.4} />
             )}
@@ -284,5 +300,15 @@ export function FanChart({
         )}
       </div>
     </ChartFrame>
+  );
+}
+
+/** Legend key: a tinted square with a solid line (filled), or an outlined square with a dashed line (outline). */
+function LegendSwatch({ color, outline }: { color: string; outline: boolean }) {
+  return (
+    <svg aria-hidden width={22} height={12} className="shrink-0">
+      <rect x={1} y={1} width={20} height={10} rx={2} fill={outline ? "none" : color} fillOpacity={0.3} stroke={outline ? color : "none"} strokeWidth={1.2} />
+      <line x1={2} x2={20} y1={6} y2={6} stroke={color} strokeWidth={2} strokeDasharray={outline ? "4 2" : undefined} />
+    </svg>
   );
 }

@@ -22,6 +22,9 @@ export function CompareView({ a, b, fromYear = 1850 }: { a: CompareSide; b: Comp
     return <p className="text-sm text-muted">Comparison needs the 5/17/50/83/95 percentiles in both results.</p>;
   const sa = { ...toFanSeries(pa), id: "a", name: `${a.label}: ${pa.name}`, color: seriesColor(0) };
   const sb = { ...toFanSeries(pb), id: "b", name: `${b.label}: ${pb.name}`, color: seriesColor(1) };
+  // On one chart the right side is drawn as outlines with a dashed median, so the two
+  // colours never blend and neither median hides the other.
+  const sbOutlined = { ...sb, treatment: "outline" as const };
   const shared = fanYDomain([sa, sb], fromYear);
   const toYear = Math.min(sa.years.at(-1)!, sb.years.at(-1)!);
   const common = pa.horizons.map((h) => h.year).filter((y) => pb.horizons.some((h) => h.year === y));
@@ -41,7 +44,17 @@ export function CompareView({ a, b, fromYear = 1850 }: { a: CompareSide; b: Comp
           <FanChart key={s.id} title={s.name} series={[s]} yLabel="Warming above baseline (K)" unit="K" fromYear={fromYear} toYear={toYear} yDomain={shared} height={320} />
         ))}
       </div>
-      <FanChart title="Both on one chart" series={[sa, sb]} yLabel="Warming above baseline (K)" unit="K" fromYear={fromYear} toYear={toYear} yDomain={shared} height={340} />
+      <FanChart
+        title="Both on one chart"
+        description="Left: filled bands, solid median. Right: outlined bands, dashed median. Inner band 17–83 %, outer 5–95 % (dotted edge when outlined). Hover or use arrow keys to read a year."
+        series={[sa, sbOutlined]}
+        yLabel="Warming above baseline (K)"
+        unit="K"
+        fromYear={fromYear}
+        toYear={toYear}
+        yDomain={shared}
+        height={340}
+      />
       {strips.length > 0 && (
         <PercentileStrips
           title="Warming at the shared horizons"
