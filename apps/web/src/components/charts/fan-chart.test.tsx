@@ -98,4 +98,18 @@ describe("FanChart", () => {
     expect(key(/Right run/)).toBeTruthy();
     expect(key(/Left run/)).toBeNull();
   });
+
+  it("reads out above the plot, never over it, showing the last year until a year is pointed at", () => {
+    const { container } = render(<FanChart title="Warming" series={[fanFixture()]} yLabel="Warming (K)" unit="K" thresholds={[1.5, 2, 3]} />);
+    const status = screen.getByRole("status");
+    const svg = container.querySelector("svg[role=img]")!;
+    // Outside the box that holds the plot, and before it: it cannot cover threshold labels.
+    expect(status.contains(svg) || svg.parentElement!.contains(status)).toBe(false);
+    expect(status.compareDocumentPosition(svg) & Node.DOCUMENT_POSITION_FOLLOWING).toBeTruthy();
+    // 2100 (i = 10): median 1 + 0.2 × 10 = 3.00, 17–83 2.70–3.35, 5–95 2.40–3.80 (fixture arithmetic)
+    expect(status).toHaveTextContent("2100");
+    expect(status).toHaveTextContent("median 3.00 K");
+    expect(status).toHaveTextContent("5–95 2.40–3.80");
+  });
 });
+

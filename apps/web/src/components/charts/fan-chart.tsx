@@ -3,6 +3,7 @@ import { area, extent, line, max, min, scaleLinear } from "d3";
 import { AxisBottom, AxisLeft } from "./axes";
 import { ChartFrame, DataTable } from "./chart-frame";
 import { DEFAULT_MARGINS, innerSize } from "./margins";
+import { FanReadout } from "./fan-readout";
 import { seriesColor } from "./palette";
 import { useChartWidth } from "./use-chart-width";
 
@@ -148,15 +149,14 @@ export function FanChart({
     e.preventDefault();
   }
 
-  const readout =
-    hoverYear === null
-      ? []
-      : visible
-          .map((s) => {
-            const k = s.years.indexOf(hoverYear);
-            return k < 0 ? null : { s, values: KEYS.map((key) => s[key][k]!) };
-          })
-          .filter((r): r is { s: FanSeries; values: number[] } => r !== null);
+  // The read-out shows the pointed year, or the last year while nothing is pointed at.
+  const readYear = hoverYear ?? x1;
+  const readout = shapes
+    .filter(({ s }) => !hidden.has(s.id))
+    .flatMap(({ s, color }) => {
+      const k = s.years.indexOf(readYear);
+      return k < 0 ? [] : [{ series: s, color, values: KEYS.map((key) => s[key][k]!) }];
+    });
   // Outlined series go on top of filled ones, so their edges and dashed median stay visible.
   const drawOrder = [...shapes].sort((a, b) => Number(a.s.treatment === "outline") - Number(b.s.treatment === "outline"));
 
@@ -202,6 +202,7 @@ export function FanChart({
           ))}
         </div>
       )}
+      <FanReadout year={readYear} pinned={hoverYear !== null} rows={readout} unit={unit} digits={digits} seriesCount={visible.length} />
       <div ref={ref} className="relative w-full">
         <svg width={width} height={height} role="img" aria-label={`${title}: ${yLabel} against year`} className="block overflow-visible">
           <g transform={`translate(${m.left},${m.top})`}>
@@ -275,29 +276,6 @@ export function FanChart({
             />
           </g>
         </svg>
-        {hoverYear !== null && readout.length > 0 && (
-          <div
-            role="status"
-            className="pointer-events-none absolute top-2 z-10 min-w-44 rounded-md border border-line bg-surface/95 px-3 py-2 text-xs shadow-card"
-            style={x(hoverYear) + m.left > width / 2 ? { left: m.left + 8 } : { right: m.right + 8 }}
-          >
-            <p className="mb-1 font-semibold text-ink">{hoverYear}</p>
-            {readout.map(({ s, values }) => (
-              <div key={s.id} className="mb-1">
-                {series.length > 1 && <p className="font-medium">{s.name}</p>}
-                <p className="num text-muted">
-                  median <span className="text-text">{values[2]!.toFixed(digits)}</span> {unit}
-                </p>
-                <p className="num text-muted">
-                  17–83 <span className="text-text">{values[1]!.toFixed(digits)}–{values[3]!.toFixed(digits)}</span>
-                </p>
-                <p className="num text-muted">
-                  5–95 <span className="text-text">{values[0]!.toFixed(digits)}–{values[4]!.toFixed(digits)}</span>
-                </p>
-              </div>
-            ))}
-          </div>
-        )}
       </div>
     </ChartFrame>
   );
