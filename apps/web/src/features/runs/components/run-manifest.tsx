@@ -3,7 +3,11 @@ import type { Run } from "@plumeline/contracts";
 import { paths } from "@/config/paths";
 import { formatDateTime, formatInteger } from "@/lib/format";
 
-/** What makes the run reproducible: version, pathways with checksums, seed, engine, hashes. */
+/**
+ * What makes the run reproducible: version, pathways with checksums, seed, engine, hashes.
+ * One column (facts, then pathways): side by side, the values got ~150 px at 1440 px and
+ * the version name and result hash broke over five lines.
+ */
 export function RunManifest({ run }: { run: Run }) {
   const items: Array<[string, React.ReactNode]> = [
     [
@@ -20,8 +24,8 @@ export function RunManifest({ run }: { run: Run }) {
     ["Started by", `${run.createdByName ?? "–"}, ${formatDateTime(run.createdAt)}`],
   ];
   return (
-    <div className="grid gap-4 text-sm lg:grid-cols-[1fr_1fr]">
-      <dl className="grid grid-cols-[8rem_1fr] gap-x-3 gap-y-1.5">
+    <div className="flex flex-col gap-4 text-sm">
+      <dl className="grid grid-cols-[8rem_minmax(0,1fr)] gap-x-3 gap-y-1.5">
         {items.map(([k, v]) => (
           <div key={k} className="contents">
             <dt className="text-muted">{k}</dt>
@@ -29,7 +33,7 @@ export function RunManifest({ run }: { run: Run }) {
           </div>
         ))}
       </dl>
-      <div>
+      <div className="border-t border-line pt-3">
         <p className="mb-1 text-muted">Pathways (source, vintage, checksum)</p>
         <ul className="space-y-1.5">
           {run.manifest.pathways.map((p) => (
