@@ -2,6 +2,7 @@ import { advanceBaselineYears } from "./advance-year.js";
 import type { EnsemblePlan } from "./ensemble-plan.js";
 import { fillMemberScales } from "./member-forcing.js";
 import { BASELINE, DEEP, NEXT_THRESHOLD, RECORD, UPPER } from "./member-records.js";
+import { MAX_SPAN_YEARS } from "./year-spans.js";
 
 /**
  * The two passes over one pathway, for members [lo, hi). Anomalies are against each
@@ -18,7 +19,7 @@ export function firstPassYears(plan: EnsemblePlan, pathwayIndex: number): number
 
 /**
  * Runs the first pass for members [lo, hi), leaving baseline and window mean anomalies.
- * onYear is called once per first-pass year when the pass is done (progress counting).
+ * onYear is called once per first-pass year, after each span of years (progress, cancel).
  */
 export function runBaselinePass(
   plan: EnsemblePlan,
@@ -41,17 +42,21 @@ export function runBaselinePass(
   const c = plan.constraint;
   const years = firstPassYears(plan, pathwayIndex);
   const start = pathway.startYear;
-  advanceBaselineYears(
-    plan,
-    pathway,
-    0,
-    years,
-    lo,
-    hi,
-    (t) => start + t >= b0 && start + t <= b1,
-    (t) => c !== null && start + t >= c.from && start + t <= c.to,
-  );
-  if (onYear) for (let t = 0; t < years; t++) onYear();
+  // Spans of years over all members, so progress (and cancellation) is seen every span.
+  for (let t0 = 0; t0 < years; t0 += MAX_SPAN_YEARS) {
+    const t1 = Math.min(years, t0 + MAX_SPAN_YEARS);
+    advanceBaselineYears(
+      plan,
+      pathway,
+      t0,
+      t1,
+      lo,
+      hi,
+      (t) => start + t >= b0 && start + t <= b1,
+      (t) => c !== null && start + t >= c.from && start + t <= c.to,
+    );
+    if (onYear) for (let t = t0; t < t1; t++) onYear();
+  }
   const baselineYears = b1 - b0 + 1;
   const windowYears = c ? c.to - c.from + 1 : 1;
   for (let m = lo; m < hi; m++) {
