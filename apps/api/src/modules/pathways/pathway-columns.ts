@@ -41,15 +41,3 @@ export function readAgentHeader(raw: string): AgentColumn | string {
     return `"${raw}" has an unknown unit; ${wrongUnit[0]} is given as ${wrongUnit[0]}${ERF_SUFFIX} (W m-2) or ${wrongUnit[0]}_${wrongUnit[1]}`;
   return `"${raw}" is not a known column; use year and <agent>_erf_wm2 (W m-2) or co2_ppm / ch4_ppb / n2o_ppb`;
 }
-
-/** Spreadsheet column letter for a 0-based index: 0 -> A, 27 -> AB. */
-export function columnLetter(index: number): string {
-  let n = index + 1;
-  let out = "";
-  while (n > 0) {
-    const rem = (n - 1) % 26;
-    out = String.fromCharCode(65 + rem) + out;
-    n = Math.floor((n - 1) / 26);
-  }
-  return out;
-}

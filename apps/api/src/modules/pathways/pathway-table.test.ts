@@ -1,6 +1,6 @@
 import ExcelJS from "exceljs";
 import { describe, expect, it } from "vitest";
-import { readCsvRows, readXlsxRows } from "./pathway-file.js";
+import { readCsvRows, readXlsxRows } from "../../uploads/tabular-file.js";
 import { parsePathwayTable } from "./pathway-table.js";
 
 // The header convention is ours (apps/api/UPLOADS.md); the expected errors below are the

@@ -1,14 +1,7 @@
 import { FORCING_AGENTS, MAX_PATHWAY_YEARS, type ForcingAgent } from "@plumeline/contracts";
 import type { ErrorDetail } from "@plumeline/contracts";
-import { columnLetter, readAgentHeader, type AgentColumn, type SeriesQuantity } from "./pathway-columns.js";
-
-/** A cell as read from CSV (text) or XLSX (number, text, or empty). */
-export type RawCell = string | number | null;
-/** One sheet row with its row number as the user sees it (1 = the header row). */
-export interface RawRow {
-  rowNumber: number;
-  cells: RawCell[];
-}
+import { columnLetter, type RawCell, type RawRow } from "../../uploads/tabular-file.js";
+import { readAgentHeader, type AgentColumn, type SeriesQuantity } from "./pathway-columns.js";
 
 export type PathwaySeries = Partial<Record<ForcingAgent, Partial<Record<SeriesQuantity, number[]>>>>;
 

@@ -12,11 +12,11 @@ import {
 } from "@plumeline/contracts";
 import { Op, type Transaction } from "sequelize";
 import type { AppContext } from "../../context.js";
-import { AppError, badRequest, conflict, forbidden, notFound } from "../../errors/app-error.js";
+import { badRequest, conflict, forbidden, notFound } from "../../errors/app-error.js";
 import type { RequestUser } from "../../middleware/request-context.js";
 import { recordAudit } from "../audit/audit.service.js";
 import { pathwayChecksum } from "./pathway-checksum.js";
-import { pathwayFileType, readCsvRows, readXlsxRows, UnreadableFileError } from "./pathway-file.js";
+import { assertFileGiven, readUploadedRows, type UploadedFile } from "../../uploads/tabular-file.js";
 import { checkSeriesShape, seriesAgents, seriesLength } from "./pathway-series.js";
 import { parsePathwayTable, type PathwaySeries } from "./pathway-table.js";
 import type { PathwayModel } from "./pathway.model.js";
@@ -154,10 +154,6 @@ export async function lockPathways(ctx: Ctx, ids: string[], transaction: Transac
   await ctx.models.Pathway.update({ locked: true }, { where: { id: { [Op.in]: ids }, locked: false }, transaction });
 }
 
-export interface UploadedFile {
-  originalname: string;
-  buffer: Buffer;
-}
 
 /**
  * Parses an uploaded CSV/XLSX. With `preview` it only reports what it read; otherwise the
@@ -170,19 +166,8 @@ export async function uploadPathway(
   file: UploadedFile | undefined,
   fields: { name?: string; description?: string; source?: string; vintage?: string; preview: boolean },
 ): Promise<{ preview: PathwayPreview } | { pathway: Pathway }> {
-  if (!file) throw badRequest([{ path: "file", message: "is required (a .csv or .xlsx file)" }]);
-  const type = pathwayFileType(file.originalname);
-  if (!type)
-    throw new AppError(400, "unsupported_file_type", `"${file.originalname}" is not a .csv or .xlsx file.`, [
-      { path: "file", message: "must be a .csv or .xlsx file" },
-    ]);
-  let rows;
-  try {
-    rows = type === "csv" ? readCsvRows(file.buffer) : await readXlsxRows(file.buffer);
-  } catch (error) {
-    if (error instanceof UnreadableFileError) throw badRequest([{ path: "file", message: error.message }], "The file could not be read.");
-    throw error;
-  }
+  assertFileGiven(file);
+  const rows = await readUploadedRows(file);
   const table = parsePathwayTable(rows);
   const errors: ErrorDetail[] = table.ok ? [] : [...table.errors];
   let metadata: ReturnType<typeof pathwayMetadataSchema.parse> | null = null;

@@ -1,6 +1,5 @@
 import { portfolioRowsSchema, type ErrorDetail, type PortfolioRow } from "@plumeline/contracts";
-import { columnLetter } from "../pathways/pathway-columns.js";
-import type { RawCell, RawRow } from "../pathways/pathway-table.js";
+import { columnLetter, type RawCell, type RawRow } from "../../uploads/tabular-file.js";
 
 /**
  * The portfolio upload convention: a header row naming the six columns below (any order,

@@ -11,10 +11,10 @@ import {
 } from "@plumeline/contracts";
 import { Op, type Transaction } from "sequelize";
 import type { AppContext } from "../../context.js";
-import { AppError, badRequest, notFound } from "../../errors/app-error.js";
+import { badRequest, notFound } from "../../errors/app-error.js";
 import type { RequestUser } from "../../middleware/request-context.js";
 import { recordAudit } from "../audit/audit.service.js";
-import { pathwayFileType, readCsvRows, readXlsxRows, UnreadableFileError } from "../pathways/pathway-file.js";
+import { assertFileGiven, readUploadedRows, type UploadedFile } from "../../uploads/tabular-file.js";
 import { portfolioChecksum } from "./portfolio-checksum.js";
 import { parsePortfolioTable } from "./portfolio-table.js";
 import type { PortfolioModel } from "./portfolio.model.js";
@@ -97,10 +97,6 @@ export async function createPortfolio(
   return getPortfolio(ctx, id);
 }
 
-export interface UploadedFile {
-  originalname: string;
-  buffer: Buffer;
-}
 
 /**
  * Parses an uploaded CSV/XLSX portfolio. With `preview` it only reports what it read; otherwise
@@ -113,19 +109,8 @@ export async function uploadPortfolio(
   file: UploadedFile | undefined,
   fields: { name?: string; description?: string; preview: boolean },
 ): Promise<{ preview: PortfolioPreview } | { portfolio: PortfolioRecord }> {
-  if (!file) throw badRequest([{ path: "file", message: "is required (a .csv or .xlsx file)" }]);
-  const type = pathwayFileType(file.originalname);
-  if (!type)
-    throw new AppError(400, "unsupported_file_type", `"${file.originalname}" is not a .csv or .xlsx file.`, [
-      { path: "file", message: "must be a .csv or .xlsx file" },
-    ]);
-  let raw;
-  try {
-    raw = type === "csv" ? readCsvRows(file.buffer) : await readXlsxRows(file.buffer);
-  } catch (error) {
-    if (error instanceof UnreadableFileError) throw badRequest([{ path: "file", message: error.message }], "The file could not be read.");
-    throw error;
-  }
+  assertFileGiven(file);
+  const raw = await readUploadedRows(file);
   const table = parsePortfolioTable(raw);
   const errors: ErrorDetail[] = table.ok ? [] : [...table.errors];
   let metadata: { name: string; description: string } | null = null;

@@ -1,15 +1,68 @@
+/**
+ * Reading uploaded tables (pathways, portfolios): CSV or XLSX bytes -> numbered raw rows.
+ * Each module then parses the rows by its own header rules and names bad cells by row and column.
+ */
 import { parse } from "csv-parse/sync";
 import ExcelJS from "exceljs";
-import type { RawCell, RawRow } from "./pathway-table.js";
+import { AppError, badRequest } from "../errors/app-error.js";
+
+/** A cell as read from CSV (text) or XLSX (number, text, or empty). */
+export type RawCell = string | number | null;
+/** One sheet row with its row number as the user sees it (1 = the header row). */
+export interface RawRow {
+  rowNumber: number;
+  cells: RawCell[];
+}
+
+/** The part of a multer file the readers need. */
+export interface UploadedFile {
+  originalname: string;
+  buffer: Buffer;
+}
 
 /** Upload types accepted, by extension; the content is checked by parsing, not trusted from the name. */
-export const PATHWAY_FILE_TYPES = { ".csv": "csv", ".xlsx": "xlsx" } as const;
-export type PathwayFileType = (typeof PATHWAY_FILE_TYPES)[keyof typeof PATHWAY_FILE_TYPES];
+export const TABULAR_FILE_TYPES = { ".csv": "csv", ".xlsx": "xlsx" } as const;
+export type TabularFileType = (typeof TABULAR_FILE_TYPES)[keyof typeof TABULAR_FILE_TYPES];
 
-export function pathwayFileType(fileName: string): PathwayFileType | null {
+export function tabularFileType(fileName: string): TabularFileType | null {
   const lower = fileName.toLowerCase();
-  for (const [ext, type] of Object.entries(PATHWAY_FILE_TYPES)) if (lower.endsWith(ext)) return type;
+  for (const [ext, type] of Object.entries(TABULAR_FILE_TYPES)) if (lower.endsWith(ext)) return type;
   return null;
+}
+
+/** Spreadsheet column letter of a zero-based column index (0 -> A, 26 -> AA). */
+export function columnLetter(index: number): string {
+  let n = index + 1;
+  let out = "";
+  while (n > 0) {
+    const rem = (n - 1) % 26;
+    out = String.fromCharCode(65 + rem) + out;
+    n = Math.floor((n - 1) / 26);
+  }
+  return out;
+}
+
+/** A request without a file is a 400 naming the `file` field. */
+export function assertFileGiven(file: UploadedFile | undefined): asserts file is UploadedFile {
+  if (!file) throw badRequest([{ path: "file", message: "is required (a .csv or .xlsx file)" }]);
+}
+
+/**
+ * The rows of an uploaded CSV or XLSX file. Another file type or unreadable bytes are a 400
+ * naming the `file` field; bad cells are left to the caller's parser.
+ */
+export async function readUploadedRows(file: UploadedFile): Promise<RawRow[]> {
+  const type = tabularFileType(file.originalname);
+  if (!type)
+    throw new AppError(400, "unsupported_file_type", `"${file.originalname}" is not a .csv or .xlsx file.`, [
+      { path: "file", message: "must be a .csv or .xlsx file" },
+    ]);
+  try {
+    return type === "csv" ? readCsvRows(file.buffer) : await readXlsxRows(file.buffer);
+  } catch (error) {
+    if (error instanceof UnreadableFileError) throw badRequest([{ path: "file", message: error.message }], "The file could not be read.");
+    throw error;
+  }
 }
 
 /** Thrown when the bytes are not a readable CSV/XLSX at all (as opposed to bad cells). */
