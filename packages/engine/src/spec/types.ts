@@ -3,24 +3,11 @@
  * (packages/contracts/src/engine) field for field, but the engine library imports nothing
  * of ours, so the shapes are restated here. DESIGN.md "Engine contract" fixes the names.
  */
+import type { Distribution } from "../distributions/types.js";
 import type { PerilProfile, PerilResult, Portfolio } from "../peril/types.js";
 
-/** One uncertain input. Units follow the input it describes. */
-export type Distribution =
-  | { type: "fixed"; value: number }
-  | { type: "normal"; mean: number; sd: number }
-  | { type: "lognormal"; median: number; logSd: number }
-  | { type: "uniform"; min: number; max: number }
-  | { type: "triangular"; min: number; mode: number; max: number }
-  | { type: "truncated-normal"; mean: number; sd: number; min: number; max: number }
-  | {
-      type: "range";
-      p50: number;
-      low: number;
-      high: number;
-      coverage: 90 | 66;
-      shape: "lognormal" | "split-normal";
-    };
+/** One uncertain input; defined once in distributions/types.ts. */
+export type { Distribution };
 
 export const FORCING_AGENTS = [
   "co2",
