@@ -89,6 +89,16 @@ describe("FanChart", () => {
     expect(groups.map((g) => g.getAttribute("data-series"))).toEqual(["a", "b"]);
     const b = container.querySelector('[data-series="b"]')!;
     for (const band of ["p5-p95", "p17-p83"]) expect(b.querySelector(`[data-band="${band}"]`)).toHaveAttribute("fill", "none");
+    // The outline is the band's two edges, p95 then p5, as two open lines (no closing stroke).
+    const y = tickMap(container, "y");
+    const outerD = b.querySelector('[data-band="p5-p95"]')!.getAttribute("d")!;
+    expect(outerD.match(/M/g)).toHaveLength(2);
+    const pts = pathPoints(outerD);
+    const n = outlined.years.length;
+    for (let i = 0; i < n; i++) {
+      expect(Math.abs(pts[i]![1] - y(outlined.p95[i]!))).toBeLessThan(TOL);
+      expect(Math.abs(pts[n + i]![1] - y(outlined.p5[i]!))).toBeLessThan(TOL);
+    }
     expect(b.querySelector('[data-band="p50"]')!.getAttribute("stroke-dasharray")).toBeTruthy();
     const a = container.querySelector('[data-series="a"]')!;
     expect(a.querySelector('[data-band="p17-p83"]')!.getAttribute("fill")).not.toBe("none");

@@ -122,11 +122,18 @@ export function FanChart({
             .x((k) => x(s.years[k]!))
             .y0((k) => y(lo[k]!))
             .y1((k) => y(hi[k]!))(idx) ?? "";
+        const edge = (v: number[]) =>
+          line<number>()
+            .x((k) => x(s.years[k]!))
+            .y((k) => y(v[k]!))(idx) ?? "";
+        // Outlined bands are their two edges only (no closing stroke at the first and last year).
+        const edges = (lo: number[], hi: number[]) => `${edge(hi)}${edge(lo)}`;
+        const outline = s.treatment === "outline";
         return {
           s,
           color: s.color ?? seriesColor(i),
-          outer: band(s.p5, s.p95),
-          inner: band(s.p17, s.p83),
+          outer: outline ? edges(s.p5, s.p95) : band(s.p5, s.p95),
+          inner: outline ? edges(s.p17, s.p83) : band(s.p17, s.p83),
           median: line<number>()
             .x((k) => x(s.years[k]!))
             .y((k) => y(s.p50[k]!))(idx) ?? "",
