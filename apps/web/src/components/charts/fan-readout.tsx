@@ -30,31 +30,35 @@ export function FanReadout({
   seriesCount: number;
 }) {
   const f = (v: number) => v.toFixed(digits);
+  const named = seriesCount > 1;
   return (
-    <div role="status" className="flex flex-col gap-0.5 rounded-md border border-line bg-surface-2/60 px-3 py-1.5 text-xs" style={{ minHeight: `${1.5 + 1.25 * seriesCount}rem` }}>
+    <div role="status" className="rounded-md border border-line bg-surface-2/60 px-3 py-1.5 text-xs" style={{ minHeight: `${1.5 + 1.25 * seriesCount}rem` }}>
       <p>
         <span className="num font-semibold text-ink">{year}</span>{" "}
         <span className="text-muted">{pinned ? "" : "(last year shown: hover or use the arrow keys on the chart to read another)"}</span>
       </p>
-      {rows.map(({ series, color, values }) => (
-        <p key={series.id} className="num flex flex-wrap items-center gap-x-3 text-muted">
-          {seriesCount > 1 && (
-            <span className="flex items-center gap-1.5 font-sans font-medium text-text">
-              <span aria-hidden className="h-2 w-2 rounded-full" style={{ background: color }} />
-              {series.name}
+      {/* One grid for all series, so the numbers line up in columns. */}
+      <div className="grid items-center gap-x-4 gap-y-0.5" style={{ gridTemplateColumns: named ? "minmax(0,max-content) repeat(3, max-content)" : "repeat(3, max-content)" }}>
+        {rows.map(({ series, color, values }) => (
+          <div key={series.id} className="num contents text-muted">
+            {named && (
+              <span className="flex min-w-0 items-center gap-1.5 font-sans font-medium text-text">
+                <span aria-hidden className="h-2 w-2 shrink-0 rounded-full" style={{ background: color }} />
+                <span className="truncate">{series.name}</span>
+              </span>
+            )}
+            <span className="num text-muted">
+              median <span className="text-text">{f(values[2]!)}</span> {unit}
             </span>
-          )}
-          <span>
-            median <span className="text-text">{f(values[2]!)}</span> {unit}
-          </span>
-          <span>
-            17–83 <span className="text-text">{f(values[1]!)}–{f(values[3]!)}</span>
-          </span>
-          <span>
-            5–95 <span className="text-text">{f(values[0]!)}–{f(values[4]!)}</span>
-          </span>
-        </p>
-      ))}
+            <span className="num text-muted">
+              17–83 <span className="text-text">{f(values[1]!)}–{f(values[3]!)}</span>
+            </span>
+            <span className="num text-muted">
+              5–95 <span className="text-text">{f(values[0]!)}–{f(values[4]!)}</span>
+            </span>
+          </div>
+        ))}
+      </div>
     </div>
   );
 }
