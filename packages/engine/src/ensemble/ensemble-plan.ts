@@ -16,9 +16,9 @@ export interface YearSlot {
    */
   extremes: Float64Array;
   /**
-   * Per member block, how many of its members lie above exactly k of the ascending
-   * thresholds, k = 0 … thresholds (thresholds + 1 counts per block): exceedance
-   * probabilities without another pass. Whole numbers, so no split changes them.
+   * Per member block, how many of its members lie above each ascending threshold
+   * (thresholds counts per block): exceedance probabilities without another pass. Whole
+   * numbers, so no split changes them.
    */
   aboveCounts: Float64Array;
 }
@@ -28,10 +28,27 @@ export interface YearSlot {
  * members × years. Arrays come from an allocator so the parallel runner can place them in
  * shared memory and hand the same plan to its worker threads.
  */
+/**
+ * Which per-year series besides temperature and exceedance a run summarises. All on for
+ * every product run; a run may switch forcing and imbalance off (runner option
+ * `summaries`), and its result then carries those two series empty (`{}`).
+ */
+export interface SummaryChoice {
+  forcing: boolean;
+  imbalance: boolean;
+}
+
+export const ALL_SUMMARIES: SummaryChoice = { forcing: true, imbalance: true };
+
 export interface EnsemblePlan {
   members: number;
   inputs: ModelInput[];
   columns: Float64Array[];
+  /**
+   * Per pathway, per forcing slot (pathway-forcing.ts slotColumns, padded to its scaleWidth):
+   * the scale column the forcing loop reads, state.zeros for padding slots.
+   */
+  slotScales: Float64Array[][];
   climate: MemberClimate;
   pathways: PathwayForcing[];
   /** Requested percentiles as probabilities, in the order asked. */
@@ -42,6 +59,7 @@ export interface EnsemblePlan {
   baseline: [number, number];
   constraint: RunSpec["model"]["constraint"];
   horizons: number[];
+  summaries: SummaryChoice;
   /** Member blocks of MEMBER_BLOCK members (the last may be shorter). */
   blocks: number;
   /** Reported years simulated together before being summarised (year-spans.ts). */
@@ -50,10 +68,13 @@ export interface EnsemblePlan {
 }
 
 export interface EnsembleState {
-  /** Per member: propagator, baseline, state and crossings, packed (member-records.ts). */
-  records: Float64Array;
-  /** Each member's baseline-period mean (a copy of the record's, for the summaries). */
+  /** Upper- and deep-layer temperature of each member (struct of arrays, advance-year.ts). */
+  upper: Float64Array;
+  deep: Float64Array;
+  /** Each member's baseline-period sum during the first pass, then its mean. */
   baselineMean: Float64Array;
+  /** The lowest ascending threshold each member has not crossed yet (+Infinity once all are). */
+  nextThreshold: Float64Array;
   /** Pass 1 sums, turned into each member's constraint-window mean anomaly. */
   windowMean: Float64Array;
   /** Constraint weights of the current pathway (all 1 without a constraint). */
@@ -62,8 +83,8 @@ export interface EnsembleState {
   crossing: Float64Array[];
   /** Ring of year slots: the simulation writes year t into slot t mod ring size. */
   slots: YearSlot[];
-  /** Varying agent scales, member-major (member-forcing.ts); width of the widest pathway. */
-  memberScales: Float64Array;
+  /** All zeros: the scale column of the padding slots of a pathway's forcing (member-forcing.ts). */
+  zeros: Float64Array;
   /** Per horizon: member anomaly, committed warming and total forcing in that year. */
   horizonTemperature: Float64Array[];
   horizonCommitted: Float64Array[];
@@ -73,20 +94,20 @@ export interface EnsembleState {
 }
 
 export function allocateState(
-  records: Float64Array,
   members: number,
   thresholds: number,
   horizons: number,
   ringSize: number,
   blocks: number,
-  scaleWidth: number,
   yearlyLength: number,
   allocate: Allocate,
 ): EnsembleState {
   const many = (count: number) => Array.from({ length: count }, () => allocate(members));
   return {
-    records,
+    upper: allocate(members),
+    deep: allocate(members),
     baselineMean: allocate(members),
+    nextThreshold: allocate(members),
     windowMean: allocate(members),
     weights: allocate(members),
     crossing: many(thresholds),
@@ -95,9 +116,9 @@ export function allocateState(
       forcing: allocate(members),
       imbalance: allocate(members),
       extremes: allocate(6 * blocks),
-      aboveCounts: allocate((thresholds + 1) * blocks),
+      aboveCounts: allocate(Math.max(1, thresholds) * blocks),
     })),
-    memberScales: allocate(members * scaleWidth),
+    zeros: allocate(members),
     horizonTemperature: many(horizons),
     horizonCommitted: many(horizons),
     horizonForcing: many(horizons),

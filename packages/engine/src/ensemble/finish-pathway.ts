@@ -35,6 +35,7 @@ export function finishPathway(
   const row = (r: number) => Array.from(yearly.subarray(r * years, (r + 1) * years));
   const series = (quantity: number): PercentileSeries => {
     const out: PercentileSeries = {};
+    if ((quantity === 1 && !plan.summaries.forcing) || (quantity === 2 && !plan.summaries.imbalance)) return out; // not asked for
     percentiles.forEach((p, j) => (out[percentileKey(p)] = row(summaryRow(quantity, j, P))));
     out.mean = row(summaryRow(quantity, P, P));
     return out;

@@ -1,7 +1,5 @@
 import { advanceBaselineYears } from "./advance-year.js";
 import type { EnsemblePlan } from "./ensemble-plan.js";
-import { fillMemberScales } from "./member-forcing.js";
-import { BASELINE, DEEP, NEXT_THRESHOLD, RECORD, UPPER } from "./member-records.js";
 import { MAX_SPAN_YEARS } from "./year-spans.js";
 
 /**
@@ -29,14 +27,10 @@ export function runBaselinePass(
   onYear?: () => void,
 ): void {
   const pathway = plan.pathways[pathwayIndex]!;
-  fillMemberScales(plan, pathway, lo, hi);
-  const { records, baselineMean, windowMean } = plan.state;
-  for (let m = lo; m < hi; m++) {
-    const o = m * RECORD;
-    records[o + BASELINE] = 0;
-    records[o + UPPER] = 0;
-    records[o + DEEP] = 0;
-  }
+  const { upper, deep, baselineMean, windowMean } = plan.state;
+  upper.fill(0, lo, hi);
+  deep.fill(0, lo, hi);
+  baselineMean.fill(0, lo, hi);
   windowMean.fill(0, lo, hi);
   const [b0, b1] = plan.baseline;
   const c = plan.constraint;
@@ -47,7 +41,7 @@ export function runBaselinePass(
     const t1 = Math.min(years, t0 + MAX_SPAN_YEARS);
     advanceBaselineYears(
       plan,
-      pathway,
+      pathwayIndex,
       t0,
       t1,
       lo,
@@ -60,8 +54,7 @@ export function runBaselinePass(
   const baselineYears = b1 - b0 + 1;
   const windowYears = c ? c.to - c.from + 1 : 1;
   for (let m = lo; m < hi; m++) {
-    const baseline = records[m * RECORD + BASELINE]! / baselineYears;
-    records[m * RECORD + BASELINE] = baseline;
+    const baseline = baselineMean[m]! / baselineYears;
     baselineMean[m] = baseline;
     windowMean[m] = c ? windowMean[m]! / windowYears - baseline : 0;
   }
@@ -69,14 +62,10 @@ export function runBaselinePass(
 
 /** Clears the state of members [lo, hi) for the reporting pass. */
 export function resetForReporting(plan: EnsemblePlan, lo: number, hi: number): void {
-  const { records, crossing } = plan.state;
-  const first = plan.thresholdsAscending[0] ?? Infinity;
-  for (let m = lo; m < hi; m++) {
-    const o = m * RECORD;
-    records[o + UPPER] = 0;
-    records[o + DEEP] = 0;
-    records[o + NEXT_THRESHOLD] = first;
-  }
+  const { upper, deep, nextThreshold, crossing } = plan.state;
+  upper.fill(0, lo, hi);
+  deep.fill(0, lo, hi);
+  nextThreshold.fill(plan.thresholdsAscending[0] ?? Infinity, lo, hi);
   for (const years of crossing) years.fill(-1, lo, hi);
 }
 

@@ -3,9 +3,8 @@ import { SpecError } from "../spec/spec-error.js";
 import type { RunSpec, RunSpecInput } from "../spec/types.js";
 import { validateSpec } from "../spec/validate-spec.js";
 import { MEMBER_BLOCK } from "./advance-year.js";
-import { allocateState, type EnsemblePlan } from "./ensemble-plan.js";
+import { ALL_SUMMARIES, allocateState, type EnsemblePlan, type SummaryChoice } from "./ensemble-plan.js";
 import { buildMemberClimate } from "./member-climate.js";
-import { buildMemberRecords } from "./member-records.js";
 import { buildPathwayForcing } from "./pathway-forcing.js";
 import { allocateLocal, sampleInputs, type Allocate } from "./sample-inputs.js";
 import { listModelInputs } from "./uncertain-inputs.js";
@@ -16,6 +15,7 @@ import { yearlyLength } from "./yearly-layout.js";
  * Validates the spec, samples every input once and builds each member's propagator and
  * each pathway's forcing: all the deterministic set-up of a run, shared by the one-thread
  * and the worker-thread runners (which only differ in who advances which members).
+ * summaries: forcing and imbalance series on (default) or off (ensemble-plan.ts SummaryChoice).
  * spansInRing: how many spans of year slots exist at once (1 for one thread; 2 lets
  * workers simulate the next span while the last one is being summarised).
  */
@@ -23,6 +23,7 @@ export function preparePlan(
   input: RunSpecInput | RunSpec,
   spansInRing = 1,
   allocate: Allocate = allocateLocal,
+  summaries: Partial<SummaryChoice> = {},
 ): { spec: RunSpec; plan: EnsemblePlan } {
   const spec = applyDefaults(input);
   validateSpec(spec);
@@ -53,13 +54,11 @@ export function preparePlan(
   const span = spanYears(spec.members, spansInRing);
   const blocks = Math.ceil(spec.members / MEMBER_BLOCK);
   const state = allocateState(
-    buildMemberRecords(climate, spec.members, allocate),
     spec.members,
     spec.thresholds.length,
     spec.horizons.length,
     span * spansInRing,
     blocks,
-    Math.max(...pathways.map((p) => p.scaleWidth)),
     yearlyLength(probs.length, spec.thresholds.length, maxYears),
     allocate,
   );
@@ -67,6 +66,9 @@ export function preparePlan(
     members: spec.members,
     inputs,
     columns,
+    slotScales: pathways.map((p) =>
+      Array.from({ length: p.scaleWidth }, (_, j) => (j < p.slotColumns.length ? columns[p.slotColumns[j]!]! : state.zeros)),
+    ),
     climate,
     pathways,
     probs,
@@ -75,6 +77,7 @@ export function preparePlan(
     baseline: spec.baseline,
     constraint: spec.model.constraint,
     horizons: [...spec.horizons],
+    summaries: { ...ALL_SUMMARIES, ...summaries },
     blocks,
     spanYears: span,
     state,

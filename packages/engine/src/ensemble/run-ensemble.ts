@@ -8,7 +8,9 @@ import { impliedSensitivities } from "./implied-sensitivity.js";
 import { firstPassYears, horizonsByYear, resetForReporting, runBaselinePass } from "./pathway-passes.js";
 import { pathwayPerils, runPerils } from "./pathway-perils.js";
 import { weighPathway } from "./pathway-weights.js";
+import type { SummaryChoice } from "./ensemble-plan.js";
 import { preparePlan } from "./prepare-plan.js";
+import { allocateLocal } from "./sample-inputs.js";
 import { YearSummariser } from "./summarise-year.js";
 
 export interface RunOptions {
@@ -18,6 +20,11 @@ export interface RunOptions {
   shouldCancel?(): boolean;
   /** If given, filled with the seconds spent in each stage (for the benchmark). */
   stageTimes?: StageTimes;
+  /**
+   * Per-year series to summarise besides temperature and exceedance (default: all). A series
+   * switched off is returned empty ({}); the benchmark uses this to time W1's own workload.
+   */
+  summaries?: Partial<SummaryChoice>;
 }
 
 /** Wall-clock seconds per stage; parallel stages count thread-seconds divided by threads. */
@@ -43,7 +50,7 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
     if (times) times[stage] += (now - clock) / 1000;
     clock = now;
   };
-  const { spec, plan } = preparePlan(input);
+  const { spec, plan } = preparePlan(input, 1, allocateLocal, options.summaries);
   lap("sample");
   const n = plan.members;
   const totalYears = plan.pathways.reduce((s, p, i) => s + p.years + firstPassYears(plan, i), 0);
@@ -70,7 +77,7 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
     lap("simulate");
     for (let t0 = 0; t0 < pathway.years; t0 += span) {
       const t1 = Math.min(pathway.years, t0 + span);
-      advanceReportedYears(plan, pathway, t0, t1, 0, n);
+      advanceReportedYears(plan, p, t0, t1, 0, n);
       if (times) lap("simulate");
       for (let t = t0; t < t1; t++) {
         summariser.summarise(t, pathway.years, slots[t % slots.length]!, weighting.weights, weighting.totalWeight, byYear[t]!);

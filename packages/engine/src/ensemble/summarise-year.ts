@@ -45,22 +45,18 @@ export class YearSummariser {
     this.describe(0, t, years, slot.anomaly, slot.extremes, 2, weights, totalWeight);
     for (let i = 0; i < plan.thresholds.length; i++)
       yearly[exceedanceRow(i, percentiles) * years + t] = weights ? exceed[i]! / totalWeight : exceed[i]! / n;
-    this.describe(1, t, years, slot.forcing, slot.extremes, 0, weights, totalWeight);
-    this.describe(2, t, years, slot.imbalance, slot.extremes, 4, weights, totalWeight);
+    if (plan.summaries.forcing) this.describe(1, t, years, slot.forcing, slot.extremes, 0, weights, totalWeight);
+    if (plan.summaries.imbalance) this.describe(2, t, years, slot.imbalance, slot.extremes, 4, weights, totalWeight);
     for (const h of horizonIndexes) this.keepHorizon(h, slot);
   }
 
-  /**
-   * Members above each threshold (in spec order) from the step's counts by level: above
-   * the i-th ascending threshold means above at least i + 1 of them.
-   */
+  /** Members above each threshold (in spec order) from the step's per-block counts (ascending order). */
   private countsAbove(aboveCounts: Float64Array): number[] {
     const ascending = this.plan.thresholdsAscending;
-    const levels = ascending.length + 1;
-    const atLeast = new Array<number>(levels).fill(0);
-    for (let block = 0; block < this.plan.blocks; block++)
-      for (let k = 1; k < levels; k++) for (let i = 0; i < k; i++) atLeast[i]! += aboveCounts[block * levels + k]!;
-    return this.plan.thresholds.map((th) => atLeast[ascending.indexOf(th)]!);
+    const count = ascending.length;
+    const above = new Array<number>(count).fill(0);
+    for (let block = 0; block < this.plan.blocks; block++) for (let i = 0; i < count; i++) above[i]! += aboveCounts[block * count + i]!;
+    return this.plan.thresholds.map((th) => above[ascending.indexOf(th)]!);
   }
 
   /** Weighted (or plain) count of members above each threshold. */

@@ -77,7 +77,7 @@ function reportPathway(message: Extract<ToWorker, { kind: "report" }>): boolean 
       const b = Atomics.add(control.blockClaims, s, 1);
       if (b >= blocks) break;
       if (s === 0) resetForReporting(plan, b * MEMBER_BLOCK, Math.min(n, (b + 1) * MEMBER_BLOCK));
-      advanceReportedBlock(plan, pathway, t0, t1, b);
+      advanceReportedBlock(plan, message.pathway, t0, t1, b);
       addAndWake(control.blocksDone, s, 1);
     }
     simulateSeconds += (performance.now() - start) / 1000;

@@ -9,7 +9,7 @@ import { firstPassYears, horizonsByYear } from "../ensemble/pathway-passes.js";
 import { pathwayPerils, runPerils } from "../ensemble/pathway-perils.js";
 import { weighPathway } from "../ensemble/pathway-weights.js";
 import { preparePlan } from "../ensemble/prepare-plan.js";
-import { runEnsemble, type StageTimes } from "../ensemble/run-ensemble.js";
+import { runEnsemble, type RunOptions, type StageTimes } from "../ensemble/run-ensemble.js";
 import type { PathwayPerilResult } from "../peril/types.js";
 import { RunCancelledError } from "../spec/spec-error.js";
 import type { PathwayResult, PercentileSet, RunResult, RunSpec, RunSpecInput } from "../spec/types.js";
@@ -26,6 +26,8 @@ export interface ParallelRunOptions {
   signal?: AbortSignal;
   /** If given, filled with seconds per stage (parallel stages: thread-seconds / threads). */
   stageTimes?: StageTimes;
+  /** As RunOptions.summaries: per-year forcing and imbalance series on (default) or off. */
+  summaries?: RunOptions["summaries"];
 }
 
 const sharedAllocate = (length: number) => new Float64Array(new SharedArrayBuffer(8 * length));
@@ -48,6 +50,7 @@ export async function runEnsembleParallel(input: RunSpecInput | RunSpec, options
     return runEnsemble(input, {
       ...(options.onProgress ? { onProgress: options.onProgress } : {}),
       ...(options.stageTimes ? { stageTimes: options.stageTimes } : {}),
+      ...(options.summaries ? { summaries: options.summaries } : {}),
       shouldCancel: () => signal?.aborted === true,
     });
   }
@@ -55,7 +58,7 @@ export async function runEnsembleParallel(input: RunSpecInput | RunSpec, options
   const pool = new WorkerPool(threads);
   try {
     const start = performance.now();
-    const { spec, plan } = preparePlan(input, 2, sharedAllocate);
+    const { spec, plan } = preparePlan(input, 2, sharedAllocate, options.summaries);
     if (options.stageTimes) options.stageTimes.sample += (performance.now() - start) / 1000;
     return await runWithPool(spec, plan, pool, options);
   } finally {
