@@ -23,8 +23,14 @@ describe("ReviewQueue", () => {
 
   it("says there is nothing to review when only her own version waits", () => {
     renderWithClient(<ReviewQueue versions={[own]} userId="u-manager" />);
-    expect(screen.getByText("Nothing to review")).toBeInTheDocument();
+    expect(screen.getByText(/^Nothing for you to decide: only your own version waits/)).toBeInTheDocument();
     expect(screen.queryByRole("list", { name: "Versions for you to decide" })).toBeNull();
     expect(screen.getByRole("region", { name: "Your own versions in review" })).toBeInTheDocument();
+  });
+
+  it("says in one line that nothing waits when the queue is empty", () => {
+    renderWithClient(<ReviewQueue versions={[]} userId="u-manager" />);
+    expect(screen.getByText("Nothing to review.")).toBeInTheDocument();
+    expect(screen.queryByRole("region", { name: "Your own versions in review" })).toBeNull();
   });
 });

@@ -2,7 +2,6 @@ import type { ModelVersionSummary } from "@plumeline/contracts";
 import { paths } from "@/config/paths";
 import { ButtonLink } from "@/components/ui/button";
 import { CardBody } from "@/components/ui/card";
-import { EmptyState } from "@/components/ui/states";
 
 function QueueItem({ version: v, own }: { version: ModelVersionSummary; own: boolean }) {
   return (
@@ -33,8 +32,10 @@ export function ReviewQueue({ versions, userId }: { versions: ModelVersionSummar
   return (
     <>
       {toDecide.length === 0 ? (
-        <CardBody>
-          <EmptyState title="Nothing to review" />
+        // One quiet line, as the desk's other empty panels: a big empty box would outweigh
+        // the versions listed under it.
+        <CardBody className="py-3">
+          <p className="text-sm text-muted">{own.length > 0 ? "Nothing for you to decide: only your own version waits, for another manager." : "Nothing to review."}</p>
         </CardBody>
       ) : (
         <ul aria-label="Versions for you to decide" className="divide-y divide-line">
