@@ -3,7 +3,8 @@ import { CliError } from "./cli-error.js";
 export const USAGE = `usage:
   engine run SPEC.json [--out FILE] [--threads T]   result JSON on stdout (or FILE)
   engine validate SPEC.json                        checks a spec without running it
-  engine bench --members N [--threads T]           one W1 benchmark line (bench/W1.md)`;
+  engine bench --members N [--threads T] [--full]  one W1 benchmark line (bench/W1.md);
+                                                   --full also summarises forcing and imbalance`;
 
 export interface ParsedArgs {
   command: "run" | "validate" | "bench";
@@ -11,6 +12,8 @@ export interface ParsedArgs {
   out?: string;
   members?: number;
   threads?: number;
+  /** bench: also summarise forcing and imbalance per year (the product's full summaries). */
+  full?: boolean;
 }
 
 /** Parses the CLI's small grammar; anything unexpected is a CliError naming the argument. */
@@ -34,6 +37,7 @@ export function parseArgs(argv: string[]): ParsedArgs {
     if (arg === "--out" && command === "run") parsed.out = value();
     else if (arg === "--threads" && command !== "validate") parsed.threads = count("--threads");
     else if (arg === "--members" && command === "bench") parsed.members = count("--members");
+    else if (arg === "--full" && command === "bench") parsed.full = true;
     else if (!arg.startsWith("--") && command !== "bench" && parsed.file === undefined) parsed.file = arg;
     else throw new CliError(`unexpected argument "${arg}"\n${USAGE}`);
   }

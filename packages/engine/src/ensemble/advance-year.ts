@@ -94,7 +94,7 @@ function countAboveOthers(plan: EnsemblePlan, lo: number, hi: number, anomaly: F
   for (let i = 1; i < thresholds.length; i++) aboveCounts[countsAt + i] = countAbove(anomaly, lo, hi, thresholds[i]!);
 }
 
-function countAbove(values: Float64Array, lo: number, hi: number, threshold: number): number {
+export function countAbove(values: Float64Array, lo: number, hi: number, threshold: number): number {
   let count = 0;
   for (let m = lo; m < hi; m++) count += values[m]! > threshold ? 1 : 0;
   return count;

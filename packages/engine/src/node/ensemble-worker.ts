@@ -3,6 +3,7 @@ import { MEMBER_BLOCK, advanceReportedBlock } from "../ensemble/advance-year.js"
 import type { EnsemblePlan } from "../ensemble/ensemble-plan.js";
 import { resetForReporting, runBaselinePass } from "../ensemble/pathway-passes.js";
 import { YearSummariser } from "../ensemble/summarise-year.js";
+import { warmKernels } from "../ensemble/warm-kernels.js";
 import { CANCEL_FLAG, addAndWake, waitUntilAtLeast, type PipelineControl } from "./pipeline-control.js";
 import type { FromWorker, ToWorker } from "./worker-messages.js";
 
@@ -12,6 +13,9 @@ import type { FromWorker, ToWorker } from "./worker-messages.js";
  * span by span, then claims years of the finished span to summarise. Summaries read whole
  * years in member order, so the results are identical to one thread whoever did what.
  */
+/** Members each worker runs through its kernels before the run proper. */
+const WARM_MEMBERS = 256;
+
 let plan: EnsemblePlan;
 let control: PipelineControl;
 let summariser: YearSummariser;
@@ -27,6 +31,9 @@ port.on("message", (message: ToWorker) => {
     if (message.kind === "plan") {
       ({ plan, control } = message);
       summariser = new YearSummariser(plan);
+      // Each worker warms its kernels on its own few members (warm-kernels.ts), inside the run's time.
+      const lo = Math.min(plan.members, message.worker * WARM_MEMBERS);
+      if (process.env.PL_NOWARM !== "1") warmKernels(plan, lo, Math.min(plan.members, lo + WARM_MEMBERS));
       send({ kind: "ready" });
     } else if (message.kind === "baseline") {
       const start = performance.now();

@@ -80,7 +80,7 @@ async function runWithPool(spec: RunSpec, plan: EnsemblePlan, pool: WorkerPool, 
       }, 100)
     : null;
   try {
-    await pool.all(() => ({ kind: "plan", plan, control }));
+    await pool.all((worker) => ({ kind: "plan", plan, control, worker }));
     const pathways: PathwayResult[] = [];
     const perils: (PathwayPerilResult | null)[] = [];
     let implied: { ecs: PercentileSet; tcr: PercentileSet } | null = null;

@@ -3,7 +3,7 @@ import type { PipelineControl } from "./pipeline-control.js";
 
 /** Messages from the main thread to an ensemble worker. */
 export type ToWorker =
-  | { kind: "plan"; plan: EnsemblePlan; control: PipelineControl }
+  | { kind: "plan"; plan: EnsemblePlan; control: PipelineControl; worker: number }
   | { kind: "baseline"; pathway: number }
   | { kind: "report"; pathway: number; weighted: boolean; totalWeight: number; horizonsByYear: number[][] }
   | { kind: "stop" };
