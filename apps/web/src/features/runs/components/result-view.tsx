@@ -11,7 +11,7 @@ import { PanelErrorBoundary } from "@/components/ui/panel-error-boundary";
 import { Segmented } from "@/components/ui/segmented";
 import { EmptyState } from "@/components/ui/states";
 import { RESULT_ARRIVED_MARK } from "../api/get-run-result";
-import { hasFanPercentiles, toAgentForcing, toCrossing, toExceedanceCurves, toFanSeries, toSensitivityBars } from "../lib/result-adapters";
+import { hasFanPercentiles, toAgentForcing, toCrossing, toExceedanceCurves, toFocusedFanSeries, toSensitivityBars } from "../lib/result-adapters";
 import { ConstraintPanel } from "./constraint-panel";
 import { HorizonTable } from "./horizon-table";
 
@@ -69,6 +69,13 @@ export function ResultView({ run, result }: { run: Run; result: RunResult }) {
   return (
     <div className="flex flex-col gap-6">
       <Cautions />
+      {result.pathways.length > 1 && (
+        <div className="flex flex-wrap items-center gap-3">
+          <span className="text-sm font-medium text-ink">Pathway in focus</span>
+          <Segmented label="Pathway" value={pathway.id} onChange={setPathwayId} options={result.pathways.map((p) => ({ value: p.id, label: p.name }))} />
+          <span className="text-xs text-muted">filled in the chart; the tables and panels below show it</span>
+        </div>
+      )}
       <Card>
         <CardHeader
           title="Warming over time"
@@ -81,7 +88,12 @@ export function ResultView({ run, result }: { run: Run; result: RunResult }) {
             {fanReady ? (
               <FanChart
                 title={`Warming above ${baselineLabel} (K)`}
-                series={result.pathways.map((p) => toFanSeries(p))}
+                series={toFocusedFanSeries(result.pathways, pathway.id)}
+                description={
+                  result.pathways.length > 1
+                    ? `Filled: ${pathway.name} (in focus), median line with 17–83 % (likely) and 5–95 % (very likely) bands. Outlined: the other pathways — solid edges 17–83 %, dotted edges 5–95 %, dashed median. Hover or use arrow keys to read a year.`
+                    : undefined
+                }
                 yLabel={`Warming above ${baselineLabel} (K)`}
                 unit="K"
                 fromYear={baseline[0]}
@@ -95,11 +107,6 @@ export function ResultView({ run, result }: { run: Run; result: RunResult }) {
           </PanelErrorBoundary>
         </CardBody>
       </Card>
-
-      <div className="flex flex-wrap items-center gap-3">
-        <span className="text-sm font-medium text-ink">Pathway for the panels below</span>
-        <Segmented label="Pathway" value={pathway.id} onChange={setPathwayId} options={result.pathways.map((p) => ({ value: p.id, label: p.name }))} />
-      </div>
 
       <Card>
         <CardHeader title={`Horizons — ${pathway.name}`} subtitle="Percentiles of warming (K); small figures give the ± half-width of each percentile's 95 % Monte Carlo interval." />

@@ -1,6 +1,6 @@
 import type { PathwayResult } from "@plumeline/contracts";
 import { describe, expect, it } from "vitest";
-import { toCrossing } from "./result-adapters";
+import { toCrossing, toFocusedFanSeries } from "./result-adapters";
 
 const years = [2030, 2031, 2032, 2033];
 const pathway = (extra: Partial<PathwayResult> = {}): PathwayResult => ({
@@ -45,5 +45,25 @@ describe("toCrossing", () => {
 
   it("falls back too when the shares do not line up with the years", () => {
     expect(toCrossing(pathway({ crossingShare: { "2": [0.5, 0.5] } }), "2").binSource).toBe("percentiles");
+  });
+});
+
+describe("toFocusedFanSeries", () => {
+  const band = { p5: [1, 1, 1, 1], p17: [2, 2, 2, 2], p50: [3, 3, 3, 3], p83: [4, 4, 4, 4], p95: [5, 5, 5, 5] };
+  const three = ["low", "middle", "high"].map((id) => pathway({ id, name: id, temperature: band }));
+
+  it("fills only the pathway in focus and outlines the others, so overlapping bands never blend", () => {
+    const series = toFocusedFanSeries(three, "middle");
+    expect(series.map((s) => [s.id, s.treatment])).toEqual([
+      ["low", "outline"],
+      ["middle", "filled"],
+      ["high", "outline"],
+    ]);
+    // The percentiles pass through untouched.
+    expect(series[1]!.p83).toEqual(band.p83);
+  });
+
+  it("fills a lone pathway", () => {
+    expect(toFocusedFanSeries(three.slice(0, 1), "low")[0]!.treatment).toBe("filled");
   });
 });

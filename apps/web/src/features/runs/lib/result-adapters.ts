@@ -21,6 +21,15 @@ export function toFanSeries(p: PathwayResult, quantity: "temperature" | "forcing
   return { id: p.id, name: p.name, years: p.years, p5: s.p5!, p17: s.p17!, p50: s.p50!, p83: s.p83!, p95: s.p95! };
 }
 
+/**
+ * The result page's fan series: the pathway in focus keeps filled bands, every other one is
+ * drawn as outlines (band edges, dashed median), so where pathways overlap their colours
+ * never blend into a muddy mix and each median stays visible.
+ */
+export function toFocusedFanSeries(pathways: PathwayResult[], focusId: string): FanSeries[] {
+  return pathways.map((p) => ({ ...toFanSeries(p), treatment: p.id === focusId ? "filled" : "outline" }));
+}
+
 export function toExceedanceCurves(p: PathwayResult): ExceedanceCurve[] {
   return Object.entries(p.exceedance)
     .map(([threshold, probability]) => ({ threshold: Number(threshold), probability }))
