@@ -2,8 +2,10 @@
 # Times benchmark workload W1 (/work/shared/bench/W1.md) for the engine and both reference
 # programs in the same session, RUNS times each (interleaved, so machine load hits all three
 # alike), and prints the median total_s of each, the engine's ratios to the references, and
-# the check values, plus each program's median stage timings. Extra engine options (e.g.
-# --threads 1) can be given in ENGINE_ARGS. Usage: scripts/compare-bench.sh [MEMBERS=100000] [RUNS=3]
+# the check values, plus each program's median stage timings. The engine runs twice per
+# round: W1's own outputs (plumeline-ts) and with the product's full per-year summaries
+# (plumeline-ts-full: forcing and imbalance too). Extra engine options (e.g. --threads 1)
+# can be given in ENGINE_ARGS. The load average is printed before and after. Usage: scripts/compare-bench.sh [MEMBERS=100000] [RUNS=3]
 set -euo pipefail
 MEMBERS="${1:-100000}"
 RUNS="${2:-3}"
@@ -13,12 +15,16 @@ C_BIN="$(mktemp -d)/ebm_ref"
 gcc -O3 -march=native -o "$C_BIN" "$BENCH_DIR/ebm_ref.c" -lm
 node "$HERE/bin/plumeline-engine.mjs" bench --members 1000 >/dev/null # builds dist if needed, warms caches
 OUT="$(mktemp)"
+echo "load average before: $(cut -d' ' -f1-3 /proc/loadavg)"
 for _ in $(seq "$RUNS"); do
   # shellcheck disable=SC2086 # ENGINE_ARGS is a list of words
   node "$HERE/bin/plumeline-engine.mjs" bench --members "$MEMBERS" ${ENGINE_ARGS:-} >>"$OUT"
+  # shellcheck disable=SC2086
+  node "$HERE/bin/plumeline-engine.mjs" bench --members "$MEMBERS" --full ${ENGINE_ARGS:-} >>"$OUT"
   "$C_BIN" "$MEMBERS" >>"$OUT"
   python3 "$BENCH_DIR/ebm_ref.py" "$MEMBERS" >>"$OUT"
 done
+echo "load average after: $(cut -d' ' -f1-3 /proc/loadavg)"
 python3 - "$OUT" <<'PY'
 import json, statistics, sys
 rows = [json.loads(line) for line in open(sys.argv[1]) if line.strip()]
@@ -30,8 +36,9 @@ for k, v in by.items():
     print(f"{k:14s} median total_s {med[k]:.4f}  runs {[r['total_s'] for r in v]}  check {v[0]['check']:.4f}")
     stages = "  ".join(f"{s} {statistics.median(r[s] for r in v):.4f}" for s in ("sample_s", "simulate_s", "summarize_s"))
     print(f"{'':14s} median stages: {stages}")
-ts = med.get("plumeline-ts")
-if ts:
-    if "c-scalar" in med: print(f"plumeline-ts / c-scalar = {ts / med['c-scalar']:.3f}  (target ≤ 0.5)")
-    if "numpy" in med: print(f"plumeline-ts / numpy    = {ts / med['numpy']:.3f}  (target ≤ 0.25)")
+for impl in ("plumeline-ts", "plumeline-ts-full"):
+    ts = med.get(impl)
+    if not ts: continue
+    if "c-scalar" in med: print(f"{impl} / c-scalar = {ts / med['c-scalar']:.3f}  (target ≤ 0.5)")
+    if "numpy" in med: print(f"{impl} / numpy    = {ts / med['numpy']:.3f}  (target ≤ 0.25)")
 PY
