@@ -15,3 +15,4 @@ export * from "./api/model-version-impact.js";
 export * from "./api/runs.js";
 export * from "./api/exports.js";
 export * from "./api/perils.js";
+export * from "./api/run-statements.js";

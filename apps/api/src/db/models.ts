@@ -11,6 +11,7 @@ import { initRunModel } from "../modules/runs/run.model.js";
 import { initJobModel } from "../queue/job.model.js";
 import { initRunResultModel, initRunResultRowModel } from "../modules/results/run-result.model.js";
 import { initExportRecordModel } from "../modules/exports/export-record.model.js";
+import { initRunStatementModel } from "../modules/run-statements/run-statement.model.js";
 import { initPerilProfileModel } from "../modules/peril-profiles/peril-profile.model.js";
 import { initPortfolioModel } from "../modules/portfolios/portfolio.model.js";
 
@@ -36,6 +37,7 @@ export function initModels(sequelize: Sequelize) {
     RunResult: initRunResultModel(sequelize),
     RunResultRow: initRunResultRowModel(sequelize),
     ExportRecord: initExportRecordModel(sequelize),
+    RunStatement: initRunStatementModel(sequelize),
     // peril (peril profiles, portfolios)
     PerilProfile: initPerilProfileModel(sequelize),
     Portfolio: initPortfolioModel(sequelize),

@@ -9,6 +9,7 @@ import { modelVersionsRouter } from "./model-versions/model-versions.routes.js";
 import { runsRouter } from "./runs/runs.routes.js";
 import { resultsRouter } from "./results/results.routes.js";
 import { exportsRouter, runExportsRouter } from "./exports/exports.routes.js";
+import { runStatementsRouter } from "./run-statements/run-statements.routes.js";
 import { perilProfilesRouter } from "./peril-profiles/peril-profiles.routes.js";
 import { portfoliosRouter } from "./portfolios/portfolios.routes.js";
 
@@ -29,6 +30,7 @@ export const moduleRouters: ReadonlyArray<readonly [path: string, router: Router
   ["/runs", runsRouter],
   ["/runs", resultsRouter],
   ["/runs", runExportsRouter],
+  ["/runs", runStatementsRouter],
   ["/exports", exportsRouter],
   // peril (peril-profiles, portfolios)
   ["/peril-profiles", perilProfilesRouter],

@@ -72,7 +72,8 @@ export async function exportWorkbook(ctx: Ctx, user: RequestUser, runId: string)
   const { run, result } = await getRunWithResult(ctx, runId);
   const version = await ctx.models.ModelVersion.findByPk(run.modelVersionId);
   const pathways = await ctx.models.Pathway.findAll({ where: { id: { [Op.in]: run.pathwayIds } } });
-  const userIds = [run.createdBy, version?.decidedBy].filter((x): x is string => !!x);
+  const statements = await ctx.models.RunStatement.findAll({ where: { runId: run.id }, order: [["createdAt", "ASC"], ["id", "ASC"]] });
+  const userIds = [run.createdBy, version?.decidedBy, ...statements.map((s) => s.createdBy)].filter((x): x is string => !!x);
   const users = await ctx.models.User.findAll({ where: { id: { [Op.in]: userIds } }, attributes: ["id", "name", "email"] });
   const who = (id: string | null | undefined) => {
     const u = users.find((x) => x.id === id);
@@ -111,6 +112,7 @@ export async function exportWorkbook(ctx: Ctx, user: RequestUser, runId: string)
     resultHash: result.resultHash,
     exportedBy: `${user.name} <${user.email}>`,
     exportedAt: new Date().toISOString(),
+    statements: statements.map((s) => ({ kind: s.kind, text: s.text, by: who(s.createdBy) ?? s.createdBy, at: s.createdAt.toISOString() })),
   };
   const file: ExportFile = {
     fileName: `${baseName(run)}.xlsx`,

@@ -42,6 +42,8 @@ export interface WorkbookManifest {
   resultHash: string;
   exportedBy: string;
   exportedAt: string;
+  /** Reliance and limitation statements recorded with the run, oldest first. */
+  statements: Array<{ kind: "reliance" | "limitation"; text: string; by: string; at: string }>;
 }
 
 const BOLD = { bold: true } as const;
@@ -121,6 +123,22 @@ function addManifest(workbook: ExcelJS.Workbook, m: WorkbookManifest, result: Ru
   sheet.addRow(["id", "name", "source", "vintage", "years", "checksum (SHA-256)"]).font = BOLD;
   for (const p of m.pathways)
     sheet.addRow([p.id, p.name, p.source, p.vintage, `${p.startYear}–${p.endYear}`, p.checksum].map(safe));
+  sheet.addRow([]);
+  addStatements(sheet, m.statements);
+}
+
+/**
+ * The reliance and limitation statements recorded with the run (or a line saying none
+ * were), on the Manifest and again on the Cautions sheet, so they travel with the numbers.
+ */
+function addStatements(sheet: ExcelJS.Worksheet, statements: WorkbookManifest["statements"]): void {
+  sheet.addRow(["Reliance and limitation statements recorded with this run"]).font = BOLD;
+  if (statements.length === 0) {
+    sheet.addRow(["none recorded"]);
+    return;
+  }
+  sheet.addRow(["kind", "statement", "recorded by", "recorded at"]).font = BOLD;
+  for (const st of statements) sheet.addRow([st.kind, st.text, st.by, st.at].map(safe));
 }
 
 function addInputs(workbook: ExcelJS.Workbook, model: ModelSpec): void {
@@ -171,6 +189,8 @@ export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunRe
   cautions.getColumn(1).width = 120;
   cautions.addRow(["Cautions — read before using these results"]).font = BOLD;
   for (const c of RESULT_CAUTIONS) cautions.addRow([neutraliseFormula(c)]);
+  cautions.addRow([]);
+  addStatements(cautions, manifest.statements);
   if (result.perils) {
     cautions.addRow([]);
     cautions.addRow(["Peril lens — how the multipliers were applied"]).font = BOLD;

@@ -66,6 +66,7 @@ const manifest = (r: RunResult): WorkbookManifest => ({
   resultHash: r.resultHash,
   exportedBy: "tester",
   exportedAt: "2026-01-02T00:00:00.000Z",
+  statements: [],
 });
 
 beforeAll(() => {
