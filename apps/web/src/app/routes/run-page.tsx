@@ -8,6 +8,7 @@ import { useRun } from "@/features/runs/api/get-run";
 import { useRunResult } from "@/features/runs/api/get-run-result";
 import { ExportPanel } from "@/features/runs/components/export-panel";
 import { ReplayPanel } from "@/features/runs/components/replay-panel";
+import { RunStatementsPanel } from "@/features/runs/components/run-statements-panel";
 import { ResultView } from "@/features/runs/components/result-view";
 import { RunManifest } from "@/features/runs/components/run-manifest";
 import { RunProgress } from "@/features/runs/components/run-progress";
@@ -102,6 +103,14 @@ export default function RunPage() {
                   hasPerils={r.perilProfileIds.length > 0}
                   onExported={() => queryClient.invalidateQueries({ queryKey: exportsRootKey })}
                 />
+              </CardBody>
+            </Card>
+          )}
+          {succeeded && (
+            <Card>
+              <CardHeader title="Reliance and limitations" subtitle="Statements recorded with these results." />
+              <CardBody>
+                <RunStatementsPanel runId={r.id} canRecord={can("runs:create")} />
               </CardBody>
             </Card>
           )}
