@@ -33,7 +33,7 @@ port.on("message", (message: ToWorker) => {
       summariser = new YearSummariser(plan);
       // Each worker warms its kernels on its own few members (warm-kernels.ts), inside the run's time.
       const lo = Math.min(plan.members, message.worker * WARM_MEMBERS);
-      if (process.env.PL_NOWARM !== "1") warmKernels(plan, lo, Math.min(plan.members, lo + WARM_MEMBERS));
+      warmKernels(plan, lo, Math.min(plan.members, lo + WARM_MEMBERS));
       send({ kind: "ready" });
     } else if (message.kind === "baseline") {
       const start = performance.now();
