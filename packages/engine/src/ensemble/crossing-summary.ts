@@ -45,3 +45,25 @@ export function crossingSummary(
   result.never = weights ? never / totalWeight : never / n;
   return result;
 }
+
+/**
+ * Histogram of first-crossing years: for each pathway year, the (weighted) share of members
+ * whose anomaly first exceeds the threshold in that year (the crossing rule of
+ * advance-year.ts). The shares plus `never` of crossingSummary add up to 1. O(members).
+ * Example: 4 members crossing at year indices 0, 0, 2 and never, 3 years -> [0.5, 0, 0.25].
+ */
+export function crossingShareByYear(
+  crossingIndex: Float64Array,
+  years: number,
+  weights: Float64Array | null,
+  totalWeight: number,
+): number[] {
+  const share = new Float64Array(years);
+  const n = crossingIndex.length;
+  for (let m = 0; m < n; m++) {
+    const t = crossingIndex[m]!;
+    if (t >= 0) share[t] = share[t]! + (weights ? weights[m]! : 1);
+  }
+  const total = weights ? totalWeight : n;
+  return Array.from(share, (w) => w / total);
+}

@@ -1,7 +1,7 @@
 import type { PathwayResult, PercentileSeries, RunSpec } from "../spec/types.js";
 import { PercentileSelector } from "../summary/percentile-selector.js";
 import type { EnsemblePlan } from "./ensemble-plan.js";
-import { crossingSummary } from "./crossing-summary.js";
+import { crossingShareByYear, crossingSummary } from "./crossing-summary.js";
 import { percentilePrecision } from "./percentile-precision.js";
 import { percentileKey, percentileSet } from "./percentile-set.js";
 import { correlationOfRanks, rankColumn } from "./rank-correlation.js";
@@ -47,8 +47,10 @@ export function finishPathway(
   const { weights, totalWeight, effectiveMembers } = weighting;
   const selector = new PercentileSelector();
   const crossing: PathwayResult["crossing"] = {};
+  const crossingShare: PathwayResult["crossingShare"] = {};
   spec.thresholds.forEach((th) => {
     const ascendingIndex = plan.thresholdsAscending.indexOf(th);
+    crossingShare[String(th)] = crossingShareByYear(plan.state.crossing[ascendingIndex]!, years, weights, totalWeight);
     crossing[String(th)] = crossingSummary(
       selector,
       plan.state.crossing[ascendingIndex]!,
@@ -126,6 +128,7 @@ export function finishPathway(
     imbalance,
     exceedance,
     crossing,
+    crossingShare,
     horizons,
     sensitivity,
     effectiveMembers,

@@ -81,6 +81,20 @@ describe("runEnsemble", () => {
     }
     const firstAbove = anomalies.findIndex((row) => row.some((v) => v > 1));
     expect(result.crossing["1"]!.p5).toBeGreaterThanOrEqual(1750 + firstAbove);
+
+    // First-crossing histogram: each member's first year strictly above 1 K, counted here
+    // member by member from the re-simulated anomalies (the crossing rule of advance-year.ts).
+    const firstYearCounts = new Array<number>(years).fill(0);
+    let never = 0;
+    for (let m = 0; m < spec.members; m++) {
+      const t = anomalies.findIndex((row) => row[m]! > 1);
+      if (t < 0) never++;
+      else firstYearCounts[t]!++;
+    }
+    const share = result.crossingShare["1"]!;
+    expect(share).toHaveLength(years);
+    share.forEach((s, t) => expect(s).toBeCloseTo(firstYearCounts[t]! / spec.members, 12));
+    expect(result.crossing["1"]!.never).toBeCloseTo(never / spec.members, 12);
   });
 
   it("a constraint narrows the ECS spread and moves the weighted window warming toward the evidence", () => {

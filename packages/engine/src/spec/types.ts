@@ -149,6 +149,8 @@ export interface PathwayResult {
   imbalance: PercentileSeries;
   exceedance: Record<string, number[]>;
   crossing: Record<string, Record<string, number | null>>;
+  /** Per threshold, per year: share of members whose first crossing falls in that year. */
+  crossingShare: Record<string, number[]>;
   horizons: HorizonResult[];
   sensitivity: SensitivityEntry[];
   effectiveMembers: number;
