@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { formatFixed, formatNumber, formatPercent } from "./format";
+import { formatFixed, formatNumber, formatPercent, percentileHeading } from "./format";
 
 // Expected strings follow Number.prototype.toFixed (ECMAScript spec: -0.0004.toFixed(3) is "-0.000"),
 // with the minus dropped only where the rounded value is zero.
@@ -19,5 +19,15 @@ describe("formatFixed", () => {
   it("is what the shared number and percent formats use", () => {
     expect(formatNumber(-0.001, 2)).toBe("0.00");
     expect(formatPercent(-0.00001, 1)).toBe("0.0 %");
+  });
+});
+
+// English ordinal suffixes (common practice): 1st 2nd 3rd, but 11th 12th 13th.
+describe("percentileHeading", () => {
+  it("names the standard percentiles with ordinals", () => {
+    expect(["p5", "p17", "p50", "p83", "p95"].map(percentileHeading)).toEqual(["5th pct", "17th pct", "50th pct", "83rd pct", "95th pct"]);
+  });
+  it("handles 1st, 2nd, 11th–13th and 99.5th", () => {
+    expect(["p1", "p2", "p11", "p12", "p13", "p21", "p99.5"].map(percentileHeading)).toEqual(["1st pct", "2nd pct", "11th pct", "12th pct", "13th pct", "21st pct", "99.5th pct"]);
   });
 });

@@ -38,3 +38,14 @@ export function formatDate(iso: string | null | undefined): string {
 
 /** "p17" -> 17 */
 export const percentileOfKey = (key: string) => Number(key.slice(1));
+
+/**
+ * A percentile key as a column heading an actuary cannot misread as a share of loss:
+ * "p5" -> "5th pct", "p83" -> "83rd pct" (English ordinals: 1st, 2nd, 3rd, 11th–13th, nth).
+ */
+export function percentileHeading(key: string): string {
+  const n = percentileOfKey(key);
+  const lastTwo = n % 100;
+  const suffix = lastTwo >= 11 && lastTwo <= 13 ? "th" : ({ 1: "st", 2: "nd", 3: "rd" } as Record<number, string>)[n % 10] ?? "th";
+  return `${n}${suffix} pct`;
+}

@@ -13,7 +13,7 @@ describe("PerilResults", () => {
     render(<PerilResults result={perilResultFixture()} baselineRows={baselineRows} />);
     const table = screen.getByRole("table", { name: "Multipliers — Flood, Northmere" });
     const rows = within(table).getAllByRole("row");
-    expect(within(rows[0]!).getAllByRole("columnheader").map((c) => c.textContent)).toEqual(["Horizon", "5 %", "17 %", "50 %", "83 %", "95 %", "Mean"]);
+    expect(within(rows[0]!).getAllByRole("columnheader").map((c) => c.textContent)).toEqual(["Horizon", "5th pct", "17th pct", "50th pct", "83rd pct", "95th pct", "Mean"]);
     expect(within(rows[2]!).getAllByRole("cell").map((c) => c.textContent)).toEqual(["2100", "1.050", "1.100", "1.150", "1.220", "1.300", "1.160"]);
   });
 

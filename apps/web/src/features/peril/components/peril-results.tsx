@@ -5,7 +5,8 @@ import { PanelErrorBoundary } from "@/components/ui/panel-error-boundary";
 import { Segmented } from "@/components/ui/segmented";
 import { EmptyState } from "@/components/ui/states";
 import { Table, Td, Th } from "@/components/ui/table";
-import { formatInteger, formatNumber } from "@/lib/format";
+import { PercentileNote } from "@/components/ui/percentile-note";
+import { formatInteger, formatNumber, percentileHeading } from "@/lib/format";
 import { AalBandChart } from "./aal-band-chart";
 
 /** The peril cautions in plain words (issue "Peril lens", DESIGN.md "Cautions the product shows"). */
@@ -22,7 +23,7 @@ export function summaryKeys(s: PerilSummary | undefined): string[] {
   const keys = Object.keys(s).filter((k) => k.startsWith("p")).sort((a, b) => Number(a.slice(1)) - Number(b.slice(1)));
   return "mean" in s ? [...keys, "mean"] : keys;
 }
-const keyLabel = (k: string) => (k === "mean" ? "Mean" : `${k.slice(1)} %`);
+const keyLabel = (k: string) => (k === "mean" ? "Mean" : percentileHeading(k));
 
 function SummaryTable({
   caption,
@@ -87,6 +88,9 @@ function ProfileSection({ profile, baselineRows }: { profile: PerilProfileResult
           rows={profile.horizons.map((h) => ({ id: String(h.year), lead: [h.year], summary: h.multiplier }))}
           format={(v) => formatNumber(v, 3)}
         />
+        <PercentileNote>
+          A multiplier of 1.05 means the {frequency ? "event frequency" : "loss"} is 5 % above the baseline figure in the firm's risk view.
+        </PercentileNote>
       </section>
       {frequency && (
         <section>
@@ -125,6 +129,9 @@ function ProfileSection({ profile, baselineRows }: { profile: PerilProfileResult
                 })}
                 format={formatInteger}
               />
+              <p className="-mt-1 text-xs text-muted">
+                Amounts in {loss.currency}: the portfolio's baseline figures times each member's multiplier, summarised by the same percentiles; exposure growth not included.
+              </p>
               <PanelErrorBoundary resetKey={`${profile.profileId}-${li}`}>
                 <AalBandChart
                   title={`Projected AAL by horizon — ${loss.region}, ${loss.peril}`}
