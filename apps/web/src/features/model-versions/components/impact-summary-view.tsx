@@ -14,7 +14,7 @@ function Shift({ value, noise, unit, digits = 2 }: { value: number; noise: numbe
   const beyond = noise === null || Math.abs(value) > noise;
   return (
     <span
-      className={cx("num rounded px-1", beyond && value > 0 && "bg-danger-soft font-semibold text-danger", beyond && value < 0 && "bg-ok-soft font-semibold text-ok", !beyond && "text-muted")}
+      className={cx("num rounded px-1 whitespace-nowrap", beyond && value > 0 && "bg-danger-soft font-semibold text-danger", beyond && value < 0 && "bg-ok-soft font-semibold text-ok", !beyond && "text-muted")}
       title={noise === null ? undefined : beyond ? `Larger than the preview noise (±${noise.toFixed(digits)} ${unit})` : `Within the preview noise (±${noise.toFixed(digits)} ${unit})`}
     >
       {signed(value, digits)} {unit}
@@ -44,8 +44,8 @@ function HorizonTable({ impact }: { impact: ModelVersionImpact }) {
           return (
             <tr key={d.year}>
               <Td className="num">{d.year}</Td>
-              <Td numeric>{band(againstByYear.get(d.year)?.temperature)}</Td>
-              <Td numeric>{band(mine?.temperature)}</Td>
+              <Td numeric className="whitespace-nowrap">{band(againstByYear.get(d.year)?.temperature)}</Td>
+              <Td numeric className="whitespace-nowrap">{band(mine?.temperature)}</Td>
               <Td numeric>
                 <Shift value={d.medianShift} noise={noise} unit="K" />
               </Td>
@@ -118,8 +118,8 @@ function SensitivityTable({ impact }: { impact: ModelVersionImpact }) {
         {rows.map(([name, key, change]) => (
           <tr key={key}>
             <Td>{name}</Td>
-            <Td numeric>{band(impact.against.implied[key])}</Td>
-            <Td numeric>{band(impact.version.implied[key])}</Td>
+            <Td numeric className="whitespace-nowrap">{band(impact.against.implied[key])}</Td>
+            <Td numeric className="whitespace-nowrap">{band(impact.version.implied[key])}</Td>
             <Td numeric>
               <Shift value={change.medianShift} noise={null} unit="K" />
             </Td>
