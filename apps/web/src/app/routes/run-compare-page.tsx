@@ -7,7 +7,7 @@ import { Cautions } from "@/components/ui/cautions";
 import { Field, Select } from "@/components/ui/field";
 import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState, ErrorState, LoadingState } from "@/components/ui/states";
-import { ExploratoryStamp } from "@/components/ui/badges";
+import { ApprovedSeal, ExploratoryStamp } from "@/components/ui/badges";
 
 /** Pick two finished runs (or the same run twice with two pathways) and compare them on shared axes. */
 export default function RunComparePage() {
@@ -58,7 +58,7 @@ export default function RunComparePage() {
                         {runs.data.map((r) => (
                           <option key={r.id} value={r.id}>
                             {r.name} — {r.modelVersion.name} v{r.modelVersion.versionNumber}
-                            {r.exploratory ? " (exploratory)" : ""}
+                            {r.exploratory ? " (exploratory)" : " (approved)"}
                           </option>
                         ))}
                       </Select>
@@ -77,7 +77,8 @@ export default function RunComparePage() {
                       )}
                     </Field>
                   )}
-                  {run?.exploratory && <ExploratoryStamp size="sm" />}
+                  {/* Both sides say how they were made, so "two approved versions" reads at a glance. */}
+                  {run && (run.exploratory ? <ExploratoryStamp size="sm" /> : <ApprovedSeal size="sm" className="self-start" />)}
                 </div>
               ))}
             </CardBody>
