@@ -13,6 +13,8 @@ export interface W1Line {
   summarize_s: number;
   member_years_per_s: number;
   check: number;
+  /** With debug only: CPU seconds of the whole process (all threads) from spec to result. */
+  cpu_s?: number;
 }
 
 /**
@@ -29,13 +31,15 @@ export type BenchScope = "w1" | "full";
  * streaming summaries, result assembly and hashing), from spec to finished result.
  * check = Σ over years of the five temperature percentiles plus the share above 1.5 K.
  */
-export async function runW1(members: number, threads?: number, scope: BenchScope = "w1"): Promise<W1Line> {
+export async function runW1(members: number, threads?: number, scope: BenchScope = "w1", debug = false): Promise<W1Line> {
   const spec = w1Spec(members);
   const times: StageTimes = { sample: 0, simulate: 0, summarise: 0, finish: 0 };
   const summaries = scope === "full" ? {} : { forcing: false, imbalance: false };
+  const cpuStart = process.cpuUsage();
   const start = performance.now();
   const result = await runEnsembleParallel(spec, { ...(threads ? { threads } : {}), stageTimes: times, summaries });
   const total = (performance.now() - start) / 1000;
+  const cpu = process.cpuUsage(cpuStart);
   const pathway = result.pathways[0]!;
   let check = 0;
   for (const key of ["p5", "p17", "p50", "p83", "p95"]) for (const v of pathway.temperature[key]!) check += v;
@@ -51,5 +55,6 @@ export async function runW1(members: number, threads?: number, scope: BenchScope
     summarize_s: round(times.summarise + times.finish),
     member_years_per_s: Number(((members * pathway.years.length) / total).toPrecision(4)),
     check: round(check),
+    ...(debug ? { cpu_s: round((cpu.user + cpu.system) / 1e6) } : {}),
   };
 }

@@ -17,7 +17,7 @@ import { readSpecFile, userPath } from "./read-spec-file.js";
 async function main(argv: string[]): Promise<void> {
   const args = parseArgs(argv);
   if (args.command === "bench") {
-    process.stdout.write(`${JSON.stringify(await runW1(args.members!, args.threads, args.full ? "full" : "w1"))}\n`);
+    process.stdout.write(`${JSON.stringify(await runW1(args.members!, args.threads, args.full ? "full" : "w1", args.debug === true))}\n`);
     return;
   }
   const spec = readSpecFile(args.file!);

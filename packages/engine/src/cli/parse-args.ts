@@ -3,8 +3,10 @@ import { CliError } from "./cli-error.js";
 export const USAGE = `usage:
   engine run SPEC.json [--out FILE] [--threads T]   result JSON on stdout (or FILE)
   engine validate SPEC.json                        checks a spec without running it
-  engine bench --members N [--threads T] [--full]  one W1 benchmark line (bench/W1.md);
-                                                   --full also summarises forcing and imbalance`;
+  engine bench --members N [--threads T] [--full] [--debug]
+                                                   one W1 benchmark line (bench/W1.md);
+                                                   --full also summarises forcing and imbalance;
+                                                   --debug adds the process CPU seconds (cpu_s)`;
 
 export interface ParsedArgs {
   command: "run" | "validate" | "bench";
@@ -14,6 +16,8 @@ export interface ParsedArgs {
   threads?: number;
   /** bench: also summarise forcing and imbalance per year (the product's full summaries). */
   full?: boolean;
+  /** bench: add diagnostic fields to the line (cpu_s: CPU seconds of all threads during the run). */
+  debug?: boolean;
 }
 
 /** Parses the CLI's small grammar; anything unexpected is a CliError naming the argument. */
@@ -38,6 +42,7 @@ export function parseArgs(argv: string[]): ParsedArgs {
     else if (arg === "--threads" && command !== "validate") parsed.threads = count("--threads");
     else if (arg === "--members" && command === "bench") parsed.members = count("--members");
     else if (arg === "--full" && command === "bench") parsed.full = true;
+    else if (arg === "--debug" && command === "bench") parsed.debug = true;
     else if (!arg.startsWith("--") && command !== "bench" && parsed.file === undefined) parsed.file = arg;
     else throw new CliError(`unexpected argument "${arg}"\n${USAGE}`);
   }

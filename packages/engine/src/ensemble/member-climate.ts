@@ -45,11 +45,22 @@ function requirePositiveSamples(column: Float64Array, field: string): void {
   }
 }
 
-/** Builds every member's propagator. Cost O(members), a few exponentials each. */
+/**
+ * Builds every member's propagator. Cost O(members), a few exponentials each. Refuses a
+ * non-positive input (first by column, then by member) and then the first member whose
+ * propagator is not finite.
+ */
 export function buildMemberClimate(columns: ClimateColumns, allocate: Allocate): MemberClimate {
+  const out = allocateMemberClimate(columns, allocate);
+  checkClimateInputs(columns);
+  fillMemberClimate(columns, out, 0, out.ecs.length);
+  checkMemberPropagators(columns, out);
+  return out;
+}
+
+function allocateMemberClimate(columns: ClimateColumns, allocate: Allocate): MemberClimate {
   const n = columns.ecs.length;
-  for (const [name, column] of Object.entries(columns)) requirePositiveSamples(column, `model.climate.${name}`);
-  const out: MemberClimate = {
+  return {
     a11: allocate(n),
     a12: allocate(n),
     a21: allocate(n),
@@ -63,20 +74,58 @@ export function buildMemberClimate(columns: ClimateColumns, allocate: Allocate):
     ecs: columns.ecs,
     f2x: columns.f2x,
   };
+}
+
+function checkClimateInputs(columns: ClimateColumns): void {
+  for (const [name, column] of Object.entries(columns)) requirePositiveSamples(column, `model.climate.${name}`);
+}
+
+function checkMemberPropagators(columns: ClimateColumns, out: MemberClimate): void {
+  const n = out.a11.length;
+  const { a11, a12, a21, a22, b1, b2, r1, r2 } = out;
   for (let m = 0; m < n; m++) {
     const lambda = columns.f2x[m]! / columns.ecs[m]!;
-    const p = twoLayerPropagator({
-      lambda,
-      upperHeatCapacity: columns.upperHeatCapacity[m]!,
-      deepHeatCapacity: columns.deepHeatCapacity[m]!,
-      heatExchange: columns.heatExchange[m]!,
-      deepEfficacy: columns.deepEfficacy[m]!,
-    });
-    if (![p.a11, p.a12, p.a21, p.a22, p.b1, p.b2, p.r1, p.r2].every(Number.isFinite))
+    // fillMemberClimate skipped this member: twoLayerPropagator gives the error it gives buildMemberClimate.
+    if (!isPositive(lambda)) twoLayerPropagator(propagatorInputs(columns, m, lambda));
+    const finite =
+      Number.isFinite(a11[m]!) && Number.isFinite(a12[m]!) && Number.isFinite(a21[m]!) && Number.isFinite(a22[m]!) &&
+      Number.isFinite(b1[m]!) && Number.isFinite(b2[m]!) && Number.isFinite(r1[m]!) && Number.isFinite(r2[m]!);
+    if (!finite)
       throw new SpecError(
         "model.climate",
         `gives member ${m + 1} a climate whose one-year response is not finite (λ = ${lambda}): narrow the input distributions`,
       );
+  }
+}
+
+function propagatorInputs(columns: ClimateColumns, m: number, lambda: number) {
+  return {
+    lambda,
+    upperHeatCapacity: columns.upperHeatCapacity[m]!,
+    deepHeatCapacity: columns.deepHeatCapacity[m]!,
+    heatExchange: columns.heatExchange[m]!,
+    deepEfficacy: columns.deepEfficacy[m]!,
+  };
+}
+
+/**
+ * Members [lo, hi) of the propagators. Never throws: a member with a non-positive or
+ * non-finite input or λ is left as it is (checkMemberPropagators refuses it). The check
+ * runs after the loop, as plain comparisons, so the loop stays small.
+ */
+function fillMemberClimate(columns: ClimateColumns, out: MemberClimate, lo: number, hi: number): void {
+  for (let m = lo; m < hi; m++) {
+    const ecs = columns.ecs[m]!;
+    const f2x = columns.f2x[m]!;
+    const upperHeatCapacity = columns.upperHeatCapacity[m]!;
+    const deepHeatCapacity = columns.deepHeatCapacity[m]!;
+    const heatExchange = columns.heatExchange[m]!;
+    const deepEfficacy = columns.deepEfficacy[m]!;
+    if (!(isPositive(ecs) && isPositive(f2x) && isPositive(upperHeatCapacity) && isPositive(deepHeatCapacity) && isPositive(heatExchange) && isPositive(deepEfficacy)))
+      continue;
+    const lambda = f2x / ecs;
+    if (!isPositive(lambda)) continue;
+    const p = twoLayerPropagator({ lambda, upperHeatCapacity, deepHeatCapacity, heatExchange, deepEfficacy });
     out.a11[m] = p.a11;
     out.a12[m] = p.a12;
     out.a21[m] = p.a21;
@@ -86,7 +135,8 @@ export function buildMemberClimate(columns: ClimateColumns, allocate: Allocate):
     out.r1[m] = p.r1;
     out.r2[m] = p.r2;
     out.lambda[m] = lambda;
-    out.extraUptake[m] = (columns.deepEfficacy[m]! - 1) * columns.heatExchange[m]!;
+    out.extraUptake[m] = (deepEfficacy - 1) * heatExchange;
   }
-  return out;
 }
+
+const isPositive = (v: number) => v > 0 && Number.isFinite(v);

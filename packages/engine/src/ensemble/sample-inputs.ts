@@ -1,5 +1,5 @@
 import { createRandom, deriveSeed } from "../random/create-random.js";
-import { latinHypercube, monteCarloUniforms, imanConover } from "../sampling/index.js";
+import { imanConover, latinHypercubeColumnInto, monteCarloColumnInto } from "../sampling/index.js";
 import { SpecError } from "../spec/spec-error.js";
 import type { RunSpec } from "../spec/types.js";
 import { columnQuantiles } from "./column-quantiles.js";
@@ -17,35 +17,53 @@ export const allocateLocal: Allocate = (length) => new Float64Array(length);
  * correlations are then re-paired by Iman–Conover (1982) towards the target rank
  * correlations, which keeps each marginal exactly; finally each uniform goes through the
  * input's inverse CDF. Fixed inputs are a constant column. Cost O(members × inputs).
+ * Each column is drawn straight into its (possibly shared) array, no copy.
  */
 export function sampleInputs(spec: RunSpec, inputs: ModelInput[], allocate: Allocate = allocateLocal): Float64Array[] {
-  const n = spec.members;
-  const uniforms = inputs.map((input) => {
-    if (input.distribution.type === "fixed") return null;
-    const random = createRandom(deriveSeed(spec.seed, `input/${input.name}`));
-    const draw = spec.sampling === "latin-hypercube" ? latinHypercube : monteCarloUniforms;
-    return draw(n, 1, random)[0]!;
-  });
-  correlate(spec, inputs, uniforms);
-  return inputs.map((input, i) => {
-    const column = allocate(n);
-    const d = input.distribution;
-    if (d.type === "fixed") {
-      column.fill(d.value);
-      return column;
-    }
-    columnQuantiles(d, uniforms[i]!, column);
-    return column;
-  });
+  const columns = inputs.map(() => allocate(spec.members));
+  const correlated = correlatedInputs(spec, inputs);
+  inputs.forEach((_, i) => sampleColumn(spec, inputs[i]!, columns[i]!, correlated.includes(i)));
+  correlateColumns(spec, inputs, columns, correlated);
+  return columns;
 }
 
-/** Re-pairs the uniforms of correlated inputs in place by Iman–Conover. */
-function correlate(spec: RunSpec, inputs: ModelInput[], uniforms: Array<Float64Array | null>): void {
+/**
+ * Indices of the inputs Iman–Conover re-pairs: those named in correlations, in input order
+ * (none when there are no correlations or fewer than 3 members).
+ */
+function correlatedInputs(spec: RunSpec, inputs: ModelInput[]): number[] {
   const correlations = spec.model.correlations;
-  if (correlations.length === 0 || spec.members < 3) return;
-  const involved = [...new Set(correlations.flatMap((c) => c.between))].sort(
-    (a, b) => inputs.findIndex((x) => x.name === a) - inputs.findIndex((x) => x.name === b),
-  );
+  if (correlations.length === 0 || spec.members < 3) return [];
+  const named = new Set(correlations.flatMap((c) => c.between));
+  return inputs.flatMap((input, i) => (named.has(input.name) ? [i] : []));
+}
+
+/**
+ * Fills one input's column from the input's own stream: its uniforms, mapped through the
+ * inverse CDF in place unless `uniformsOnly` (a correlated input: correlateColumns maps it
+ * after re-pairing). Depends on nothing but the spec and the input, so columns can be
+ * sampled in any order, on any thread.
+ */
+function sampleColumn(spec: RunSpec, input: ModelInput, column: Float64Array, uniformsOnly: boolean): void {
+  const d = input.distribution;
+  if (d.type === "fixed") {
+    column.fill(d.value);
+    return;
+  }
+  const random = createRandom(deriveSeed(spec.seed, `input/${input.name}`));
+  if (spec.sampling === "latin-hypercube") latinHypercubeColumnInto(column, random);
+  else monteCarloColumnInto(column, random);
+  if (!uniformsOnly) columnQuantiles(d, column, column);
+}
+
+/**
+ * Re-pairs the uniforms held in the correlated columns by Iman–Conover, then maps each
+ * through its input's inverse CDF, in place. Needs every correlated column drawn.
+ */
+function correlateColumns(spec: RunSpec, inputs: ModelInput[], columns: Float64Array[], correlated: number[]): void {
+  if (correlated.length === 0) return;
+  const correlations = spec.model.correlations;
+  const involved = correlated.map((i) => inputs[i]!.name);
   const target = involved.map((a) =>
     involved.map((b) => {
       if (a === b) return 1;
@@ -53,10 +71,13 @@ function correlate(spec: RunSpec, inputs: ModelInput[], uniforms: Array<Float64A
       return c ? c.rank : 0;
     }),
   );
-  const columns = involved.map((name) => uniforms[inputs.findIndex((x) => x.name === name)]!);
   let reordered: Float64Array[];
   try {
-    reordered = imanConover(columns, target, createRandom(deriveSeed(spec.seed, "rank-correlation")));
+    reordered = imanConover(
+      correlated.map((i) => columns[i]!),
+      target,
+      createRandom(deriveSeed(spec.seed, "rank-correlation")),
+    );
   } catch (error) {
     if (error instanceof RangeError && /positive definite/.test(error.message))
       throw new SpecError(
@@ -65,7 +86,5 @@ function correlate(spec: RunSpec, inputs: ModelInput[], uniforms: Array<Float64A
       );
     throw error;
   }
-  involved.forEach((name, j) => {
-    uniforms[inputs.findIndex((x) => x.name === name)] = reordered[j]!;
-  });
+  correlated.forEach((i, j) => columnQuantiles(inputs[i]!.distribution, reordered[j]!, columns[i]!));
 }

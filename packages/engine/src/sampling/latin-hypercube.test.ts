@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { createRandom } from "../random/create-random.js";
-import { latinHypercube } from "./latin-hypercube.js";
-import { monteCarloUniforms } from "./monte-carlo.js";
+import { latinHypercube, latinHypercubeColumnInto } from "./latin-hypercube.js";
+import { monteCarloColumnInto, monteCarloUniforms } from "./monte-carlo.js";
 
 function isPermutationOfStrata(column: Float64Array): boolean {
   const n = column.length;
@@ -86,5 +86,17 @@ describe("monteCarloUniforms", () => {
     // probability below 1e-6, and this seed's variance happens to sit 4.1 standard errors out.
     expect(Math.abs(mean - 0.5)).toBeLessThan(5 * Math.sqrt(1 / 12 / n));
     expect(Math.abs(variance - 1 / 12)).toBeLessThan(5 * Math.sqrt(1 / 180 / n));
+  });
+
+  it("draws a column into a given array with the same stream use as the allocating forms", () => {
+    // The engine samples each input straight into its (shared) column; the draws must be
+    // those of latinHypercube / monteCarloUniforms with one dimension, value for value.
+    const n = 1_001;
+    const lhs = latinHypercubeColumnInto(new Float64Array(n), createRandom("into"));
+    expect(Array.from(lhs)).toEqual(Array.from(latinHypercube(n, 1, createRandom("into"))[0]!));
+    expect(isPermutationOfStrata(lhs)).toBe(true);
+    const mc = monteCarloColumnInto(new Float64Array(n), createRandom("into"));
+    expect(Array.from(mc)).toEqual(Array.from(monteCarloUniforms(n, 1, createRandom("into"))[0]!));
+    expect(mc).not.toEqual(lhs);
   });
 });

@@ -22,13 +22,18 @@ export function latinHypercube(members: number, dimensions: number, random: Rand
   requireCount(dimensions, "dimensions", 0);
   const columns: Float64Array[] = [];
   for (let j = 0; j < dimensions; j++) {
-    const column = new Float64Array(members);
-    for (let i = 0; i < members; i++) column[i] = i;
-    shuffleInPlace(column, random);
-    for (let i = 0; i < members; i++) column[i] = jitterInStratum(column[i]!, members, random);
-    columns.push(column);
+    columns.push(latinHypercubeColumnInto(new Float64Array(members), random));
   }
   return columns;
+}
+
+/** One column of latinHypercube written into `column` (its length is the member count): no allocation. */
+export function latinHypercubeColumnInto(column: Float64Array, random: RandomSource): Float64Array {
+  const members = column.length;
+  for (let i = 0; i < members; i++) column[i] = i;
+  shuffleInPlace(column, random);
+  for (let i = 0; i < members; i++) column[i] = jitterInStratum(column[i]!, members, random);
+  return column;
 }
 
 /** (stratum + U)/n, kept strictly inside its stratum and inside (0, 1). */

@@ -16,9 +16,13 @@ export function monteCarloUniforms(members: number, dimensions: number, random: 
   requireCount(dimensions, "dimensions", 0);
   const columns: Float64Array[] = [];
   for (let j = 0; j < dimensions; j++) {
-    const column = new Float64Array(members);
-    for (let i = 0; i < members; i++) column[i] = random();
-    columns.push(column);
+    columns.push(monteCarloColumnInto(new Float64Array(members), random));
   }
   return columns;
+}
+
+/** One column of monteCarloUniforms written into `column` (its length is the member count): no allocation. */
+export function monteCarloColumnInto(column: Float64Array, random: RandomSource): Float64Array {
+  for (let i = 0; i < column.length; i++) column[i] = random();
+  return column;
 }
