@@ -100,7 +100,12 @@ function MyRuns({ userId, canCreate, mine }: { userId: string; canCreate: boolea
         </CardBody>
       ) : runs.data.length === 0 ? (
         <CardBody>
-          <EmptyState title="No runs yet" action={canCreate ? <ButtonLink to={paths.runNew.build()}>Start a run</ButtonLink> : undefined} />
+          {/* Someone who cannot start runs gets one quiet line, not a call-to-action box. */}
+          {canCreate ? (
+            <EmptyState title="No runs yet" action={<ButtonLink to={paths.runNew.build()}>Start a run</ButtonLink>} />
+          ) : (
+            <p className="text-sm text-muted">No runs yet.</p>
+          )}
         </CardBody>
       ) : (
         <RunsTable runs={runs.data.slice(0, 8)} currentUserId={userId} canCreate={canCreate} compact />
