@@ -48,14 +48,28 @@ function requirePositiveSamples(column: Float64Array, field: string): void {
 /**
  * Builds every member's propagator. Cost O(members), a few exponentials each. Refuses a
  * non-positive input (first by column, then by member) and then the first member whose
- * propagator is not finite.
+ * propagator is not finite (checked once all are built).
  */
-export function buildMemberClimate(columns: ClimateColumns, allocate: Allocate): MemberClimate {
+export function buildMemberClimate(columns: ClimateColumns, allocate: Allocate, early?: EarlyMembers): MemberClimate {
   const out = allocateMemberClimate(columns, allocate);
+  const n = out.ecs.length;
+  const first = early ? Math.min(n, early.members) : 0;
+  fillMemberClimate(columns, out, 0, first);
+  early?.filled(out);
+  fillMemberClimate(columns, out, first, n);
   checkClimateInputs(columns);
-  fillMemberClimate(columns, out, 0, out.ecs.length);
   checkMemberPropagators(columns, out);
   return out;
+}
+
+/**
+ * Lets a caller use the first `members` members' propagators while the rest are built
+ * (the parallel runner's workers warm their kernels on them): `filled` is called once
+ * those are in place, before any member has been checked.
+ */
+export interface EarlyMembers {
+  members: number;
+  filled(climate: MemberClimate): void;
 }
 
 function allocateMemberClimate(columns: ClimateColumns, allocate: Allocate): MemberClimate {

@@ -4,10 +4,10 @@ import type { RunSpec, RunSpecInput } from "../spec/types.js";
 import { validateSpec } from "../spec/validate-spec.js";
 import { MEMBER_BLOCK } from "./advance-year.js";
 import { ALL_SUMMARIES, allocateState, type EnsemblePlan, type SummaryChoice } from "./ensemble-plan.js";
-import { buildMemberClimate } from "./member-climate.js";
-import { buildPathwayForcing } from "./pathway-forcing.js";
+import { buildMemberClimate, type MemberClimate } from "./member-climate.js";
+import { buildPathwayForcing, type PathwayForcing } from "./pathway-forcing.js";
 import { allocateLocal, sampleInputs, type Allocate } from "./sample-inputs.js";
-import { listModelInputs } from "./uncertain-inputs.js";
+import { listModelInputs, type ModelInput } from "./uncertain-inputs.js";
 import { spanYears } from "./year-spans.js";
 import { yearlyLength } from "./yearly-layout.js";
 
@@ -24,6 +24,7 @@ export function preparePlan(
   spansInRing = 1,
   allocate: Allocate = allocateLocal,
   summaries: Partial<SummaryChoice> = {},
+  early?: EarlyPlan,
 ): { spec: RunSpec; plan: EnsemblePlan } {
   const spec = applyDefaults(input);
   validateSpec(spec);
@@ -31,6 +32,16 @@ export function preparePlan(
   const names = inputs.map((x) => x.name);
   const columns = sampleInputs(spec, inputs, allocate);
   const column = (name: string) => columns[names.indexOf(name)]!;
+  // A pathway's forcing error is given after the samples' own refusals (their order before
+  // `early` existed); the forcing is built first so the plan can be handed out early.
+  let pathways: PathwayForcing[] | null = null;
+  let pathwayError: unknown = null;
+  try {
+    pathways = spec.pathways.map((_, i) => buildPathwayForcing(spec, i, names));
+  } catch (error) {
+    pathwayError = error;
+  }
+  let plan: EnsemblePlan | null = null;
   const climate = buildMemberClimate(
     {
       ecs: column("ecs"),
@@ -41,6 +52,15 @@ export function preparePlan(
       deepEfficacy: column("deepEfficacy"),
     },
     allocate,
+    early && pathways
+      ? {
+          members: early.members,
+          filled: (climate) => {
+            plan = assemblePlan(spec, inputs, columns, climate, pathways!, spansInRing, allocate, summaries);
+            early.ready(plan);
+          },
+        }
+      : undefined,
   );
   inputs.forEach((x, i) => {
     if (x.kind !== "agent") return;
@@ -48,7 +68,30 @@ export function preparePlan(
     for (let m = 0; m < values.length; m++)
       if (!Number.isFinite(values[m]!)) throw new SpecError(x.field, `sampled a non-finite value at member ${m + 1}`);
   });
-  const pathways = spec.pathways.map((_, i) => buildPathwayForcing(spec, i, names));
+  if (pathwayError !== null) throw pathwayError;
+  return { spec, plan: plan ?? assemblePlan(spec, inputs, columns, climate, pathways!, spansInRing, allocate, summaries) };
+}
+
+/**
+ * Hands out the plan before set-up ends: `ready` gets it once every input is sampled and
+ * the first `members` members' propagators are built (the rest are still being built and
+ * nothing is checked yet: a refusal may still follow, and then preparePlan throws).
+ */
+export interface EarlyPlan {
+  members: number;
+  ready(plan: EnsemblePlan): void;
+}
+
+function assemblePlan(
+  spec: RunSpec,
+  inputs: ModelInput[],
+  columns: Float64Array[],
+  climate: MemberClimate,
+  pathways: PathwayForcing[],
+  spansInRing: number,
+  allocate: Allocate,
+  summaries: Partial<SummaryChoice>,
+): EnsemblePlan {
   const maxYears = Math.max(...pathways.map((p) => p.years));
   const probs = spec.percentiles.map((p) => p / 100);
   const span = spanYears(spec.members, spansInRing);
@@ -62,7 +105,7 @@ export function preparePlan(
     yearlyLength(probs.length, spec.thresholds.length, maxYears),
     allocate,
   );
-  const plan: EnsemblePlan = {
+  return {
     members: spec.members,
     inputs,
     columns,
@@ -82,5 +125,4 @@ export function preparePlan(
     spanYears: span,
     state,
   };
-  return { spec, plan };
 }

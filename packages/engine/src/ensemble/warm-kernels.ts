@@ -5,6 +5,9 @@ import type { EnsemblePlan } from "./ensemble-plan.js";
 import { forcingKernel } from "./member-forcing.js";
 import { resetForReporting, runBaselinePass } from "./pathway-passes.js";
 
+/** Members each worker thread warms its kernels on (worker w: members [w·256, (w + 1)·256)). */
+export const WARM_MEMBERS = 256;
+
 /**
  * Runs the hot loops of a run on a few members before the run proper, so V8 has optimised
  * them by the time the whole ensemble goes through: in a fresh thread the first few hundred

@@ -3,7 +3,7 @@ import { MEMBER_BLOCK, advanceReportedBlock } from "../ensemble/advance-year.js"
 import type { EnsemblePlan } from "../ensemble/ensemble-plan.js";
 import { resetForReporting, runBaselinePass } from "../ensemble/pathway-passes.js";
 import { YearSummariser } from "../ensemble/summarise-year.js";
-import { warmKernels } from "../ensemble/warm-kernels.js";
+import { WARM_MEMBERS, warmKernels } from "../ensemble/warm-kernels.js";
 import { CANCEL_FLAG, addAndWake, waitUntilAtLeast, type PipelineControl } from "./pipeline-control.js";
 import type { FromWorker, ToWorker } from "./worker-messages.js";
 
@@ -13,8 +13,6 @@ import type { FromWorker, ToWorker } from "./worker-messages.js";
  * span by span, then claims years of the finished span to summarise. Summaries read whole
  * years in member order, so the results are identical to one thread whoever did what.
  */
-/** Members each worker runs through its kernels before the run proper. */
-const WARM_MEMBERS = 256;
 
 let plan: EnsemblePlan;
 let control: PipelineControl;

@@ -9,6 +9,7 @@ import { firstPassYears, horizonsByYear } from "../ensemble/pathway-passes.js";
 import { pathwayPerils, runPerils } from "../ensemble/pathway-perils.js";
 import { weighPathway } from "../ensemble/pathway-weights.js";
 import { preparePlan } from "../ensemble/prepare-plan.js";
+import { WARM_MEMBERS } from "../ensemble/warm-kernels.js";
 import { runEnsemble, type RunOptions, type StageTimes } from "../ensemble/run-ensemble.js";
 import type { PathwayPerilResult } from "../peril/types.js";
 import { RunCancelledError } from "../spec/spec-error.js";
@@ -54,21 +55,43 @@ export async function runEnsembleParallel(input: RunSpecInput | RunSpec, options
       shouldCancel: () => signal?.aborted === true,
     });
   }
-  // Start the workers first: their start-up overlaps with sampling on this thread.
+  // Start the workers first: their start-up overlaps with sampling on this thread. They get
+  // the plan as soon as their warm-up members are built (preparePlan's EarlyPlan) and warm
+  // their kernels while this thread builds the other members' propagators.
   const pool = new WorkerPool(threads);
+  const early: EarlyStart = {};
   try {
     const start = performance.now();
-    const { spec, plan } = preparePlan(input, 2, sharedAllocate, options.summaries);
+    const { spec, plan } = preparePlan(input, 2, sharedAllocate, options.summaries, {
+      members: threads * WARM_MEMBERS,
+      ready: (plan) => {
+        const control = createPipelineControl(Math.max(...plan.pathways.map((p) => p.years)));
+        early.control = control;
+        early.ready = pool.all((worker) => ({ kind: "plan", plan, control, worker }));
+        early.ready.catch(() => {}); // awaited in runWithPool; if set-up refuses the spec first, the pool just stops
+      },
+    });
     if (options.stageTimes) options.stageTimes.sample += (performance.now() - start) / 1000;
-    return await runWithPool(spec, plan, pool, options);
+    return await runWithPool(spec, plan, pool, options, early);
   } finally {
     pool.stop();
   }
 }
 
-async function runWithPool(spec: RunSpec, plan: EnsemblePlan, pool: WorkerPool, options: ParallelRunOptions): Promise<RunResult> {
-  const maxYears = Math.max(...plan.pathways.map((p) => p.years));
-  const control = createPipelineControl(maxYears);
+/** The workers' start when the plan went out before set-up ended (preparePlan's EarlyPlan). */
+interface EarlyStart {
+  control?: PipelineControl;
+  ready?: Promise<FromWorker[]>;
+}
+
+async function runWithPool(
+  spec: RunSpec,
+  plan: EnsemblePlan,
+  pool: WorkerPool,
+  options: ParallelRunOptions,
+  early: EarlyStart,
+): Promise<RunResult> {
+  const control = early.control ?? createPipelineControl(Math.max(...plan.pathways.map((p) => p.years)));
   const onAbort = () => Atomics.store(control.flags, CANCEL_FLAG, 1);
   options.signal?.addEventListener("abort", onAbort);
   const totalYears = plan.pathways.reduce((s, p, i) => s + p.years + firstPassYears(plan, i), 0);
@@ -80,7 +103,7 @@ async function runWithPool(spec: RunSpec, plan: EnsemblePlan, pool: WorkerPool, 
       }, 100)
     : null;
   try {
-    await pool.all((worker) => ({ kind: "plan", plan, control, worker }));
+    await (early.ready ?? pool.all((worker) => ({ kind: "plan", plan, control, worker })));
     const pathways: PathwayResult[] = [];
     const perils: (PathwayPerilResult | null)[] = [];
     let implied: { ecs: PercentileSet; tcr: PercentileSet } | null = null;
