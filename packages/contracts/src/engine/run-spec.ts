@@ -5,10 +5,9 @@ import { perilProfilesSchema, perilSpecIssues, portfolioSchema } from "./peril.j
 
 /**
  * Upper limit on ensemble size. Engine memory grows linearly with members; measured peak
- * RSS (bench W1: one pathway, one threshold, no horizons, 2 worker threads, 2026-12-02):
- * 0.72 GB at 1,000,000 members and 1.035 GB (0.99 GiB) at 2,000,000 — right at 1 GiB, not
- * "well under" it. Each horizon adds about 24 bytes and each threshold about 8 bytes per
- * member, so a run at this limit with horizons goes past 1 GiB.
+ * RSS (2 worker threads, 2026-12-02, packages/engine/README.md "Performance"): 537–602 MB at
+ * 1,000,000 members and 790–850 MB at 2,000,000 (W1 workload / every per-year summary). Each
+ * extra horizon adds about 24 bytes and each threshold about 8 bytes per member.
  */
 export const MAX_MEMBERS = 2_000_000;
 /** Longest pathway accepted, in years. */
