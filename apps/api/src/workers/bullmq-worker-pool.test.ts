@@ -14,6 +14,7 @@ import { startBullmqWorkerPool, type BullmqWorkerPool } from "./bullmq-worker-po
 import { EngineThread } from "./engine-thread-client.js";
 import { startWorkers } from "./index.js";
 import { processNextRunJob, RUN_JOB_TYPE } from "./process-run-job.js";
+import { requestUserOf } from "../test-support/request-user.js";
 
 // QUEUE=bullmq against a real Redis (Debian's redis-server on a random port; the test fails,
 // never skips, when it is missing) and the real SQLite file, engine threads and API.
@@ -48,8 +49,7 @@ beforeAll(async () => {
   redis = await startRedisTestServer();
   t = await createTestContext({ QUEUE: "bullmq", REDIS_URL: redis.url });
   analyst = await signIn(t.app, "analyst");
-  const row = (await t.ctx.models.User.findByPk(t.userIds.analyst))!;
-  const a = { id: row.id, email: row.email, name: row.name, role: row.role, mustChangePassword: false };
+  const a = await requestUserOf(t, "analyst");
   pathwayIds = [(await createPathway(t.ctx, a, testPathwayBody("Ramp 4"))).id, (await createPathway(t.ctx, a, testPathwayBody("Ramp 6", 6))).id];
   versionId = (await createModelVersion(t.ctx, a, testModelVersionBody({ name: "Queue test" }))).id;
 });

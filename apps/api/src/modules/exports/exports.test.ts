@@ -1,8 +1,8 @@
+import request from "supertest";
 import ExcelJS from "exceljs";
 import { parse } from "csv-parse/sync";
 import type { RunResult } from "@plumeline/contracts";
 import { RESULT_CAUTIONS } from "@plumeline/contracts";
-import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createSqlJobQueue } from "../../queue/sql-job-queue.js";
 import { signIn, type SignedInAgent } from "../../test-support/sign-in.js";
@@ -12,6 +12,8 @@ import { processNextRunJob } from "../../workers/process-run-job.js";
 import { createModelVersion } from "../model-versions/model-versions.service.js";
 import { createPathway } from "../pathways/pathways.service.js";
 import { testModelVersionBody, testPathwayBody } from "../runs/runs.fixtures.js";
+import { binaryBody } from "../../test-support/binary-body.js";
+import { requestUserOf } from "../../test-support/request-user.js";
 
 let t: TestContext;
 let analyst: SignedInAgent;
@@ -20,17 +22,11 @@ let admin: SignedInAgent;
 let runId: string;
 let result: RunResult;
 
-const binary = (res: request.Response, cb: (err: Error | null, body: Buffer) => void) => {
-  const chunks: Buffer[] = [];
-  res.on("data", (c: Buffer) => chunks.push(c));
-  res.on("end", () => cb(null, Buffer.concat(chunks)));
-};
 
 beforeAll(async () => {
   t = await createTestContext();
   [analyst, actuary, admin] = await Promise.all([signIn(t.app, "analyst"), signIn(t.app, "actuary"), signIn(t.app, "admin")]);
-  const row = (await t.ctx.models.User.findByPk(t.userIds.analyst))!;
-  const user = { id: row.id, email: row.email, name: row.name, role: row.role, mustChangePassword: false };
+  const user = await requestUserOf(t, "analyst");
   // A name a spreadsheet would run as a formula: it must come out as text.
   const pathway = await createPathway(t.ctx, user, testPathwayBody('=HYPERLINK("http://evil.example","x")'));
   const version = await createModelVersion(t.ctx, user, testModelVersionBody({ name: "@draft assumptions" }));
@@ -50,7 +46,7 @@ describe("GET /api/runs/:id/workbook.xlsx", () => {
   let workbook: ExcelJS.Workbook;
 
   it("returns a workbook with the manifest first; its numbers equal the JSON result", async () => {
-    const res = await actuary.get(`/api/runs/${runId}/workbook.xlsx`).buffer(true).parse(binary);
+    const res = await actuary.get(`/api/runs/${runId}/workbook.xlsx`).buffer(true).parse(binaryBody);
     expect(res.status).toBe(200);
     expect(res.headers["content-disposition"]).toContain("EXPLORATORY");
     workbook = new ExcelJS.Workbook();

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { signIn, type SignedInAgent } from "../../test-support/sign-in.js";
 import { createTestContext, type TestContext } from "../../test-support/test-context.js";
-import { testModelVersionBody, testPathwayBody } from "../runs/runs.fixtures.js";
+import { testModelVersionBody, testPathwayBody, testRainfallProfileBody } from "../runs/runs.fixtures.js";
 
 let t: TestContext;
 let analyst: SignedInAgent;
@@ -9,21 +9,11 @@ let actuary: SignedInAgent;
 let pathwayId: string;
 let profileId: string;
 
-/** A hand-made profile (7 %/K is the Clausius–Clapeyron rate of common practice; the region is invented). */
-const rainfall = {
-  name: "Heavy rainfall, Northmere",
-  peril: "flood-heavy-rainfall",
-  region: "Northmere Coast",
-  metric: "severity",
-  baselineWarming: 1.1,
-  scaling: { kind: "per-kelvin", rate: { type: "fixed", value: 0.07 } },
-} as const;
-
 beforeAll(async () => {
   t = await createTestContext();
   [analyst, actuary] = await Promise.all([signIn(t.app, "analyst"), signIn(t.app, "actuary")]);
   pathwayId = (await analyst.post("/api/pathways").send(testPathwayBody())).body.id;
-  profileId = (await actuary.post("/api/peril-profiles").send(rainfall)).body.id;
+  profileId = (await actuary.post("/api/peril-profiles").send(testRainfallProfileBody)).body.id;
 });
 afterAll(async () => t.close());
 
@@ -59,7 +49,7 @@ describe("peril profiles pinned by a model version", () => {
     expect(inherited.status).toBe(201);
     expect(inherited.body.perilProfileIds).toEqual([profileId]);
     const spec = (await actuary.get(`/api/runs/${inherited.body.id}`)).body.manifest.spec;
-    expect(spec.perils).toEqual([{ id: profileId, ...rainfall }]);
+    expect(spec.perils).toEqual([{ id: profileId, ...testRainfallProfileBody }]);
 
     const optedOut = await actuary.post("/api/runs").send({ ...base, perilProfileIds: [] });
     expect(optedOut.status).toBe(201);

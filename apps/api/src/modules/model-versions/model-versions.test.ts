@@ -4,6 +4,7 @@ import { signIn, type SignedInAgent } from "../../test-support/sign-in.js";
 import { createTestContext, demoUser, type TestContext } from "../../test-support/test-context.js";
 import { testModelVersionBody } from "../runs/runs.fixtures.js";
 import { createModelVersion, submitModelVersion } from "./model-versions.service.js";
+import { requestUserOf } from "../../test-support/request-user.js";
 
 let t: TestContext;
 let analyst: SignedInAgent;
@@ -16,10 +17,7 @@ beforeAll(async () => {
 });
 afterAll(async () => t.close());
 
-const asUser = async (key: "analyst" | "manager") => {
-  const row = (await t.ctx.models.User.findByPk(t.userIds[key]))!;
-  return { id: row.id, email: row.email, name: row.name, role: row.role, mustChangePassword: false };
-};
+const asUser = (key: "analyst" | "manager" | "manager2") => requestUserOf(t, key);
 const outboxTo = async (email: string) => {
   await t.ctx.mailer.idle();
   const rows = await t.ctx.models.OutboxMessage.findAll();

@@ -5,6 +5,7 @@ import { signIn, type SignedInAgent } from "../../test-support/sign-in.js";
 import { createTestContext, type TestContext } from "../../test-support/test-context.js";
 import { createModelVersion, decideModelVersion, submitModelVersion } from "../model-versions/model-versions.service.js";
 import { testModelVersionBody, testPathwayBody } from "../runs/runs.fixtures.js";
+import { requestUserOf } from "../../test-support/request-user.js";
 
 let t: TestContext;
 let analyst: SignedInAgent;
@@ -16,10 +17,7 @@ beforeAll(async () => {
 });
 afterAll(async () => t.close());
 
-const user = async (key: "analyst" | "manager2") => {
-  const row = (await t.ctx.models.User.findByPk(t.userIds[key]))!;
-  return { id: row.id, email: row.email, name: row.name, role: row.role, mustChangePassword: false };
-};
+const user = (key: "analyst" | "manager" | "manager2") => requestUserOf(t, key);
 
 describe("POST /api/pathways and GET /api/pathways[/:id]", () => {
   it("creates a pathway from JSON, lists it and reads it back with its series and checksum", async () => {

@@ -7,7 +7,7 @@ import { createTestContext, type TestContext } from "../../test-support/test-con
 import { createSqlJobQueue } from "../../queue/sql-job-queue.js";
 import { EngineThread } from "../../workers/engine-thread-client.js";
 import { processNextRunJob } from "../../workers/process-run-job.js";
-import { testModelVersionBody, testPathwayBody } from "../runs/runs.fixtures.js";
+import { testModelVersionBody, testPathwayBody, testRainfallProfileBody } from "../runs/runs.fixtures.js";
 
 let t: TestContext;
 let analyst: SignedInAgent;
@@ -15,15 +15,6 @@ let actuary: SignedInAgent;
 let pathwayId: string;
 let versionId: string;
 let portfolioId: string;
-
-const flood = {
-  name: "Heavy rainfall, Northmere",
-  peril: "flood-heavy-rainfall",
-  region: "Northmere Coast",
-  metric: "severity",
-  baselineWarming: 1.1,
-  scaling: { kind: "per-kelvin", rate: { type: "fixed", value: 0.07 } },
-} as const;
 
 beforeAll(async () => {
   t = await createTestContext();
@@ -42,13 +33,13 @@ const runBody = (extra: object) => ({ modelVersionId: versionId, pathwayIds: [pa
 
 describe("runs with the peril lens", () => {
   it("copies the profiles and the portfolio rows into the stored spec and locks the profiles", async () => {
-    const profile = (await actuary.post("/api/peril-profiles").send(flood)).body;
+    const profile = (await actuary.post("/api/peril-profiles").send(testRainfallProfileBody)).body;
     const res = await actuary.post("/api/runs").send(runBody({ perilProfileIds: [profile.id], portfolioId }));
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ perilProfileIds: [profile.id], portfolioId });
     const run = await actuary.get(`/api/runs/${res.body.id}`);
     const spec = run.body.manifest.spec;
-    expect(spec.perils).toEqual([{ id: profile.id, ...flood }]);
+    expect(spec.perils).toEqual([{ id: profile.id, ...testRainfallProfileBody }]);
     expect(spec.portfolio.id).toBe(portfolioId);
     expect(spec.portfolio.rows).toEqual((await actuary.get(`/api/portfolios/${portfolioId}`)).body.rows);
 
@@ -69,7 +60,7 @@ describe("runs with the peril lens", () => {
   });
 
   it("answers 400 naming unknown and repeated profile ids, an unknown portfolio, and a portfolio without profiles; queues nothing", async () => {
-    const profile = (await actuary.post("/api/peril-profiles").send(flood)).body;
+    const profile = (await actuary.post("/api/peril-profiles").send(testRainfallProfileBody)).body;
     const before = await t.ctx.models.Run.count();
     const bad = await actuary.post("/api/runs").send(runBody({ perilProfileIds: [profile.id, "missing", profile.id], portfolioId: "nope" }));
     expect(bad.status).toBe(400);
@@ -84,7 +75,7 @@ describe("runs with the peril lens", () => {
 
 describe("a finished run with the peril lens (worker step, result, CSV, workbook, replay)", () => {
   it("returns the perils block, exports it as CSV and workbook sheets equal to the JSON, and replays to the same hash", async () => {
-    const profile = (await actuary.post("/api/peril-profiles").send({ ...flood, name: "Flood e2e" })).body;
+    const profile = (await actuary.post("/api/peril-profiles").send({ ...testRainfallProfileBody, name: "Flood e2e" })).body;
     // Only this run in the queue: earlier tests' runs are cancelled first.
     for (const run of await t.ctx.models.Run.findAll({ where: { status: "queued" } })) await actuary.post(`/api/runs/${run.id}/cancel`);
     const created = await actuary.post("/api/runs").send(runBody({ perilProfileIds: [profile.id], portfolioId, members: 60, seed: "peril-e2e" }));

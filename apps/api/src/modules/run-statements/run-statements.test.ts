@@ -1,5 +1,5 @@
-import ExcelJS from "exceljs";
 import request from "supertest";
+import ExcelJS from "exceljs";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createSqlJobQueue } from "../../queue/sql-job-queue.js";
 import { signIn, type SignedInAgent } from "../../test-support/sign-in.js";
@@ -9,6 +9,8 @@ import { processNextRunJob } from "../../workers/process-run-job.js";
 import { createModelVersion } from "../model-versions/model-versions.service.js";
 import { createPathway } from "../pathways/pathways.service.js";
 import { testModelVersionBody, testPathwayBody } from "../runs/runs.fixtures.js";
+import { binaryBody } from "../../test-support/binary-body.js";
+import { requestUserOf } from "../../test-support/request-user.js";
 
 let t: TestContext;
 let analyst: SignedInAgent;
@@ -17,17 +19,11 @@ let manager: SignedInAgent;
 let finishedRunId: string;
 let queuedRunId: string;
 
-const binary = (res: request.Response, cb: (err: Error | null, body: Buffer) => void) => {
-  const chunks: Buffer[] = [];
-  res.on("data", (c: Buffer) => chunks.push(c));
-  res.on("end", () => cb(null, Buffer.concat(chunks)));
-};
 
 beforeAll(async () => {
   t = await createTestContext();
   [analyst, actuary, manager] = await Promise.all([signIn(t.app, "analyst"), signIn(t.app, "actuary"), signIn(t.app, "manager")]);
-  const row = (await t.ctx.models.User.findByPk(t.userIds.analyst))!;
-  const user = { id: row.id, email: row.email, name: row.name, role: row.role, mustChangePassword: false };
+  const user = await requestUserOf(t, "analyst");
   const pathway = await createPathway(t.ctx, user, testPathwayBody());
   const version = await createModelVersion(t.ctx, user, testModelVersionBody());
   const body = { modelVersionId: version.id, pathwayIds: [pathway.id], members: 200, seed: "statements", sampling: "monte-carlo" };
@@ -61,7 +57,7 @@ describe("run statements (reliance and limitations)", () => {
   });
 
   it("writes them into the workbook's Manifest and Cautions sheets, neutralised", async () => {
-    const res = await actuary.get(`/api/runs/${finishedRunId}/workbook.xlsx`).buffer(true).parse(binary);
+    const res = await actuary.get(`/api/runs/${finishedRunId}/workbook.xlsx`).buffer(true).parse(binaryBody);
     expect(res.status).toBe(200);
     const workbook = new ExcelJS.Workbook();
     await workbook.xlsx.load(res.body as unknown as ArrayBuffer);

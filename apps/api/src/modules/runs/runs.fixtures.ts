@@ -40,3 +40,13 @@ export function testModelVersionBody(overrides: Partial<CreateModelVersionBody> 
     ...overrides,
   };
 }
+
+/** A hand-made peril profile: heavy rainfall at 7 %/K (the Clausius–Clapeyron rate of common practice; region invented). */
+export const testRainfallProfileBody = {
+  name: "Heavy rainfall, Northmere",
+  peril: "flood-heavy-rainfall",
+  region: "Northmere Coast",
+  metric: "severity",
+  baselineWarming: 1.1,
+  scaling: { kind: "per-kelvin", rate: { type: "fixed", value: 0.07 } },
+} as const;

@@ -11,6 +11,7 @@ import { startWorkerPool } from "../../workers/worker-pool.js";
 import { createModelVersion, decideModelVersion, retireModelVersion, submitModelVersion } from "../model-versions/model-versions.service.js";
 import { createPathway } from "../pathways/pathways.service.js";
 import { testModelVersionBody, testPathwayBody } from "./runs.fixtures.js";
+import { requestUserOf } from "../../test-support/request-user.js";
 
 let t: TestContext;
 let analyst: SignedInAgent;
@@ -23,10 +24,7 @@ let pathwayIds: string[];
 const queue = () => createSqlJobQueue(t.ctx.models.Job);
 const step = () => processNextRunJob(t.ctx, queue(), "test-worker", thread, { progressWriteMs: 20 });
 
-const asUser = async (key: "analyst" | "manager") => {
-  const row = (await t.ctx.models.User.findByPk(t.userIds[key]))!;
-  return { id: row.id, email: row.email, name: row.name, role: row.role, mustChangePassword: false };
-};
+const asUser = (key: "analyst" | "manager" | "manager2") => requestUserOf(t, key);
 const waitFor = async (check: () => Promise<boolean>, ms = 20_000) => {
   const end = Date.now() + ms;
   while (Date.now() < end) {
