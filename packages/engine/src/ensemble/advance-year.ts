@@ -1,6 +1,5 @@
-import { blockSteppers } from "./block-steppers.js";
+import { memberKernels } from "../kernels/member-kernels.js";
 import type { EnsemblePlan } from "./ensemble-plan.js";
-import { forcingKernel } from "./member-forcing.js";
 
 /**
  * Members advanced together through a span of years (time blocking). A block's per-member
@@ -11,15 +10,17 @@ import { forcingKernel } from "./member-forcing.js";
 export const MEMBER_BLOCK = 2048;
 
 /*
- * Per block and year: the forcing (member-forcing.ts), then the step (block-steppers.ts),
- * which also counts members above the lowest threshold and spots first crossings.
+ * Per block and year: the forcing kernel, then the step kernel (kernels/member-kernels.wat),
+ * which also counts members above the lowest threshold and lists first crossings.
  */
 
 /**
  * First pass, years [t0, t1), members [lo, hi): advance the state with forcing held constant
  * over each year (exact propagator) and add the end-of-year upper-layer temperature to the
  * member's baseline sum and constraint-window sum in the years that fall in those periods.
- * Only the states are needed, so forcing goes to a block-sized scratch array.
+ * Only the states are needed; the forcing goes to the members' entries of the first year
+ * slot's forcing array, which is free until the reporting pass (each block writes only its
+ * own members' entries, so threads never share one).
  */
 export function advanceBaselineYears(
   plan: EnsemblePlan,
@@ -31,15 +32,17 @@ export function advanceBaselineYears(
   inBaseline: (t: number) => boolean,
   inWindow: (t: number) => boolean,
 ): void {
-  const steppers = blockSteppers(plan);
-  const forcing = forcingKernel(plan, pathwayIndex);
-  const scratch = new Float64Array(MEMBER_BLOCK);
-  const extremes = new Float64Array(2);
+  const kernels = memberKernels(plan.kernels.memory);
+  const pathway = plan.pathways[pathwayIndex]!;
+  const columns = plan.kernels.forcingColumns[pathwayIndex]!.byteOffset;
+  const coefficients = plan.kernels.forcingCoefficients[pathwayIndex]!.byteOffset;
+  const frame = plan.kernels.frame.byteOffset;
+  const scratch = plan.state.slots[0]!.forcing.byteOffset;
   for (let b = lo; b < hi; b += MEMBER_BLOCK) {
-    const bh = Math.min(hi, b + MEMBER_BLOCK);
+    const n = Math.min(hi, b + MEMBER_BLOCK) - b;
     for (let t = t0; t < t1; t++) {
-      forcing(t, b, bh, scratch, b, extremes, 0);
-      steppers.baseline(b, bh, scratch, inBaseline(t), inWindow(t));
+      kernels.forcing(scratch, b, n, pathway.fixedTotal[t]!, columns, coefficients + 8 * t, 8 * pathway.years, pathway.scaleWidth, 0);
+      kernels.baselineStep(frame, b, n, scratch, inBaseline(t) ? 1 : 0, inWindow(t) ? 1 : 0);
     }
   }
 }
@@ -60,15 +63,28 @@ export function advanceReportedYears(plan: EnsemblePlan, pathwayIndex: number, t
  * Without an imbalance summary (plan.summaries) the imbalance is neither written nor tallied.
  */
 export function advanceReportedBlock(plan: EnsemblePlan, pathwayIndex: number, t0: number, t1: number, block: number): void {
+  advanceReportedMembers(plan, pathwayIndex, t0, t1, block * MEMBER_BLOCK, Math.min(plan.members, (block + 1) * MEMBER_BLOCK), block);
+}
+
+/**
+ * Members [lo, hi) of member block `block` through years [t0, t1), writing the block's
+ * tallies (advanceReportedBlock); the warm-up (warm-kernels.ts) runs part of a block.
+ */
+export function advanceReportedMembers(plan: EnsemblePlan, pathwayIndex: number, t0: number, t1: number, lo: number, hi: number, block: number): void {
   const slots = plan.state.slots;
   const ring = slots.length;
-  const lo = block * MEMBER_BLOCK;
-  const hi = Math.min(plan.members, lo + MEMBER_BLOCK);
+  const n = hi - lo;
   const at = 6 * block;
-  const countsAt = plan.thresholdsAscending.length * block;
+  const thresholds = plan.thresholdsAscending;
+  const countsAt = thresholds.length * block;
+  const lowest = thresholds[0] ?? Infinity;
   const withImbalance = plan.summaries.imbalance;
-  const steppers = blockSteppers(plan);
-  const forcing = forcingKernel(plan, pathwayIndex);
+  const kernels = memberKernels(plan.kernels.memory);
+  const pathway = plan.pathways[pathwayIndex]!;
+  const columns = plan.kernels.forcingColumns[pathwayIndex]!.byteOffset;
+  const coefficients = plan.kernels.forcingCoefficients[pathwayIndex]!.byteOffset;
+  const frame = plan.kernels.frame.byteOffset;
+  const crossed = plan.state.crossedMembers;
   for (let t = t0; t < t1; t++) {
     const slot = slots[t % ring]!;
     const extremes = slot.extremes;
@@ -76,21 +92,33 @@ export function advanceReportedBlock(plan: EnsemblePlan, pathwayIndex: number, t
       extremes[at + k] = Infinity;
       extremes[at + k + 1] = -Infinity;
     }
-    forcing(t, lo, hi, slot.forcing, 0, extremes, at);
-    const cross = (m: number, a: number) => crossThresholds(plan, m, t, a);
-    const above = steppers.reported(lo, hi, slot.forcing, slot.anomaly, withImbalance ? slot.imbalance : null, extremes, at, cross);
-    countAboveOthers(plan, lo, hi, slot.anomaly, slot.aboveCounts, countsAt, above);
+    const tallies = extremes.byteOffset + 8 * at;
+    kernels.forcing(slot.forcing.byteOffset, lo, n, pathway.fixedTotal[t]!, columns, coefficients + 8 * t, 8 * pathway.years, pathway.scaleWidth, tallies);
+    const crossings = kernels.reportedStep(
+      frame,
+      lo,
+      n,
+      slot.forcing.byteOffset,
+      slot.anomaly.byteOffset,
+      withImbalance ? slot.imbalance.byteOffset : 0,
+      tallies,
+      lowest,
+      thresholds.length > 0 ? slot.aboveCounts.byteOffset + 8 * countsAt : 0,
+    );
+    for (let i = 0; i < crossings; i++) {
+      const m = crossed[lo + i]!;
+      crossThresholds(plan, m, t, slot.anomaly[m]!);
+    }
+    countAboveOthers(plan, lo, hi, slot.anomaly, slot.aboveCounts, countsAt);
   }
 }
 
 /**
- * Counts of members above each ascending threshold: the step counted the lowest, the others
- * are counted over the block's anomalies, still in cache.
+ * Counts of members above each ascending threshold but the lowest (the step kernel counted
+ * that one), over the block's anomalies, still in cache.
  */
-function countAboveOthers(plan: EnsemblePlan, lo: number, hi: number, anomaly: Float64Array, aboveCounts: Float64Array, countsAt: number, lowest: number): void {
+function countAboveOthers(plan: EnsemblePlan, lo: number, hi: number, anomaly: Float64Array, aboveCounts: Float64Array, countsAt: number): void {
   const thresholds = plan.thresholdsAscending;
-  if (thresholds.length === 0) return;
-  aboveCounts[countsAt] = lowest;
   for (let i = 1; i < thresholds.length; i++) aboveCounts[countsAt + i] = countAbove(anomaly, lo, hi, thresholds[i]!);
 }
 

@@ -1,7 +1,8 @@
 import type { RunSpec } from "../spec/types.js";
+import type { KernelMemory } from "../kernels/kernel-memory.js";
+import type { KernelLayout } from "./kernel-layout.js";
 import type { MemberClimate } from "./member-climate.js";
 import type { PathwayForcing } from "./pathway-forcing.js";
-import type { Allocate } from "./sample-inputs.js";
 import type { ModelInput } from "./uncertain-inputs.js";
 
 /** Years whose per-member values the streaming pass is allowed to hold in one slot. */
@@ -24,11 +25,6 @@ export interface YearSlot {
 }
 
 /**
- * Everything one run needs, sampled once. All per-member arrays are O(members); nothing is
- * members × years. Arrays come from an allocator so the parallel runner can place them in
- * shared memory and hand the same plan to its worker threads.
- */
-/**
  * Which per-year series besides temperature and exceedance a run summarises. All on for
  * every product run; a run may switch forcing and imbalance off (runner option
  * `summaries`), and its result then carries those two series empty (`{}`).
@@ -40,15 +36,18 @@ export interface SummaryChoice {
 
 export const ALL_SUMMARIES: SummaryChoice = { forcing: true, imbalance: true };
 
+/**
+ * Everything one run needs, sampled once. All per-member arrays are O(members); nothing is
+ * members × years. They live in one shared WebAssembly memory (kernel-memory.ts): the
+ * member kernels read and write them there, and the parallel runner hands the same plan,
+ * memory included, to its worker threads.
+ */
 export interface EnsemblePlan {
   members: number;
   inputs: ModelInput[];
   columns: Float64Array[];
-  /**
-   * Per pathway, per forcing slot (pathway-forcing.ts slotColumns, padded to its scaleWidth):
-   * the scale column the forcing loop reads, state.zeros for padding slots.
-   */
-  slotScales: Float64Array[][];
+  /** Where the member kernels find the plan's arrays (kernel-layout.ts). */
+  kernels: KernelLayout;
   climate: MemberClimate;
   pathways: PathwayForcing[];
   /** Requested percentiles as probabilities, in the order asked. */
@@ -83,8 +82,13 @@ export interface EnsembleState {
   crossing: Float64Array[];
   /** Ring of year slots: the simulation writes year t into slot t mod ring size. */
   slots: YearSlot[];
-  /** All zeros: the scale column of the padding slots of a pathway's forcing (member-forcing.ts). */
+  /** All zeros: the scale column of the padding slots of a pathway's forcing (kernel-layout.ts). */
   zeros: Float64Array;
+  /**
+   * Scratch of the reporting step: members whose anomaly passed their next threshold in the
+   * year just stepped, listed by each member block from its first member's index on.
+   */
+  crossedMembers: Int32Array;
   /** Per horizon: member anomaly, committed warming and total forcing in that year. */
   horizonTemperature: Float64Array[];
   horizonCommitted: Float64Array[];
@@ -100,8 +104,9 @@ export function allocateState(
   ringSize: number,
   blocks: number,
   yearlyLength: number,
-  allocate: Allocate,
+  memory: KernelMemory,
 ): EnsembleState {
+  const allocate = memory.float64;
   const many = (count: number) => Array.from({ length: count }, () => allocate(members));
   return {
     upper: allocate(members),
@@ -119,6 +124,7 @@ export function allocateState(
       aboveCounts: allocate(Math.max(1, thresholds) * blocks),
     })),
     zeros: allocate(members),
+    crossedMembers: memory.int32(members),
     horizonTemperature: many(horizons),
     horizonCommitted: many(horizons),
     horizonForcing: many(horizons),

@@ -15,7 +15,7 @@ export interface PathwayForcing {
   fixedScale: number[];
   /** Σ over fixed-scale agents of scale·base: one series instead of one per agent. */
   fixedTotal: Float64Array;
-  /** Varying-scale agents, padded to 0, 4, 8 or 12 slots (member-forcing.ts). */
+  /** Varying-scale agents, padded to 0, 4, 8 or 12 slots (the forcing kernel takes four at a time). */
   scaleWidth: number;
   /** Per slot: the model-input column of its scale. */
   slotColumns: number[];

@@ -2,11 +2,13 @@ import { applyDefaults } from "../spec/apply-defaults.js";
 import { SpecError } from "../spec/spec-error.js";
 import type { RunSpec, RunSpecInput } from "../spec/types.js";
 import { validateSpec } from "../spec/validate-spec.js";
+import { createKernelMemory, type KernelMemory } from "../kernels/kernel-memory.js";
 import { MEMBER_BLOCK } from "./advance-year.js";
 import { ALL_SUMMARIES, allocateState, type EnsemblePlan, type SummaryChoice } from "./ensemble-plan.js";
+import { layOutKernels } from "./kernel-layout.js";
 import { buildMemberClimate, type MemberClimate } from "./member-climate.js";
 import { buildPathwayForcing, type PathwayForcing } from "./pathway-forcing.js";
-import { allocateLocal, sampleInputs, type Allocate } from "./sample-inputs.js";
+import { sampleInputs } from "./sample-inputs.js";
 import { listModelInputs, type ModelInput } from "./uncertain-inputs.js";
 import { spanYears } from "./year-spans.js";
 import { yearlyLength } from "./yearly-layout.js";
@@ -15,22 +17,24 @@ import { yearlyLength } from "./yearly-layout.js";
  * Validates the spec, samples every input once and builds each member's propagator and
  * each pathway's forcing: all the deterministic set-up of a run, shared by the one-thread
  * and the worker-thread runners (which only differ in who advances which members).
- * summaries: forcing and imbalance series on (default) or off (ensemble-plan.ts SummaryChoice).
- * spansInRing: how many spans of year slots exist at once (1 for one thread; 2 lets
- * workers simulate the next span while the last one is being summarised).
+ * Every per-member array goes into one new shared kernel memory (kernel-memory.ts), which
+ * worker threads can share. spansInRing: how many spans of year slots exist at once (1 for
+ * one thread; 2 lets workers simulate the next span while the last one is being
+ * summarised). summaries: forcing and imbalance series on (default) or off
+ * (ensemble-plan.ts SummaryChoice).
  */
 export function preparePlan(
   input: RunSpecInput | RunSpec,
   spansInRing = 1,
-  allocate: Allocate = allocateLocal,
   summaries: Partial<SummaryChoice> = {},
   early?: EarlyPlan,
 ): { spec: RunSpec; plan: EnsemblePlan } {
   const spec = applyDefaults(input);
   validateSpec(spec);
+  const memory = createKernelMemory();
   const inputs = listModelInputs(spec);
   const names = inputs.map((x) => x.name);
-  const columns = sampleInputs(spec, inputs, allocate);
+  const columns = sampleInputs(spec, inputs, memory.float64);
   const column = (name: string) => columns[names.indexOf(name)]!;
   // A pathway's forcing error is given after the samples' own refusals (their order before
   // `early` existed); the forcing is built first so the plan can be handed out early.
@@ -51,12 +55,12 @@ export function preparePlan(
       heatExchange: column("heatExchange"),
       deepEfficacy: column("deepEfficacy"),
     },
-    allocate,
+    memory.float64,
     early && pathways
       ? {
           members: early.members,
           filled: (climate) => {
-            plan = assemblePlan(spec, inputs, columns, climate, pathways!, spansInRing, allocate, summaries);
+            plan = assemblePlan(spec, inputs, columns, climate, pathways!, spansInRing, memory, summaries);
             early.ready(plan);
           },
         }
@@ -69,7 +73,7 @@ export function preparePlan(
       if (!Number.isFinite(values[m]!)) throw new SpecError(x.field, `sampled a non-finite value at member ${m + 1}`);
   });
   if (pathwayError !== null) throw pathwayError;
-  return { spec, plan: plan ?? assemblePlan(spec, inputs, columns, climate, pathways!, spansInRing, allocate, summaries) };
+  return { spec, plan: plan ?? assemblePlan(spec, inputs, columns, climate, pathways!, spansInRing, memory, summaries) };
 }
 
 /**
@@ -89,7 +93,7 @@ function assemblePlan(
   climate: MemberClimate,
   pathways: PathwayForcing[],
   spansInRing: number,
-  allocate: Allocate,
+  memory: KernelMemory,
   summaries: Partial<SummaryChoice>,
 ): EnsemblePlan {
   const maxYears = Math.max(...pathways.map((p) => p.years));
@@ -103,15 +107,13 @@ function assemblePlan(
     span * spansInRing,
     blocks,
     yearlyLength(probs.length, spec.thresholds.length, maxYears),
-    allocate,
+    memory,
   );
   return {
     members: spec.members,
     inputs,
     columns,
-    slotScales: pathways.map((p) =>
-      Array.from({ length: p.scaleWidth }, (_, j) => (j < p.slotColumns.length ? columns[p.slotColumns[j]!]! : state.zeros)),
-    ),
+    kernels: layOutKernels(memory, climate, state, columns, pathways),
     climate,
     pathways,
     probs,

@@ -10,7 +10,6 @@ import { pathwayPerils, runPerils } from "./pathway-perils.js";
 import { weighPathway } from "./pathway-weights.js";
 import type { SummaryChoice } from "./ensemble-plan.js";
 import { preparePlan } from "./prepare-plan.js";
-import { allocateLocal } from "./sample-inputs.js";
 import { YearSummariser } from "./summarise-year.js";
 
 export interface RunOptions {
@@ -50,7 +49,7 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
     if (times) times[stage] += (now - clock) / 1000;
     clock = now;
   };
-  const { spec, plan } = preparePlan(input, 1, allocateLocal, options.summaries);
+  const { spec, plan } = preparePlan(input, 1, options.summaries);
   lap("sample");
   const n = plan.members;
   const totalYears = plan.pathways.reduce((s, p, i) => s + p.years + firstPassYears(plan, i), 0);

@@ -31,11 +31,9 @@ export interface ParallelRunOptions {
   summaries?: RunOptions["summaries"];
 }
 
-const sharedAllocate = (length: number) => new Float64Array(new SharedArrayBuffer(8 * length));
-
 /**
  * runEnsemble spread over worker threads: sampling happens once on this thread (one seeded
- * stream per input, as in runEnsemble) into shared memory; workers claim member blocks
+ * stream per input, as in runEnsemble) into the plan's shared kernel memory; workers claim member blocks
  * and then years to summarise from shared counters (ensemble-worker.ts), so a thread the
  * machine slows down takes less of the work. Results are bit-identical
  * to runEnsemble for any thread count. Rejects with SpecError for a bad spec and with
@@ -62,7 +60,7 @@ export async function runEnsembleParallel(input: RunSpecInput | RunSpec, options
   const early: EarlyStart = {};
   try {
     const start = performance.now();
-    const { spec, plan } = preparePlan(input, 2, sharedAllocate, options.summaries, {
+    const { spec, plan } = preparePlan(input, 2, options.summaries, {
       members: threads * WARM_MEMBERS,
       ready: (plan) => {
         const control = createPipelineControl(Math.max(...plan.pathways.map((p) => p.years)));
