@@ -18,9 +18,7 @@ export const MEMBER_BLOCK = 2048;
  * First pass, years [t0, t1), members [lo, hi): advance the state with forcing held constant
  * over each year (exact propagator) and add the end-of-year upper-layer temperature to the
  * member's baseline sum and constraint-window sum in the years that fall in those periods.
- * Only the states are needed; the forcing goes to the members' entries of the first year
- * slot's forcing array, which is free until the reporting pass (each block writes only its
- * own members' entries, so threads never share one).
+ * Only the states are needed; the forcing goes to the block's scratch (state.blockForcing).
  */
 export function advanceBaselineYears(
   plan: EnsemblePlan,
@@ -37,7 +35,7 @@ export function advanceBaselineYears(
   const columns = plan.kernels.forcingColumns[pathwayIndex]!.byteOffset;
   const coefficients = plan.kernels.forcingCoefficients[pathwayIndex]!.byteOffset;
   const frame = plan.kernels.frame.byteOffset;
-  const scratch = plan.state.slots[0]!.forcing.byteOffset;
+  const scratch = plan.state.blockForcing.byteOffset;
   for (let b = lo; b < hi; b += MEMBER_BLOCK) {
     const n = Math.min(hi, b + MEMBER_BLOCK) - b;
     for (let t = t0; t < t1; t++) {
@@ -60,7 +58,9 @@ export function advanceReportedYears(plan: EnsemblePlan, pathwayIndex: number, t
  * years [t0, t1). Each block writes its own tallies in each slot (extremes of forcing,
  * anomaly and imbalance; counts above each threshold), so whichever thread runs a block,
  * the summaries merge the same numbers: min, max and whole counts do not depend on order.
- * Without an imbalance summary (plan.summaries) the imbalance is neither written nor tallied.
+ * Without an imbalance summary (plan.summaries) the imbalance is neither written nor
+ * tallied; without a forcing summary the forcing is kept in the year's slot only in horizon
+ * years (committed warming needs it) and otherwise goes to the block's scratch.
  */
 export function advanceReportedBlock(plan: EnsemblePlan, pathwayIndex: number, t0: number, t1: number, block: number): void {
   advanceReportedMembers(plan, pathwayIndex, t0, t1, block * MEMBER_BLOCK, Math.min(plan.members, (block + 1) * MEMBER_BLOCK), block);
@@ -93,12 +93,13 @@ export function advanceReportedMembers(plan: EnsemblePlan, pathwayIndex: number,
       extremes[at + k + 1] = -Infinity;
     }
     const tallies = extremes.byteOffset + 8 * at;
-    kernels.forcing(slot.forcing.byteOffset, lo, n, pathway.fixedTotal[t]!, columns, coefficients + 8 * t, 8 * pathway.years, pathway.scaleWidth, tallies);
+    const forcing = plan.summaries.forcing || plan.horizons.includes(pathway.startYear + t) ? slot.forcing : plan.state.blockForcing;
+    kernels.forcing(forcing.byteOffset, lo, n, pathway.fixedTotal[t]!, columns, coefficients + 8 * t, 8 * pathway.years, pathway.scaleWidth, tallies);
     const crossings = kernels.reportedStep(
       frame,
       lo,
       n,
-      slot.forcing.byteOffset,
+      forcing.byteOffset,
       slot.anomaly.byteOffset,
       withImbalance ? slot.imbalance.byteOffset : 0,
       tallies,

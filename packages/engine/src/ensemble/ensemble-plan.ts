@@ -89,6 +89,11 @@ export interface EnsembleState {
    * year just stepped, listed by each member block from its first member's index on.
    */
   crossedMembers: Int32Array;
+  /**
+   * Scratch of the step: each member block's forcing of the year being stepped when no
+   * summary keeps it (one block's 16 kB stay in cache, where a year slot would not).
+   */
+  blockForcing: Float64Array;
   /** Per horizon: member anomaly, committed warming and total forcing in that year. */
   horizonTemperature: Float64Array[];
   horizonCommitted: Float64Array[];
@@ -125,6 +130,7 @@ export function allocateState(
     })),
     zeros: allocate(members),
     crossedMembers: memory.int32(members),
+    blockForcing: allocate(members),
     horizonTemperature: many(horizons),
     horizonCommitted: many(horizons),
     horizonForcing: many(horizons),
