@@ -93,8 +93,10 @@ export function advanceReportedMembers(plan: EnsemblePlan, pathwayIndex: number,
       extremes[at + k + 1] = -Infinity;
     }
     const tallies = extremes.byteOffset + 8 * at;
-    const forcing = plan.summaries.forcing || plan.horizons.includes(pathway.startYear + t) ? slot.forcing : plan.state.blockForcing;
-    kernels.forcing(forcing.byteOffset, lo, n, pathway.fixedTotal[t]!, columns, coefficients + 8 * t, 8 * pathway.years, pathway.scaleWidth, tallies);
+    // Forcing extremes only feed the forcing summary.
+    const summarised = plan.summaries.forcing;
+    const forcing = summarised || plan.horizons.includes(pathway.startYear + t) ? slot.forcing : plan.state.blockForcing;
+    kernels.forcing(forcing.byteOffset, lo, n, pathway.fixedTotal[t]!, columns, coefficients + 8 * t, 8 * pathway.years, pathway.scaleWidth, summarised ? tallies : 0);
     const crossings = kernels.reportedStep(
       frame,
       lo,
