@@ -34,14 +34,3 @@ export function validateTwoLayerParameters(p: TwoLayerParameters): void {
     if (!(value > 0)) throw new RangeError(`${name} must be > 0`);
   }
 }
-
-/** The system matrix A of d(T, T0)/dt = A·(T, T0) + (F/C, 0). */
-export function systemMatrix(p: TwoLayerParameters): { a11: number; a12: number; a21: number; a22: number } {
-  const { lambda, upperHeatCapacity: c, deepHeatCapacity: c0, heatExchange: gamma, deepEfficacy: epsilon } = p;
-  return {
-    a11: -(lambda + epsilon * gamma) / c,
-    a12: (epsilon * gamma) / c,
-    a21: gamma / c0,
-    a22: -gamma / c0,
-  };
-}

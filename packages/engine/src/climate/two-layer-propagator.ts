@@ -1,4 +1,5 @@
-import { systemMatrix, type TwoLayerParameters, validateTwoLayerParameters } from "./two-layer-parameters.js";
+import { type TwoLayerParameters, validateTwoLayerParameters } from "./two-layer-parameters.js";
+import { vanLoanPropagatorInto } from "./van-loan-propagator.js";
 
 export type { TwoLayerParameters } from "./two-layer-parameters.js";
 
@@ -21,6 +22,9 @@ export interface TwoLayerPropagator {
   r2: number;
 }
 
+/** How many numbers twoLayerPropagatorInto writes: a11, a12, a21, a22, b1, b2, r1, r2 in that order. */
+export const PROPAGATOR_TERMS = 8;
+
 /**
  * Exact one-year propagator of C dT/dt = F − λT − εγ(T − T0), C0 dT0/dt = γ(T − T0).
  *
@@ -34,7 +38,7 @@ export interface TwoLayerPropagator {
  * digits) the augmented 4×4 matrix exponential of Van Loan (1978) by scaling and squaring is
  * used instead. Stepping a constant forcing reproduces the analytic step response to
  * rounding; a linear ramp is stepped exactly with the r term.
- * Cost O(1): a few exp/expm1 calls.
+ * Cost O(1): one exp and three expm1 calls.
  * References: Held et al. (2010), J. Climate 23, 2418–2427; Geoffroy et al. (2013a,b),
  * J. Climate 26, 1841–1857 and 1859–1876; C. F. Van Loan (1978), IEEE Trans. Automat.
  * Control 23(3), 395–404; CHECKS.md §5.2.
@@ -44,82 +48,76 @@ export interface TwoLayerPropagator {
  */
 export function twoLayerPropagator(p: TwoLayerParameters): TwoLayerPropagator {
   validateTwoLayerParameters(p);
-  const A = systemMatrix(p);
-  const trace = A.a11 + A.a22;
-  const determinant = A.a11 * A.a22 - A.a12 * A.a21;
-  const gap = Math.sqrt((A.a11 - A.a22) ** 2 + 4 * A.a12 * A.a21);
-  const fast = (trace - gap) / 2;
-  const slow = determinant / fast;
-  const gapBetween = slow - fast;
-  if (!(gapBetween >= 1e-3 * Math.max(1, Math.abs(fast)))) return augmentedPropagator(A, 1 / p.upperHeatCapacity);
-
-  // e^A: β = (e^μs − e^μf)/(μs − μf) = e^μf·expm1(Δ)/Δ.
-  const expBeta = (Math.exp(fast) * Math.expm1(gapBetween)) / gapBetween;
-  const expAlpha = Math.exp(fast) - fast * expBeta;
-  const [g1Alpha, g1Beta] = sylvester(integratedExp, slow, fast);
-  const [g2Alpha, g2Beta] = sylvester(doublyIntegratedExp, slow, fast);
-  const inverseC = 1 / p.upperHeatCapacity;
-  return {
-    a11: expAlpha + expBeta * A.a11,
-    a12: expBeta * A.a12,
-    a21: expBeta * A.a21,
-    a22: expAlpha + expBeta * A.a22,
-    // g(A)·(1/C, 0) = (α + β·a11, β·a21)/C.
-    b1: (g1Alpha + g1Beta * A.a11) * inverseC,
-    b2: g1Beta * A.a21 * inverseC,
-    r1: (g2Alpha + g2Beta * A.a11) * inverseC,
-    r2: g2Beta * A.a21 * inverseC,
-  };
-}
-
-/** (α, β) with g(A) = α·I + β·A for eigenvalues μ1 ≠ μ2. */
-function sylvester(g: (mu: number) => number, mu1: number, mu2: number): [number, number] {
-  const beta = (g(mu1) - g(mu2)) / (mu1 - mu2);
-  return [g(mu2) - mu2 * beta, beta];
-}
-
-/** g1(μ) = ∫₀¹ e^{μs} ds = (e^μ − 1)/μ. */
-function integratedExp(mu: number): number {
-  return mu === 0 ? 1 : Math.expm1(mu) / mu;
-}
-
-/** g2(μ) = ∫₀¹ s·e^{μ(1−s)} ds = (e^μ − 1 − μ)/μ²; Taylor series near 0 (error < 1e-19). */
-function doublyIntegratedExp(mu: number): number {
-  if (Math.abs(mu) < 1e-3) return 1 / 2 + mu * (1 / 6 + mu * (1 / 24 + mu * (1 / 120 + mu * (1 / 720 + mu / 5040))));
-  return (Math.expm1(mu) - mu) / (mu * mu);
+  const terms = new Float64Array(PROPAGATOR_TERMS);
+  twoLayerPropagatorInto(p.lambda, p.upperHeatCapacity, p.deepHeatCapacity, p.heatExchange, p.deepEfficacy, terms);
+  const [a11, a12, a21, a22, b1, b2, r1, r2] = terms;
+  return { a11: a11!, a12: a12!, a21: a21!, a22: a22!, b1: b1!, b2: b2!, r1: r1!, r2: r2! };
 }
 
 /**
- * Van Loan's block exponential: exp of M = [[A, B, 0], [0, 0, 1], [0, 0, 0]] holds e^A, then
- * b = ∫₀¹ e^{A(1−s)}B ds and r = ∫₀¹ e^{A(1−s)}B·s ds in its last two columns. Scaling and
- * squaring with an order-18 Taylor polynomial (norm ≤ 1/2 after scaling: error < 1e-22).
+ * twoLayerPropagator's terms written into out[0 … 7] (order of PROPAGATOR_TERMS), without
+ * checking the parameters (each must be a finite number > 0) and without allocating: the
+ * engine builds one propagator per member, so each exponential is taken once and nothing is
+ * left for the garbage collector. Same numbers as twoLayerPropagator, bit for bit (it is the
+ * same code).
  */
-function augmentedPropagator(A: { a11: number; a12: number; a21: number; a22: number }, inverseC: number): TwoLayerPropagator {
-  const m = [
-    [A.a11, A.a12, inverseC, 0],
-    [A.a21, A.a22, 0, 0],
-    [0, 0, 0, 1],
-    [0, 0, 0, 0],
-  ];
-  const norm = Math.max(...[0, 1, 2, 3].map((j) => m.reduce((sum, row) => sum + Math.abs(row[j]!), 0)));
-  const squarings = Math.max(0, Math.ceil(Math.log2(norm / 0.5)));
-  const scale = 2 ** -squarings;
-  const scaled = m.map((row) => row.map((v) => v * scale));
-  let term = identity4();
-  let result = identity4();
-  for (let k = 1; k <= 18; k++) {
-    term = multiply4(term, scaled).map((row) => row.map((v) => v / k));
-    result = result.map((row, i) => row.map((v, j) => v + term[i]![j]!));
+export function twoLayerPropagatorInto(
+  lambda: number,
+  upperHeatCapacity: number,
+  deepHeatCapacity: number,
+  heatExchange: number,
+  deepEfficacy: number,
+  out: Float64Array,
+): void {
+  // The system matrix A of d(T, T0)/dt = A·(T, T0) + (F/C, 0).
+  const a11 = -(lambda + deepEfficacy * heatExchange) / upperHeatCapacity;
+  const a12 = (deepEfficacy * heatExchange) / upperHeatCapacity;
+  const a21 = heatExchange / deepHeatCapacity;
+  const a22 = -heatExchange / deepHeatCapacity;
+  const trace = a11 + a22;
+  const determinant = a11 * a22 - a12 * a21;
+  const gap = Math.sqrt((a11 - a22) ** 2 + 4 * a12 * a21);
+  const fast = (trace - gap) / 2;
+  const slow = determinant / fast;
+  const gapBetween = slow - fast;
+  if (!(gapBetween >= 1e-3 * Math.max(1, Math.abs(fast)))) {
+    vanLoanPropagatorInto(a11, a12, a21, a22, 1 / upperHeatCapacity, out);
+    return;
   }
-  for (let s = 0; s < squarings; s++) result = multiply4(result, result);
-  const at = (i: number, j: number) => result[i]![j]!;
-  return { a11: at(0, 0), a12: at(0, 1), a21: at(1, 0), a22: at(1, 1), b1: at(0, 2), b2: at(1, 2), r1: at(0, 3), r2: at(1, 3) };
+
+  // e^A: β = (e^μs − e^μf)/(μs − μf) = e^μf·expm1(Δ)/Δ.
+  const expFast = Math.exp(fast);
+  const expBeta = (expFast * Math.expm1(gapBetween)) / gapBetween;
+  const expAlpha = expFast - fast * expBeta;
+  // g1 and g2 at both eigenvalues share one expm1 per eigenvalue; Sylvester's (α, β) with
+  // μs − μf = gapBetween.
+  const expm1Slow = Math.expm1(slow);
+  const expm1Fast = Math.expm1(fast);
+  const g1Fast = integratedExp(fast, expm1Fast);
+  const g1Beta = (integratedExp(slow, expm1Slow) - g1Fast) / gapBetween;
+  const g1Alpha = g1Fast - fast * g1Beta;
+  const g2Fast = doublyIntegratedExp(fast, expm1Fast);
+  const g2Beta = (doublyIntegratedExp(slow, expm1Slow) - g2Fast) / gapBetween;
+  const g2Alpha = g2Fast - fast * g2Beta;
+  const inverseC = 1 / upperHeatCapacity;
+  out[0] = expAlpha + expBeta * a11;
+  out[1] = expBeta * a12;
+  out[2] = expBeta * a21;
+  out[3] = expAlpha + expBeta * a22;
+  // g(A)·(1/C, 0) = (α + β·a11, β·a21)/C.
+  out[4] = (g1Alpha + g1Beta * a11) * inverseC;
+  out[5] = g1Beta * a21 * inverseC;
+  out[6] = (g2Alpha + g2Beta * a11) * inverseC;
+  out[7] = g2Beta * a21 * inverseC;
 }
 
-function identity4(): number[][] {
-  return [0, 1, 2, 3].map((i) => [0, 1, 2, 3].map((j) => (i === j ? 1 : 0)));
+/** g1(μ) = ∫₀¹ e^{μs} ds = (e^μ − 1)/μ, given expm1(μ). */
+function integratedExp(mu: number, expm1Mu: number): number {
+  return mu === 0 ? 1 : expm1Mu / mu;
 }
 
-function multiply4(x: number[][], y: number[][]): number[][] {
-  return x.map((row) => [0, 1, 2, 3].map((j) => row.reduce((sum, v, k) => sum + v * y[k]![j]!, 0)));
+/** g2(μ) = ∫₀¹ s·e^{μ(1−s)} ds = (e^μ − 1 − μ)/μ², given expm1(μ); Taylor series near 0 (error < 1e-19). */
+function doublyIntegratedExp(mu: number, expm1Mu: number): number {
+  if (Math.abs(mu) < 1e-3) return 1 / 2 + mu * (1 / 6 + mu * (1 / 24 + mu * (1 / 120 + mu * (1 / 720 + mu / 5040))));
+  return (expm1Mu - mu) / (mu * mu);
 }

@@ -14,29 +14,20 @@ import { quantileOf, standardNormalCdf, standardNormalQuantile, type Distributio
  * Example: d = { type: "normal", mean: 3, sd: 0.5 }, u = [0.95] → out = [3.8224268134757358].
  */
 export function columnQuantiles(d: Distribution, u: Float64Array, out: Float64Array): void {
-  const n = u.length;
   switch (d.type) {
-    case "normal": {
-      const { mean, sd } = d;
-      for (let i = 0; i < n; i++) out[i] = mean + sd * standardNormalQuantile(u[i]!);
+    case "normal":
+      normalColumn(d.mean, d.sd, u, out);
       return;
-    }
-    case "lognormal": {
-      const { median, logSd } = d;
-      for (let i = 0; i < n; i++) out[i] = median * Math.exp(logSd * standardNormalQuantile(u[i]!));
+    case "lognormal":
+      lognormalColumn(d.median, d.logSd, u, out);
       return;
-    }
     case "truncated-normal": {
       const { mean, sd, min, max } = d;
       const a = (min - mean) / sd;
       const b = (max - mean) / sd;
       if (a < 0 && b > 0) {
         const lower = standardNormalCdf(a);
-        const mass = standardNormalCdf(b) - lower;
-        for (let i = 0; i < n; i++) {
-          const x = mean + sd * standardNormalQuantile(lower + u[i]! * mass);
-          out[i] = Math.min(max, Math.max(min, x));
-        }
+        truncatedNormalColumn(mean, sd, min, max, lower, standardNormalCdf(b) - lower, u, out);
         return;
       }
       break;
@@ -44,5 +35,35 @@ export function columnQuantiles(d: Distribution, u: Float64Array, out: Float64Ar
     default:
       break;
   }
-  for (let i = 0; i < n; i++) out[i] = quantileOf(d, u[i]!);
+  for (let i = 0; i < u.length; i++) out[i] = quantileOf(d, u[i]!);
+}
+
+// One small function per law, taking plain numbers: V8 optimises each loop on its own, and
+// the laws' differently shaped distribution objects never reach a hot loop (no
+// deoptimisation when a column of another law follows). Measured at 100,000 members with
+// 14 columns: about 2 ms less per set-up, same numbers.
+
+function normalColumn(mean: number, sd: number, u: Float64Array, out: Float64Array): void {
+  for (let i = 0; i < u.length; i++) out[i] = mean + sd * standardNormalQuantile(u[i]!);
+}
+
+function lognormalColumn(median: number, logSd: number, u: Float64Array, out: Float64Array): void {
+  for (let i = 0; i < u.length; i++) out[i] = median * Math.exp(logSd * standardNormalQuantile(u[i]!));
+}
+
+/** Φ⁻¹(lower + p·mass) scaled, clamped to [min, max]; lower = Φ(a), mass = Φ(b) − Φ(a). */
+function truncatedNormalColumn(
+  mean: number,
+  sd: number,
+  min: number,
+  max: number,
+  lower: number,
+  mass: number,
+  u: Float64Array,
+  out: Float64Array,
+): void {
+  for (let i = 0; i < u.length; i++) {
+    const x = mean + sd * standardNormalQuantile(lower + u[i]! * mass);
+    out[i] = Math.min(max, Math.max(min, x));
+  }
 }

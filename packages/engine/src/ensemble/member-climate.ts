@@ -1,4 +1,4 @@
-import { twoLayerPropagator } from "../climate/two-layer-propagator.js";
+import { PROPAGATOR_TERMS, twoLayerPropagator, twoLayerPropagatorInto } from "../climate/two-layer-propagator.js";
 import { SpecError } from "../spec/spec-error.js";
 import type { Allocate } from "./sample-inputs.js";
 
@@ -54,9 +54,13 @@ export function buildMemberClimate(columns: ClimateColumns, allocate: Allocate, 
   const out = allocateMemberClimate(columns, allocate);
   const n = out.ecs.length;
   const first = early ? Math.min(n, early.members) : 0;
-  fillMemberClimate(columns, out, 0, first);
+  const firstClean = fillMemberClimate(columns, out, 0, first);
   early?.filled(out);
-  fillMemberClimate(columns, out, first, n);
+  const restClean = fillMemberClimate(columns, out, first, n);
+  // Every member had positive inputs and a finite propagator, so neither check could refuse
+  // anything: skip their two passes over every column. Otherwise they find and word the
+  // first refusal, in their order.
+  if (firstClean && restClean) return out;
   checkClimateInputs(columns);
   checkMemberPropagators(columns, out);
   return out;
@@ -124,33 +128,52 @@ function propagatorInputs(columns: ClimateColumns, m: number, lambda: number) {
 
 /**
  * Members [lo, hi) of the propagators. Never throws: a member with a non-positive or
- * non-finite input or λ is left as it is (checkMemberPropagators refuses it). The check
- * runs after the loop, as plain comparisons, so the loop stays small.
+ * non-finite input or λ is left as it is (checkMemberPropagators refuses it). Returns true
+ * when no member was left out and every term written is finite, i.e. when the checks
+ * would pass; they run after the loop, so the loop stays small.
  */
-function fillMemberClimate(columns: ClimateColumns, out: MemberClimate, lo: number, hi: number): void {
+function fillMemberClimate(columns: ClimateColumns, out: MemberClimate, lo: number, hi: number): boolean {
+  const { ecs: ecsColumn, f2x: f2xColumn, upperHeatCapacity: cColumn, deepHeatCapacity: c0Column, heatExchange: gammaColumn, deepEfficacy: epsilonColumn } = columns;
+  const { a11, a12, a21, a22, b1, b2, r1, r2, lambda: lambdaColumn, extraUptake } = out;
+  const terms = new Float64Array(PROPAGATOR_TERMS);
+  let skipped = false;
+  // Sum of v − v over every term: 0 while all are finite, NaN for good once one is not
+  // (∞ − ∞ and NaN − NaN are NaN), so finiteness costs one add per term, no branch.
+  let notFinite = 0;
   for (let m = lo; m < hi; m++) {
-    const ecs = columns.ecs[m]!;
-    const f2x = columns.f2x[m]!;
-    const upperHeatCapacity = columns.upperHeatCapacity[m]!;
-    const deepHeatCapacity = columns.deepHeatCapacity[m]!;
-    const heatExchange = columns.heatExchange[m]!;
-    const deepEfficacy = columns.deepEfficacy[m]!;
-    if (!(isPositive(ecs) && isPositive(f2x) && isPositive(upperHeatCapacity) && isPositive(deepHeatCapacity) && isPositive(heatExchange) && isPositive(deepEfficacy)))
-      continue;
+    const ecs = ecsColumn[m]!;
+    const f2x = f2xColumn[m]!;
+    const upperHeatCapacity = cColumn[m]!;
+    const deepHeatCapacity = c0Column[m]!;
+    const heatExchange = gammaColumn[m]!;
+    const deepEfficacy = epsilonColumn[m]!;
     const lambda = f2x / ecs;
-    if (!isPositive(lambda)) continue;
-    const p = twoLayerPropagator({ lambda, upperHeatCapacity, deepHeatCapacity, heatExchange, deepEfficacy });
-    out.a11[m] = p.a11;
-    out.a12[m] = p.a12;
-    out.a21[m] = p.a21;
-    out.a22[m] = p.a22;
-    out.b1[m] = p.b1;
-    out.b2[m] = p.b2;
-    out.r1[m] = p.r1;
-    out.r2[m] = p.r2;
-    out.lambda[m] = lambda;
-    out.extraUptake[m] = (deepEfficacy - 1) * heatExchange;
+    if (!(isPositive(ecs) && isPositive(f2x) && isPositive(upperHeatCapacity) && isPositive(deepHeatCapacity) && isPositive(heatExchange) && isPositive(deepEfficacy) && isPositive(lambda))) {
+      skipped = true;
+      continue;
+    }
+    twoLayerPropagatorInto(lambda, upperHeatCapacity, deepHeatCapacity, heatExchange, deepEfficacy, terms);
+    const t0 = terms[0]!;
+    const t1 = terms[1]!;
+    const t2 = terms[2]!;
+    const t3 = terms[3]!;
+    const t4 = terms[4]!;
+    const t5 = terms[5]!;
+    const t6 = terms[6]!;
+    const t7 = terms[7]!;
+    a11[m] = t0;
+    a12[m] = t1;
+    a21[m] = t2;
+    a22[m] = t3;
+    b1[m] = t4;
+    b2[m] = t5;
+    r1[m] = t6;
+    r2[m] = t7;
+    notFinite += t0 - t0 + (t1 - t1) + (t2 - t2) + (t3 - t3) + (t4 - t4) + (t5 - t5) + (t6 - t6) + (t7 - t7);
+    lambdaColumn[m] = lambda;
+    extraUptake[m] = (deepEfficacy - 1) * heatExchange;
   }
+  return !skipped && notFinite === 0;
 }
 
 const isPositive = (v: number) => v > 0 && Number.isFinite(v);
