@@ -203,3 +203,11 @@ describe("parameter checks", () => {
     expect(() => stepResponse(CMIP5_LIKE, 1, -1)).toThrow("t must be a finite number ≥ 0");
   });
 });
+
+describe("extreme but valid parameters", () => {
+  it("give non-finite terms at once (never an endless scaling loop) when the system matrix overflows", () => {
+    // λ/C = 4e290 / 1e-25 overflows to Infinity: the matrix has no exponential to compute.
+    const p = twoLayerPropagator({ ...CMIP5_LIKE, lambda: 4e290, upperHeatCapacity: 1e-25 });
+    expect(Number.isFinite(p.a11) && Number.isFinite(p.b1)).toBe(false);
+  });
+});

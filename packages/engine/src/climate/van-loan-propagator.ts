@@ -25,6 +25,12 @@ export function vanLoanPropagatorInto(
     [0, 0, 0, 0],
   ];
   const norm = Math.max(...[0, 1, 2, 3].map((j) => m.reduce((sum, row) => sum + Math.abs(row[j]!), 0)));
+  // A matrix that overflowed has no exponential to scale: without this the squaring count
+  // would be infinite. Non-finite terms make the caller refuse the member.
+  if (!Number.isFinite(norm)) {
+    out.fill(NaN, 0, 8);
+    return;
+  }
   const squarings = Math.max(0, Math.ceil(Math.log2(norm / 0.5)));
   const scale = 2 ** -squarings;
   const scaled = m.map((row) => row.map((v) => v * scale));

@@ -90,6 +90,14 @@ describe("bad input is refused with a message naming the field", () => {
     );
   });
 
+  it("a climate whose one-year response overflows, naming the member (not an endless computation)", () => {
+    // λ = F2x/ECS = 4e290 over C = 1e-25 W yr m⁻² K⁻¹: the system matrix is not finite.
+    const climate = { ...model.climate, ecs: { type: "fixed" as const, value: 3.93 / 4e290 }, f2x: { type: "fixed" as const, value: 3.93 }, upperHeatCapacity: { type: "fixed" as const, value: 1e-25 } };
+    expect(refusal(baseSpec({ members: 20, model: { ...model, climate } })).message).toMatch(
+      /^model\.climate gives member 1 a climate whose one-year response is not finite/,
+    );
+  });
+
   it("horizons and the constraint window outside the pathway years", () => {
     expect(refusal(baseSpec({ horizons: [2200] })).message).toBe(
       "horizons[0] 2200 lies outside the pathway years 1750–2100 (pathways[0])",
