@@ -5,9 +5,9 @@ import { perilProfilesSchema, perilSpecIssues, portfolioSchema } from "./peril.j
 
 /**
  * Upper limit on ensemble size. Engine memory grows linearly with members; measured peak
- * RSS (2 worker threads, 2026-12-02, packages/engine/README.md "Performance"): 537–602 MB at
- * 1,000,000 members and 790–850 MB at 2,000,000 (W1 workload / every per-year summary). Each
- * extra horizon adds about 24 bytes and each threshold about 8 bytes per member.
+ * RSS (2 computing threads, 2026-12-02, packages/engine/README.md "Performance"): 440–564 MB
+ * at 1,000,000 members and 719–840 MB at 2,000,000 (W1 workload / every per-year summary).
+ * Each extra horizon adds about 24 bytes and each threshold about 8 bytes per member.
  */
 export const MAX_MEMBERS = 2_000_000;
 /** Longest pathway accepted, in years. */
