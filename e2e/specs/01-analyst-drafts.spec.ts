@@ -55,7 +55,7 @@ test("analyst uploads a pathway; a bad file is refused row by row", async ({ pag
 test("analyst drafts a wider aerosol–cloud range from the approved version and submits it", async ({ page }, testInfo) => {
   await signIn(page, "analyst");
   await openFromNav(page, "Model versions");
-  const approved = page.getByRole("row").filter({ hasText: seededVersionName }).filter({ hasText: "approved" });
+  const approved = page.getByRole("table", { name: "Model versions" }).getByRole("row").filter({ hasText: seededVersionName }).filter({ hasText: "approved" });
   await approved.getByRole("link", { name: seededVersionName }).click();
   await expect(page.getByRole("heading", { level: 1, name: `${seededVersionName} v1` })).toBeVisible();
   await page.getByRole("link", { name: "New draft from this" }).click();

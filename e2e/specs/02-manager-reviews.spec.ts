@@ -105,7 +105,7 @@ test("manager reads the diff, cannot decide their own version, approves the anal
 
   // The list now shows it approved, decided by this manager.
   await openFromNav(page, "Model versions");
-  const row = page.getByRole("row").filter({ hasText: names.widerDraft });
+  const row = page.getByRole("table", { name: "Model versions" }).getByRole("row").filter({ hasText: names.widerDraft });
   await expect(row).toContainText("approved");
   await expect(row).toContainText(demoUsers.manager.name);
 });

@@ -7,7 +7,7 @@ import { formatDate } from "@/lib/format";
 
 export function ModelVersionsTable({ versions }: { versions: ModelVersionSummary[] }) {
   return (
-    <Table>
+    <Table aria-label="Model versions">
       <thead>
         <tr>
           <Th>Version</Th>
