@@ -2,6 +2,9 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { signIn, type SignedInAgent } from "../../test-support/sign-in.js";
 import { createTestContext, type TestContext } from "../../test-support/test-context.js";
 import { testModelVersionBody, testPathwayBody, testRainfallProfileBody } from "../runs/runs.fixtures.js";
+import { createMigrator } from "../../db/migrate.js";
+import { requestUserOf } from "../../test-support/request-user.js";
+import { createModelVersion, decideModelVersion, submitModelVersion } from "./model-versions.service.js";
 
 let t: TestContext;
 let analyst: SignedInAgent;
@@ -55,5 +58,50 @@ describe("peril profiles pinned by a model version", () => {
     expect(optedOut.status).toBe(201);
     expect(optedOut.body.perilProfileIds).toEqual([]);
     expect((await actuary.get(`/api/runs/${optedOut.body.id}`)).body.manifest.spec.perils).toBeUndefined();
+  });
+});
+
+describe("the database refuses re-pinning the peril profiles of an approved version", () => {
+  // Checks the database itself (raw SQL, no service in the way) against the governance rule in
+  // /work/shared/DESIGN.md lines 23-24: only approved versions may feed filings, so what was
+  // approved - pinned peril profiles included - must stay what was approved (migration 0052).
+  const rawRepin = (id: string, ids: string[]) =>
+    t.ctx.sequelize
+      .query("UPDATE model_versions SET peril_profile_ids = :ids WHERE id = :id", { replacements: { id, ids: JSON.stringify(ids) } })
+      .then(() => null)
+      .catch((e: { parent?: Error }) => e.parent?.message ?? String(e));
+  const storedPins = async (id: string) => (await t.ctx.models.ModelVersion.findByPk(id))?.perilProfileIds;
+
+  let approvedId: string;
+  beforeAll(async () => {
+    const analystUser = await requestUserOf(t, "analyst");
+    const version = await createModelVersion(t.ctx, analystUser, testModelVersionBody({ name: "Pinned and approved", perilProfileIds: [profileId] }));
+    await submitModelVersion(t.ctx, analystUser, version.id, "minor");
+    await decideModelVersion(t.ctx, await requestUserOf(t, "manager"), version.id, "approved", "Profiles reviewed.");
+    approvedId = version.id;
+  });
+
+  it("aborts a raw UPDATE of peril_profile_ids on an approved version and keeps the pinned ids", async () => {
+    expect(await rawRepin(approvedId, [])).toMatch(/approved and retired model versions are immutable/);
+    expect(await storedPins(approvedId)).toEqual([profileId]);
+  });
+
+  it("still lets a draft's pins change (the trigger looks at the status, not the column alone)", async () => {
+    const draft = await createModelVersion(t.ctx, await requestUserOf(t, "analyst"), testModelVersionBody({ perilProfileIds: [profileId] }));
+    expect(await rawRepin(draft.id, [])).toBeNull();
+    expect(await storedPins(draft.id)).toEqual([]);
+  });
+
+  it("is reversible: down restores 0011's trigger (pins editable, notes still frozen), up refuses again", async () => {
+    const migrator = createMigrator(t.ctx.sequelize);
+    await migrator.down({ to: "0052-model-versions-frozen-perils" });
+    try {
+      const notes = await t.ctx.sequelize.query("UPDATE model_versions SET notes = 'raw' WHERE id = :id", { replacements: { id: approvedId } }).catch((e: { parent?: Error }) => e.parent?.message);
+      expect(notes).toMatch(/immutable/);
+      expect(await rawRepin(approvedId, [profileId, profileId])).toBeNull();
+    } finally {
+      await migrator.up();
+    }
+    expect(await rawRepin(approvedId, [profileId])).toMatch(/immutable/);
   });
 });
