@@ -46,6 +46,19 @@ export async function createContext(config: Config): Promise<AppContext> {
   const auth = createAuth({
     config,
     models,
+    // Mirrors the failure row (same "auth." family, same client field: the IP only) so the two
+    // read side by side; the user is known here, so they are the actor and the entity.
+    onSignIn: async ({ userId, email, ipAddress }) => {
+      await recordAudit({ models }, {
+        actorId: userId,
+        actorEmail: email,
+        action: "auth.signed-in",
+        entityType: "user",
+        entityId: userId,
+        summary: `${email} signed in.`,
+        data: { ipAddress },
+      });
+    },
     onSignInFailure: async (failure) => {
       await recordAudit({ models }, {
         actorId: null,

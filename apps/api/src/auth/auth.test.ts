@@ -44,6 +44,34 @@ describe("sign-in (better-auth on the Sequelize adapter)", () => {
     expect((rows[0]!.data as { ipAddress: string }).ipAddress).toMatch(/127\.0\.0\.1|::1/);
   });
 
+  it("appends an auth.signed-in row per successful sign-in, readable by an admin through GET /api/audit", async () => {
+    // Checks the governance rule in /work/shared/JOB.md ("append-only audit log", "Read the
+    // audit trail"): a sign-in is who-did-what too. The row must hold the person and their IP like
+    // a failure row does, and nothing of the password or the session token.
+    const manager = demoUser("manager");
+    const res = await request(t.app)
+      .post("/api/auth/sign-in/email")
+      .set("Origin", TEST_ORIGIN)
+      .send({ email: manager.email, password: manager.password });
+    expect(res.status).toBe(200);
+    const admin = await signIn(t.app, "admin");
+    const audit = await admin.get(`/api/audit?action=auth.signed-in&actorId=${t.userIds.manager}`);
+    expect(audit.status).toBe(200);
+    expect(audit.body.total).toBe(1);
+    const row = audit.body.items[0];
+    expect(row).toMatchObject({ actorEmail: manager.email, entityType: "user", entityId: t.userIds.manager });
+    expect(row.data.ipAddress).toMatch(/127\.0\.0\.1|::1/);
+    const token = await t.ctx.models.Session.findOne({ where: { userId: t.userIds.manager }, order: [["createdAt", "DESC"]] });
+    expect(token).not.toBeNull();
+    const stored = JSON.stringify(row);
+    expect(stored).not.toContain(manager.password);
+    expect(stored).not.toContain(token!.token);
+    // The admin's own sign-in above is recorded too; a refused one is not counted as a sign-in.
+    expect((await admin.get(`/api/audit?action=auth.signed-in&actorId=${t.userIds.admin}`)).body.total).toBe(1);
+    await request(t.app).post("/api/auth/sign-in/email").set("Origin", TEST_ORIGIN).send({ email: manager.email, password: "not-the-password" });
+    expect((await admin.get(`/api/audit?action=auth.signed-in&actorId=${t.userIds.manager}`)).body.total).toBe(1);
+  });
+
   it("refuses sign-up: only admins create accounts", async () => {
     const res = await request(t.app)
       .post("/api/auth/sign-up/email")

@@ -15,9 +15,17 @@ export interface SignInFailure {
   ipAddress: string | null;
 }
 
+/** A sign-in that opened a session; deliberately nothing of the password or the session token. */
+export interface SignInSuccess {
+  userId: string;
+  email: string;
+  ipAddress: string | null;
+}
+
 export interface CreateAuthOptions {
   config: Config;
   models: Models;
+  onSignIn: (success: SignInSuccess) => Promise<void>;
   onSignInFailure: (failure: SignInFailure) => Promise<void>;
   onPasswordChanged: (userId: string) => Promise<void>;
 }
@@ -27,7 +35,7 @@ export interface CreateAuthOptions {
  * stored in SQLite through our Sequelize adapter, roles through the admin plugin.
  * Mounted by app.ts at /api/auth/*splat.
  */
-export function createAuth({ config, models, onSignInFailure, onPasswordChanged }: CreateAuthOptions) {
+export function createAuth({ config, models, onSignIn, onSignInFailure, onPasswordChanged }: CreateAuthOptions) {
   const secureCookies = config.publicOrigin.startsWith("https://");
   return betterAuth({
     appName: "Plumeline",
@@ -36,7 +44,7 @@ export function createAuth({ config, models, onSignInFailure, onPasswordChanged 
     secret: config.authSecret,
     trustedOrigins: config.trustedOrigins,
     telemetry: { enabled: false },
-    // Failed sign-ins are audited; better-auth's own warning per bad password is noise in tests.
+    // Sign-ins are audited (failed ones too); better-auth's own warning per bad password is noise in tests.
     logger: { level: config.env === "test" ? "error" : "warn" },
     database: sequelizeAdapter({
       models: { user: models.User, session: models.Session, account: models.Account, verification: models.Verification },
@@ -72,12 +80,20 @@ export function createAuth({ config, models, onSignInFailure, onPasswordChanged 
           return;
         }
         if (ctx.path !== "/sign-in/email") return;
-        if (!isAPIError(returned)) return;
+        const ipAddress = ctx.request?.headers.get(CLIENT_IP_HEADER) ?? null;
+        if (!isAPIError(returned)) {
+          // Here rather than in a session-create database hook: only this path is a person
+          // signing in (impersonation and password changes also create sessions).
+          // `newSession` is what better-auth just set the cookie for.
+          const signedIn = ctx.context.newSession;
+          if (signedIn) await onSignIn({ userId: signedIn.user.id, email: signedIn.user.email, ipAddress });
+          return;
+        }
         const body = (ctx.body ?? {}) as { email?: unknown };
         await onSignInFailure({
           email: typeof body.email === "string" ? body.email.toLowerCase().slice(0, 254) : null,
           reason: returned.body?.code ?? returned.message ?? String(returned.status),
-          ipAddress: ctx.request?.headers.get(CLIENT_IP_HEADER) ?? null,
+          ipAddress,
         });
       }),
     },
