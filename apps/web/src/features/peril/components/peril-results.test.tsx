@@ -25,14 +25,14 @@ describe("PerilResults", () => {
     expect(screen.queryByRole("table", { name: /Return periods/ })).toBeNull(); // severity: no return periods
   });
 
-  it("draws the projected AAL bands where the axis puts the percentiles, with today's AAL as reference", () => {
+  it("draws the projected AAL ranges where the axis puts the percentiles, with today's AAL as reference", () => {
     const { container } = render(<PerilResults result={perilResultFixture()} baselineRows={baselineRows} />);
     const y = tickMap(container, "y");
     const h2100 = container.querySelector('[data-horizon="2100"]')!;
-    const outer = h2100.querySelector('[data-band="p5-p95"]')!;
-    expect(Number(outer.getAttribute("y"))).toBeCloseTo(y(1300), 6);
-    expect(Number(outer.getAttribute("y")) + Number(outer.getAttribute("height"))).toBeCloseTo(y(1050), 6);
-    expect(Number(h2100.querySelector('[data-band="p50"]')!.getAttribute("y1"))).toBeCloseTo(y(1150), 6);
+    const whisker = h2100.querySelector('[data-range="p5-p95"]')!;
+    expect(Number(whisker.getAttribute("y1"))).toBeCloseTo(y(1300), 6);
+    expect(Number(whisker.getAttribute("y2"))).toBeCloseTo(y(1050), 6);
+    expect(Number(h2100.querySelector('[data-point="p50"]')!.getAttribute("cy"))).toBeCloseTo(y(1150), 6);
     expect(Number(container.querySelector('[data-testid="baseline-aal"] line')!.getAttribute("y1"))).toBeCloseTo(y(1000), 6);
   });
 
