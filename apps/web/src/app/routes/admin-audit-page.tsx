@@ -19,7 +19,7 @@ export default function AdminAuditPage() {
   const audit = useAudit({ ...filter, limit: PAGE, offset });
   return (
     <>
-      <PageHeader kicker="Admin" title="Audit log" description="Append-only, with who and when: state changes (drafts, submissions, approvals and rejections, retirements, runs, uploads), exports, invitations and role changes, and failed sign-ins. Successful sign-ins are not recorded." />
+      <PageHeader kicker="Admin" title="Audit log" description="Append-only, with who and when: state changes (drafts, submissions, approvals and rejections, retirements, runs, uploads), exports, invitations and role changes, and every sign-in (auth.signed-in) or refused sign-in (auth.sign-in-failed), with the IP address." />
       <AdminTabs permissions={me.data?.permissions ?? []} />
       <Card className="mb-4">
         <CardBody>
