@@ -6,7 +6,7 @@ import type { AuditFilter } from "../api/get-audit";
 export type AuditFilterFields = Omit<AuditFilter, "limit" | "offset">;
 
 const FIELDS: Array<[keyof AuditFilterFields, string, string]> = [
-  ["action", "Action", "e.g. model-version.approve"],
+  ["action", "Action", "e.g. model-version.approved"],
   ["entityType", "Entity type", "e.g. run"],
   ["entityId", "Entity id", ""],
   ["actorId", "Actor id", ""],
