@@ -1,21 +1,51 @@
-import { Link } from "react-router-dom";
+import type { ReactNode } from "react";
+import type { UseQueryResult } from "@tanstack/react-query";
 import { paths } from "@/config/paths";
+import { PERMISSION_HOLDERS } from "@/config/permissions";
 import { ButtonLink } from "@/components/ui/button";
 import { Card, CardHeader } from "@/components/ui/card";
 import { Cautions } from "@/components/ui/cautions";
 import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState, ErrorState, LoadingState } from "@/components/ui/states";
-import { Table, Td, Th } from "@/components/ui/table";
-import { formatDate } from "@/lib/format";
 import { usePerilProfiles } from "../api/get-peril-profiles";
 import { usePortfolios } from "../api/get-portfolios";
 import { PerilProfilesTable } from "../components/peril-profiles-table";
+import { PortfoliosTable } from "../components/portfolios-table";
 import type { PerilViewer } from "./viewer";
+
+/**
+ * One card's list in its four states. The loading and error texts name the list, because the
+ * two cards load independently and a bare "Loading…" or "Something went wrong" would not say
+ * which of them is meant.
+ */
+function ListBody<T>({
+  query,
+  noun,
+  empty,
+  children,
+}: {
+  query: UseQueryResult<T[]>;
+  noun: string;
+  empty: ReactNode;
+  children: (rows: T[]) => ReactNode;
+}) {
+  if (query.isPending) return <LoadingState label={`Loading ${noun}…`} />;
+  if (query.isError)
+    return (
+      <div className="p-4">
+        <ErrorState error={query.error} title={`The ${noun} could not be loaded`} retry={() => query.refetch()} />
+      </div>
+    );
+  if (query.data.length === 0) return <div className="p-4">{empty}</div>;
+  return <>{children(query.data)}</>;
+}
 
 /** Peril profiles and portfolio baselines (the peril lens), with the way in to the editors. */
 export function PerilLensRoute({ viewer }: { viewer: PerilViewer }) {
   const profiles = usePerilProfiles();
   const portfolios = usePortfolios();
+  // Read-only roles cannot fill an empty list themselves; say who can instead of offering a button.
+  const whoAdds = `Only ${PERMISSION_HOLDERS["perils:write"]} can add them.`;
   return (
     <>
       <PageHeader
@@ -39,64 +69,51 @@ export function PerilLensRoute({ viewer }: { viewer: PerilViewer }) {
       <div className="flex flex-col gap-6">
         <Card>
           <CardHeader title="Peril profiles" subtitle="A locked profile is used by a run or an approved model version; copy it to change it." />
-          {profiles.isPending ? (
-            <LoadingState />
-          ) : profiles.isError ? (
-            <div className="p-4">
-              <ErrorState error={profiles.error} />
-            </div>
-          ) : profiles.data.length === 0 ? (
-            <div className="p-4">
-              <EmptyState title="No peril profiles yet" />
-            </div>
-          ) : (
-            <PerilProfilesTable profiles={profiles.data} />
-          )}
+          <ListBody
+            query={profiles}
+            noun="peril profiles"
+            empty={
+              <EmptyState
+                title="No peril profiles yet"
+                action={
+                  viewer.canWrite && (
+                    <ButtonLink to={paths.perilProfileNew.build()} variant="secondary">
+                      Write the first profile
+                    </ButtonLink>
+                  )
+                }
+              >
+                A profile says how one peril in one region scales with warming (a rate per kelvin or a table). Runs apply the chosen profiles to
+                their warming percentiles. {viewer.canWrite ? "" : whoAdds}
+              </EmptyState>
+            }
+          >
+            {(rows) => <PerilProfilesTable profiles={rows} />}
+          </ListBody>
         </Card>
         <Card>
           <CardHeader title="Portfolio baselines" />
-          {portfolios.isPending ? (
-            <LoadingState />
-          ) : portfolios.isError ? (
-            <div className="p-4">
-              <ErrorState error={portfolios.error} />
-            </div>
-          ) : portfolios.data.length === 0 ? (
-            <div className="p-4">
-              <EmptyState title="No portfolios yet" />
-            </div>
-          ) : (
-            <Table aria-label="Portfolio baselines">
-              <thead>
-                <tr>
-                  <Th>Portfolio</Th>
-                  <Th numeric>Rows</Th>
-                  <Th>Regions</Th>
-                  <Th>Perils</Th>
-                  <Th>Currencies</Th>
-                  <Th>Checksum</Th>
-                  <Th>Added</Th>
-                </tr>
-              </thead>
-              <tbody>
-                {portfolios.data.map((p) => (
-                  <tr key={p.id}>
-                    <Td className="font-medium">
-                      <Link to={paths.portfolio.build(p.id)} className="text-accent hover:underline">
-                        {p.name}
-                      </Link>
-                    </Td>
-                    <Td numeric>{p.rowCount}</Td>
-                    <Td className="text-xs">{p.regions.join(", ")}</Td>
-                    <Td className="text-xs">{p.perils.join(", ")}</Td>
-                    <Td className="text-xs">{p.currencies.join(", ")}</Td>
-                    <Td className="font-mono text-xs text-muted">{p.checksum.slice(0, 12)}…</Td>
-                    <Td className="text-muted">{formatDate(p.createdAt)}</Td>
-                  </tr>
-                ))}
-              </tbody>
-            </Table>
-          )}
+          <ListBody
+            query={portfolios}
+            noun="portfolio baselines"
+            empty={
+              <EmptyState
+                title="No portfolios yet"
+                action={
+                  viewer.canWrite && (
+                    <ButtonLink to={paths.portfolioUpload.build()} variant="secondary">
+                      Upload a portfolio
+                    </ButtonLink>
+                  )
+                }
+              >
+                A portfolio baseline holds the firm's own AAL and 1-in-100 and 1-in-200 losses per region and peril (CSV or XLSX). Without one, a run
+                shows multipliers and return periods but no projected losses. {viewer.canWrite ? "" : whoAdds}
+              </EmptyState>
+            }
+          >
+            {(rows) => <PortfoliosTable portfolios={rows} />}
+          </ListBody>
         </Card>
       </div>
     </>

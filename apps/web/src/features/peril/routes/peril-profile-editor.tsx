@@ -1,4 +1,5 @@
 import { useMemo, useState } from "react";
+import { useQueryClient } from "@tanstack/react-query";
 import { useNavigate, useParams } from "react-router-dom";
 import type { PerilProfileBody, PerilProfileRecord } from "@plumeline/contracts";
 import { paths } from "@/config/paths";
@@ -6,13 +7,16 @@ import { Button, ButtonLink } from "@/components/ui/button";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
 import { PanelErrorBoundary } from "@/components/ui/panel-error-boundary";
-import { ErrorState, InlineError, LoadingState, Spinner } from "@/components/ui/states";
+import { EmptyState, ErrorState, LoadingState, Spinner } from "@/components/ui/states";
 import { isApiError } from "@/lib/api-error";
 import { usePerilCurvePreview } from "../api/get-peril-curve";
-import { usePerilProfile } from "../api/get-peril-profile";
+import { getPerilProfileQueryOptions, usePerilProfile } from "../api/get-peril-profile";
 import { useCopyPerilProfile, useCreatePerilProfile, useDeletePerilProfile, useUpdatePerilProfile } from "../api/save-peril-profile";
+import { PerilActionError } from "../components/peril-action-error";
 import { PerilCurveChart } from "../components/peril-curve-chart";
 import { PerilProfileForm } from "../components/peril-profile-form";
+import { PerilRecordError } from "../components/peril-record-error";
+import { ProfileStatusNote } from "../components/profile-status-note";
 import { draftFromRecord, emptyDraft, toProfileBody, type ProfileDraft } from "../lib/profile-draft";
 import { useDebouncedValue } from "../lib/use-debounced-value";
 import type { PerilViewer } from "./viewer";
@@ -31,14 +35,9 @@ function previewBody(body: PerilProfileBody | null): PerilProfileBody | null {
   return { ...body, name: body.name.trim() || "Draft", region: body.region.trim() || "Draft" };
 }
 
-function lockReason(p: PerilProfileRecord): string {
-  const versions = p.lockedBy.modelVersions.map((v) => `${v.status} model version “${v.name}” v${v.versionNumber}`);
-  const runs = p.lockedBy.runIds.length ? [`${p.lockedBy.runIds.length} run${p.lockedBy.runIds.length === 1 ? "" : "s"}`] : [];
-  return [...versions, ...runs].join(" and ");
-}
-
 function Editor({ record, viewer }: { record: PerilProfileRecord | undefined; viewer: PerilViewer }) {
   const navigate = useNavigate();
+  const queryClient = useQueryClient();
   const [draft, setDraft] = useState<ProfileDraft>(() => (record ? draftFromRecord(record) : emptyDraft()));
   const settled = useDebouncedValue(draft);
   const parsed = useMemo(() => toProfileBody(settled), [settled]);
@@ -58,17 +57,28 @@ function Editor({ record, viewer }: { record: PerilProfileRecord | undefined; vi
   async function save() {
     const out = toProfileBody(draft);
     if (!out.body) return;
-    const saved = record ? await update.mutateAsync({ id: record.id, body: out.body }) : await create.mutateAsync(out.body);
+    const saved = await (record ? update.mutateAsync({ id: record.id, body: out.body }) : create.mutateAsync(out.body)).catch((e: unknown) => {
+      // Locked or handed over since the page opened: re-read the record so the form turns
+      // read-only and the note says why, instead of inviting the same refused save again.
+      if (record && isApiError(e) && (e.status === 409 || e.status === 403)) void queryClient.invalidateQueries({ queryKey: getPerilProfileQueryOptions(record.id).queryKey });
+      return null;
+    });
+    if (!saved) return;
     navigate(paths.perilProfile.build(saved.id), { replace: !record });
   }
   async function copyIt() {
     if (!record) return;
-    const created = await copy.mutateAsync({ id: record.id });
+    const created = await copy.mutateAsync({ id: record.id }).catch(() => null);
+    if (!created) return;
     navigate(paths.perilProfile.build(created.id));
   }
   async function deleteIt() {
     if (!record || !window.confirm(`Delete the peril profile “${record.name}”?`)) return;
-    await remove.mutateAsync(record.id);
+    const removed = await remove.mutateAsync(record.id).then(
+      () => true,
+      () => false,
+    );
+    if (!removed) return;
     navigate(paths.perils.build());
   }
 
@@ -96,17 +106,10 @@ function Editor({ record, viewer }: { record: PerilProfileRecord | undefined; vi
           </>
         }
       />
-      {record?.locked && (
-        <p role="status" className="mb-4 rounded-md border border-line-strong bg-surface-2 px-4 py-2 text-sm">
-          Locked: used by {lockReason(record)}. It stays as it is so those records can be reproduced; copy it to make changes.
-        </p>
-      )}
-      {record && !record.locked && !owner && viewer.canWrite && (
-        <p role="status" className="mb-4 rounded-md border border-line bg-surface-2 px-4 py-2 text-sm">
-          Made by {record.createdByName ?? "someone else"}: only they can edit it. Copy it to make your own.
-        </p>
-      )}
-      <InlineError error={copy.error ?? remove.error} />
+      <ProfileStatusNote record={record} canWrite={viewer.canWrite} owner={owner} />
+      <div className="mb-4 empty:hidden">
+        <PerilActionError error={copy.error ?? remove.error} />
+      </div>
       <div className="grid gap-6 xl:grid-cols-[1fr_1fr]">
         <Card>
           <CardHeader title="Profile" />
@@ -115,11 +118,14 @@ function Editor({ record, viewer }: { record: PerilProfileRecord | undefined; vi
             {!readOnly && (
               <div className="mt-4 flex items-center gap-3">
                 <Button onClick={save} disabled={create.isPending || update.isPending || toProfileBody(draft).body === null}>
-                  {record ? "Save changes" : "Create profile"}
+                  {create.isPending || update.isPending ? "Saving…" : record ? "Save changes" : "Create profile"}
                 </Button>
-                {saveError && <InlineError error={saveError} />}
               </div>
             )}
+            {/* Outside the editable branch: a refused save that turned the form read-only still says why. */}
+            <div className="mt-4 empty:hidden">
+              <PerilActionError error={saveError} />
+            </div>
           </CardBody>
         </Card>
         <Card>
@@ -130,11 +136,14 @@ function Editor({ record, viewer }: { record: PerilProfileRecord | undefined; vi
                 <PerilCurveChart curve={curve.data} />
               ) : curve.isError ? (
                 <ErrorState error={curve.error} title="The preview needs a valid profile" />
+              ) : parsed.body === null ? (
+                // No request is made for a draft with a field that is not a number, so waiting would never end.
+                <EmptyState title="No curve yet">Fill in the marked fields with numbers to draw the multiplier curve.</EmptyState>
               ) : (
                 <LoadingState label="Drawing the curve…" />
               )}
             </PanelErrorBoundary>
-            {curve.data && curve.isError && <p className="mt-2 text-xs text-danger">The curve shows the last valid draft; fix the marked fields.</p>}
+            {curve.data && (curve.isError || parsed.body === null) && <p className="mt-2 text-xs text-danger">The curve shows the last valid draft; fix the marked fields.</p>}
           </CardBody>
         </Card>
       </div>
@@ -147,6 +156,6 @@ export function PerilProfileEditorRoute({ viewer }: { viewer: PerilViewer }) {
   const { profileId } = useParams();
   const existing = usePerilProfile(profileId);
   if (profileId && existing.isPending) return <LoadingState label="Loading profile…" />;
-  if (profileId && existing.isError) return <ErrorState error={existing.error} retry={() => existing.refetch()} />;
+  if (profileId && existing.isError) return <PerilRecordError noun="peril profile" error={existing.error} retry={() => existing.refetch()} />;
   return <Editor key={profileId ?? "new"} record={existing.data} viewer={viewer} />;
 }

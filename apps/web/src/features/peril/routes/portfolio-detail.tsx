@@ -3,9 +3,10 @@ import { paths } from "@/config/paths";
 import { ButtonLink } from "@/components/ui/button";
 import { Card, CardHeader } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
-import { ErrorState, LoadingState } from "@/components/ui/states";
+import { LoadingState } from "@/components/ui/states";
 import { formatDateTime } from "@/lib/format";
 import { usePortfolio } from "../api/get-portfolio";
+import { PerilRecordError } from "../components/peril-record-error";
 import { PortfolioRowsTable } from "../components/portfolio-rows-table";
 
 /** One portfolio baseline: its rows and where they came from (file, checksum, who, when). */
@@ -13,7 +14,7 @@ export function PortfolioDetailRoute() {
   const { portfolioId } = useParams();
   const portfolio = usePortfolio(portfolioId);
   if (portfolio.isPending) return <LoadingState label="Loading portfolio…" />;
-  if (portfolio.isError) return <ErrorState error={portfolio.error} retry={() => portfolio.refetch()} />;
+  if (portfolio.isError) return <PerilRecordError noun="portfolio" error={portfolio.error} retry={() => portfolio.refetch()} />;
   const p = portfolio.data;
   return (
     <>

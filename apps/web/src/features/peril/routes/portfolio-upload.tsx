@@ -50,7 +50,7 @@ export function PortfolioUploadRoute() {
       <div className="flex flex-col gap-6">
         <Card>
           <CardBody className="grid gap-4 sm:grid-cols-2">
-            <Field label="File (.csv or .xlsx)" hint="Header row: region, peril, currency, aal, loss100, loss200 (any order).">
+            <Field label="File (.csv or .xlsx)" hint="Header row: region, peril, currency, aal, loss100, loss200 (any order). At most 1 MB.">
               {(a) => (
                 <Input
                   {...a}
@@ -73,11 +73,12 @@ export function PortfolioUploadRoute() {
             </Field>
             <div className="flex gap-3 sm:col-span-2">
               <Button variant="secondary" onClick={runCheck} disabled={!file || check.isPending}>
-                Check file
+                {check.isPending ? "Reading file…" : "Check file (nothing is saved)"}
               </Button>
               <Button onClick={save} disabled={!file || !preview || !name.trim() || upload.isPending}>
-                Save portfolio
+                {upload.isPending ? "Saving…" : "Save portfolio"}
               </Button>
+              {!preview && file && !check.isPending && !error && <p className="self-center text-xs text-muted">Check the file before saving it.</p>}
             </div>
           </CardBody>
         </Card>
