@@ -21,7 +21,7 @@
   (import "env" "memory" (memory 1 65536 shared))
 
   ;; The plan's per-member arrays, as addresses at these offsets of a "frame" (an Int32Array
-  ;; of the plan, block-kernels.ts writes it): the propagator [[a11 a12] [a21 a22]], [b1 b2]
+  ;; of the plan written by ensemble/kernel-layout.ts): the propagator [[a11 a12] [a21 a22]], [b1 b2]
   ;; (exact one-year step, two-layer-propagator.ts), the state, the baseline and window sums,
   ;; the next threshold, λ and (ε − 1)γ for the imbalance, and the list of crossing members.
   ;;   0 a11   4 a12   8 a21  12 a22  16 b1  20 b2  24 upper  28 deep  32 baselineMean
