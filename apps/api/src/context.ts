@@ -7,6 +7,7 @@ import { startEmbeddedSmtpServer, type EmbeddedSmtpServer } from "./mail/embedde
 import { createMailer, type Mailer } from "./mail/mailer.js";
 import { recordAudit } from "./modules/audit/audit.service.js";
 import { storeReceivedMail } from "./modules/outbox/outbox.service.js";
+import { mailPasswordReset, recordPasswordReset } from "./modules/users/password-reset.service.js";
 
 /** Everything a service needs, built once per process (or per test file). Never req/res. */
 export interface AppContext {
@@ -76,6 +77,8 @@ export async function createContext(config: Config): Promise<AppContext> {
         await recordAudit({ models }, { actorId: userId, action: "user.password-changed", entityType: "user", entityId: userId, summary: "Password changed." }, transaction);
       });
     },
+    onPasswordResetRequested: async (request) => mailPasswordReset({ config, models, mailer, sequelize }, request),
+    onPasswordReset: (userId) => recordPasswordReset({ config, models, mailer, sequelize }, userId),
   });
   const steps: Array<() => Promise<void> | void> = [];
   const ctx: AppContext = { config, sequelize, models, auth, mailer, smtp, onClose: (step) => void steps.push(step) };

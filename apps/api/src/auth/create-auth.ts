@@ -1,6 +1,7 @@
 import { betterAuth } from "better-auth";
 import { createAuthMiddleware, isAPIError } from "better-auth/api";
 import { admin } from "better-auth/plugins";
+import { ACCOUNT_DEACTIVATED_MESSAGE } from "@plumeline/contracts";
 import type { Config } from "../config.js";
 import type { Models } from "../db/models.js";
 import { accessControl, authRoles } from "./access-control.js";
@@ -28,14 +29,30 @@ export interface CreateAuthOptions {
   onSignIn: (success: SignInSuccess) => Promise<void>;
   onSignInFailure: (failure: SignInFailure) => Promise<void>;
   onPasswordChanged: (userId: string) => Promise<void>;
+  /** better-auth made a one-time reset token for a known address; mail it (or not: deactivated users get nothing). */
+  onPasswordResetRequested: (request: PasswordResetRequest) => Promise<void>;
+  /** The token was used and the password replaced; better-auth has already ended the user's sessions. */
+  onPasswordReset: (userId: string) => Promise<void>;
 }
+
+export interface PasswordResetRequest {
+  userId: string;
+  email: string;
+  name: string;
+  banned: boolean;
+  token: string;
+}
+
+/** How long a mailed reset link works; better-auth's default (an hour), stated here so the mail can say it. */
+export const RESET_TOKEN_SECONDS = 60 * 60;
 
 /**
  * The better-auth instance: email + password only, sign-up disabled (admins invite), sessions
- * stored in SQLite through our Sequelize adapter, roles through the admin plugin.
+ * stored in SQLite through our Sequelize adapter, roles and deactivation (its ban) through the
+ * admin plugin, forgotten passwords through better-auth's own mailed one-time reset token.
  * Mounted by app.ts at /api/auth/*splat.
  */
-export function createAuth({ config, models, onSignIn, onSignInFailure, onPasswordChanged }: CreateAuthOptions) {
+export function createAuth({ config, models, onSignIn, onSignInFailure, onPasswordChanged, onPasswordResetRequested, onPasswordReset }: CreateAuthOptions) {
   const secureCookies = config.publicOrigin.startsWith("https://");
   return betterAuth({
     appName: "Plumeline",
@@ -55,13 +72,32 @@ export function createAuth({ config, models, onSignIn, onSignInFailure, onPasswo
         mustChangePassword: { type: "boolean", required: false, defaultValue: false, input: false },
       },
     },
-    emailAndPassword: { enabled: true, disableSignUp: true, minPasswordLength: 10, maxPasswordLength: 128 },
+    emailAndPassword: {
+      enabled: true,
+      disableSignUp: true,
+      minPasswordLength: 10,
+      maxPasswordLength: 128,
+      resetPasswordTokenExpiresIn: RESET_TOKEN_SECONDS,
+      // Whoever knew the old password may hold a session; a reset ends them all.
+      revokeSessionsOnPasswordReset: true,
+      sendResetPassword: async ({ user, token }) => {
+        const { banned } = user as { banned?: boolean | null };
+        await onPasswordResetRequested({ userId: user.id, email: user.email, name: user.name, banned: Boolean(banned), token });
+      },
+      onPasswordReset: async ({ user }) => {
+        await onPasswordReset(user.id);
+      },
+    },
     session: { expiresIn: 60 * 60 * 12, updateAge: 60 * 60 },
     rateLimit: {
       enabled: true,
       window: 60,
       max: 300,
-      customRules: { "/sign-in/email": { window: 60, max: config.signInRateLimit } },
+      // Reset requests send mail, so they get the sign-in limit too (no flooding an inbox).
+      customRules: {
+        "/sign-in/email": { window: 60, max: config.signInRateLimit },
+        "/request-password-reset": { window: 60, max: config.signInRateLimit },
+      },
     },
     advanced: {
       // better-auth skips its origin/CSRF check under test runners by default; keep it on everywhere.
@@ -70,7 +106,16 @@ export function createAuth({ config, models, onSignIn, onSignInFailure, onPasswo
       useSecureCookies: secureCookies,
       defaultCookieAttributes: { httpOnly: true, sameSite: "lax", secure: secureCookies },
     },
-    plugins: [admin({ ac: accessControl, roles: authRoles, defaultRole: "analyst", adminRoles: ["admin"] })],
+    plugins: [
+      admin({
+        ac: accessControl,
+        roles: authRoles,
+        defaultRole: "analyst",
+        adminRoles: ["admin"],
+        // Plumeline calls a ban "deactivation" (users.routes.ts); the sign-in page shows this text.
+        bannedUserMessage: ACCOUNT_DEACTIVATED_MESSAGE,
+      }),
+    ],
     hooks: {
       // Runs after every auth endpoint, also when it failed: `returned` then holds the error.
       after: createAuthMiddleware(async (ctx) => {

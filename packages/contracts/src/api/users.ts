@@ -11,6 +11,8 @@ export const userSchema = z.object({
   name: z.string(),
   role: roleSchema,
   createdAt: z.string(),
+  /** Deactivated by an admin: cannot sign in; their runs, versions and audit rows stay theirs. */
+  deactivated: z.boolean(),
 });
 export type User = z.infer<typeof userSchema>;
 
@@ -27,3 +29,9 @@ export const updateUserBodySchema = z.object({ role: roleSchema });
 export type UpdateUserBody = z.infer<typeof updateUserBodySchema>;
 
 export const userIdParamsSchema = z.object({ id: z.string().min(1) });
+
+/**
+ * What a deactivated person is told when they try to sign in. The API hands it to better-auth
+ * (its banned-user message) and the web shows it for the BANNED_USER code, so both say the same.
+ */
+export const ACCOUNT_DEACTIVATED_MESSAGE = "This account is deactivated; ask an administrator.";

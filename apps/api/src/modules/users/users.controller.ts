@@ -1,6 +1,8 @@
 import type { InviteUserBody, UpdateUserBody } from "@plumeline/contracts";
+import { fromNodeHeaders } from "better-auth/node";
 import type { Request, Response } from "express";
 import { contextOf, currentUser } from "../../middleware/request-context.js";
+import { deactivateUser, reactivateUser } from "./user-status.service.js";
 import { changeRole, inviteUser, listUsers } from "./users.service.js";
 
 export const usersController = {
@@ -13,5 +15,13 @@ export const usersController = {
   async update(req: Request, res: Response) {
     const { id } = req.params as { id: string };
     res.json(await changeRole(contextOf(req), currentUser(req), id, (req.body as UpdateUserBody).role));
+  },
+  async deactivate(req: Request, res: Response) {
+    const { id } = req.params as { id: string };
+    res.json(await deactivateUser(contextOf(req), currentUser(req), id, fromNodeHeaders(req.headers)));
+  },
+  async reactivate(req: Request, res: Response) {
+    const { id } = req.params as { id: string };
+    res.json(await reactivateUser(contextOf(req), currentUser(req), id, fromNodeHeaders(req.headers)));
   },
 };

@@ -16,3 +16,6 @@ usersRouter.patch(
   validate({ params: userIdParamsSchema, body: updateUserBodySchema }),
   usersController.update,
 );
+// Deactivation keeps the person's history; only signing in stops (user-status.service.ts).
+usersRouter.post("/:id/deactivate", authenticate, requirePermission("users:manage"), validate({ params: userIdParamsSchema }), usersController.deactivate);
+usersRouter.post("/:id/reactivate", authenticate, requirePermission("users:manage"), validate({ params: userIdParamsSchema }), usersController.reactivate);

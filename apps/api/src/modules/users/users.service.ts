@@ -95,5 +95,5 @@ export async function changeRole(ctx: UsersContext, actor: RequestUser, id: stri
 }
 
 export function toUser(row: UserModel): User {
-  return { id: row.id, email: row.email, name: row.name, role: row.role, createdAt: row.createdAt.toISOString() };
+  return { id: row.id, email: row.email, name: row.name, role: row.role, createdAt: row.createdAt.toISOString(), deactivated: Boolean(row.banned) };
 }

@@ -20,7 +20,7 @@ describe("GET /api/users", () => {
     const res = await admin.get("/api/users");
     expect(res.status).toBe(200);
     expect(res.body.map((u: { email: string }) => u.email)).toEqual(expect.arrayContaining([demoUser("analyst").email, demoUser("manager2").email]));
-    expect(res.body[0]).toEqual({ id: expect.any(String), email: expect.any(String), name: expect.any(String), role: expect.any(String), createdAt: expect.any(String) });
+    expect(res.body[0]).toEqual({ id: expect.any(String), email: expect.any(String), name: expect.any(String), role: expect.any(String), createdAt: expect.any(String), deactivated: false });
   });
 
   it("answers 401 without a session", async () => {
