@@ -4,9 +4,12 @@ import { InlineError } from "@/components/ui/states";
 import { Table, Td, Th } from "@/components/ui/table";
 import { formatDate } from "@/lib/format";
 import { useChangeUserRole } from "../api/save-user";
+import { useSetUserStatus } from "../api/set-user-status";
+import { UserStatusAction, UserStatusBadge } from "./user-status";
 
 export function UsersTable({ users, currentUserId }: { users: User[]; currentUserId: string }) {
   const change = useChangeUserRole();
+  const status = useSetUserStatus();
   return (
     <>
       <Table>
@@ -16,6 +19,10 @@ export function UsersTable({ users, currentUserId }: { users: User[]; currentUse
             <Th>Email</Th>
             <Th>Role</Th>
             <Th>Since</Th>
+            <Th>Status</Th>
+            <Th>
+              <span className="sr-only">Actions</span>
+            </Th>
           </tr>
         </thead>
         <tbody>
@@ -38,11 +45,23 @@ export function UsersTable({ users, currentUserId }: { users: User[]; currentUse
                 </Select>
               </Td>
               <Td className="text-muted">{formatDate(u.createdAt)}</Td>
+              <Td>
+                <UserStatusBadge deactivated={u.deactivated} />
+              </Td>
+              <Td>
+                <UserStatusAction
+                  user={u}
+                  isSelf={u.id === currentUserId}
+                  saving={status.isPending && status.variables?.id === u.id}
+                  onSetStatus={(deactivated) => status.mutate({ id: u.id, deactivated })}
+                />
+              </Td>
             </tr>
           ))}
         </tbody>
       </Table>
       <InlineError error={change.error} />
+      <InlineError error={status.error} />
     </>
   );
 }
