@@ -27,3 +27,25 @@ describe("DecisionPanel", () => {
     await vi.waitFor(() => expect(server.calls[0]).toMatchObject({ method: "POST", path: "/api/model-versions/mv-2/reject", body: { comment: "Aerosol range too narrow" } }));
   });
 });
+
+describe("DecisionPanel after a decision", () => {
+  it("says what the approval did and does not offer the approval comment as the reason to retire", async () => {
+    const server = stubFetch((req) => (req.method === "POST" ? { body: modelVersion({ status: "approved" }) } : undefined));
+    const { rerender } = renderWithClient(<DecisionPanel version={modelVersion()} currentUserId="u-manager" />);
+    fireEvent.change(screen.getByLabelText("Comment"), { target: { value: "Ranges match the cited sources" } });
+    fireEvent.click(screen.getByRole("button", { name: "Approve" }));
+    await vi.waitFor(() => expect(server.calls).toHaveLength(1));
+    // The page re-renders the panel with the approved version it now holds.
+    rerender(<DecisionPanel version={modelVersion({ status: "approved" })} currentUserId="u-manager" />);
+    await vi.waitFor(() => expect(screen.getByRole("status")).toHaveTextContent(/^Approved\. The author was mailed/));
+    expect(screen.getByLabelText("Why retire it (optional)")).toHaveValue("");
+    expect(screen.getByRole("link", { name: "Back to the desk" })).toHaveAttribute("href", "/");
+  });
+
+  it("shows no outcome before anything was decided", () => {
+    stubFetch(() => undefined);
+    renderWithClient(<DecisionPanel version={modelVersion({ status: "approved" })} currentUserId="u-manager" />);
+    expect(screen.queryByRole("status")).toBeNull();
+    expect(screen.getByRole("button", { name: "Retire version" })).toBeEnabled();
+  });
+});
