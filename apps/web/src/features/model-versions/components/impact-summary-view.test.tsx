@@ -54,4 +54,15 @@ describe("ImpactSummaryView", () => {
     expect(note).toHaveTextContent("±2.2 points");
     expect(note).toHaveTextContent("Computed in 3.2 s");
   });
+
+  it("greys a change that rounds to zero instead of flagging a '+0.00 K' warming", () => {
+    // Same seed and same ECS range: the sampled ECS median moves by 0.001 K, which shows as 0.00.
+    const base = impactFixture();
+    render(<ImpactSummaryView impact={{ ...base, differences: { ...base.differences, ecs: { medianShift: 0.001, widthChange: 0.5 } } }} />);
+    const ecs = rowOf(screen.getByRole("table", { name: "Implied climate sensitivity" }), "Equilibrium climate sensitivity (ECS)");
+    const [, , , median, width] = within(ecs).getAllByRole("cell");
+    expect(median).toHaveTextContent("±0.00 K (no change)");
+    expect(median!.firstElementChild!.className).toContain("text-muted");
+    expect(width!.firstElementChild!.className).toContain("text-danger"); // a real widening stays red
+  });
 });

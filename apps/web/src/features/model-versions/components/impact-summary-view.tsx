@@ -9,16 +9,21 @@ const signed = (v: number, digits = 2) => `${v > 0 ? "+" : v < 0 ? "−" : "±"}
 const band = (set: PercentileSet | undefined) =>
   set ? `${formatKelvin(set.p50)} (${formatKelvin(set.p5)}–${formatKelvin(set.p95)})` : "–";
 
-/** A difference, highlighted when it is larger than the preview's Monte Carlo noise. */
-function Shift({ value, noise, unit, digits = 2 }: { value: number; noise: number | null; unit: string; digits?: number }) {
-  const beyond = noise === null || Math.abs(value) > noise;
+/**
+ * A difference, highlighted when it is larger than the preview's Monte Carlo noise. A change
+ * that rounds to zero at the shown precision is no change: it reads "±0.00" in grey, never a
+ * red "+0.00" that a reviewer would take for a warming.
+ */
+function Shift({ value: raw, noise, unit, digits = 2 }: { value: number; noise: number | null; unit: string; digits?: number }) {
+  const value = Number(raw.toFixed(digits)) === 0 ? 0 : raw;
+  const beyond = value !== 0 && (noise === null || Math.abs(value) > noise);
   return (
     <span
       className={cx("num rounded px-1 whitespace-nowrap", beyond && value > 0 && "bg-danger-soft font-semibold text-danger", beyond && value < 0 && "bg-ok-soft font-semibold text-ok", !beyond && "text-muted")}
       title={noise === null ? undefined : beyond ? `Larger than the preview noise (±${noise.toFixed(digits)} ${unit})` : `Within the preview noise (±${noise.toFixed(digits)} ${unit})`}
     >
       {signed(value, digits)} {unit}
-      {!beyond && <span className="sr-only"> (within preview noise)</span>}
+      {value === 0 ? <span className="sr-only"> (no change)</span> : !beyond && <span className="sr-only"> (within preview noise)</span>}
     </span>
   );
 }
