@@ -1,4 +1,7 @@
+import { useState } from "react";
+import { Link } from "react-router-dom";
 import { RESULT_TABLES } from "@plumeline/contracts";
+import { paths } from "@/config/paths";
 import { buttonClass } from "@/components/ui/button";
 import { ExploratoryStamp } from "@/components/ui/badges";
 import { tableCsvUrl, workbookUrl } from "../api/export-urls";
@@ -21,7 +24,13 @@ export function ExportPanel({
   hasPerils: boolean;
   onExported?: () => void;
 }) {
-  const later = () => window.setTimeout(() => onExported?.(), 1500);
+  // A download gives no sign inside the page (the browser may save it silently), so the panel
+  // says which file was asked for and where its record with the checksum will be.
+  const [requested, setRequested] = useState<string>();
+  const later = (file: string) => {
+    setRequested(file);
+    window.setTimeout(() => onExported?.(), 1500);
+  };
   return (
     <div className="flex flex-col gap-3 text-sm">
       {exploratory && (
@@ -30,7 +39,7 @@ export function ExportPanel({
         </p>
       )}
       {canWorkbook ? (
-        <a href={workbookUrl(runId)} download className={buttonClass("primary", "md", "self-start")} onClick={later}>
+        <a href={workbookUrl(runId)} download className={buttonClass("primary", "md", "self-start")} onClick={() => later("Workbook (.xlsx)")}>
           <svg aria-hidden viewBox="0 0 16 16" className="h-4 w-4" fill="none" stroke="currentColor" strokeWidth="1.6">
             <path d="M8 2v8M4.5 6.5 8 10l3.5-3.5M3 13h10" />
           </svg>
@@ -43,12 +52,21 @@ export function ExportPanel({
         <p className="mb-1 text-xs font-medium uppercase tracking-wider text-muted">CSV tables</p>
         <div className="flex flex-wrap gap-1.5">
           {RESULT_TABLES.filter((t) => hasPerils || !t.startsWith("peril")).map((t) => (
-            <a key={t} href={tableCsvUrl(runId, t)} download className={buttonClass("secondary", "sm")} onClick={later}>
+            <a key={t} href={tableCsvUrl(runId, t)} download className={buttonClass("secondary", "sm")} onClick={() => later(`${t}.csv`)}>
               {t}.csv
             </a>
           ))}
         </div>
       </div>
+      {requested && (
+        <p role="status" className="text-xs text-muted">
+          {requested} requested: your browser saves it. Every download is recorded with its checksum on{" "}
+          <Link to={paths.exports.build()} className="font-medium text-accent hover:underline">
+            Exports
+          </Link>
+          .
+        </p>
+      )}
     </div>
   );
 }
