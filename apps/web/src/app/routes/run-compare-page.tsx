@@ -1,6 +1,8 @@
 import { useSearchParams } from "react-router-dom";
 import { useRuns } from "@/features/runs/api/get-runs";
+import { useRun } from "@/features/runs/api/get-run";
 import { useRunResult } from "@/features/runs/api/get-run-result";
+import { runBaseline } from "@/features/runs/lib/compare-baseline";
 import { CompareView } from "@/features/runs/components/compare-view";
 import { Card, CardBody } from "@/components/ui/card";
 import { Cautions } from "@/components/ui/cautions";
@@ -19,6 +21,9 @@ export default function RunComparePage() {
   const pb = params.get("pb") ?? "";
   const ra = useRunResult(a || undefined);
   const rb = useRunResult(b || undefined);
+  // The manifests carry each run's baseline, which the shared warming axis must name.
+  const manifestA = useRun(a || undefined);
+  const manifestB = useRun(b || undefined);
   const set = (k: string, v: string) =>
     setParams((prev) => {
       const next = new URLSearchParams(prev);
@@ -93,8 +98,8 @@ export default function RunComparePage() {
               <Card>
                 <CardBody>
                   <CompareView
-                    a={{ label: runA?.name ?? "Left", result: ra.data, pathwayId: pa || ra.data.pathways[0]!.id }}
-                    b={{ label: runB?.name ?? "Right", result: rb.data, pathwayId: pb || rb.data.pathways[0]!.id }}
+                    a={{ label: runA?.name ?? "Left", result: ra.data, pathwayId: pa || ra.data.pathways[0]!.id, baseline: runBaseline(manifestA.data) }}
+                    b={{ label: runB?.name ?? "Right", result: rb.data, pathwayId: pb || rb.data.pathways[0]!.id, baseline: runBaseline(manifestB.data) }}
                   />
                 </CardBody>
               </Card>

@@ -2,12 +2,15 @@ import type { RunResult } from "@plumeline/contracts";
 import { FanChart, fanYDomain } from "@/components/charts/fan-chart";
 import { PercentileStrips, type PercentileStrip } from "@/components/charts/percentile-strips";
 import { seriesColor } from "@/components/charts/palette";
+import { compareAxis } from "../lib/compare-baseline";
 import { hasFanPercentiles, toFanSeries } from "../lib/result-adapters";
 
 export interface CompareSide {
   label: string;
   result: RunResult;
   pathwayId: string;
+  /** From the run's manifest; unknown while it loads. */
+  baseline?: [number, number];
 }
 
 /**
@@ -20,6 +23,7 @@ export function CompareView({ a, b, fromYear = 1850 }: { a: CompareSide; b: Comp
   if (!pa || !pb) return null;
   if (!hasFanPercentiles(pa.temperature) || !hasFanPercentiles(pb.temperature))
     return <p className="text-sm text-muted">Comparison needs the 5/17/50/83/95 percentiles in both results.</p>;
+  const axis = compareAxis(a.baseline, b.baseline);
   const sa = { ...toFanSeries(pa), id: "a", name: `${a.label}: ${pa.name}`, color: seriesColor(0) };
   const sb = { ...toFanSeries(pb), id: "b", name: `${b.label}: ${pb.name}`, color: seriesColor(1) };
   // On one chart the right side is drawn as outlines with a dashed median, so the two
@@ -39,16 +43,22 @@ export function CompareView({ a, b, fromYear = 1850 }: { a: CompareSide; b: Comp
   );
   return (
     <div className="flex flex-col gap-6">
+      {axis.mismatch && (
+        <p role="note" className="rounded-md border border-ember-400 bg-ember-50 px-3 py-2 text-sm text-ember-800">
+          The two runs measure warming from different baselines ({a.baseline!.join("–")} and {b.baseline!.join("–")}): equal heights on these charts are not equal
+          warming. Compare runs made with the same baseline for figures to quote.
+        </p>
+      )}
       <div className="grid gap-6 xl:grid-cols-2">
         {[sa, sb].map((s) => (
-          <FanChart key={s.id} title={s.name} series={[s]} yLabel="Warming above baseline (K)" unit="K" fromYear={fromYear} toYear={toYear} yDomain={shared} height={320} />
+          <FanChart key={s.id} title={s.name} series={[s]} yLabel={axis.label} unit="K" fromYear={fromYear} toYear={toYear} yDomain={shared} height={320} />
         ))}
       </div>
       <FanChart
         title="Both on one chart"
         description="Left: filled bands, solid median. Right: outlined bands, dashed median. Inner band 17–83 %, outer 5–95 % (dotted edge when outlined). Hover or use arrow keys to read a year."
         series={[sa, sbOutlined]}
-        yLabel="Warming above baseline (K)"
+        yLabel={axis.label}
         unit="K"
         fromYear={fromYear}
         toYear={toYear}
@@ -60,7 +70,7 @@ export function CompareView({ a, b, fromYear = 1850 }: { a: CompareSide; b: Comp
           title="Warming at the shared horizons"
           description={`Left: ${sa.name}. Right: ${sb.name}.`}
           strips={strips}
-          axisLabel="Warming above baseline (K)"
+          axisLabel={axis.label}
         />
       )}
     </div>
