@@ -84,7 +84,15 @@ export function AxisLeftBand({ scale, labelWidth }: { scale: ScaleBand<string>; 
     <g className="axis axis-band">
       {scale.domain().map((d) => (
         <text key={d} x={-8} y={(scale(d) ?? 0) + scale.bandwidth() / 2} dy="0.32em" textAnchor="end" className="fill-text text-[12px]">
-          {d.length > labelWidth / 6.5 ? `${d.slice(0, Math.floor(labelWidth / 6.5) - 1)}…` : d}
+          {d.length > labelWidth / 6.5 ? (
+            <>
+              {/* A cut label keeps its full name for hover and for screen readers. */}
+              <title>{d}</title>
+              {`${d.slice(0, Math.floor(labelWidth / 6.5) - 1)}…`}
+            </>
+          ) : (
+            d
+          )}
         </text>
       ))}
     </g>

@@ -5,6 +5,7 @@ import { CrossingHistogram, crossingBins, crossingBinsPerYear } from "./crossing
 import { ExceedanceChart } from "./exceedance-chart";
 import { ForcingBreakdownChart } from "./forcing-breakdown-chart";
 import { ForcingStackChart } from "./forcing-stack-chart";
+import { inputLabel } from "@/lib/input-labels";
 import { SensitivityBars } from "./sensitivity-bars";
 
 describe("ExceedanceChart", () => {
@@ -128,5 +129,12 @@ describe("SensitivityBars", () => {
     );
     const order = [...container.querySelectorAll("[data-input]")].map((g) => g.getAttribute("data-input"));
     expect(order).toEqual(["ecs", "aerosol-cloud", "f2x"]);
+  });
+
+  it("prints the longest input name in full instead of cutting it", () => {
+    // Longest label inputLabel() makes: an agent name from contracts' AGENT_LABELS plus " scale".
+    const { container } = render(<SensitivityBars title="Sensitivity" horizon={2100} bars={[{ input: "other-wmghg", label: inputLabel("other-wmghg"), index: 0.04 }]} />);
+    const labels = [...container.querySelectorAll(".axis-band text")].map((t) => t.textContent);
+    expect(labels).toEqual(["Other well-mixed gases scale"]);
   });
 });

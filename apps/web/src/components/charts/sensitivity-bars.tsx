@@ -17,7 +17,9 @@ export interface SensitivityBar {
 export function SensitivityBars({ title, horizon, bars, indexLabel = "Rank correlation with warming (–1 to 1)" }: { title: string; horizon: number; bars: SensitivityBar[]; indexLabel?: string }) {
   const [ref, width] = useChartWidth<HTMLDivElement>();
   const sorted = [...bars].sort((a, b) => Math.abs(b.index) - Math.abs(a.index));
-  const labelWidth = 170;
+  // Wide enough for the longest input name the budget can hold, "Other well-mixed gases scale"
+  // (28 characters at the axis's ~6.5 px each), so no driver is cut to an ellipsis.
+  const labelWidth = 190;
   const m = { top: 8, right: 48, bottom: 44, left: labelWidth };
   const rowH = 24;
   const innerHeight = Math.max(1, sorted.length) * rowH;
