@@ -4,6 +4,8 @@ import { paths } from "@/config/paths";
 import { Table, Td, Th } from "@/components/ui/table";
 import { formatDate } from "@/lib/format";
 
+const agentNames = (p: PathwaySummary) => p.agents.map((a) => AGENT_LABELS[a as ForcingAgent] ?? a).join(", ");
+
 export function PathwaysTable({ pathways }: { pathways: PathwaySummary[] }) {
   return (
     <Table>
@@ -31,16 +33,23 @@ export function PathwaysTable({ pathways }: { pathways: PathwaySummary[] }) {
               )}
               {p.description && <p className="mt-0.5 line-clamp-1 text-xs text-muted">{p.description}</p>}
             </Td>
-            <Td className="max-w-80 text-xs text-muted">
+            {/* "Where it came from" is the column analysts read: it gets the room, and the
+                vintage wraps instead of taking a third of a laptop-wide table. */}
+            <Td className="min-w-64 max-w-96 text-xs text-muted">
               <span className="line-clamp-3" title={p.source}>
                 {p.source}
               </span>
             </Td>
-            <Td className="whitespace-nowrap">{p.vintage}</Td>
+            <Td className="min-w-32 max-w-48">{p.vintage}</Td>
             <Td numeric className="whitespace-nowrap">
               {p.startYear}–{p.endYear}
             </Td>
-            <Td className="text-xs text-muted">{p.agents.map((a) => AGENT_LABELS[a as ForcingAgent] ?? a).join(", ")}</Td>
+            {/* The count reads at a glance; the names stay, clamped, with the full list on hover. */}
+            <Td className="min-w-40 max-w-56 text-xs text-muted">
+              <span className="line-clamp-2" title={agentNames(p)}>
+                <span className="font-medium text-text">{p.agents.length}:</span> {agentNames(p)}
+              </span>
+            </Td>
             <Td className="whitespace-nowrap text-muted">{formatDate(p.createdAt)}</Td>
           </tr>
         ))}
