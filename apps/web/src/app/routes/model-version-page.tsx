@@ -8,6 +8,7 @@ import { DiffTable } from "@/features/model-versions/components/diff-table";
 import { ImpactPanel } from "@/features/model-versions/components/impact-panel";
 import { PinnedPerilProfilesList, profileNames } from "@/features/model-versions/components/pinned-peril-profiles";
 import { usePerilProfiles } from "@/features/peril/api/get-peril-profiles";
+import { ReviewWaitNote } from "@/features/model-versions/components/review-wait-note";
 import { SubmitPanel } from "@/features/model-versions/components/submit-panel";
 import { StatusBadge } from "@/components/ui/badges";
 import { ButtonLink } from "@/components/ui/button";
@@ -64,6 +65,7 @@ export default function ModelVersionPage() {
           </>
         }
       />
+      <ReviewWaitNote version={v} isAuthor={own} />
       {(v.decisionComment || v.submissionNote) && (
         <Card className="mb-6">
           <CardBody className="grid gap-3 text-sm md:grid-cols-2">
