@@ -9,11 +9,17 @@ export function Table({ className, ...props }: HTMLAttributes<HTMLTableElement>)
   );
 }
 
+/**
+ * A column heading; with scope="row" a row heading, which sits in the body and so takes the
+ * body's hairline rule instead of the heading row's strong one (otherwise the first column's
+ * separators stand out darker than the rest of the row).
+ */
 export function Th({ className, numeric, ...props }: ThHTMLAttributes<HTMLTableCellElement> & { numeric?: boolean }) {
   return (
     <th
       className={cx(
-        "border-b border-line-strong px-3 py-2 text-left text-xs font-semibold uppercase tracking-wider text-muted",
+        "border-b px-3 py-2 text-left text-xs font-semibold uppercase tracking-wider text-muted",
+        props.scope === "row" ? "border-line" : "border-line-strong",
         numeric && "text-right",
         className,
       )}
