@@ -24,6 +24,18 @@ export const routes: RouteObject[] = [
     HydrateFallback: () => <LoadingState label="Loading…" />,
   },
   {
+    path: paths.forgotPassword.path,
+    lazy: async () => ({ Component: (await import("./routes/forgot-password-page")).default }),
+    errorElement: <RouteErrorBoundary />,
+    HydrateFallback: () => <LoadingState label="Loading…" />,
+  },
+  {
+    path: paths.resetPassword.path,
+    lazy: async () => ({ Component: (await import("./routes/reset-password-page")).default }),
+    errorElement: <RouteErrorBoundary />,
+    HydrateFallback: () => <LoadingState label="Loading…" />,
+  },
+  {
     element: <AppShell />,
     errorElement: <RouteErrorBoundary />,
     HydrateFallback: () => <LoadingState label="Loading…" />,

@@ -20,7 +20,14 @@ const qs = (params: Record<string, string | undefined>) => {
 };
 
 export const paths = {
-  signIn: route({ path: "/sign-in", build: (next?: string, expired?: boolean) => `/sign-in${qs({ next, expired: expired ? "1" : undefined })}` }),
+  signIn: route({
+    path: "/sign-in",
+    build: (next?: string, expired?: boolean, passwordReset?: boolean) =>
+      `/sign-in${qs({ next, expired: expired ? "1" : undefined, reset: passwordReset ? "1" : undefined })}`,
+  }),
+  // Signed-out pages of the mailed password reset; the API's mail links to resetPassword with ?token=.
+  forgotPassword: route({ path: "/forgot-password", build: () => "/forgot-password" }),
+  resetPassword: route({ path: "/reset-password", build: (token?: string) => `/reset-password${qs({ token })}` }),
   desk: route({ path: "/", build: () => "/" }),
 
   pathways: route({ path: "/pathways", build: () => "/pathways", permission: "pathways:read", purpose: "Reading pathways" }),

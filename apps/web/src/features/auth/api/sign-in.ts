@@ -1,4 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { ACCOUNT_DEACTIVATED_MESSAGE } from "@plumeline/contracts";
 import { authClient } from "@/lib/auth-client";
 import { ApiError } from "@/lib/api-error";
 import { getMeQueryOptions } from "./get-me";
@@ -15,11 +16,14 @@ export async function signIn({ email, password }: SignInInput): Promise<void> {
     throw new ApiError(
       status,
       error.code ?? "sign_in_failed",
-      status === 401 || status === 400
-        ? "Email or password is not right."
-        : status === 429
-          ? "Too many sign-in attempts. Wait a minute, then try again."
-          : (error.message ?? "Sign-in failed"),
+      // better-auth's code for its admin-plugin ban, which Plumeline calls deactivation.
+      error.code === "BANNED_USER"
+        ? ACCOUNT_DEACTIVATED_MESSAGE
+        : status === 401 || status === 400
+          ? "Email or password is not right."
+          : status === 429
+            ? "Too many sign-in attempts. Wait a minute, then try again."
+            : (error.message ?? "Sign-in failed"),
     );
   }
 }

@@ -4,11 +4,12 @@ import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
 import { InlineError } from "@/components/ui/states";
 import { useChangePassword } from "../api/change-password";
+import { NEW_PASSWORD_HINT, newPasswordSchema } from "../password-rules";
 
 export const changePasswordSchema = z
   .object({
     currentPassword: z.string().min(1, "Enter the password from your invitation mail"),
-    newPassword: z.string().min(10, "Use at least 10 characters").max(128, "Use at most 128 characters"),
+    newPassword: newPasswordSchema,
     repeat: z.string(),
   })
   .refine((v) => v.newPassword === v.repeat, { path: ["repeat"], message: "The two new passwords differ" })
@@ -40,7 +41,7 @@ export function ChangePasswordForm() {
         <Field label="Password from the invitation" error={errors.currentPassword}>
           {(p) => <Input {...p} name="currentPassword" type="password" autoComplete="current-password" />}
         </Field>
-        <Field label="New password" error={errors.newPassword} hint="At least 10 characters.">
+        <Field label="New password" error={errors.newPassword} hint={NEW_PASSWORD_HINT}>
           {(p) => <Input {...p} name="newPassword" type="password" autoComplete="new-password" />}
         </Field>
         <Field label="Repeat new password" error={errors.repeat}>

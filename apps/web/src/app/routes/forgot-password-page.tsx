@@ -1,0 +1,2 @@
+import { ForgotPasswordRoute } from "@/features/auth/routes/forgot-password";
+export default ForgotPasswordRoute;

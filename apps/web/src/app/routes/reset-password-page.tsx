@@ -1,0 +1,2 @@
+import { ResetPasswordRoute } from "@/features/auth/routes/reset-password";
+export default ResetPasswordRoute;
