@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { formatFixed, formatNumber, formatPercent, percentileHeading } from "./format";
+import { formatFixed, formatNumber, formatPercent, formatProbability, percentileHeading } from "./format";
 
 // Expected strings follow Number.prototype.toFixed (ECMAScript spec: -0.0004.toFixed(3) is "-0.000"),
 // with the minus dropped only where the rounded value is zero.
@@ -29,5 +29,18 @@ describe("percentileHeading", () => {
   });
   it("handles 1st, 2nd, 11th–13th and 99.5th", () => {
     expect(["p1", "p2", "p11", "p12", "p13", "p21", "p99.5"].map(percentileHeading)).toEqual(["1st pct", "2nd pct", "11th pct", "12th pct", "13th pct", "21st pct", "99.5th pct"]);
+  });
+});
+
+// Shares of ensemble members: 24 of 5,000 members is 0.48 %, 4,997 of 5,000 is 99.94 %.
+describe("formatProbability", () => {
+  it("keeps a rare but possible outcome visible instead of rounding it to 0 % or 100 %", () => {
+    expect(formatProbability(24 / 5000)).toBe("< 1 %");
+    expect(formatProbability(4997 / 5000)).toBe("> 99 %");
+  });
+
+  it("prints exact none, exact all and ordinary shares as whole percents", () => {
+    expect([0, 1, 0.005, 0.2132, 0.9949].map(formatProbability)).toEqual(["0 %", "100 %", "1 %", "21 %", "99 %"]);
+    expect(formatProbability(undefined)).toBe("–");
   });
 });

@@ -19,6 +19,18 @@ export const formatNumber = (v: number | null | undefined, digits = 2) =>
 export const formatPercent = (share: number | null | undefined, digits = 0) =>
   share === null || share === undefined || !Number.isFinite(share) ? "–" : `${formatFixed(share * 100, digits)} %`;
 
+/**
+ * A probability as a whole percent that never rounds a possibility away: 0.48 % reads "< 1 %",
+ * not "0 %" (which says it cannot happen), and 99.94 % reads "> 99 %", not "100 %" (which says
+ * it must). Only an exact 0 or 1 — no member or every member — prints as 0 % or 100 %.
+ */
+export function formatProbability(share: number | null | undefined): string {
+  if (share === null || share === undefined || !Number.isFinite(share)) return "–";
+  if (share > 0 && share < 0.005) return "< 1 %";
+  if (share < 1 && share >= 0.995) return "> 99 %";
+  return formatPercent(share, 0);
+}
+
 export const formatInteger = (v: number | null | undefined) =>
   v === null || v === undefined || !Number.isFinite(v) ? "–" : Math.round(v).toLocaleString("en-GB");
 

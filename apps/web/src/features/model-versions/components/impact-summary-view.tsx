@@ -1,7 +1,7 @@
 import type { ImpactSide, ModelVersionImpact, PercentileSet, SpreadChange } from "@plumeline/contracts";
 import { Table, Td, Th } from "@/components/ui/table";
 import { cx } from "@/components/ui/cx";
-import { formatInteger, formatKelvin, formatPercent } from "@/lib/format";
+import { formatInteger, formatKelvin, formatProbability } from "@/lib/format";
 import { exceedanceHalfWidth, shiftNoise, widestMedianHalfWidth } from "../lib/impact-precision";
 
 const label = (side: ImpactSide) => `${side.version.name} v${side.version.versionNumber}`;
@@ -90,8 +90,8 @@ function ExceedanceTable({ impact }: { impact: ModelVersionImpact }) {
               <tr key={`${d.year}-${key}`}>
                 <Td className="num">{d.year}</Td>
                 <Td numeric>&gt; {threshold} K</Td>
-                <Td numeric>{formatPercent(againstByYear.get(d.year)?.exceedance[key])}</Td>
-                <Td numeric>{formatPercent(impact.version.horizons.find((h) => h.year === d.year)?.exceedance[key])}</Td>
+                <Td numeric>{formatProbability(againstByYear.get(d.year)?.exceedance[key])}</Td>
+                <Td numeric>{formatProbability(impact.version.horizons.find((h) => h.year === d.year)?.exceedance[key])}</Td>
                 <Td numeric>{change === undefined ? "–" : <Shift value={change * 100} noise={noise * 100} unit="pts" digits={1} />}</Td>
               </tr>
             );

@@ -1,7 +1,7 @@
 import type { PathwayResult } from "@plumeline/contracts";
 import { Table, Td, Th } from "@/components/ui/table";
 import { PercentileNote } from "@/components/ui/percentile-note";
-import { formatPercent, percentileHeading } from "@/lib/format";
+import { formatProbability, percentileHeading } from "@/lib/format";
 import { percentileKeys } from "../lib/result-adapters";
 
 /**
@@ -55,7 +55,7 @@ export function HorizonTable({ pathway, unit = "K" }: { pathway: PathwayResult; 
               })}
               {thresholds.map((t) => (
                 <Td key={t} numeric>
-                  {formatPercent(h.exceedance[t], 0)}
+                  {formatProbability(h.exceedance[t])}
                 </Td>
               ))}
               <Td numeric>{h.committed.p50?.toFixed(2) ?? "–"}</Td>
