@@ -5,6 +5,7 @@ import { Field, Input, Select } from "@/components/ui/field";
 import { ErrorState } from "@/components/ui/states";
 import { isApiError } from "@/lib/api-error";
 import { useInviteUser } from "../api/save-user";
+import { fieldErrors } from "@/lib/field-errors";
 
 type Name = "email" | "name" | "role";
 
@@ -18,8 +19,9 @@ export function InviteUserForm() {
     const form = e.currentTarget;
     const parsed = inviteUserBodySchema.safeParse(Object.fromEntries(new FormData(form)));
     if (!parsed.success) {
-      const next: typeof errors = {};
-      for (const i of parsed.error.issues) next[i.path[0] as Name] ??= i.path[0] === "email" ? "Enter a valid email address" : i.message;
+      const next = fieldErrors<Name>(parsed.error);
+      // The contract gives zod's generic email messages (written for API clients); people get a plainer one.
+      if (next.email) next.email = "Enter a valid email address";
       setErrors(next);
       return;
     }

@@ -5,6 +5,7 @@ import { Field, Input } from "@/components/ui/field";
 import { InlineError } from "@/components/ui/states";
 import { useChangePassword } from "../api/change-password";
 import { NEW_PASSWORD_HINT, newPasswordSchema } from "../password-rules";
+import { fieldErrors } from "@/lib/field-errors";
 
 export const changePasswordSchema = z
   .object({
@@ -25,9 +26,7 @@ export function ChangePasswordForm() {
     e.preventDefault();
     const parsed = changePasswordSchema.safeParse(Object.fromEntries(new FormData(e.currentTarget)));
     if (!parsed.success) {
-      const next: typeof errors = {};
-      for (const i of parsed.error.issues) next[i.path[0] as Name] ??= i.message;
-      setErrors(next);
+      setErrors(fieldErrors<Name>(parsed.error));
       return;
     }
     setErrors({});

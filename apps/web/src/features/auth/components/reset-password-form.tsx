@@ -5,6 +5,7 @@ import { Field, Input } from "@/components/ui/field";
 import { InlineError } from "@/components/ui/states";
 import { useResetPassword } from "../api/reset-password";
 import { NEW_PASSWORD_HINT, newPasswordSchema } from "../password-rules";
+import { fieldErrors } from "@/lib/field-errors";
 
 export const resetPasswordSchema = z
   .object({ newPassword: newPasswordSchema, repeat: z.string() })
@@ -21,9 +22,7 @@ export function ResetPasswordForm({ token, onDone }: { token: string; onDone: ()
     e.preventDefault();
     const parsed = resetPasswordSchema.safeParse(Object.fromEntries(new FormData(e.currentTarget)));
     if (!parsed.success) {
-      const next: typeof errors = {};
-      for (const i of parsed.error.issues) next[i.path[0] as Name] ??= i.message;
-      setErrors(next);
+      setErrors(fieldErrors<Name>(parsed.error));
       return;
     }
     setErrors({});

@@ -4,6 +4,7 @@ import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
 import { InlineError } from "@/components/ui/states";
 import { useSignIn } from "../api/sign-in";
+import { fieldErrors } from "@/lib/field-errors";
 
 export const signInSchema = z.object({
   email: z.string().trim().min(1, "Enter your email address").email("Enter a valid email address"),
@@ -19,9 +20,7 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
     const data = Object.fromEntries(new FormData(e.currentTarget));
     const parsed = signInSchema.safeParse(data);
     if (!parsed.success) {
-      const next: typeof errors = {};
-      for (const issue of parsed.error.issues) next[issue.path[0] as "email" | "password"] ??= issue.message;
-      setErrors(next);
+      setErrors(fieldErrors<"email" | "password">(parsed.error));
       return;
     }
     setErrors({});

@@ -6,6 +6,7 @@ import { ErrorState } from "@/components/ui/states";
 import { isApiError } from "@/lib/api-error";
 import { PathwayPreviewTable } from "./pathway-preview-table";
 import { usePreviewPathwayUpload, useUploadPathway, type PathwayUploadInput } from "../api/upload-pathway";
+import { fieldErrors } from "@/lib/field-errors";
 
 type FieldName = "file" | "name" | "source" | "vintage" | "description";
 const MAX_BYTES = 5 * 1024 * 1024;
@@ -24,9 +25,8 @@ export function PathwayUploadForm({ onSaved }: { onSaved: (p: Pathway) => void }
     const data = new FormData(form);
     const file = data.get("file");
     const meta = { name: data.get("name"), source: data.get("source"), vintage: data.get("vintage"), description: data.get("description") ?? "" };
-    const next: Partial<Record<FieldName, string>> = {};
     const parsed = pathwayMetadataSchema.safeParse(meta);
-    if (!parsed.success) for (const i of parsed.error.issues) next[i.path[0] as FieldName] ??= i.message;
+    const next: Partial<Record<FieldName, string>> = parsed.success ? {} : fieldErrors<FieldName>(parsed.error);
     if (!(file instanceof File) || file.size === 0) next.file = "Choose a .csv or .xlsx file";
     else if (!/\.(csv|xlsx)$/i.test(file.name)) next.file = "must be a .csv or .xlsx file";
     else if (file.size > MAX_BYTES) next.file = "is larger than 5 MB";
