@@ -36,7 +36,7 @@ test("actuary applies the peril profiles and portfolio, exports the workbook, wh
   const portfolio = page.getByLabel("Portfolio baseline");
   await expect(portfolio).toBeEnabled();
   const option = portfolio.locator("option").filter({ hasText: "Harbourline Mutual property baseline" });
-  await portfolio.selectOption((await option.getAttribute("value"))!);
+  await portfolio.selectOption((await option.getAttribute("value")));
   await page.getByRole("button", { name: "Queue run" }).click();
 
   await expect(page).toHaveURL(/\/runs\/[0-9a-f-]{36}$/);

@@ -36,7 +36,7 @@ export async function chooseVersion(page: Page, name: string): Promise<void> {
   const select = page.getByLabel("Model version");
   const option = select.locator("option").filter({ hasText: `${name} v` });
   await expect(option).toHaveCount(1);
-  await select.selectOption((await option.getAttribute("value"))!);
+  await select.selectOption((await option.getAttribute("value")));
 }
 
 /** The run id from a run page URL. */

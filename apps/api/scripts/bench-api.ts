@@ -32,6 +32,7 @@ const password = arg("password", "plume-demo-analyst");
 const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../../..");
 
 let cookie = "";
+// eslint-disable-next-line @typescript-eslint/no-unnecessary-type-parameters -- the caller names the JSON body's type (a cast at this script's HTTP boundary)
 async function api<T>(method: string, url: string, body?: unknown): Promise<{ status: number; body: T; ms: number }> {
   const t0 = performance.now();
   const res = await fetch(`${base}${url}`, {
@@ -135,7 +136,7 @@ async function main() {
   console.log(JSON.stringify(report));
 }
 
-main().catch((error) => {
+main().catch((error: unknown) => {
   console.error(error instanceof Error ? error.message : error);
   process.exit(1);
 });

@@ -8,6 +8,7 @@ import type { AppContext } from "./context.js";
 import { CLIENT_IP_HEADER } from "./auth/create-auth.js";
 import { AppError } from "./errors/app-error.js";
 import { errorHandler } from "./errors/error-handler.js";
+import { httpLogger } from "./logging/http-logger.js";
 import { requireTrustedOrigin } from "./middleware/require-trusted-origin.js";
 import { moduleRouters } from "./modules/index.js";
 
@@ -19,6 +20,7 @@ export function createApp(ctx: AppContext): express.Express {
   app.locals.ctx = ctx;
   app.disable("x-powered-by");
   app.set("trust proxy", "loopback");
+  app.use(httpLogger());
   app.use(helmet());
 
   // Sign-in attempts per client address; on top of better-auth's own limiter.

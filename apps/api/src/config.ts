@@ -4,6 +4,7 @@ import os from "node:os";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { z } from "zod";
+import { LOG_LEVELS, type LogLevel } from "./logging/logger.js";
 
 /** The repository root, so defaults (data folder, web build) do not depend on the cwd. */
 export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../../..");
@@ -26,6 +27,7 @@ const envSchema = z.object({
   SIGN_IN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
   WEB_DIST: z.string().min(1).optional(),
   SEED_DEMO: z.enum(["true", "false"]).default("true"),
+  LOG_LEVEL: z.enum(LOG_LEVELS).optional(),
 });
 
 export interface Config {
@@ -50,6 +52,8 @@ export interface Config {
   signInRateLimit: number;
   webDist: string;
   seedDemo: boolean;
+  /** Least severe level written to the log; tests default to `silent`. */
+  logLevel: LogLevel;
 }
 
 export class ConfigError extends Error {
@@ -89,6 +93,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     signInRateLimit: e.SIGN_IN_RATE_LIMIT,
     webDist: path.resolve(repoRoot, e.WEB_DIST ?? "apps/web/dist"),
     seedDemo: e.SEED_DEMO === "true",
+    logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === "test" ? "silent" : "info"),
   };
 }
 

@@ -3,6 +3,7 @@ import { createAuth, type Auth } from "./auth/create-auth.js";
 import type { Config } from "./config.js";
 import { openDatabase } from "./db/database.js";
 import { initModels, type Models } from "./db/models.js";
+import { logger } from "./logging/logger.js";
 import { startEmbeddedSmtpServer, type EmbeddedSmtpServer } from "./mail/embedded-smtp-server.js";
 import { createMailer, type Mailer } from "./mail/mailer.js";
 import { recordAudit } from "./modules/audit/audit.service.js";
@@ -26,6 +27,7 @@ const closeSteps = new WeakMap<AppContext, Array<() => Promise<void> | void>>();
 
 /** Opens the database, registers models, starts mail and builds the auth instance. Does not migrate. */
 export async function createContext(config: Config): Promise<AppContext> {
+  logger.level = config.logLevel;
   const sequelize = await openDatabase(config.databaseFile);
   const models = initModels(sequelize);
   const smtp = config.smtpUrl
@@ -77,7 +79,11 @@ export async function createContext(config: Config): Promise<AppContext> {
         await recordAudit({ models }, { actorId: userId, action: "user.password-changed", entityType: "user", entityId: userId, summary: "Password changed." }, transaction);
       });
     },
-    onPasswordResetRequested: async (request) => mailPasswordReset({ config, models, mailer, sequelize }, request),
+    // The mail is sent in the background (the answer must not reveal whether the address exists).
+    onPasswordResetRequested: (request) => {
+      mailPasswordReset({ config, models, mailer, sequelize }, request);
+      return Promise.resolve();
+    },
     onPasswordReset: (userId) => recordPasswordReset({ config, models, mailer, sequelize }, userId),
   });
   const steps: Array<() => Promise<void> | void> = [];

@@ -4,6 +4,7 @@ import { createApp } from "./app.js";
 import { ConfigError, loadConfig } from "./config.js";
 import { closeContext, createContext } from "./context.js";
 import { migrate } from "./db/migrate.js";
+import { logger } from "./logging/logger.js";
 import { loadDemoSeed } from "./seed/load-demo-seed.js";
 import { startWorkers } from "./workers/index.js";
 
@@ -12,7 +13,7 @@ async function main(): Promise<void> {
   const config = loadConfig();
   const ctx = await createContext(config);
   const applied = await migrate(ctx.sequelize);
-  if (applied.length > 0) console.log(`[db] applied ${applied.length} migration(s) to ${config.databaseFile}`);
+  if (applied.length > 0) logger.info({ migrations: applied.length, databaseFile: config.databaseFile }, "database migrated");
   const seeded = config.seedDemo ? await loadDemoSeed(ctx) : false;
   // Run workers (engine threads) start after migrating; they register their shutdown with ctx.onClose.
   await startWorkers(ctx);
@@ -24,18 +25,22 @@ async function main(): Promise<void> {
   });
 
   const url = config.publicOrigin;
-  console.log(`Plumeline is listening on ${url}`);
-  console.log(ctx.smtp ? `Mail: embedded SMTP on ${ctx.smtp.host}:${ctx.smtp.port} (read it in the app's outbox)` : "Mail: sent through SMTP_URL");
+  logger.info({ url }, `Plumeline is listening on ${url}`);
+  logger.info(
+    ctx.smtp ? { smtp: `${ctx.smtp.host}:${ctx.smtp.port}` } : {},
+    ctx.smtp ? "mail goes to the embedded SMTP server (read it in the app's outbox)" : "mail is sent through SMTP_URL",
+  );
   if (seeded || config.seedDemo) {
-    console.log(seeded ? "Demo data loaded. Demo sign-ins (demo only):" : "Demo sign-ins (if unchanged; demo only):");
-    for (const u of demoUsers) console.log(`  ${u.role.padEnd(8)} ${u.email.padEnd(32)} ${u.password}`);
+    // Addresses only: the log never carries a password, not even a demo one (README lists them).
+    const signIns = demoUsers.map(({ role, email }) => ({ role, email }));
+    logger.info({ signIns }, seeded ? "demo data loaded; demo sign-ins (passwords in README, demo only)" : "demo sign-ins if unchanged (passwords in README, demo only)");
   }
 
   let stopping = false;
   const stop = async (signal: string) => {
     if (stopping) return;
     stopping = true;
-    console.log(`[server] ${signal}: shutting down`);
+    logger.info({ signal }, "shutting down");
     const forced = setTimeout(() => process.exit(1), 10_000);
     forced.unref();
     // Stop accepting, let requests in flight finish, drop idle keep-alive sockets.
@@ -51,6 +56,7 @@ async function main(): Promise<void> {
 }
 
 main().catch((error: unknown) => {
-  console.error(error instanceof ConfigError ? error.message : error);
+  if (error instanceof ConfigError) logger.fatal(error.message);
+  else logger.fatal({ err: error }, "could not start");
   process.exit(1);
 });

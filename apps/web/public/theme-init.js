@@ -2,4 +2,6 @@
 try {
   var t = localStorage.getItem("plumeline-theme");
   if (t === "dark" || t === "light") document.documentElement.dataset.theme = t;
-} catch (e) {}
+} catch {
+  // Storage can be blocked (private mode, policy): the default theme applies.
+}

@@ -9,7 +9,7 @@ describe("demo pathways", () => {
   it("are valid engine pathway specs, 1750–2100, one value per year", () => {
     for (const p of demoPathways) {
       expect(pathwaySpecSchema.safeParse({ id: p.key, name: p.name, startYear: p.startYear, agents: p.agents }).success).toBe(true);
-      for (const s of Object.values(p.agents)) expect(Object.values(s!)[0]!.length).toBe(351);
+      for (const s of Object.values(p.agents)) expect(Object.values(s)[0]!.length).toBe(351);
       expect(p.description).toContain("ILLUSTRATIVE");
       expect(p.source).toContain("AR6");
     }

@@ -36,8 +36,8 @@ export function sequelizeAdapter(options: SequelizeAdapterOptions) {
     },
     adapter: () => ({
       async create({ model, data, select }) {
-        const row = await modelFor(model).create(data);
-        return pick(row.get({ plain: true }), select) as typeof data;
+        const row = await modelFor(model).create(data as Record<string, unknown>);
+        return pick(row.get({ plain: true }) as Record<string, unknown>, select) as typeof data;
       },
       async findOne({ model, where, select }) {
         const row = await modelFor(model).findOne({ where: toWhere(modelFor(model), where), ...attributes(select) });
@@ -143,7 +143,7 @@ type Expression = ReturnType<typeof Sequelize.col> | ReturnType<typeof Sequelize
  */
 function textMatch(expression: Expression, operator: "contains" | "starts_with" | "ends_with", value: string): WhereOptions {
   // SQLite counts characters (code points), as does spreading a JS string.
-  const length = [...value].length;
+  const length = Array.from(value).length;
   switch (operator) {
     case "contains":
       return Sequelize.where(Sequelize.fn("instr", expression, value), Op.gt, 0);

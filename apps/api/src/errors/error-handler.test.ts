@@ -4,6 +4,7 @@ import { describe, expect, it, vi } from "vitest";
 import { z } from "zod";
 import { AppError, badRequest, conflict, forbidden, notFound, payloadTooLarge, unauthorized } from "./app-error.js";
 import { errorHandler, toErrorResponse } from "./error-handler.js";
+import { logger } from "../logging/logger.js";
 
 // The status for each case is the one docs/API.md assigns; the mapping is explicit, so each
 // status is checked on its own (a blanket `err.status || 500` would pass some and not others).
@@ -50,8 +51,9 @@ describe("error handler in an Express app", () => {
   app.get("/conflict", () => {
     throw conflict("already decided");
   });
-  app.get("/boom", async () => {
-    throw new Error("database on fire");
+  // A rejected promise, as an async handler gives: Express 5 passes it to the error handler.
+  app.get("/boom", () => {
+    return Promise.reject(new Error("database on fire"));
   });
   app.post("/echo", (req, res) => res.json(req.body));
   app.use(errorHandler);
@@ -63,7 +65,8 @@ describe("error handler in an Express app", () => {
   });
 
   it("turns a rejected async handler into a logged 500", async () => {
-    const log = vi.spyOn(console, "error").mockImplementation(() => {});
+    // This app has no request logger (pino-http), so the handler writes to the process logger.
+    const log = vi.spyOn(logger, "error").mockImplementation(() => undefined);
     const res = await request(app).get("/boom");
     expect(res.status).toBe(500);
     expect(res.body.error.code).toBe("internal_error");

@@ -4,6 +4,8 @@ import { formatPath } from "@plumeline/contracts";
 import multer from "multer";
 import { ZodError } from "zod";
 import { AppError, type AppErrorStatus } from "./app-error.js";
+import { redactUrl } from "../logging/http-logger.js";
+import { logger } from "../logging/logger.js";
 
 /**
  * The status each AppError status maps to. Written out on purpose (not `err.status || 500`):
@@ -60,7 +62,8 @@ function isBodyParserError(err: unknown): err is { type: string; status: number 
 /** The ONE error handler, mounted last in app.ts. Logs only unexpected failures. */
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   const { status, body } = toErrorResponse(err);
-  if (status === 500) console.error(`[api] ${req.method} ${req.originalUrl} failed:`, err);
+  // req.log (pino-http) ties the line to the request's id; an app without it uses the process logger.
+  if (status === 500) ("log" in req ? req.log : logger).error({ err }, `${req.method} ${redactUrl(req.originalUrl)} failed`);
   if (res.headersSent) {
     res.end();
     return;

@@ -39,7 +39,10 @@ export async function startEmbeddedSmtpServer(options: {
     onData(stream, session, callback) {
       simpleParser(stream)
         .then((parsed) => options.store(toReceivedMail(parsed, session.envelope.rcptTo.map((r) => r.address))))
-        .then(() => callback(), (error: Error) => callback(error));
+        .then(
+          () => callback(),
+          (error: unknown) => callback(error instanceof Error ? error : new Error(String(error))),
+        );
     },
   });
   await new Promise<void>((resolve, reject) => {

@@ -1,4 +1,5 @@
 import nodemailer, { type Transporter } from "nodemailer";
+import { logger } from "../logging/logger.js";
 
 export interface MailMessage {
   to: string[];
@@ -40,11 +41,11 @@ export function createMailer(options: MailerOptions): Mailer {
       return true;
     } catch (error) {
       const err = error instanceof Error ? error : new Error(String(error));
-      console.error(`[mail] sending "${message.subject}" to ${message.to.join(", ")} failed: ${err.message}`);
+      logger.error({ err, subject: message.subject, to: message.to }, "mail could not be sent");
       try {
         await options.onFailure?.(message, err);
       } catch (auditError) {
-        console.error("[mail] recording the failure failed:", auditError);
+        logger.error({ err: auditError }, "recording a mail failure in the audit log failed");
       }
       return false;
     }

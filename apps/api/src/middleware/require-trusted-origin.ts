@@ -11,7 +11,7 @@ const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
  */
 export const requireTrustedOrigin: RequestHandler = (req, _res, next) => {
   const origin = req.get("origin");
-  if (SAFE_METHODS.has(req.method) || origin === undefined) return next();
+  if (SAFE_METHODS.has(req.method) || origin === undefined) { next(); return; }
   if (!contextOf(req).config.trustedOrigins.includes(origin)) {
     throw forbidden(`Requests from ${origin} are not accepted.`, "untrusted_origin");
   }

@@ -1,6 +1,7 @@
 import { Queue, Worker } from "bullmq";
 import { Redis } from "ioredis";
 import type { JobModel } from "./job.model.js";
+import { logger } from "../logging/logger.js";
 
 /** One BullMQ queue carries every job type; the job row says what the job is. */
 export const BULLMQ_QUEUE_NAME = "plumeline-jobs";
@@ -103,6 +104,6 @@ function throttledErrorLog(): (error: Error) => void {
     const now = Date.now();
     if (now - last < 60_000) return;
     last = now;
-    console.error(`[bullmq] ${error.message} (Redis errors are logged at most once a minute; ioredis keeps reconnecting)`);
+    logger.error({ err: error }, "Redis connection error (logged at most once a minute; ioredis keeps reconnecting)");
   };
 }

@@ -28,7 +28,7 @@ export async function startRedisTestServer(): Promise<RedisTestServer> {
     port,
     stop: () =>
       new Promise<void>((resolve) => {
-        if (child.exitCode !== null) return resolve();
+        if (child.exitCode !== null) { resolve(); return; }
         child.once("exit", () => resolve());
         child.kill("SIGTERM");
       }),

@@ -57,7 +57,7 @@ describe("SQL job queue", () => {
     expect(byId.get(a!)).toBe("failed"); // 1 attempt allowed, 1 used
     expect(byId.get(b!)).toBe("failed");
     expect(byId.get(c!)).toBe("queued");
-    const row = await t.ctx.models.Job.findByPk(c!);
+    const row = await t.ctx.models.Job.findByPk(c);
     expect(row?.lastError).toContain("stopped while running");
     expect((await queue.claimNext("w-new", ["test-job"]))?.attempts).toBe(2);
   });
@@ -70,7 +70,7 @@ describe("SQL job queue", () => {
     expect(await t.ctx.sequelize.transaction((tx) => queue.finish(id!, "old", "succeeded", tx))).toBe(false);
     expect((await queue.heartbeat(id!, "old", 0.5)).stillOwned).toBe(false);
     expect(await t.ctx.sequelize.transaction((tx) => queue.finish(id!, "new", "succeeded", tx))).toBe(true);
-    expect((await t.ctx.models.Job.findByPk(id!))?.status).toBe("succeeded");
+    expect((await t.ctx.models.Job.findByPk(id))?.status).toBe("succeeded");
   });
 
   it("cancels a queued job at once and flags a running one for its worker", async () => {

@@ -1,5 +1,5 @@
 import { randomUUID } from "node:crypto";
-import { Op, type Transaction } from "sequelize";
+import { Op } from "sequelize";
 import type { JobModel } from "./job.model.js";
 import type { ClaimedJob, JobQueue } from "./job-queue.js";
 

@@ -14,7 +14,7 @@ import type { SeededUserIds } from "./seed-users.js";
 export async function seedDomain(ctx: AppContext, userIds: SeededUserIds): Promise<{ pathways: number; modelVersions: number }> {
   const asUser = async (key: keyof SeededUserIds): Promise<RequestUser> => {
     const row = await ctx.models.User.findByPk(userIds[key]);
-    if (!row) throw new Error(`seed user ${String(key)} is missing`);
+    if (!row) throw new Error(`seed user ${key} is missing`);
     return { id: row.id, email: row.email, name: row.name, role: row.role, mustChangePassword: false };
   };
   const analyst = await asUser("analyst");

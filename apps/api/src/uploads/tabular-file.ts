@@ -93,12 +93,12 @@ function xlsxCell(value: ExcelJS.CellValue): RawCell {
   if (typeof value === "boolean") return String(value);
   if (value instanceof Date) return value.toISOString();
   if (typeof value === "object") {
-    if ("result" in value) return xlsxCell((value as ExcelJS.CellFormulaValue).result as ExcelJS.CellValue);
+    if ("result" in value) return xlsxCell((value as ExcelJS.CellFormulaValue).result);
     if ("richText" in value) return value.richText.map((t) => t.text).join("");
-    if ("text" in value) return String(value.text);
-    if ("error" in value) return String(value.error);
+    if ("text" in value) return value.text;
+    if ("error" in value) return value.error;
   }
-  return String(value);
+  return JSON.stringify(value);
 }
 
 /** Rows of the workbook's first sheet, numbered as the spreadsheet numbers them. */

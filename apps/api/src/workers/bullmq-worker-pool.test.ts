@@ -76,7 +76,7 @@ describe("QUEUE=bullmq", () => {
       const viaRedis = await analyst.post("/api/runs").send(runBody({ name: "via redis" }));
       expect(viaRedis.status).toBe(201);
       // The delivery counts once the worker is done with it (after the owner's mail).
-      await waitFor(async () => pool.deliveries.succeeded === 1);
+      await waitFor(() => Promise.resolve(pool.deliveries.succeeded === 1));
       const [a, b] = [await runOf(viaTable.body.id), await runOf(viaRedis.body.id)];
       expect(b.resultHash).toBe(a.resultHash);
       // Reproducibility rule of the engine contract (DESIGN.md): the same spec straight through the engine.
@@ -143,7 +143,7 @@ describe("QUEUE=bullmq", () => {
 
     const pool = await startBullmqWorkerPool(t.ctx, queue(), { size: 1, redisUrl: redis.url, queueName });
     try {
-      await waitFor(async () => pool.deliveries.skipped === 1);
+      await waitFor(() => Promise.resolve(pool.deliveries.skipped === 1));
       await waitFor(drained(pool));
     } finally {
       await pool.stop();

@@ -5,6 +5,7 @@ import { EngineThread } from "./engine-thread-client.js";
 import { processClaimedRunJob, syncRunsWithRequeuedJobs, type StepOutcome, type WorkerContext } from "./process-run-job.js";
 import type { WorkerPool } from "./worker-pool.js";
 import { lockedByDeadLocalProcess, processWorkerPrefix, workerIdFor } from "./worker-identity.js";
+import { logger } from "../logging/logger.js";
 
 export interface BullmqWorkerPoolOptions {
   /** Engine threads = BullMQ concurrency in this process (config WORKERS). */
@@ -53,7 +54,7 @@ export async function startBullmqWorkerPool(ctx: WorkerContext, queue: JobQueue,
     await syncRunsWithRequeuedJobs(ctx, await queue.requeueAbandoned(abandonedFilter()));
     await transport.publishPending();
   };
-  const sweepLogged = () => sweep().catch((error) => console.error("[bullmq] sweep failed:", error));
+  const sweepLogged = () => sweep().catch((error: unknown) => logger.error({ err: error }, "BullMQ sweep failed"));
 
   // Re-queueing is SQL and finishes before any delivery; publishing waits for Redis, so it
   // does not hold up the server's start when Redis is not reachable yet.
@@ -63,7 +64,7 @@ export async function startBullmqWorkerPool(ctx: WorkerContext, queue: JobQueue,
     await transport.close();
     throw error;
   }
-  void transport.publishPending().catch((error) => console.error("[bullmq] publish failed:", error));
+  void transport.publishPending().catch((error: unknown) => logger.error({ err: error }, "publishing queued jobs to BullMQ failed"));
 
   // One engine thread per slot; BullMQ never runs more than `size` deliveries at once here.
   const slots = Array.from({ length: options.size }, (_, slot) => ({ id: workerIdFor(prefix, slot), thread: null as EngineThread | null, busy: false }));
@@ -102,9 +103,9 @@ export async function startBullmqWorkerPool(ctx: WorkerContext, queue: JobQueue,
     await ctx.models.Job.update({ dispatchedAt: null }, { where: { id: jobId, status: "queued" } });
   }
 
-  const publishNow = () => void transport.publishPending().catch((error) => console.error("[bullmq] publish failed:", error));
+  const publishNow = () => void transport.publishPending().catch((error: unknown) => logger.error({ err: error }, "publishing queued jobs to BullMQ failed"));
   jobSignal.on("enqueued", publishNow);
-  const timer = setInterval(sweepLogged, options.sweepMs ?? 10_000);
+  const timer = setInterval(() => void sweepLogged(), options.sweepMs ?? 10_000);
   timer.unref();
   transport.consume(options.size, deliver);
 
@@ -126,7 +127,7 @@ export async function startBullmqWorkerPool(ctx: WorkerContext, queue: JobQueue,
     jobSignal.off("enqueued", publishNow);
     // Ending the threads makes deliveries in progress give their jobs back (attempt refunded),
     // so closing the BullMQ worker, which waits for them, does not wait for whole runs.
-    await Promise.all(slots.map((s) => s.thread?.terminate()));
+    await Promise.all(slots.map((s) => s.thread?.terminate() ?? Promise.resolve()));
     await transport.close();
     // Jobs given back during shutdown are published by the next sweep of any process.
   }

@@ -25,6 +25,7 @@ function threadEntry(): { entry: URL | string; eval: boolean } {
   const exportsMap = (require("tsx/package.json") as { exports: Record<string, { import?: { default?: string } }> }).exports;
   const esmApi = pathToFileURL(path.join(path.dirname(tsxPackage), exportsMap["./esm/api"]?.import?.default ?? "dist/esm/api/index.mjs")).href;
   const target = new URL("./engine-thread.ts", import.meta.url).href;
+  // A bootstrap that fails has no logger yet (it could not load one); its stderr reaches the parent.
   const code =
     `import(${JSON.stringify(esmApi)}).then((tsx) => { tsx.register(); return import(${JSON.stringify(target)}); })` +
     `.catch((error) => { console.error("[engine-thread] could not start:", error); process.exit(1); });`;
@@ -75,7 +76,7 @@ export class EngineThread {
   private onMessage(message: FromEngineThread): void {
     const busy = this.busy;
     if (!busy) return;
-    if (message.type === "progress") return busy.onProgress(message.fraction);
+    if (message.type === "progress") { busy.onProgress(message.fraction); return; }
     this.busy = null;
     if (message.type === "done")
       busy.settle({ kind: "done", result: message.result, ...(message.contractWarning ? { contractWarning: message.contractWarning } : {}) });

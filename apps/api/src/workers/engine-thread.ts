@@ -42,7 +42,7 @@ async function run(message: ToEngineThread): Promise<void> {
         post({ type: "progress", fraction: Math.min(1, Math.max(0, fraction)) });
       },
     });
-    if (cancelled()) return post({ type: "cancelled" });
+    if (cancelled()) { post({ type: "cancelled" }); return; }
     // Checked against the contracts schema here, so a large result never stalls the server thread.
     const checked = runResultSchema.safeParse(result);
     const issue = checked.success ? null : checked.error.issues[0];

@@ -6,6 +6,7 @@ import type { RunModel } from "../modules/runs/run.model.js";
 import type { ClaimedJob, JobQueue } from "../queue/job-queue.js";
 import { EngineThreadCrashed, type EngineOutcome, type EngineThread } from "./engine-thread-client.js";
 import { mailRunOutcome } from "./run-notifications.js";
+import { logger } from "../logging/logger.js";
 
 export const RUN_JOB_TYPE = "ensemble-run";
 
@@ -79,7 +80,7 @@ function throttledProgress(ctx: WorkerContext, queue: JobQueue, job: ClaimedJob,
   let chain: Promise<void> = Promise.resolve();
   let writing = false;
   return {
-    report(fraction: number) {
+    report: (fraction: number) => {
       const now = Date.now();
       if (writing || now - last < everyMs) return;
       last = now;
@@ -90,7 +91,7 @@ function throttledProgress(ctx: WorkerContext, queue: JobQueue, job: ClaimedJob,
           if (beat.cancelRequested) thread.cancel();
           await ctx.models.Run.update({ progress: fraction }, { where: { id: run.id, status: "running" } });
         })
-        .catch((error) => console.error(`[worker] progress write for run ${run.id} failed:`, error))
+        .catch((error: unknown) => logger.error({ err: error, runId: run.id }, "writing run progress failed"))
         .finally(() => (writing = false));
     },
     flush: () => chain,
@@ -102,7 +103,7 @@ async function writeOutcome(ctx: WorkerContext, queue: JobQueue, job: ClaimedJob
   let status: "succeeded" | "failed" | "cancelled" = outcome.kind === "done" ? "succeeded" : outcome.kind;
   let error = outcome.kind === "failed" ? outcome.message : null;
   if (outcome.kind === "done") {
-    if (outcome.contractWarning) console.warn(`[worker] run ${run.id}: result deviates from the contract schema at ${outcome.contractWarning}`);
+    if (outcome.contractWarning) logger.warn({ runId: run.id, at: outcome.contractWarning }, "run result deviates from the contract schema");
     const problem = resultProblem(outcome.result, run);
     if (problem) {
       status = "failed";

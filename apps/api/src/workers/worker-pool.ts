@@ -3,6 +3,7 @@ import type { JobQueue } from "../queue/job-queue.js";
 import { jobSignal } from "../queue/job-signal.js";
 import { EngineThread } from "./engine-thread-client.js";
 import { processNextRunJob, syncRunsWithRequeuedJobs, type WorkerContext } from "./process-run-job.js";
+import { logger } from "../logging/logger.js";
 
 export interface WorkerPoolOptions {
   /** Engine threads, each running one job at a time (config WORKERS; default one per core). */
@@ -66,7 +67,7 @@ export async function startWorkerPool(ctx: WorkerContext, queue: JobQueue, optio
         });
         if (outcome === "idle" && !stopping) await sleep();
       } catch (error) {
-        console.error(`[worker] ${workerId}:`, error);
+        logger.error({ err: error, workerId }, "run worker step failed");
         if (!stopping) await sleep();
       }
     }

@@ -41,7 +41,7 @@ export function apiErrorFromBody(status: number, body: unknown, fallback: string
     const details = Array.isArray(err.details)
       ? err.details
           .filter((d): d is { path?: unknown; message?: unknown } => typeof d === "object" && d !== null)
-          .map((d) => ({ path: String(d.path ?? ""), message: String(d.message ?? "") }))
+          .map((d) => ({ path: asText(d.path), message: asText(d.message) }))
       : [];
     return new ApiError(
       status,
@@ -51,4 +51,12 @@ export function apiErrorFromBody(status: number, body: unknown, fallback: string
     );
   }
   return new ApiError(status, `http_${status}`, fallback);
+}
+
+/** A detail field as text: strings and numbers as they are, a path array joined, anything else empty. */
+function asText(v: unknown): string {
+  if (typeof v === "string") return v;
+  if (typeof v === "number") return String(v);
+  if (Array.isArray(v)) return v.join(",");
+  return "";
 }

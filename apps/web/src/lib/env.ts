@@ -6,7 +6,7 @@ import { z } from "zod";
  */
 const envSchema = z.object({
   /** Where the API lives; empty means the same origin as the page (production: one port). */
-  VITE_API_ORIGIN: z.string().url().optional().or(z.literal("")),
+  VITE_API_ORIGIN: z.url().optional().or(z.literal("")),
   /** How often live run progress is polled, in milliseconds. */
   VITE_POLL_MS: z.coerce.number().int().min(250).default(1500),
 });

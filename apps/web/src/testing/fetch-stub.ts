@@ -16,7 +16,7 @@ type Handler = (req: StubRequest) => { status?: number; body?: unknown } | undef
  */
 export function stubFetch(handler: Handler) {
   const calls: StubRequest[] = [];
-  const fn = vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
+  const fn = vi.fn((input: RequestInfo | URL, init?: RequestInit): Promise<Response> => {
     const url = new URL(typeof input === "string" ? input : input instanceof URL ? input.href : input.url);
     const raw = init?.body;
     const req: StubRequest = {
@@ -27,10 +27,12 @@ export function stubFetch(handler: Handler) {
     };
     calls.push(req);
     const answer = handler(req) ?? { status: 404, body: { error: { code: "not_found", message: `No route ${req.method} ${req.path}` } } };
-    return new Response(answer.body === undefined ? null : JSON.stringify(answer.body), {
-      status: answer.status ?? 200,
-      headers: { "Content-Type": "application/json" },
-    });
+    return Promise.resolve(
+      new Response(answer.body === undefined ? null : JSON.stringify(answer.body), {
+        status: answer.status ?? 200,
+        headers: { "Content-Type": "application/json" },
+      }),
+    );
   });
   vi.stubGlobal("fetch", fn);
   return { calls, count: (method: string, path: string) => calls.filter((c) => c.method === method && c.path === path).length };

@@ -145,7 +145,7 @@ export const runSpecSchema = z
       // On a tie the longest: a cut-short series is the usual mistake.
       const modal = counts.reduce((best, c, i) => (c > counts[best]! || (c === counts[best]! && lengths[i]! > lengths[best]!) ? i : best), 0);
       const [firstAgent, firstSeries] = entries[modal]!;
-      const firstKey = Object.keys(firstSeries!)[0]!;
+      const firstKey = Object.keys(firstSeries)[0]!;
       const expected = lengths[modal]!;
       if (expected < 1 || expected > MAX_PATHWAY_YEARS) {
         ctx.addIssue({
@@ -156,7 +156,7 @@ export const runSpecSchema = z
         return;
       }
       for (const [agent, s] of entries) {
-        const key = Object.keys(s!)[0]!;
+        const key = Object.keys(s)[0]!;
         const n = (s as Record<string, number[]>)[key]!.length;
         if (n !== expected)
           ctx.addIssue({

@@ -28,5 +28,5 @@ export function readSpecFile(path: string): RunSpec {
   }
   const parsed = runSpecSchema.safeParse(json);
   if (!parsed.success) throw new CliError(formatIssues(parsed.error).join("\n"));
-  return parsed.data as unknown as RunSpec;
+  return parsed.data;
 }

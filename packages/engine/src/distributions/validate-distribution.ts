@@ -23,19 +23,19 @@ export function validateDistribution(d: Distribution, name: string): void {
   if (d === null || typeof d !== "object") throw new RangeError(`${name} must be a distribution object`);
   switch (d.type) {
     case "fixed":
-      return validateFixed(d, name);
+      { validateFixed(d, name); return; }
     case "normal":
-      return validateNormal(d, name);
+      { validateNormal(d, name); return; }
     case "lognormal":
-      return validateLognormal(d, name);
+      { validateLognormal(d, name); return; }
     case "uniform":
-      return validateUniform(d, name);
+      { validateUniform(d, name); return; }
     case "triangular":
-      return validateTriangular(d, name);
+      { validateTriangular(d, name); return; }
     case "truncated-normal":
-      return validateTruncatedNormal(d, name);
+      { validateTruncatedNormal(d, name); return; }
     case "range":
-      return validateRange(d, name);
+      { validateRange(d, name); return; }
     default:
       throw new RangeError(`${name}.type must be one of ${KNOWN_TYPES}`);
   }

@@ -95,7 +95,7 @@ function allocateMemberClimate(columns: ClimateColumns, allocate: Allocate): Mem
 }
 
 function checkClimateInputs(columns: ClimateColumns): void {
-  for (const [name, column] of Object.entries(columns)) requirePositiveSamples(column, `model.climate.${name}`);
+  for (const [name, column] of Object.entries(columns) as Array<[string, Float64Array]>) requirePositiveSamples(column, `model.climate.${name}`);
 }
 
 function checkMemberPropagators(columns: ClimateColumns, out: MemberClimate): void {

@@ -39,11 +39,12 @@ export function preparePlan(
   // A pathway's forcing error is given after the samples' own refusals (their order before
   // `early` existed); the forcing is built first so the plan can be handed out early.
   let pathways: PathwayForcing[] | null = null;
-  let pathwayError: unknown = null;
+  // Boxed so that a thrown `null` or `undefined` is rethrown as it was, too.
+  let pathwayFailure: { error: unknown } | null = null;
   try {
     pathways = spec.pathways.map((_, i) => buildPathwayForcing(spec, i, names));
   } catch (error) {
-    pathwayError = error;
+    pathwayFailure = { error };
   }
   let plan: EnsemblePlan | null = null;
   const climate = buildMemberClimate(
@@ -60,7 +61,7 @@ export function preparePlan(
       ? {
           members: early.members,
           filled: (climate) => {
-            plan = assemblePlan(spec, inputs, columns, climate, pathways!, spansInRing, memory, summaries);
+            plan = assemblePlan(spec, inputs, columns, climate, pathways, spansInRing, memory, summaries);
             early.ready(plan);
           },
         }
@@ -72,7 +73,7 @@ export function preparePlan(
     for (let m = 0; m < values.length; m++)
       if (!Number.isFinite(values[m]!)) throw new SpecError(x.field, `sampled a non-finite value at member ${m + 1}`);
   });
-  if (pathwayError !== null) throw pathwayError;
+  if (pathwayFailure) throw pathwayFailure.error;
   return { spec, plan: plan ?? assemblePlan(spec, inputs, columns, climate, pathways!, spansInRing, memory, summaries) };
 }
 

@@ -1,5 +1,5 @@
 import canonicalizeModule from "canonicalize";
-import { sha256 } from "@noble/hashes/sha256";
+import { sha256 } from "@noble/hashes/sha2";
 import { bytesToHex, utf8ToBytes } from "@noble/hashes/utils";
 
 /**

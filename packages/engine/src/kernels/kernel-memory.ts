@@ -14,8 +14,8 @@ import "./webassembly-globals.js";
  */
 export interface KernelMemory {
   readonly memory: WebAssembly.Memory;
-  float64(length: number): Float64Array;
-  int32(length: number): Int32Array;
+  float64: (length: number) => Float64Array;
+  int32: (length: number) => Int32Array;
 }
 
 const PAGE = 65536;

@@ -4,6 +4,7 @@
  * reach for browser globals); these declarations match that library's.
  */
 declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace -- the global WebAssembly namespace can only be augmented as a namespace
   namespace WebAssembly {
     interface MemoryDescriptor {
       initial: number;
@@ -14,6 +15,7 @@ declare global {
       readonly buffer: ArrayBuffer | SharedArrayBuffer;
       grow(delta: number): number;
     }
+    // eslint-disable-next-line @typescript-eslint/no-empty-object-type -- an opaque handle, declared as TypeScript's DOM library declares it
     interface Module {}
     interface Instance {
       readonly exports: Record<string, unknown>;

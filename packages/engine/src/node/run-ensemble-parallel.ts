@@ -27,7 +27,7 @@ export interface ParallelRunOptions {
    * machine's available cores when members ≥ 20,000, else 1.
    */
   threads?: number;
-  onProgress?(fraction: number): void;
+  onProgress?: (fraction: number) => void;
   signal?: AbortSignal;
   /** If given, filled with seconds per stage (parallel stages: thread-seconds / threads). */
   stageTimes?: StageTimes;

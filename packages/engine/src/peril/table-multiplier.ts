@@ -67,7 +67,9 @@ function beyond(end: TablePoint, next: TablePoint, rule: "hold" | "extrapolate",
 
 /** Throws a RangeError naming the first bad point (the engine's guard; contracts check the same). */
 export function checkTable(points: readonly TablePoint[], beyondTable: string): void {
-  if (!Array.isArray(points) || points.length < 2) throw new RangeError("points must hold at least two points");
+  // Checked as `unknown`: Array.isArray on the typed parameter would narrow it to any[].
+  const list: unknown = points;
+  if (!Array.isArray(list) || points.length < 2) throw new RangeError("points must hold at least two points");
   if (beyondTable !== "hold" && beyondTable !== "extrapolate") throw new RangeError('beyondTable must be "hold" or "extrapolate"');
   points.forEach((p, i) => {
     if (typeof p.warming !== "number" || !Number.isFinite(p.warming)) throw new RangeError(`points[${i}].warming must be a finite number`);

@@ -21,7 +21,9 @@ export function validatePerilInputs(
   baseline: readonly [number, number],
 ): void {
   const profiles = perils ?? [];
-  if (!Array.isArray(profiles)) throw new SpecError("perils", "must be a list of peril profiles");
+  // Checked as `unknown`: Array.isArray on the typed list would narrow it to any[].
+  const list: unknown = profiles;
+  if (!Array.isArray(list)) throw new SpecError("perils", "must be a list of peril profiles");
   if (profiles.length > 0 && (baseline[0] !== 1850 || baseline[1] !== 1900))
     throw new SpecError("baseline", "must be [1850, 1900] when perils are given (peril warming levels are measured against 1850–1900)");
   const ids = new Set<string>();

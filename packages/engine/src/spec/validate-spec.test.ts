@@ -43,7 +43,7 @@ describe("bad input is refused with a message naming the field", () => {
     const pathway = { ...rampPathway(), agents: { ...rampPathway().agents, dust: { erf: new Array(351).fill(0) } } };
     expect(refusal(baseSpec({ pathways: [pathway as never] })).message).toMatch(/^pathways\[0\]\.agents\.dust is not a forcing agent/);
     const agents = { ...model.agents, soot: { scale: { type: "fixed", value: 1 } } };
-    expect(refusal(baseSpec({ model: { ...model, agents: agents as never } })).message).toMatch(/^model\.agents\.soot is not a forcing agent/);
+    expect(refusal(baseSpec({ model: { ...model, agents: agents } })).message).toMatch(/^model\.agents\.soot is not a forcing agent/);
   });
 
   it("members below 1 or above the documented limit", () => {

@@ -108,7 +108,7 @@ export class PercentileSelector {
     // Hinted buckets start their count at HINT_MARK, so one array both counts and says
     // which values to copy (a second array read per value measured ~30 % slower).
     const counts = this.counts;
-    for (let r = 0; r < ranges.length; r += 2) counts.fill(HINT_MARK, ranges[r]!, ranges[r + 1]! + 1);
+    for (let r = 0; r < ranges.length; r += 2) counts.fill(HINT_MARK, ranges[r], ranges[r + 1]! + 1);
     const copied = countAndCopyHinted(values, n, min, scale, last, counts, this.early, this.tally);
     for (let r = 0; r < ranges.length; r += 2)
       for (let b = ranges[r]!; b <= ranges[r + 1]!; b++) if (counts[b]! >= HINT_MARK) counts[b]! -= HINT_MARK;
@@ -130,7 +130,7 @@ export class PercentileSelector {
         if (b > last) b = last;
         if (slot[b]! >= 0) gathered[cursor[b]!++] = v;
       }
-      for (const b of wantedBuckets) gathered.subarray(slot[b]!, slot[b]! + counts[b]!).sort();
+      for (const b of wantedBuckets) gathered.subarray(slot[b], slot[b]! + counts[b]!).sort();
     }
     this.interpolate(n, probs, located, out);
     return sum;

@@ -18,6 +18,6 @@ export const exportsController = {
     send(res, await exportWorkbook(contextOf(req), currentUser(req), (req.params as { id: string }).id));
   },
   async list(req: Request, res: Response) {
-    res.json(await listExports(contextOf(req), currentUser(req), req.query as { mine?: "true" | "false"; runId?: string }));
+    res.json(await listExports(contextOf(req), currentUser(req), req.query));
   },
 };

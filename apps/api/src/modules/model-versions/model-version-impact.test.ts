@@ -60,8 +60,8 @@ describe("POST /api/model-versions/:id/impact", () => {
     expect(body.against.inputHash).toBe(parentRun.inputHash);
 
     // Independent check: the engine run directly (on this thread) on the run's stored spec gives the same numbers.
-    const direct: RunResult = runEnsemble(childRun.spec) as unknown as RunResult;
-    const directParent: RunResult = runEnsemble(parentRun.spec) as unknown as RunResult;
+    const direct: RunResult = runEnsemble(childRun.spec);
+    const directParent: RunResult = runEnsemble(parentRun.spec);
     expect(body.version.resultHash).toBe(direct.resultHash);
     expect(body.against.resultHash).toBe(directParent.resultHash);
     const h2100 = direct.pathways[0]!.horizons.find((h) => h.year === 2100)!;

@@ -69,7 +69,7 @@ describe("the database refuses re-pinning the peril profiles of an approved vers
     t.ctx.sequelize
       .query("UPDATE model_versions SET peril_profile_ids = :ids WHERE id = :id", { replacements: { id, ids: JSON.stringify(ids) } })
       .then(() => null)
-      .catch((e: { parent?: Error }) => e.parent?.message ?? String(e));
+      .catch((e: unknown) => (e as Error & { parent?: Error }).parent?.message ?? (e as Error).message);
   const storedPins = async (id: string) => (await t.ctx.models.ModelVersion.findByPk(id))?.perilProfileIds;
 
   let approvedId: string;
@@ -96,7 +96,7 @@ describe("the database refuses re-pinning the peril profiles of an approved vers
     const migrator = createMigrator(t.ctx.sequelize);
     await migrator.down({ to: "0052-model-versions-frozen-perils" });
     try {
-      const notes = await t.ctx.sequelize.query("UPDATE model_versions SET notes = 'raw' WHERE id = :id", { replacements: { id: approvedId } }).catch((e: { parent?: Error }) => e.parent?.message);
+      const notes = await t.ctx.sequelize.query("UPDATE model_versions SET notes = 'raw' WHERE id = :id", { replacements: { id: approvedId } }).catch((e: unknown) => (e as { parent?: Error }).parent?.message);
       expect(notes).toMatch(/immutable/);
       expect(await rawRepin(approvedId, [profileId, profileId])).toBeNull();
     } finally {

@@ -137,7 +137,7 @@ export async function createModelVersion(ctx: Ctx, user: RequestUser, body: Crea
     const parent = await checkReferences(ctx, input.parentId, input.pathwayIds, input.perilProfileIds, transaction);
     const id = randomUUID();
     const familyId = parent?.familyId ?? id;
-    const highest = (await ctx.models.ModelVersion.max("versionNumber", { where: { familyId }, transaction })) as number | null;
+    const highest = await ctx.models.ModelVersion.max<number | null, ModelVersionModel>("versionNumber", { where: { familyId }, transaction });
     const created = await ctx.models.ModelVersion.create(
       {
         id,

@@ -98,7 +98,7 @@ describe("model version lifecycle", () => {
     expect(edit.body.error.code).toBe("model_version_immutable");
     expect((await manager2.post(`/api/model-versions/${id}/reject`).send({ comment: "too late" })).status).toBe(409);
     // The database refuses too, whatever the code path.
-    const raw = await t.ctx.sequelize.query(`UPDATE model_versions SET notes = 'raw' WHERE id = '${id}'`).catch((e: { parent?: Error }) => e);
+    const raw = await t.ctx.sequelize.query(`UPDATE model_versions SET notes = 'raw' WHERE id = '${id}'`).catch((e: unknown) => e as { parent?: Error });
     expect((raw as { parent?: Error }).parent?.message).toMatch(/immutable/);
   });
 

@@ -65,7 +65,7 @@ export async function getPathway(ctx: Ctx, id: string): Promise<Pathway> {
 
 export async function createPathway(ctx: Ctx, user: RequestUser, body: CreatePathwayBody, origin = "json"): Promise<Pathway> {
   const input = createPathwayBodySchema.parse(body);
-  const shape = checkSeriesShape(input.agents as PathwaySeries);
+  const shape = checkSeriesShape(input.agents);
   if (shape.length > 0) throw badRequest(shape, "The pathway's series are inconsistent.");
   const agents = input.agents as PathwaySeries;
   const row = await ctx.sequelize.transaction(async (transaction) => {

@@ -78,7 +78,7 @@ beforeAll(() => {
     pathways: [{ id: "p1", name: pathway.name, startYear: pathway.startYear, agents: pathway.agents }],
     model: testModelVersionBody().model,
   };
-  const base = runEnsemble(spec as Parameters<typeof runEnsemble>[0]) as unknown as RunResult;
+  const base = runEnsemble(spec) as unknown as RunResult;
   const members = 40;
   const horizons = [2030, 2050, 2100];
   // Stated member warmings (K above 1850–1900): a spread of 0.8 K around 1.4 / 1.9 / 2.9 K.
@@ -94,7 +94,7 @@ beforeAll(() => {
     weights: null,
     percentiles: [5, 17, 50, 83, 95],
   });
-  result = { ...base, perils: assemblePerilResult(profiles, portfolio, [lens]) } as RunResult;
+  result = { ...base, perils: assemblePerilResult(profiles, portfolio, [lens]) };
 });
 
 describe("peril result tables", () => {
@@ -135,7 +135,7 @@ describe("peril result tables", () => {
 
   it("CSV export of a peril table reads back to the same numbers", () => {
     const table = resultTable(result, "peril-multipliers");
-    const back = parse(tableToCsv(table), { columns: true }) as Array<Record<string, string>>;
+    const back = parse<Record<string, string>>(tableToCsv(table), { columns: true });
     expect(back).toHaveLength(table.rows.length);
     expect(Number(back[0]!.multiplier_p95)).toBe(table.rows[0]![13]);
   });
@@ -167,7 +167,7 @@ describe("peril workbook sheets", () => {
         expect(cells).toEqual(row);
       });
       expect(sheet.rowCount).toBe(expected.rows.length + 2);
-      expect(String(sheet.getCell("A1").value)).toMatch(/^EXPLORATORY/);
+      expect(sheet.getCell("A1").text).toMatch(/^EXPLORATORY/);
     }
     const cautions = wb.getWorksheet("Cautions")!;
     const texts = (cautions.getColumn(1).values as unknown[]).filter((v): v is string => typeof v === "string");
@@ -176,7 +176,7 @@ describe("peril workbook sheets", () => {
 
   it("leaves the peril sheets out when the run carried no profiles", async () => {
     const { perils: _p, ...plain } = result;
-    const wb = await readBack(plain as RunResult);
+    const wb = await readBack(plain);
     expect(wb.getWorksheet("Peril multipliers")).toBeUndefined();
   });
 });

@@ -100,7 +100,7 @@ describe("a finished run with the peril lens (worker step, result, CSV, workbook
 
     const csv = await actuary.get(`/api/runs/${created.body.id}/tables/peril-losses.csv`);
     expect(csv.status).toBe(200);
-    const rows = parse(csv.text, { columns: true }) as Array<Record<string, string>>;
+    const rows = parse<Record<string, string>>(csv.text, { columns: true });
     const aal2100 = rows.find((r) => r.year === "2100" && r.measure === "aal")!;
     expect(Number(aal2100.loss_p50)).toBe(flood2100.losses[0].aal.p50);
 

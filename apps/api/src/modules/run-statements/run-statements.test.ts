@@ -60,7 +60,7 @@ describe("run statements (reliance and limitations)", () => {
     const res = await actuary.get(`/api/runs/${finishedRunId}/workbook.xlsx`).buffer(true).parse(binaryBody);
     expect(res.status).toBe(200);
     const workbook = new ExcelJS.Workbook();
-    await workbook.xlsx.load(res.body as unknown as ArrayBuffer);
+    await workbook.xlsx.load(res.body);
     for (const sheet of ["Manifest", "Cautions"]) {
       const values = workbook.getWorksheet(sheet)!.getSheetValues().flat().map(String);
       expect(values).toContain("Reliance and limitation statements recorded with this run");

@@ -1,4 +1,4 @@
-import type { CreateRunBody, RunStatus } from "@plumeline/contracts";
+import type { CreateRunBody } from "@plumeline/contracts";
 import type { Request, Response } from "express";
 import { contextOf, currentUser } from "../../middleware/request-context.js";
 import { cancelRun, createRun, getRun, listRuns, replayRun } from "./runs.service.js";
@@ -7,7 +7,7 @@ const idOf = (req: Request) => (req.params as { id: string }).id;
 
 export const runsController = {
   async list(req: Request, res: Response) {
-    res.json(await listRuns(contextOf(req), currentUser(req), req.query as { mine?: "true" | "false"; status?: RunStatus }));
+    res.json(await listRuns(contextOf(req), currentUser(req), req.query));
   },
   async get(req: Request, res: Response) {
     res.json(await getRun(contextOf(req), idOf(req)));

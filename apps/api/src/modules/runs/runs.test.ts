@@ -61,7 +61,7 @@ describe("POST /api/runs", () => {
     expect(job).toMatchObject({ type: RUN_JOB_TYPE, status: "queued", payload: { runId: run.id } });
     expect(run.spec.pathways.map((p) => p.id)).toEqual(pathwayIds);
     expect(run.spec.horizons).toEqual([2030, 2050, 2100]);
-    expect((await t.ctx.models.Pathway.findByPk(pathwayIds[0]!))?.locked).toBe(true);
+    expect((await t.ctx.models.Pathway.findByPk(pathwayIds[0]))?.locked).toBe(true);
     expect(await t.ctx.models.AuditEvent.count({ where: { action: "run.created", entityId: run.id } })).toBe(1);
     await t.ctx.models.Job.update({ status: "cancelled" }, { where: { id: job.id } }); // keep the queue clear for later tests
   });
@@ -118,7 +118,7 @@ describe("running a job", () => {
   it("mails the owner and audits the outcome", async () => {
     await t.ctx.mailer.idle();
     const mails = await t.ctx.models.OutboxMessage.findAll();
-    expect(mails.some((m) => JSON.stringify(m.get({ plain: true })).includes(demoUser("actuary").email) && String(m.get("subject")).includes("Run finished"))).toBe(true);
+    expect(mails.some((m) => JSON.stringify(m.get({ plain: true })).includes(demoUser("actuary").email) && m.get("subject").includes("Run finished"))).toBe(true);
     expect(await t.ctx.models.AuditEvent.count({ where: { action: "run.succeeded", entityId: runId } })).toBe(1);
   });
 

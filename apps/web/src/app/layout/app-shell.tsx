@@ -37,7 +37,7 @@ export function AppShell() {
       onUnauthorized(() => {
         if (!queryClient.getQueryData(getMeQueryOptions().queryKey)) return;
         queryClient.clear();
-        navigate(paths.signIn.build(location.pathname + location.search, true), { replace: true });
+        void navigate(paths.signIn.build(location.pathname + location.search, true), { replace: true });
       }),
     [navigate, queryClient, location.pathname, location.search],
   );
@@ -98,7 +98,7 @@ export function AppShell() {
           <button
             type="button"
             className="mt-3 w-full rounded-md border border-white/20 px-3 py-1.5 text-sm text-white/80 hover:bg-white/10"
-            onClick={() => signOut.mutate(undefined, { onSettled: () => navigate(paths.signIn.build(), { replace: true }) })}
+            onClick={() => signOut.mutate(undefined, { onSettled: () => void navigate(paths.signIn.build(), { replace: true }) })}
           >
             Sign out
           </button>
@@ -106,7 +106,7 @@ export function AppShell() {
         <div className="flex items-center justify-between border-t border-white/10 px-4 py-2 lg:hidden">
           <RoleBadge role={user.role} />
           <ThemeToggle />
-          <button type="button" className="text-sm text-white/80" onClick={() => signOut.mutate(undefined, { onSettled: () => navigate(paths.signIn.build()) })}>
+          <button type="button" className="text-sm text-white/80" onClick={() => signOut.mutate(undefined, { onSettled: () => void navigate(paths.signIn.build()) })}>
             Sign out
           </button>
         </div>

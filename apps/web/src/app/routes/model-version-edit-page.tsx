@@ -36,7 +36,7 @@ export default function ModelVersionEditPage() {
         serverError={update.error}
         onSave={(body) => {
           const { parentId: _parent, ...rest } = body;
-          update.mutate({ id: v.id, body: rest }, { onSuccess: () => navigate(paths.modelVersion.build(v.id)) });
+          update.mutate({ id: v.id, body: rest }, { onSuccess: () => void navigate(paths.modelVersion.build(v.id)) });
         }}
       />
     </>

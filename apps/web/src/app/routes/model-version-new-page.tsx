@@ -36,7 +36,7 @@ export default function ModelVersionNewPage() {
         onSave={(body) => {
           // The editor does not show pinned pathways; a copy keeps its parent's, so the diff shows only real edits.
           const pins = parent.data ? { pathwayIds: parent.data.pathwayIds } : {};
-          create.mutate({ ...body, ...pins }, { onSuccess: (v) => navigate(paths.modelVersion.build(v.id)) });
+          create.mutate({ ...body, ...pins }, { onSuccess: (v) => void navigate(paths.modelVersion.build(v.id)) });
         }}
       />
     </>

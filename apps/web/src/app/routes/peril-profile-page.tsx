@@ -65,13 +65,13 @@ function Editor({ record, viewer }: { record: PerilProfileRecord | undefined; vi
       return null;
     });
     if (!saved) return;
-    navigate(paths.perilProfile.build(saved.id), { replace: !record });
+    void navigate(paths.perilProfile.build(saved.id), { replace: !record });
   }
   async function copyIt() {
     if (!record) return;
     const created = await copy.mutateAsync({ id: record.id }).catch(() => null);
     if (!created) return;
-    navigate(paths.perilProfile.build(created.id));
+    void navigate(paths.perilProfile.build(created.id));
   }
   async function deleteIt() {
     if (!record || !window.confirm(`Delete the peril profile “${record.name}”?`)) return;
@@ -80,7 +80,7 @@ function Editor({ record, viewer }: { record: PerilProfileRecord | undefined; vi
       () => false,
     );
     if (!removed) return;
-    navigate(paths.perils.build());
+    void navigate(paths.perils.build());
   }
 
   return (

@@ -32,7 +32,7 @@ export default function PortfolioUploadPage() {
   async function save() {
     if (!file) return;
     const saved = await upload.mutateAsync({ file, name, description });
-    navigate(paths.portfolio.build(saved.id));
+    void navigate(paths.portfolio.build(saved.id));
   }
 
   return (

@@ -50,7 +50,7 @@ export function crossingBins(percentiles: Record<string, number | null>): Crossi
 
 /** One bar per year from per-year first-crossing shares (aligned with `years`); years nobody crosses in are left out. */
 export function crossingBinsPerYear(years: number[], shares: number[]): CrossingBin[] {
-  return years.flatMap((year, i) => (shares[i] ? [{ from: year, to: year + 1, share: shares[i]! }] : []));
+  return years.flatMap((year, i) => (shares[i] ? [{ from: year, to: year + 1, share: shares[i] }] : []));
 }
 
 const percent = (share: number) => `${(share * 100).toFixed(share > 0 && share < 0.01 ? 1 : 0)} %`;

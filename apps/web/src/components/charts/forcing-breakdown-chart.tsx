@@ -19,7 +19,7 @@ export interface AgentForcing {
  */
 export function ForcingBreakdownChart({ title, year, agents, total }: { title: string; year: number; agents: AgentForcing[]; total?: AgentForcing }) {
   const [ref, width] = useChartWidth<HTMLDivElement>();
-  const rows = total ? [...agents, total] : agents;
+  const rows = useMemo(() => (total ? [...agents, total] : agents), [agents, total]);
   const labelWidth = 150;
   const m = { top: 8, right: 20, bottom: 44, left: labelWidth };
   const rowH = 26;
@@ -29,7 +29,7 @@ export function ForcingBreakdownChart({ title, year, agents, total }: { title: s
   const lo = Math.min(0, ...rows.map((r) => r.p5));
   const hi = Math.max(0, ...rows.map((r) => r.p95));
   const x = useMemo(() => scaleLinear().domain([lo, hi]).range([0, innerWidth]).nice(), [lo, hi, innerWidth]);
-  const yb = useMemo(() => scaleBand<string>().domain(rows.map((r) => r.label)).range([0, innerHeight]).padding(0.3), [rows, innerHeight]);
+  const yb = useMemo(() => scaleBand().domain(rows.map((r) => r.label)).range([0, innerHeight]).padding(0.3), [rows, innerHeight]);
 
   return (
     <ChartFrame

@@ -31,7 +31,7 @@ export function PercentileStrips({ title, description, strips, axisLabel }: { ti
   const hi = Math.max(...strips.map((s) => s.p95));
   const pad = (hi - lo) * 0.05 || 0.5;
   const x = useMemo(() => scaleLinear().domain([lo - pad, hi + pad]).range([0, innerWidth]).nice(), [lo, hi, pad, innerWidth]);
-  const yb = useMemo(() => scaleBand<string>().domain(strips.map((s) => s.label)).range([0, innerHeight]).padding(0.35), [strips, innerHeight]);
+  const yb = useMemo(() => scaleBand().domain(strips.map((s) => s.label)).range([0, innerHeight]).padding(0.35), [strips, innerHeight]);
   return (
     <ChartFrame
       title={title}

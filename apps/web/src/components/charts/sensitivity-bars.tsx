@@ -27,7 +27,7 @@ export function SensitivityBars({ title, horizon, bars, indexLabel = "Rank corre
   const lo = Math.min(0, ...sorted.map((b) => b.index));
   const hi = Math.max(0.05, ...sorted.map((b) => b.index));
   const x = useMemo(() => scaleLinear().domain([lo, hi]).range([0, innerWidth]).nice(), [lo, hi, innerWidth]);
-  const yb = useMemo(() => scaleBand<string>().domain(sorted.map((b) => b.label)).range([0, innerHeight]).padding(0.25), [sorted, innerHeight]);
+  const yb = useMemo(() => scaleBand().domain(sorted.map((b) => b.label)).range([0, innerHeight]).padding(0.25), [sorted, innerHeight]);
 
   return (
     <ChartFrame
@@ -46,7 +46,7 @@ export function SensitivityBars({ title, horizon, bars, indexLabel = "Rank corre
                 <rect
                   x={Math.min(x(0), x(b.index))}
                   width={Math.abs(x(b.index) - x(0))}
-                  y={yb(b.label)!}
+                  y={yb(b.label)}
                   height={yb.bandwidth()}
                   fill={b.index >= 0 ? "var(--pl-ember-400)" : "var(--pl-series-2)"}
                 />

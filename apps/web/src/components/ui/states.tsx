@@ -69,7 +69,7 @@ export function ErrorState({ error, title, retry }: { error: unknown; title?: st
 
 export function InlineError({ error }: { error: unknown }) {
   if (!error) return null;
-  const message = error instanceof ApiError || error instanceof Error ? error.message : String(error);
+  const message = error instanceof ApiError || error instanceof Error ? error.message : typeof error === "string" ? error : "Something went wrong.";
   return (
     <p role="alert" className="text-sm font-medium text-danger">
       {message}

@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from "react";
+import { useState, type SubmitEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
 import type { AuditFilter } from "../api/get-audit";
@@ -18,12 +18,12 @@ const FIELDS: Array<[keyof AuditFilterFields, string, string]> = [
 export function AuditFilters({ value, onApply }: { value: AuditFilterFields; onApply: (f: AuditFilterFields) => void }) {
   const [draft, setDraft] = useState<AuditFilterFields>(value);
   const [errors, setErrors] = useState<Partial<Record<keyof AuditFilterFields, string>>>({});
-  function submit(e: FormEvent) {
+  function submit(e: SubmitEvent<HTMLFormElement>) {
     e.preventDefault();
     const next: typeof errors = {};
-    for (const k of ["from", "to"] as const) if (draft[k] && !/^\d{4}-\d{2}-\d{2}$/.test(draft[k]!)) next[k] = "Use a date like 2026-03-31";
+    for (const k of ["from", "to"] as const) if (draft[k] && !/^\d{4}-\d{2}-\d{2}$/.test(draft[k])) next[k] = "Use a date like 2026-03-31";
     setErrors(next);
-    if (Object.keys(next).length === 0) onApply(Object.fromEntries(Object.entries(draft).filter(([, v]) => v)) as AuditFilterFields);
+    if (Object.keys(next).length === 0) onApply(Object.fromEntries(Object.entries(draft).filter(([, v]) => v)));
   }
   return (
     <form noValidate onSubmit={submit} className="grid gap-3 sm:grid-cols-3 lg:grid-cols-[repeat(6,minmax(0,1fr))_auto]">

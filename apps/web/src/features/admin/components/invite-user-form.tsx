@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from "react";
+import { useState, type SubmitEvent } from "react";
 import { inviteUserBodySchema, roles } from "@plumeline/contracts";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select } from "@/components/ui/field";
@@ -14,7 +14,7 @@ export function InviteUserForm() {
   const invite = useInviteUser();
   const [errors, setErrors] = useState<Partial<Record<Name, string>>>({});
   const [done, setDone] = useState<string>();
-  function submit(e: FormEvent<HTMLFormElement>) {
+  function submit(e: SubmitEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = e.currentTarget;
     const parsed = inviteUserBodySchema.safeParse(Object.fromEntries(new FormData(form)));

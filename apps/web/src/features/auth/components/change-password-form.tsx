@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from "react";
+import { useState, type SubmitEvent } from "react";
 import { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
@@ -13,8 +13,8 @@ export const changePasswordSchema = z
     newPassword: newPasswordSchema,
     repeat: z.string(),
   })
-  .refine((v) => v.newPassword === v.repeat, { path: ["repeat"], message: "The two new passwords differ" })
-  .refine((v) => v.newPassword !== v.currentPassword, { path: ["newPassword"], message: "Choose a password different from the one you were sent" });
+  .refine((v) => v.newPassword === v.repeat, { path: ["repeat"], error: "The two new passwords differ" })
+  .refine((v) => v.newPassword !== v.currentPassword, { path: ["newPassword"], error: "Choose a password different from the one you were sent" });
 
 type Name = "currentPassword" | "newPassword" | "repeat";
 
@@ -22,7 +22,7 @@ type Name = "currentPassword" | "newPassword" | "repeat";
 export function ChangePasswordForm() {
   const change = useChangePassword();
   const [errors, setErrors] = useState<Partial<Record<Name, string>>>({});
-  function submit(e: FormEvent<HTMLFormElement>) {
+  function submit(e: SubmitEvent<HTMLFormElement>) {
     e.preventDefault();
     const parsed = changePasswordSchema.safeParse(Object.fromEntries(new FormData(e.currentTarget)));
     if (!parsed.success) {

@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from "react";
+import { useState, type SubmitEvent } from "react";
 import { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
@@ -6,7 +6,7 @@ import { InlineError } from "@/components/ui/states";
 import { useRequestPasswordReset } from "../api/request-password-reset";
 
 export const forgotPasswordSchema = z.object({
-  email: z.string().trim().min(1, "Enter your email address").email("Enter a valid email address"),
+  email: z.string().trim().min(1, "Enter your email address").pipe(z.email("Enter a valid email address")),
 });
 
 /**
@@ -18,7 +18,7 @@ export function ForgotPasswordForm() {
   const [error, setError] = useState<string>();
   const [sentTo, setSentTo] = useState<string>();
 
-  function submit(e: FormEvent<HTMLFormElement>) {
+  function submit(e: SubmitEvent<HTMLFormElement>) {
     e.preventDefault();
     const parsed = forgotPasswordSchema.safeParse(Object.fromEntries(new FormData(e.currentTarget)));
     if (!parsed.success) {

@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from "react";
+import { useState, type SubmitEvent } from "react";
 import { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
@@ -9,7 +9,7 @@ import { fieldErrors } from "@/lib/field-errors";
 
 export const resetPasswordSchema = z
   .object({ newPassword: newPasswordSchema, repeat: z.string() })
-  .refine((v) => v.newPassword === v.repeat, { path: ["repeat"], message: "The two passwords differ" });
+  .refine((v) => v.newPassword === v.repeat, { path: ["repeat"], error: "The two passwords differ" });
 
 type Name = "newPassword" | "repeat";
 
@@ -18,7 +18,7 @@ export function ResetPasswordForm({ token, onDone }: { token: string; onDone: ()
   const reset = useResetPassword();
   const [errors, setErrors] = useState<Partial<Record<Name, string>>>({});
 
-  function submit(e: FormEvent<HTMLFormElement>) {
+  function submit(e: SubmitEvent<HTMLFormElement>) {
     e.preventDefault();
     const parsed = resetPasswordSchema.safeParse(Object.fromEntries(new FormData(e.currentTarget)));
     if (!parsed.success) {

@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from "react";
+import { useState, type SubmitEvent } from "react";
 import { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
@@ -7,7 +7,7 @@ import { useSignIn } from "../api/sign-in";
 import { fieldErrors } from "@/lib/field-errors";
 
 export const signInSchema = z.object({
-  email: z.string().trim().min(1, "Enter your email address").email("Enter a valid email address"),
+  email: z.string().trim().min(1, "Enter your email address").pipe(z.email("Enter a valid email address")),
   password: z.string().min(1, "Enter your password"),
 });
 
@@ -15,7 +15,7 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
   const signIn = useSignIn();
   const [errors, setErrors] = useState<Partial<Record<"email" | "password", string>>>({});
 
-  function submit(e: FormEvent<HTMLFormElement>) {
+  function submit(e: SubmitEvent<HTMLFormElement>) {
     e.preventDefault();
     const data = Object.fromEntries(new FormData(e.currentTarget));
     const parsed = signInSchema.safeParse(data);

@@ -3,7 +3,9 @@ import { Table, Td, Th } from "@/components/ui/table";
 import { EmptyState } from "@/components/ui/states";
 import { TextLineDiff } from "./text-line-diff";
 
-const show = (v: unknown) => (v === null || v === undefined ? "—" : typeof v === "object" ? JSON.stringify(v) : String(v));
+const show = (v: unknown) => (v === null || v === undefined ? "—" : typeof v === "string" ? v : JSON.stringify(v));
+/** A text field's value for the line diff ("" when absent). */
+const asText = (v: unknown) => (v === null || v === undefined ? "" : typeof v === "string" ? v : JSON.stringify(v));
 
 /** Pinned peril profiles read as names when the caller knows them (ids otherwise). */
 const showValue = (path: string, v: unknown, profileNames?: ReadonlyMap<string, string>) =>
@@ -43,7 +45,7 @@ export function DiffTable({ diff, profileNames }: { diff: ModelVersionDiff; prof
                 <code className="text-xs">{c.path}</code>
               </Td>
               <Td colSpan={2}>
-                <TextLineDiff before={String(c.before ?? "")} after={String(c.after ?? "")} />
+                <TextLineDiff before={asText(c.before)} after={asText(c.after)} />
               </Td>
             </tr>
           ) : (

@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from "react";
+import { useState, type SubmitEvent } from "react";
 import {
   AGENT_LABELS,
   CLIMATE_INPUTS,
@@ -84,7 +84,7 @@ export function ModelEditor({
   const [addAgent, setAddAgent] = useState<ForcingAgent | "">("");
   const inputs = [...CLIMATE_INPUTS, ...FORCING_AGENTS];
 
-  function submit(e: FormEvent) {
+  function submit(e: SubmitEvent<HTMLFormElement>) {
     e.preventDefault();
     const next: Record<string, string> = {};
     const badInput = [...Object.entries(climate), ...Object.entries(agents)].filter(([, d]) => d === null).map(([k]) => inputLabel(k));
@@ -109,7 +109,7 @@ export function ModelEditor({
     if (Object.keys(next).length === 0) {
       const parsed = createModelVersionBodySchema.safeParse(body);
       if (!parsed.success) {
-        for (const i of parsed.error.issues) next[formatPath(i.path.filter((p) => typeof p !== "symbol") as Array<string | number>)] ??= i.message;
+        for (const i of parsed.error.issues) next[formatPath(i.path.filter((p): p is string | number => typeof p !== "symbol"))] ??= i.message;
       } else {
         setErrors({});
         onSave(body as CreateModelVersionBody);
@@ -180,8 +180,7 @@ export function ModelEditor({
                 className="absolute bottom-2 right-3 text-xs text-danger hover:underline"
                 onClick={() =>
                   setAgents((s) => {
-                    const next = { ...s };
-                    delete next[a];
+                    const { [a]: _removed, ...next } = s;
                     return next;
                   })
                 }

@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from "react";
+import { useState, type SubmitEvent } from "react";
 import { pathwayMetadataSchema, type Pathway, type PathwayPreview } from "@plumeline/contracts";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Textarea } from "@/components/ui/field";
@@ -35,7 +35,7 @@ export function PathwayUploadForm({ onSaved }: { onSaved: (p: Pathway) => void }
     return { file, ...parsed.data };
   }
 
-  function onPreview(e: FormEvent<HTMLFormElement>) {
+  function onPreview(e: SubmitEvent<HTMLFormElement>) {
     e.preventDefault();
     const value = read(e.currentTarget);
     if (!value) return;

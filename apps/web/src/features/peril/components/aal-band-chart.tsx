@@ -52,7 +52,7 @@ export function AalBandChart({
   const { innerWidth, innerHeight } = innerSize(width, height, m);
   const x = useMemo(
     () =>
-      scaleBand<string>()
+      scaleBand()
         .domain([...(today !== null ? [TODAY] : []), ...horizons.map((h) => String(h.year))])
         .range([0, innerWidth])
         .padding(0.2),

@@ -137,7 +137,7 @@ function ProfileSection({ profile, baselineRows }: { profile: PerilProfileResult
                   title={`Projected AAL by horizon — ${loss.region}, ${loss.peril}`}
                   currency={loss.currency}
                   baselineAal={baseline?.aal ?? null}
-                  horizons={profile.horizons.flatMap((h) => (h.losses[li] ? [{ year: h.year, summary: h.losses[li]!.aal }] : []))}
+                  horizons={profile.horizons.flatMap((h) => (h.losses[li] ? [{ year: h.year, summary: h.losses[li].aal }] : []))}
                 />
               </PanelErrorBoundary>
             </section>

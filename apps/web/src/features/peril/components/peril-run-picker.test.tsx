@@ -12,7 +12,10 @@ const portfolios = [{ id: "pf", name: "Demo baseline", rowCount: 5 }];
 
 function Harness({ onChoice }: { onChoice: (c: PerilRunChoice) => void }) {
   const [value, setValue] = useState<PerilRunChoice>({ perilProfileIds: [], portfolioId: null });
-  return <PerilRunPicker profiles={profiles} portfolios={portfolios} value={value} onChange={(c) => (setValue(c), onChoice(c))} />;
+  return <PerilRunPicker profiles={profiles} portfolios={portfolios} value={value} onChange={(c) => {
+        setValue(c);
+        onChoice(c);
+      }} />;
 }
 
 describe("PerilRunPicker", () => {

@@ -1,8 +1,10 @@
-import type { ResultTable } from "@plumeline/contracts";
 import { buildUrl } from "@/lib/api-client";
 
-/** Download addresses; the browser sends the session cookie, the server records each export. */
-export const tableCsvUrl = (runId: string, table: ResultTable | string) =>
+/**
+ * Download addresses; the browser sends the session cookie, the server records each export.
+ * `table` is a result table's name (contracts' ResultTable, or a peril table of the run).
+ */
+export const tableCsvUrl = (runId: string, table: string) =>
   buildUrl(`/api/runs/${encodeURIComponent(runId)}/tables/${encodeURIComponent(table)}.csv`);
 
 export const workbookUrl = (runId: string) => buildUrl(`/api/runs/${encodeURIComponent(runId)}/workbook.xlsx`);

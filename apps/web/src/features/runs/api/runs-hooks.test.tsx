@@ -23,7 +23,7 @@ describe("run hooks", () => {
     expect(client.getQueryData(["runs", "list", { mine: true, status: null }])).toHaveLength(1);
   });
 
-  it("polls while a listed run is active and stops once none is", async () => {
+  it("polls while a listed run is active and stops once none is", () => {
     // Defaults from env: poll every 1500 ms while any run is queued or running.
     const opts = getRunsQueryOptions();
     const interval = opts.refetchInterval as (q: { state: { data: unknown } }) => number | false;

@@ -47,7 +47,7 @@ export function HorizonTable({ pathway, unit = "K" }: { pathway: PathwayResult; 
                     {h.temperature[k]?.toFixed(2) ?? "–"}
                     {ci && (
                       <span className="block text-[10px] font-normal text-faint" title="95 % Monte Carlo interval of this percentile (order statistics)">
-                        ±{(((ci[1] - ci[0]) / 2) as number).toFixed(2)}
+                        ±{(((ci[1] - ci[0]) / 2)).toFixed(2)}
                       </span>
                     )}
                   </Td>

@@ -1,4 +1,4 @@
-import { useEffect, useLayoutEffect, useState } from "react";
+import { useEffect, useLayoutEffect, useMemo, useState } from "react";
 import type { Run, RunResult } from "@plumeline/contracts";
 import { FanChart } from "@/components/charts/fan-chart";
 import { ExceedanceChart } from "@/components/charts/exceedance-chart";
@@ -52,7 +52,7 @@ export function ResultView({ run, result }: { run: Run; result: RunResult }) {
   const constraint = spec.model?.constraint ?? null;
   const [pathwayId, setPathwayId] = useState(result.pathways[0]?.id ?? "");
   const pathway = result.pathways.find((p) => p.id === pathwayId) ?? result.pathways[0];
-  const horizons = pathway?.horizons.map((h) => h.year) ?? [];
+  const horizons = useMemo(() => pathway?.horizons.map((h) => h.year) ?? [], [pathway]);
   const [horizon, setHorizon] = useState<number>(horizons.at(-1) ?? 0);
   const thresholds = pathway ? Object.keys(pathway.crossing).sort((a, b) => Number(a) - Number(b)) : [];
   const [threshold, setThreshold] = useState(thresholds[1] ?? thresholds[0] ?? "");

@@ -1,4 +1,4 @@
-import { useMemo, useState, type FormEvent, type ReactNode } from "react";
+import { useMemo, useState, type SubmitEvent, type ReactNode } from "react";
 import { createRunBodySchema, type CreateRunBody, type ModelVersionStatus, type RunSummary } from "@plumeline/contracts";
 import { Button } from "@/components/ui/button";
 import { ExploratoryStamp } from "@/components/ui/badges";
@@ -57,21 +57,21 @@ export function RunForm({
   const [seed] = useState(randomSeed);
   const defaults = useMemo(() => version?.defaults ?? { horizons: [2030, 2050, 2100], thresholds: [1.5, 2, 3] }, [version]);
 
-  function submit(e: FormEvent<HTMLFormElement>) {
+  function submit(e: SubmitEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const next: Partial<Record<FieldName, string>> = {};
-    const horizons = parseNumbers(String(form.get("horizons") ?? ""));
-    const thresholds = parseNumbers(String(form.get("thresholds") ?? ""));
+    const horizons = parseNumbers(formText(form, "horizons"));
+    const thresholds = parseNumbers(formText(form, "thresholds"));
     if ("bad" in horizons) next.horizons = `"${horizons.bad}" is not a year; list years separated by commas`;
     if ("bad" in thresholds) next.thresholds = `"${thresholds.bad}" is not a number; list warming levels in K separated by commas`;
-    const membersText = String(form.get("members") ?? "").trim();
+    const membersText = formText(form, "members").trim();
     const body: CreateRunBody = {
-      name: String(form.get("name") ?? "").trim() || undefined,
+      name: formText(form, "name").trim() || undefined,
       modelVersionId: versionId,
       pathwayIds: selected,
       members: membersText === "" ? Number.NaN : Number(membersText),
-      seed: String(form.get("seed") ?? ""),
+      seed: formText(form, "seed"),
       sampling,
       horizons: "values" in horizons && horizons.values.length ? horizons.values : undefined,
       thresholds: "values" in thresholds && thresholds.values.length ? thresholds.values : undefined,
@@ -189,4 +189,10 @@ export function RunForm({
       </div>
     </form>
   );
+}
+
+/** A text field of the submitted form ("" when missing; the form has no file inputs). */
+function formText(form: FormData, name: string): string {
+  const value = form.get(name);
+  return typeof value === "string" ? value : "";
 }

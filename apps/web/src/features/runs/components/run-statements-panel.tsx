@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from "react";
+import { useState, type SubmitEvent } from "react";
 import { createRunStatementBodySchema, RUN_STATEMENT_MAX_LENGTH, type RunStatementKind } from "@plumeline/contracts";
 import { Button } from "@/components/ui/button";
 import { Field, Textarea } from "@/components/ui/field";
@@ -24,7 +24,7 @@ export function RunStatementsPanel({ runId, canRecord }: { runId: string; canRec
   const [text, setText] = useState("");
   const [error, setError] = useState<string>();
 
-  function submit(e: FormEvent) {
+  function submit(e: SubmitEvent<HTMLFormElement>) {
     e.preventDefault();
     const parsed = createRunStatementBodySchema.safeParse({ kind, text });
     if (!parsed.success) {
