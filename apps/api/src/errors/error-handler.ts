@@ -20,6 +20,7 @@ const statusByAppErrorStatus: Record<AppErrorStatus, number> = {
   404: 404,
   409: 409,
   413: 413,
+  429: 429,
 };
 
 interface Mapped {
