@@ -1,11 +1,11 @@
 /**
- * Published anchor values the demo pathways are shaped from (CHECKS.md, with its flags).
+ * Published anchor values the demo pathways are shaped from, with how sure each is.
  *
  * ERF 2019 vs 1750 by agent, W m-2: IPCC AR6 WGI Chapter 7 (Forster et al. 2021), Table 7.8;
  * central values for CO2, CH4, N2O, halogenated gases, ozone, total aerosol and land use also
- * in the AR6 Technical Summary §TS.2.2 [read-P]; aerosol–radiation / aerosol–cloud split
- * [read-S]; solar [read-S]. Concentrations 1750 and 2019: AR6 TS §TS.2.2 (2019 values and
- * increases [read-P], 1750 by subtraction [computed]; CH4 729.2 ppb [memory]).
+ * in the AR6 Technical Summary Section TS.2.2; the aerosol–radiation / aerosol–cloud split and
+ * solar read in secondary copies of Table 7.8. Concentrations 1750 and 2019: AR6 TS Section
+ * TS.2.2 (2019 values and increases; 1750 by subtraction, computed; CH4 729.2 ppb from memory).
  */
 export const AR6_ERF_2019 = {
   co2: 2.16,
