@@ -1,10 +1,6 @@
 import type { CreateModelVersionBody } from "@plumeline/contracts";
 
 /**
-<<<<<<< HEAD
- * Demo model versions: AR6-based defaults, each with its source in the notes and how sure
- * each value is, in words. ILLUSTRATIVE: the ocean-layer parameters in particular are not a fit.
-=======
  * Demo model versions: AR6-based defaults, each with its source in the notes (and how sure
  * the value is, in plain words). ILLUSTRATIVE: the ocean-layer parameters are not a fit.
  *
@@ -12,7 +8,6 @@ import type { CreateModelVersionBody } from "@plumeline/contracts";
  * it reproduces the observed decade (its approval comment states the numbers, checked by
  * demo-approved-warming.test.ts). v2 is a draft trial of the same prior constrained by the
  * 2001–2020 observations instead.
->>>>>>> main
  */
 export interface DemoModelVersion {
   key: "harbourline-core-v1" | "harbourline-core-v2-trial-2001-2020";
@@ -33,16 +28,10 @@ const round = (v: number) => Math.round(v * 1000) / 1000;
 
 const PRIOR_NOTES = [
   "ILLUSTRATIVE demo assumptions for Harbourline Mutual (invented insurer). Sources, with how sure each value is:",
-<<<<<<< HEAD
-  "- ECS: median 3 K, 5–95 % 2 to 5 K (IPCC AR6 WGI SPM A.4.4 / TS Section TS.3.2.1, 'very likely'), fitted lognormal. AR6's range is not exactly lognormal (its 5 % and 95 % ends imply log-sds of 0.25 and 0.31); the fit is a choice.",
-  "- F2x (ERF of doubled CO2): 3.93 W m-2, ±0.47 read as a 5–95 % range (AR6 WGI Ch. 7 Section 7.3.2.1, seen in a secondary copy; the TS rounds to 3.9 ± 0.5).",
-  "- Forcing scale factors: 5–95 % ranges of AR6 Table 7.8 (2019 vs 1750) divided by their central values — CO2 2.16 [1.90–2.41], CH4 0.54 [0.43–0.65], N2O 0.21 [0.18–0.24], halogenated 0.41 [0.33–0.49], ozone 0.47 [0.24–0.71], aerosol–radiation −0.22 [−0.47 to +0.04], aerosol–cloud −0.84 [−1.45 to −0.25], land use −0.20 [−0.30 to −0.10]. Ranges for CO2/CH4/N2O/halogens/aerosol split were read in secondary copies of the table.",
-=======
-  "- ECS: median 3 K, 5–95 % 2 to 5 K (IPCC AR6 WGI SPM A.4.4 and TS §TS.3.2.1, 'very likely'), drawn from a two-piece lognormal (log-spread below the median from the 5 % end, above it from the 95 % end), as AR6's range is not one lognormal; the shape is our choice.",
+  "- ECS: median 3 K, 5–95 % 2 to 5 K (IPCC AR6 WGI SPM A.4.4 and TS Section TS.3.2.1, 'very likely'), drawn from a two-piece lognormal (log-spread below the median from the 5 % end, above it from the 95 % end), as AR6's range is not one lognormal; the shape is our choice.",
   "- F2x (ERF of doubled CO2): 3.93 W m-2, ±0.47 read as a 5–95 % range (AR6 WGI Ch. 7 Section 7.3.2.1, quoted in a secondary copy; the Technical Summary prints 3.9 ± 0.5).",
   "- Forcing scale factors: 5–95 % ranges of AR6 WGI Ch. 7 Table 7.8 (Forster et al. 2021; 2019 vs 1750) divided by their central values — CO2 2.16 [1.90–2.41], CH4 0.54 [0.43–0.65], N2O 0.21 [0.18–0.24], halogenated 0.41 [0.33–0.49], ozone 0.47 [0.24–0.71], aerosol–radiation −0.22 [−0.47 to +0.04], aerosol–cloud −0.84 [−1.45 to −0.25], land use −0.20 [−0.30 to −0.10]. The central values for CO2–ozone and land use are printed in the AR6 Technical Summary; the ranges for CO2/CH4/N2O/halogens and the aerosol split were read in secondary copies of the table.",
   "- Other (stratospheric water vapour from CH4 0.05 [0.00–0.10], light-absorbing particles on snow and ice 0.08 [0.00–0.18], contrails and aviation-induced cirrus 0.06 [0.02–0.10]; Table 7.8 rows from memory): 0.19 W m-2, range 0.088–0.309 from adding the three half-widths in quadrature (independent parts). With it the 2019 total anthropogenic ERF is AR6's 2.72 [1.96 to 3.48] W m-2 (SPM A.4.1).",
->>>>>>> main
   "- Two-layer ocean: upper heat capacity ~7.3, deep ~106 W yr m-2 K-1, exchange ~0.73 W m-2 K-1 (CMIP5 multi-model means after Geoffroy et al. 2013a, from memory, not verified); deep-ocean efficacy 1 to 1.6 around ~1.28 (Geoffroy et al. 2013b, from memory). Spreads are our illustrative choice.",
   "- No input correlations.",
 ].join("\n");
@@ -60,14 +49,8 @@ const NOTES_V1 =
   `\n- Observational constraint: members weighted by how well their 2011–2020 mean warming matches the observed 1.09 K [0.95–1.20] over 1850–1900 (IPCC AR6 WGI SPM A.1.2, 5–95 %); observational sd ${OBSERVED_2011_2020.sd} K = (1.20 − 0.95) / (2 × 1.645).`;
 
 const NOTES_V2 =
-<<<<<<< HEAD
-  NOTES_V1.replace("- No observational constraint, no input correlations.", "") +
-  "- Observational constraint: GMST 2011–2020 vs 1850–1900 = 1.09 K [0.95–1.20] very likely (AR6 SPM A.1.2); sd 0.076 K = (1.20 − 0.95) / (2 × 1.645) (computed).\n" +
-  "- No input correlations.";
-=======
   PRIOR_NOTES +
   `\n- Trial observational constraint: the 2001–2020 mean instead, observed 0.99 K [0.84–1.10] over 1850–1900 (IPCC AR6 WGI SPM A.1.2, 5–95 %); observational sd ${OBSERVED_2001_2020.sd} K = (1.10 − 0.84) / (2 × 1.645). Draft: for comparison with v1, not approved.`;
->>>>>>> main
 
 const climate = {
   ecs: { type: "range", p50: 3, low: 2, high: 5, coverage: 90, shape: "lognormal" },

@@ -1,13 +1,4 @@
 /**
-<<<<<<< HEAD
- * Published anchor values the demo pathways are shaped from, with how sure each is.
- *
- * ERF 2019 vs 1750 by agent, W m-2: IPCC AR6 WGI Chapter 7 (Forster et al. 2021), Table 7.8;
- * central values for CO2, CH4, N2O, halogenated gases, ozone, total aerosol and land use also
- * in the AR6 Technical Summary Section TS.2.2; the aerosol–radiation / aerosol–cloud split and
- * solar read in secondary copies of Table 7.8. Concentrations 1750 and 2019: AR6 TS Section
- * TS.2.2 (2019 values and increases; 1750 by subtraction, computed; CH4 729.2 ppb from memory).
-=======
  * Published anchor values the demo pathways are shaped from.
  *
  * ERF 2019 vs 1750 by agent, W m-2: IPCC AR6 WGI Chapter 7 (Forster et al. 2021), Table 7.8.
@@ -18,9 +9,8 @@
  * particles on snow and ice 0.08, contrails and aviation-induced cirrus 0.06) are Table 7.8
  * rows quoted from memory. With them the anthropogenic agents add up to AR6's total
  * anthropogenic ERF of 2.72 W m-2 (AR6 WGI SPM A.4.1).
- * Concentrations 1750 and 2019: AR6 TS §TS.2.2 (2019 values and increases as printed, 1750
+ * Concentrations 1750 and 2019: AR6 TS Section TS.2.2 (2019 values and increases as printed, 1750
  * by subtraction; CH4 729.2 ppb from memory).
->>>>>>> main
  */
 export const AR6_ERF_2019 = {
   co2: 2.16,
