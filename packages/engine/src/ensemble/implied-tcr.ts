@@ -5,7 +5,7 @@ export const TCR_YEAR = 70;
 
 /**
  * Each member's transient climate response: the upper-layer warming at year 70 of a
- * 1 %/yr CO2 increase, whose forcing F2x·t·ln(1.01)/ln 2 rises linearly (CHECKS.md §5.2).
+ * 1 %/yr CO2 increase, whose forcing F2x·t·ln(1.01)/ln 2 rises linearly (Geoffroy et al. 2013a linear-forcing case).
  * Each year uses the member's exact propagator for a forcing rising linearly within the
  * year (b·F at the year's start plus r·ΔF), so the result equals the closed form of
  * Geoffroy et al. 2013a for a linear forcing. Cost O(members × 70).

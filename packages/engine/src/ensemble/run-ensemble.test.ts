@@ -5,7 +5,7 @@ import { preparePlan } from "./prepare-plan.js";
 import { runEnsemble } from "./run-ensemble.js";
 import { baseSpec, fixedClimate, rampPathway } from "./test-support/specs.js";
 
-// Standard normal quantiles, CHECKS.md §7.1 (SciPy 1.17).
+// Standard normal quantiles, scipy.stats.norm.ppf (SciPy 1.17).
 const Z: Record<string, number> = { p5: -1.644853627, p17: -0.9541652531, p50: 0, p83: 0.9541652531, p95: 1.644853627 };
 
 function hasNonFinite(value: unknown): boolean {
@@ -133,7 +133,7 @@ describe("runEnsemble", () => {
     expect(runEnsemble(rest).inputHash).toBe(runEnsemble(spec).inputHash);
   });
 
-  it("implied TCR of a fixed climate equals the closed form (CHECKS.md §5.3: 2.0290 K for F2x = 3.71)", () => {
+  it("implied TCR of a fixed climate equals the closed form (Geoffroy et al. 2013a ramp solution, computed: 2.0290 K for F2x = 3.71)", () => {
     const spec = baseSpec({ members: 3, model: { ...baseSpec().model, climate: fixedClimate(), agents: {} } });
     const result = runEnsemble(spec);
     expect(result.implied.tcr.p50).toBeCloseTo(2.029, 3);

@@ -27,8 +27,8 @@ describe("imanConover", () => {
   ];
   const correlated = imanConover(inputs, target, createRandom("ic-scores"));
 
-  it("achieves Spearman −0.3 and 0.6 within sampling error at n = 5000 (Iman & Conover 1982; CHECKS.md §7.6)", () => {
-    // CHECKS.md §7.6: the induced rank correlation approximately equals the target; the sd of a
+  it("achieves Spearman −0.3 and 0.6 within sampling error at n = 5000 (Iman & Conover 1982)", () => {
+    // Iman & Conover 1982: the induced rank correlation approximately equals the target; the sd of a
     // sample Spearman coefficient is about 1/√n = 0.014, so ±0.03 is generous.
     expect(spearmanReference(correlated[0]!, correlated[1]!)).toBeCloseTo(-0.3, 1);
     expect(Math.abs(spearmanReference(correlated[0]!, correlated[1]!) + 0.3)).toBeLessThan(0.03);

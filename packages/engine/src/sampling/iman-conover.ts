@@ -7,7 +7,7 @@ import { shuffleInPlace } from "./shuffle.js";
  * Reorders sampled columns so their rank correlations approach `target`, keeping every
  * column's values (its marginal) exactly.
  *
- * Method (Iman & Conover 1982; steps as in CHECKS.md §7.6):
+ * Method (Iman & Conover 1982; steps as in R. Wicklin, SAS blog, 2021):
  * 1. van der Waerden scores Φ⁻¹(i/(n+1)), i = 1 … n, independently shuffled per column (S);
  * 2. Q = Cholesky factor of corr(S), P = Cholesky factor of the target;
  * 3. transformed scores Y = S·(P·Q⁻¹)ᵀ, i.e. each member's score row y = P·Q⁻¹·s;
