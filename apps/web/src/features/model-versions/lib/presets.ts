@@ -1,7 +1,8 @@
 import type { Distribution } from "@plumeline/contracts";
 
 /**
- * Assessed ranges offered as one-click presets, each with its source (CHECKS.md §3.3, §7.2).
+ * Assessed ranges offered as one-click presets, each with its source (IPCC AR6 WGI SPM A.4.4,
+ * TS Section TS.3.2.1, Ch. 7 Section 7.3.2.1).
  * The range fits are the editor's "from a range" construction, not the assessment's own shape.
  */
 export const PRESETS: Record<string, Array<{ label: string; source: string; value: Distribution }>> = {
@@ -20,7 +21,7 @@ export const PRESETS: Record<string, Array<{ label: string; source: string; valu
   f2x: [
     {
       label: "AR6: 3.93 ± 0.47 W m-2",
-      source: "IPCC AR6 WGI §7.3.2.1, read as a 5–95 % range (CHECKS.md §3)",
+      source: "IPCC AR6 WGI Ch. 7 Section 7.3.2.1, ±0.47 read as a 5–95 % range",
       value: { type: "range", p50: 3.93, low: 3.46, high: 4.4, coverage: 90, shape: "split-normal" },
     },
     { label: "5.35 ln 2 = 3.71 W m-2 (fixed)", source: "Myhre et al. 1998 logarithmic CO2 expression", value: { type: "fixed", value: 3.7083 } },
