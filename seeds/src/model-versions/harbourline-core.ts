@@ -23,7 +23,7 @@ const round = (v: number) => Math.round(v * 1000) / 1000;
 
 const NOTES_V1 = [
   "ILLUSTRATIVE demo assumptions for Harbourline Mutual (invented insurer). Sources, with how sure each value is:",
-  "- ECS: median 3 K, 5–95 % 2 to 5 K (IPCC AR6 WGI SPM A.4.4 / TS §TS.3.2.1, 'very likely'), fitted lognormal. AR6's range is not exactly lognormal; the fit is a choice (see CHECKS.md §3.3).",
+  "- ECS: median 3 K, 5th–95th percentiles 2 to 5 K (IPCC 2021, AR6 WG1 SPM A.4.4: best estimate 3 K, “very likely range” 2 to 5 K), fitted as a split (two-piece) lognormal: each half keeps the median and one end, so the density jumps at the median. AR6 gives no shape for its range; the fit is a choice.",
   "- F2x (ERF of doubled CO2): 3.93 W m-2, ±0.47 read as a 5–95 % range (AR6 §7.3.2.1 via a secondary copy; the TS rounds to 3.9 ± 0.5).",
   "- Forcing scale factors: 5–95 % ranges of AR6 Table 7.8 (2019 vs 1750) divided by their central values — CO2 2.16 [1.90–2.41], CH4 0.54 [0.43–0.65], N2O 0.21 [0.18–0.24], halogenated 0.41 [0.33–0.49], ozone 0.47 [0.24–0.71], aerosol–radiation −0.22 [−0.47 to +0.04], aerosol–cloud −0.84 [−1.45 to −0.25], land use −0.20 [−0.30 to −0.10]. Ranges for CO2/CH4/N2O/halogens/aerosol split are [read-S].",
   "- Two-layer ocean: upper heat capacity ~7.3, deep ~106 W yr m-2 K-1, exchange ~0.73 W m-2 K-1 (CMIP5 multi-model means after Geoffroy et al. 2013a, from memory, not verified); deep-ocean efficacy 1 to 1.6 around ~1.28 (Geoffroy et al. 2013b, from memory). Spreads are our illustrative choice.",
@@ -32,7 +32,7 @@ const NOTES_V1 = [
 
 const NOTES_V2 =
   NOTES_V1.replace("- No observational constraint, no input correlations.", "") +
-  "- Observational constraint: GMST 2011–2020 vs 1850–1900 = 1.09 K [0.95–1.20] very likely (AR6 SPM A.1.2); sd 0.076 K = (1.20 − 0.95) / (2 × 1.645) (CHECKS.md §4, computed).\n" +
+  "- Observational constraint: GMST 2011–2020 vs 1850–1900 = 1.09 K (IPCC 2021, AR6 WG1 SPM A.1.2: “very likely range” 0.95 to 1.20 K); sd 0.076 K = (1.20 − 0.95) / (2 × 1.645), computed.\n" +
   "- No input correlations.";
 
 const climate = {
