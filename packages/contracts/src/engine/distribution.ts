@@ -1,7 +1,7 @@
 import { z } from "zod";
 
 /**
- * One uncertain input, as the engine contract spells it (DESIGN.md "Engine contract").
+ * One uncertain input, as the engine contract spells it (packages/engine/README.md).
  * Units follow the input it describes (K, W m-2, W yr m-2 K-1, W m-2 K-1, or a unitless scale).
  * "range" is how assessment reports publish an input: a median with a 90 % (5–95) or
  * 66 % (17–83) range, fitted as a split (two-piece) law — lognormal or normal — whose halves

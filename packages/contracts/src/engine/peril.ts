@@ -3,7 +3,7 @@ import currencyCodes from "currency-codes";
 import { distributionSchema, type Distribution } from "./distribution.js";
 
 /**
- * Peril lens (DESIGN.md "Peril lens"): how a hazard or loss metric scales with global
+ * Peril lens: how a hazard or loss metric scales with global
  * warming beyond the warming already in the insurer's own view of risk, and the portfolio
  * baseline figures it is applied to.
  *
@@ -152,7 +152,7 @@ export const perilProfileSchema = z
       `must lie between ${BASELINE_WARMING_RANGE[0]} and ${BASELINE_WARMING_RANGE[1]} K (warming above 1850–1900 already in the risk view)`,
     ),
     scaling: perilScalingSchema,
-    /** Where the scaling comes from, with its flag (e.g. "AR6 SPM B.2.4 [read-P]"). */
+    /** Where the scaling comes from and how sure it is (e.g. "AR6 WGI SPM B.2.4; common practice"). */
     source: z.string({ error: "must be text" }).trim().max(500, "must be at most 500 characters").optional(),
   })
   .strict();

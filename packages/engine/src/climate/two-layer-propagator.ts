@@ -41,10 +41,10 @@ export const PROPAGATOR_TERMS = 8;
  * Cost O(1): one exp and three expm1 calls.
  * References: Held et al. (2010), J. Climate 23, 2418–2427; Geoffroy et al. (2013a,b),
  * J. Climate 26, 1841–1857 and 1859–1876; C. F. Van Loan (1978), IEEE Trans. Automat.
- * Control 23(3), 395–404; CHECKS.md §5.2.
+ * Control 23(3), 395–404.
  *
  * Example: for C = 7.3, C0 = 106, λ = 1.13, γ = 0.73, ε = 1, one year of F = 1 from rest
- * gives T = b1 = 0.120941 K (CHECKS.md §5.3, t = 1).
+ * gives T = b1 = 0.120941 K (the Geoffroy et al. 2013a step solution at t = 1, computed).
  */
 export function twoLayerPropagator(p: TwoLayerParameters): TwoLayerPropagator {
   validateTwoLayerParameters(p);

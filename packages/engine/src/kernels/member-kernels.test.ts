@@ -7,7 +7,7 @@ import { memberKernels } from "./member-kernels.js";
 /*
  * The kernels against the plain arithmetic they stand for, written here in TypeScript one
  * member at a time, in the same order of operations (the two-layer step as
- * two-layer-propagator.ts defines it; the closed-form checks of CHECKS.md §5.3 and §6 run
+ * two-layer-propagator.ts defines it; the closed-form checks (Geoffroy et al. 2013a, one-box model) run
  * through these kernels in climate/ and ensemble/ tests). IEEE 754 double arithmetic
  * in the same order gives the same bits, so equality is exact: any difference is a bug.
  */

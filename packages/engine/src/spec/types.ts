@@ -1,7 +1,7 @@
 /**
  * The run spec and result as the engine sees them. They mirror the shared contracts
  * (packages/contracts/src/engine) field for field, but the engine library imports nothing
- * of ours, so the shapes are restated here. DESIGN.md "Engine contract" fixes the names.
+ * of ours, so the shapes are restated here. The contracts schema fixes the names.
  */
 import type { Distribution } from "../distributions/types.js";
 import type { PerilProfile, PerilResult, Portfolio } from "../peril/types.js";

@@ -115,7 +115,7 @@ describe("peril result tables", () => {
     const row = table.rows.find((r) => r[8] === 2100 && r[9] === 100)!;
     const json = heat.returnPeriods!["100"];
     expect(row.slice(10)).toEqual([json.p5, json.p17, json.p50, json.p83, json.p95, json.mean]);
-    // Return-period identity T' = T / m (DESIGN.md): the 5th percentile of 100/m sits next to 100 / (95th percentile of m).
+    // Return-period identity T' = T / m (return period = 1 / annual frequency): the 5th percentile of 100/m sits next to 100 / (95th percentile of m).
     // Not equal: R-7 interpolates between order statistics, and 100/m is convex, so the interpolated value is the larger.
     const identity = 100 / heat.multiplier.p95!;
     expect(row[10] as number).toBeGreaterThanOrEqual(identity - 1e-12);
@@ -127,7 +127,7 @@ describe("peril result tables", () => {
     expect(table.rows).toHaveLength(2 * 3 * 3);
     expect(table.rows.some((r) => r[4] === "hail")).toBe(false);
     expect(result.perils!.unmatchedRows).toEqual([{ region: "South", peril: "hail" }]);
-    // Severity: AAL scales by the multiplier, member by member (DESIGN.md "Peril lens"); the median of m·AAL is AAL × median m.
+    // Severity: AAL scales by the multiplier, member by member (severity scaling of the peril lens, packages/engine/src/peril); the median of m·AAL is AAL × median m.
     const flood = result.perils!.pathways[0]!.profiles[0]!.horizons[0]!;
     const aal = table.rows.find((r) => r[2] === "flood" && r[8] === 2030 && r[10] === "aal")!;
     expect(aal[13]).toBeCloseTo(1000 * flood.multiplier.p50!, 6);

@@ -3,7 +3,8 @@ import type { Distribution } from "@plumeline/contracts";
 /**
  * Assessed ranges offered as one-click presets, each with its source. Labels name a range by
  * its percentiles; the assessment's own likelihood term appears only inside “…” quotation marks,
- * with its citation, in the source line. The range fits are the editor's "from a range" construction (a split,
+ * with its citation, in the source line (IPCC AR6 WGI SPM A.4.4, TS Section TS.3.2.1, Ch. 7
+ * Section 7.3.2.1). The range fits are the editor's "from a range" construction (a split,
  * two-piece law), not the assessment's own shape.
  */
 export const PRESETS: Record<string, Array<{ label: string; source: string; value: Distribution }>> = {
@@ -22,7 +23,7 @@ export const PRESETS: Record<string, Array<{ label: string; source: string; valu
   f2x: [
     {
       label: "AR6: 3.93 ± 0.47 W m-2",
-      source: "IPCC AR6 WG1 Chapter 7, section 7.3.2.1 (Forster et al. 2021): 3.93 ± 0.47 W m-2, read as 5th–95th percentiles; split normal fit",
+      source: "IPCC AR6 WGI Ch. 7 Section 7.3.2.1 (Forster et al. 2021): 3.93 ± 0.47 W m-2, read as 5th–95th percentiles; split (two-piece) normal fit",
       value: { type: "range", p50: 3.93, low: 3.46, high: 4.4, coverage: 90, shape: "split-normal" },
     },
     { label: "5.35 ln 2 = 3.71 W m-2 (fixed)", source: "Myhre et al. 1998 logarithmic CO2 expression", value: { type: "fixed", value: 3.7083 } },
