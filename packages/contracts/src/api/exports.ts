@@ -13,6 +13,7 @@ export const RESULT_TABLES = [
   "peril-multipliers",
   "peril-return-periods",
   "peril-losses",
+  "portfolio-totals",
 ] as const;
 export type ResultTable = (typeof RESULT_TABLES)[number];
 

@@ -72,6 +72,33 @@ describe("GET /api/runs/:id/workbook.xlsx", () => {
     expect(hRow.slice(3, 9)).toEqual([2100, h2100.temperature.p5, h2100.temperature.p17, h2100.temperature.p50, h2100.temperature.p83, h2100.temperature.p95]);
   });
 
+  it("formats every numeric cell (years as 0, chances as %, kelvin as 0.00), freezes the header rows, sizes the columns", () => {
+    let numeric = 0;
+    for (const sheet of workbook.worksheets) {
+      sheet.eachRow((row, rowNumber) =>
+        row.eachCell((cell) => {
+          if (typeof cell.value !== "number") return;
+          numeric++;
+          expect(cell.numFmt, `${sheet.name}!${cell.address} (row ${rowNumber})`).toMatch(/^(0|0\.0+|0\.0#|#,##0(\.0+)?|0\.0%)$/);
+        }),
+      );
+    }
+    expect(numeric).toBeGreaterThan(1000);
+    const horizons = workbook.getWorksheet("Horizons")!;
+    const columns = (horizons.getRow(2).values as string[]).slice(1);
+    const cell = (name: string) => horizons.getRow(3).getCell(columns.indexOf(name) + 1);
+    expect(cell("year").numFmt).toBe("0");
+    expect(cell("temperature_p50_K").numFmt).toBe("0.00");
+    expect(cell("p_exceed_2K").numFmt).toBe("0.0%");
+    expect(cell("forcing_p50_Wm2").numFmt).toBe("0.00");
+    expect(workbook.getWorksheet("Crossing years")!.getRow(3).getCell(4).numFmt).toBe("0");
+    for (const name of ["Temperature", "Horizons", "Exceedance", "Crossing years", "Sensitivity", "Forcing", "Imbalance"]) {
+      const sheet = workbook.getWorksheet(name)!;
+      expect(sheet.views[0], name).toMatchObject({ state: "frozen", ySplit: 2 });
+      sheet.columns.forEach((c) => expect(c.width, `${name} column ${c.number}`).toBeGreaterThanOrEqual(10));
+    }
+  });
+
   it("states EXPLORATORY in bold on the manifest with the hashes, checksums and cautions", () => {
     const manifest = workbook.getWorksheet("Manifest")!;
     const status = manifest.getRow(1).getCell(2);
