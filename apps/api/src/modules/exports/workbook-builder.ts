@@ -3,6 +3,7 @@ import {
   CLIMATE_INPUT_UNITS,
   PERIL_RULES,
   PORTFOLIO_TOTAL_NOTES,
+  RANGE_SHAPE_LABELS,
   RESULT_CAUTIONS,
   type Distribution,
   type ModelSpec,
@@ -95,7 +96,7 @@ function describeDistribution(d: Distribution): string {
     case "truncated-normal":
       return `truncated normal, mean ${d.mean}, sd ${d.sd}, within ${d.min} to ${d.max}`;
     case "range":
-      return `median ${d.p50}, ${d.coverage === 90 ? "5–95" : "17–83"} % range ${d.low} to ${d.high}, fitted ${d.shape}`;
+      return `median ${d.p50}, ${d.coverage === 90 ? "5th–95th" : "17th–83rd"} percentiles ${d.low} to ${d.high}, ${RANGE_SHAPE_LABELS[d.shape]}`;
   }
 }
 
