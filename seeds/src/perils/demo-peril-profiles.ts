@@ -6,13 +6,13 @@ const [northmere, vellan] = demoOrganisation.regions;
 /**
  * Warming already in the demo insurer's risk view: its catastrophe model is calibrated on
  * recent decades, taken as the AR6 observed 2011–2020 warming of 1.09 K over 1850–1900
- * (CHECKS.md §10, "safe"), rounded to 1.1 K. Illustrative choice for the invented insurer.
+ * (AR6 WGI SPM A.1.2), rounded to 1.1 K. Illustrative choice for the invented insurer.
  */
 const RISK_VIEW_WARMING = 1.1;
 
 /**
- * Heavy-rainfall rate: about 7 % per K (AR6 SPM B.2.4 [read-P], CHECKS.md §8.2; the
- * Clausius–Clapeyron rate of the Magnus form is 6–7.5 % per K over 0–25 °C, §8.1). The
+ * Heavy-rainfall rate: about 7 % per K (AR6 WGI SPM B.2.4; the Clausius–Clapeyron rate of the
+ * Magnus form, Bolton 1980, is 6–7.5 % per K over 0–25 °C, computed). The
  * 5–95 % range of 5–9 % per K around it is illustrative, not an assessed range.
  */
 const heavyRainfallRate = { type: "range", p50: 0.07, low: 0.05, high: 0.09, coverage: 90, shape: "split-normal" } as const;
@@ -30,7 +30,7 @@ export const demoPerilProfiles: PerilProfile[] = [
     metric: "severity",
     baselineWarming: RISK_VIEW_WARMING,
     scaling: { kind: "per-kelvin", rate: heavyRainfallRate },
-    source: "About 7 % per K: AR6 SPM B.2.4 [read-P] and Clausius–Clapeyron (CHECKS.md §8.1–8.2); common practice. Range illustrative.",
+    source: "About 7 % per K: AR6 WGI SPM B.2.4 and Clausius–Clapeyron (Bolton 1980); common practice. Range illustrative.",
   },
   {
     id: "demo-flood-vellan",
@@ -40,7 +40,7 @@ export const demoPerilProfiles: PerilProfile[] = [
     metric: "severity",
     baselineWarming: RISK_VIEW_WARMING,
     scaling: { kind: "per-kelvin", rate: heavyRainfallRate },
-    source: "About 7 % per K: AR6 SPM B.2.4 [read-P] and Clausius–Clapeyron (CHECKS.md §8.1–8.2); common practice. Range illustrative.",
+    source: "About 7 % per K: AR6 WGI SPM B.2.4 and Clausius–Clapeyron (Bolton 1980); common practice. Range illustrative.",
   },
   {
     id: "demo-heat-vellan",
@@ -62,7 +62,7 @@ export const demoPerilProfiles: PerilProfile[] = [
       beyondTable: "hold",
     },
     source:
-      "AR6 WGI SPM Figure SPM.6, 10-year hot extreme frequency at 1/1.5/2/4 °C [read-S: secondary reproduction] (CHECKS.md §8.3). Global land medians used for one region: illustrative.",
+      "AR6 WGI SPM Figure SPM.6, 10-year hot extreme frequency at 1/1.5/2/4 °C (read in a secondary reproduction of the figure). Global land medians used for one region: illustrative.",
   },
   {
     id: "demo-wind-northmere",

@@ -22,8 +22,8 @@ describe("demo peril seed", () => {
     for (const r of demoPortfolio.rows) expect(regions.has(r.region)).toBe(true);
   });
 
-  it("marks every profile's source, with a flag or as illustrative", () => {
-    for (const p of demoPerilProfiles) expect(p.source).toMatch(/\[read-[PS]|illustrative/i);
+  it("marks every profile's source, saying in words how sure it is or that it is illustrative", () => {
+    for (const p of demoPerilProfiles) expect(p.source).toMatch(/secondary|common practice|from memory|illustrative/i);
   });
 
   it("ships an upload file identical to the rows", () => {

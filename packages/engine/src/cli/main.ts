@@ -11,7 +11,7 @@ import { progressBar } from "./progress-bar.js";
 import { readSpecFile, userPath } from "./read-spec-file.js";
 
 /**
- * The engine's command line (DESIGN.md "Engine contract"): stdout carries only the JSON
+ * The engine's command line (its stable contract, described in packages/engine/README.md): stdout carries only the JSON
  * answer; problems go to stderr with a non-zero exit code (2 for bad input, 1 otherwise).
  */
 async function main(argv: string[]): Promise<void> {

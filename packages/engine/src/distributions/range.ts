@@ -42,10 +42,10 @@ export function validateRange(d: RangeDistribution, name: string): void {
  * Fits a published range (median p50 with a 5–95 % or 17–83 % range) as a two-piece law.
  *
  * Method: z = Φ⁻¹(0.95) for coverage 90, Φ⁻¹(0.83) for coverage 66. Lognormal:
- * mu = ln p50, sigmaLow = ln(p50/low)/z, sigmaHigh = ln(high/p50)/z (CHECKS.md §7.2 gives
- * the one-sided σs; taking both keeps both ends). Split-normal: mode = p50,
+ * mu = ln p50, sigmaLow = ln(p50/low)/z, sigmaHigh = ln(high/p50)/z (the standard
+ * one-sided σs of a lognormal fitted to a median and one end; taking both keeps both ends). Split-normal: mode = p50,
  * sdLow = (p50 − low)/z, sdHigh = (high − p50)/z. Cost O(1).
- * Reference: CHECKS.md §7.2 (lognormal from median and range); two-piece construction as above.
+ * Reference: standard lognormal quantiles q_p = exp(μ + σ·z_p); two-piece construction as above.
  *
  * Example: `fitRange({ type: "range", p50: 3, low: 2, high: 5, coverage: 90, shape: "lognormal" })`
  * → { kind: "lognormal", mu: 1.0986…, sigmaLow: 0.24651…, sigmaHigh: 0.31056… }.

@@ -7,7 +7,7 @@ import type { ObservationalConstraint } from "../spec/types.js";
  * the observed warming given its own mean anomaly over the window,
  * w = exp(−½((x − observed)/sd)²), scaled so the largest weight is 1 (the scale cancels in
  * every weighted statistic and keeps the weights away from underflow). Also returns the sum
- * (in member order) and Kish's effective sample size (Σw)²/Σw² (Kish 1965; CHECKS.md §7.4).
+ * (in member order) and Kish's effective sample size (Σw)²/Σw² (Kish 1965, Survey Sampling).
  */
 export function constraintWeights(
   windowMean: Float64Array,

@@ -64,7 +64,7 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
   const pathways: PathwayResult[] = [];
   const perils: (PathwayPerilResult | null)[] = [];
   let implied: { ecs: PercentileSet; tcr: PercentileSet } | null = null;
-  const inputRanks = new Map<number, Float64Array>();
+  const inputOrders = new Map<number, Uint32Array>();
   const summariser = new YearSummariser(plan);
   const slots = plan.state.slots;
   const span = plan.spanYears;
@@ -79,12 +79,12 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
       advanceReportedYears(plan, p, t0, t1, 0, n);
       if (times) lap("simulate");
       for (let t = t0; t < t1; t++) {
-        summariser.summarise(t, pathway.years, slots[t % slots.length]!, weighting.weights, weighting.totalWeight, byYear[t]!);
+        summariser.summarise(p, t, pathway.years, slots[t % slots.length]!, weighting.weights, weighting.totalWeight, byYear[t]!);
         tick();
       }
       if (times) lap("summarise");
     }
-    pathways.push(finishPathway(spec, plan, p, weighting, inputRanks));
+    pathways.push(finishPathway(spec, plan, p, weighting, inputOrders));
     perils.push(pathwayPerils(spec, plan, p, weighting));
     if (p === 0) implied = impliedSensitivities(plan, spec.percentiles, weighting);
     lap("finish");

@@ -19,7 +19,7 @@ const flood: PerilProfile = {
   scaling: { kind: "per-kelvin", rate: { type: "fixed", value: 0.07 } },
 };
 
-/** AR6 SPM.6 10-year hot extreme, times per 10 years at 0/1/1.5/2/4 °C (CHECKS.md §8.3, [read-S]). */
+/** AR6 WGI SPM Figure SPM.6 10-year hot extreme, times per 10 years at 0/1/1.5/2/4 °C (read in a secondary reproduction of the figure). */
 const heat: PerilProfile = {
   id: "heat-south",
   name: "Heat, South Fen",
@@ -113,21 +113,21 @@ describe("applyPerilLens", () => {
     expect(curve.bands.p95![0]).toBeCloseTo(Math.pow(1.07 + 0.02 * 1.6448536, 2.5), 6);
   });
 
-  it("reproduces the AR6 SPM.6 hot-extreme frequencies when all members sit at a warming level [read-S]", () => {
-    // CHECKS.md §8.3 [read-S]: 2.8 / 4.1 / 5.6 / 9.4 times per 10 years at 1 / 1.5 / 2 / 4 °C.
+  it("reproduces the AR6 SPM.6 hot-extreme frequencies when all members sit at a warming level", () => {
+    // AR6 WGI SPM Figure SPM.6 (secondary reproduction): 2.8 / 4.1 / 5.6 / 9.4 times per 10 years at 1 / 1.5 / 2 / 4 °C.
     const levels = [1, 1.5, 2, 4];
     const expected = [2.8, 4.1, 5.6, 9.4];
     const result = lens({ profiles: [heat], horizons: [2030, 2050, 2070, 2100], warmingAtHorizons: levels.map((w) => constant(7, w)) });
     result.profiles[0]!.horizons.forEach((h, k) => {
       expect(h.multiplier.p50).toBeCloseTo(expected[k]!, 12);
-      // Return-period identity (JOB.md): today's 1-in-100 event becomes 1-in-(100 / m).
+      // Return-period identity (return period = 1 / annual frequency): today's 1-in-100 event becomes 1-in-(100 / m).
       expect(h.returnPeriods!["100"].p50).toBeCloseTo(100 / expected[k]!, 10);
       expect(h.returnPeriods!["200"].p50).toBeCloseTo(200 / expected[k]!, 10);
     });
   });
 
   it("projects matching portfolio rows: frequency tail losses move along the log-return-period line", () => {
-    // Table doubling frequency at 1 K: m = 2, so the new 1-in-100 loss is the old 1-in-200 loss (JOB.md identity).
+    // Table doubling frequency at 1 K: m = 2, so the new 1-in-100 loss is the old 1-in-200 loss (return period = 1 / annual frequency).
     const doubling: PerilProfile = {
       ...heat,
       scaling: { kind: "table", points: [{ warming: 0, multiplier: 1 }, { warming: 1, multiplier: 2 }], beyondTable: "hold" },

@@ -2,6 +2,7 @@ import { PercentileSelector } from "../summary/percentile-selector.js";
 import { SpecError } from "../spec/spec-error.js";
 import { perKelvinMultiplier } from "./per-kelvin-multiplier.js";
 import { projectRow } from "./project-losses.js";
+import { planPortfolioTotals, PortfolioTotalsAccumulator } from "./portfolio-totals.js";
 import { sampleRates } from "./sample-rates.js";
 import { summariseValues } from "./summarise-values.js";
 import { tableMultiplierAt } from "./table-multiplier.js";
@@ -46,7 +47,9 @@ export interface PerilLensInput {
  * member multipliers m_i: return periods of today's 1-in-100 and 1-in-200 events (T / m_i,
  * frequency profiles only) and projected AAL, 1-in-100 and 1-in-200 losses of each
  * portfolio row with the profile's peril and region (projectRow). Each output is summarised
- * by weighted R-7 percentiles and the weighted mean (summariseValues).
+ * by weighted R-7 percentiles and the weighted mean (summariseValues). With a portfolio, the
+ * portfolio totals per currency are added up member by member across all rows before they
+ * are summarised (PortfolioTotalsAccumulator), so no percentiles are ever added.
  * Memory O(members); cost O(members × horizons × (1 + outputs)) plus O(members) sampling
  * per profile. Pure: same inputs, same numbers.
  *
@@ -58,12 +61,16 @@ export function applyPerilLens(input: PerilLensInput): PathwayPerilResult {
   const selector = new PercentileSelector();
   const multipliers = new Float64Array(members);
   const scratch = new Float64Array(members);
+  const plan = input.portfolio ? planPortfolioTotals(input.profiles, input.portfolio) : null;
+  const totals =
+    input.portfolio && plan && !("refused" in plan) ? new PortfolioTotalsAccumulator(input.portfolio, plan, input.horizons, members) : null;
   const profiles = input.profiles.map((profile, index): PerilProfileResult => {
     const multiplierAt = memberMultiplier(profile, index, members, input);
     const rows = matchingRows(profile, input.portfolio);
     const horizons = input.horizons.map((year, h): PerilHorizonResult => {
       const warming = input.warmingAtHorizons[h]!;
       for (let i = 0; i < members; i++) multipliers[i] = multiplierAt(warming[i]!, i);
+      totals?.addProfile(index, profile.metric, h, multipliers);
       const summarise = (fill: (m: number) => number) => {
         for (let i = 0; i < members; i++) scratch[i] = fill(multipliers[i]!);
         return summariseValues(scratch, input.weights, input.percentiles, selector);
@@ -98,7 +105,9 @@ export function applyPerilLens(input: PerilLensInput): PathwayPerilResult {
       horizons,
     };
   });
-  return { pathwayId: input.pathwayId, profiles };
+  const result: PathwayPerilResult = { pathwayId: input.pathwayId, profiles };
+  if (totals) result.totals = totals.summarise(input.weights, input.percentiles, selector);
+  return result;
 }
 
 /** Portfolio rows a profile projects: same peril and same region (exact text). */

@@ -13,6 +13,8 @@ export type {
   PerilProfileResult,
   PathwayPerilResult,
   PerilResult,
+  PortfolioFigures,
+  PortfolioTotal,
 } from "./types.js";
 export { clausiusClapeyronRate, saturationVapourPressure, MAGNUS_FORMS, type MagnusForm } from "./clausius-clapeyron.js";
 export { perKelvinMultiplier } from "./per-kelvin-multiplier.js";
@@ -23,6 +25,7 @@ export { lossAtReturnPeriod, projectRow, type TailLosses, type ProjectedFigures 
 export { sampleRates } from "./sample-rates.js";
 export { summariseValues } from "./summarise-values.js";
 export { applyPerilLens, matchingRows, type PerilLensInput } from "./apply-peril-lens.js";
+export { planPortfolioTotals, PortfolioTotalsAccumulator, type TotalsPlan } from "./portfolio-totals.js";
 export { assemblePerilResult } from "./assemble-peril-result.js";
 export { perilMultiplierCurve, type MultiplierCurve } from "./multiplier-curve.js";
 export { validatePerilInputs, BASELINE_WARMING_RANGE } from "./validate-peril-inputs.js";

@@ -1,7 +1,7 @@
 import type { RunSpec, RunSpecInput } from "./types.js";
 
 /**
- * The spec with every default filled in, as DESIGN.md states them: baseline 1850–1900,
+ * The spec with every default filled in, as the engine contract states them: baseline 1850–1900,
  * percentiles 5/17/50/83/95, thresholds 1.5/2/3 K, horizons 2030/2050/2100, no
  * correlations, no constraint, the AR6 concentration expression. The input hash is taken
  * of this form, so writing a default out or leaving it out gives the same hash. The peril

@@ -27,7 +27,7 @@ const rainfall = {
   source: "test",
 } as const;
 
-/** AR6 SPM.6 10-year hot extreme frequencies at 1 / 1.5 / 2 / 4 °C (CHECKS.md §8.3, [read-S]). */
+/** AR6 WGI SPM Figure SPM.6 10-year hot extreme frequencies at 1 / 1.5 / 2 / 4 °C (read in a secondary reproduction of the figure). */
 const spm6Table = {
   kind: "table",
   points: [

@@ -3,18 +3,18 @@ import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { stubFetch } from "@/testing/fetch-stub";
 import { renderWithClient } from "@/testing/render-with-client";
-import { apiError, perilProfileRecord } from "../testing/records";
-import { PerilLensRoute } from "./peril-lens";
+import { apiError, perilProfileRecord } from "@/features/peril/testing/records";
+import { PerilLens } from "./peril-lens-page";
 
 afterEach(() => vi.unstubAllGlobals());
 
 const writer = { userId: "u-actuary", canWrite: true };
 const reader = { userId: "u-manager", canWrite: false };
 
-describe("PerilLensRoute states", () => {
+describe("PerilLens states", () => {
   it("names each list while it loads", () => {
     stubFetch(() => ({ body: [] }));
-    renderWithClient(<PerilLensRoute viewer={writer} />);
+    renderWithClient(<PerilLens viewer={writer} />);
     // The first render is before any answer: both cards say what they are waiting for.
     expect(screen.getByText("Loading peril profiles…")).toBeInTheDocument();
     expect(screen.getByText("Loading portfolio baselines…")).toBeInTheDocument();
@@ -22,7 +22,7 @@ describe("PerilLensRoute states", () => {
 
   it("explains empty lists and offers a writer the way to fill them", async () => {
     stubFetch(() => ({ body: [] }));
-    renderWithClient(<PerilLensRoute viewer={writer} />);
+    renderWithClient(<PerilLens viewer={writer} />);
     expect(await screen.findByText("No peril profiles yet")).toBeInTheDocument();
     expect(screen.getByText("No portfolios yet")).toBeInTheDocument();
     expect(screen.getByText(/Without one, a run shows multipliers and return periods but no projected losses/)).toBeInTheDocument();
@@ -32,7 +32,7 @@ describe("PerilLensRoute states", () => {
 
   it("tells a read-only role who can add profiles and portfolios instead of offering buttons", async () => {
     stubFetch(() => ({ body: [] }));
-    renderWithClient(<PerilLensRoute viewer={reader} />);
+    renderWithClient(<PerilLens viewer={reader} />);
     expect(await screen.findByText("No peril profiles yet")).toBeInTheDocument();
     // docs/API.md permission table: perils:write is held by the analyst and actuary roles.
     expect(screen.getAllByText(/Only the analyst or actuary role can add them\./)).toHaveLength(2);
@@ -47,7 +47,7 @@ describe("PerilLensRoute states", () => {
       if (req.path === "/api/portfolios") return { body: [] };
       return undefined;
     });
-    renderWithClient(<PerilLensRoute viewer={writer} />);
+    renderWithClient(<PerilLens viewer={writer} />);
     const alert = await screen.findByRole("alert");
     expect(alert).toHaveTextContent("The peril profiles could not be loaded");
     expect(alert).toHaveTextContent("An unexpected error occurred.");

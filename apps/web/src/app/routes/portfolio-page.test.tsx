@@ -1,18 +1,18 @@
 import { screen, within } from "@testing-library/react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { stubFetch } from "@/testing/fetch-stub";
-import { apiError } from "../testing/records";
-import { renderRoute } from "../testing/render-route";
-import { PortfolioDetailRoute } from "./portfolio-detail";
+import { apiError } from "@/features/peril/testing/records";
+import { renderRoute } from "@/testing/render-route";
+import PortfolioPage from "./portfolio-page";
 
 afterEach(() => vi.unstubAllGlobals());
 
 const at = (id: string) => ({ path: "/peril-lens/portfolios/:portfolioId", url: `/peril-lens/portfolios/${id}` });
 
-describe("PortfolioDetailRoute states", () => {
+describe("PortfolioPage states", () => {
   it("shows an unknown id as a missing portfolio with the way back", async () => {
     stubFetch(() => apiError(404, "not_found", "Portfolio pf-gone does not exist."));
-    renderRoute(<PortfolioDetailRoute />, at("pf-gone"));
+    renderRoute(<PortfolioPage />, at("pf-gone"));
     expect(screen.getByText("Loading portfolio…")).toBeInTheDocument();
     expect(await screen.findByRole("heading", { name: "No portfolio here" })).toBeInTheDocument();
     expect(screen.getByText("There is no portfolio at this address")).toBeInTheDocument();
@@ -21,7 +21,7 @@ describe("PortfolioDetailRoute states", () => {
 
   it("keeps the server's reason and a retry for other failures", async () => {
     stubFetch(() => apiError(500, "internal_error", "An unexpected error occurred."));
-    renderRoute(<PortfolioDetailRoute />, at("pf-1"));
+    renderRoute(<PortfolioPage />, at("pf-1"));
     const alert = await screen.findByRole("alert");
     expect(alert).toHaveTextContent("An unexpected error occurred.");
     expect(within(alert).getByRole("button", { name: "Try again" })).toBeInTheDocument();

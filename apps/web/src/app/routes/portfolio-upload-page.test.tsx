@@ -2,9 +2,9 @@ import { screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { stubFetch } from "@/testing/fetch-stub";
-import { apiError } from "../testing/records";
-import { renderRoute } from "../testing/render-route";
-import { PortfolioUploadRoute } from "./portfolio-upload";
+import { apiError } from "@/features/peril/testing/records";
+import { renderRoute } from "@/testing/render-route";
+import PortfolioUploadPage from "./portfolio-upload-page";
 
 afterEach(() => vi.unstubAllGlobals());
 
@@ -17,7 +17,7 @@ async function checkFile() {
   return screen.findByRole("alert");
 }
 
-describe("PortfolioUploadRoute states", () => {
+describe("PortfolioUploadPage states", () => {
   // The API answers row/column problems with 400 (docs/API.md); 422 is read the same way.
   it.each([400, 422])("lists every row and column problem of a refused file (%i) under one heading", async (status) => {
     stubFetch((req) =>
@@ -28,7 +28,7 @@ describe("PortfolioUploadRoute states", () => {
           ])
         : undefined,
     );
-    renderRoute(<PortfolioUploadRoute />, at);
+    renderRoute(<PortfolioUploadPage />, at);
     const alert = await checkFile();
     expect(within(alert).getByText("The file cannot be saved as it is")).toBeInTheDocument();
     expect(alert).toHaveTextContent("The upload has 2 problems; nothing was saved.");
@@ -39,7 +39,7 @@ describe("PortfolioUploadRoute states", () => {
 
   it("says a role without perils:write cannot upload, with the server's sentence", async () => {
     stubFetch(() => apiError(403, "missing_permission", "The manager role lacks the permission perils:write."));
-    renderRoute(<PortfolioUploadRoute />, at);
+    renderRoute(<PortfolioUploadPage />, at);
     const alert = await checkFile();
     expect(within(alert).getByText("Your role cannot make this change")).toBeInTheDocument();
     expect(alert).toHaveTextContent("The manager role lacks the permission perils:write.");
@@ -48,7 +48,7 @@ describe("PortfolioUploadRoute states", () => {
 
   it("names a file over the size limit as too large", async () => {
     stubFetch(() => apiError(413, "payload_too_large", "Upload too large: File too large."));
-    renderRoute(<PortfolioUploadRoute />, at);
+    renderRoute(<PortfolioUploadPage />, at);
     const alert = await checkFile();
     expect(within(alert).getByText("The file is too large")).toBeInTheDocument();
     expect(alert).toHaveTextContent("Upload too large: File too large."); // the API passes on the upload library's words
@@ -56,7 +56,7 @@ describe("PortfolioUploadRoute states", () => {
 
   it("asks for a check before saving once a file is chosen", async () => {
     stubFetch(() => undefined);
-    renderRoute(<PortfolioUploadRoute />, at);
+    renderRoute(<PortfolioUploadPage />, at);
     await userEvent.upload(screen.getByLabelText("File (.csv or .xlsx)"), csv());
     expect(screen.getByText("Check the file before saving it.")).toBeInTheDocument();
     expect(screen.getByRole("button", { name: "Save portfolio" })).toBeDisabled();

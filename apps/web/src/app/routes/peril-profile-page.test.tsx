@@ -2,9 +2,9 @@ import { screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { stubFetch } from "@/testing/fetch-stub";
-import { apiError, flatRateCurve, perilProfileRecord } from "../testing/records";
-import { renderRoute } from "../testing/render-route";
-import { PerilProfileEditorRoute } from "./peril-profile-editor";
+import { apiError, flatRateCurve, perilProfileRecord } from "@/features/peril/testing/records";
+import { renderRoute } from "@/testing/render-route";
+import { PerilProfileEditor } from "./peril-profile-page";
 
 afterEach(() => {
   vi.unstubAllGlobals();
@@ -15,10 +15,10 @@ const owner = { userId: "u-actuary", canWrite: true };
 const at = (id: string) => ({ path: "/peril-lens/profiles/:profileId", url: `/peril-lens/profiles/${id}` });
 const preview = (req: { method: string; path: string }) => (req.method === "POST" && req.path === "/api/peril-profiles/preview" ? { body: flatRateCurve() } : undefined);
 
-describe("PerilProfileEditorRoute states", () => {
+describe("PerilProfileEditor states", () => {
   it("shows an unknown id as a missing profile with the way back, not as a failure", async () => {
     stubFetch((req) => (req.path === "/api/peril-profiles/pp-gone" ? apiError(404, "not_found", "Peril profile pp-gone does not exist.") : undefined));
-    renderRoute(<PerilProfileEditorRoute viewer={owner} />, at("pp-gone"));
+    renderRoute(<PerilProfileEditor viewer={owner} />, at("pp-gone"));
     expect(screen.getByText("Loading profile…")).toBeInTheDocument();
     expect(await screen.findByRole("heading", { name: "No peril profile here" })).toBeInTheDocument();
     expect(screen.getByText("There is no peril profile at this address")).toBeInTheDocument();
@@ -28,7 +28,7 @@ describe("PerilProfileEditorRoute states", () => {
 
   it("keeps the server's reason and a retry when the profile cannot be read for another reason", async () => {
     stubFetch(() => apiError(500, "internal_error", "An unexpected error occurred."));
-    renderRoute(<PerilProfileEditorRoute viewer={owner} />, at("pp-1"));
+    renderRoute(<PerilProfileEditor viewer={owner} />, at("pp-1"));
     expect(await screen.findByRole("heading", { name: "The peril profile could not be loaded" })).toBeInTheDocument();
     expect(screen.getByRole("alert")).toHaveTextContent("An unexpected error occurred.");
     expect(within(screen.getByRole("alert")).getByRole("button", { name: "Try again" })).toBeInTheDocument();
@@ -36,7 +36,7 @@ describe("PerilProfileEditorRoute states", () => {
 
   it("says why the form is read-only for a role that may only read", async () => {
     stubFetch((req) => (req.path === "/api/peril-profiles/pp-1" ? { body: perilProfileRecord() } : preview(req)));
-    renderRoute(<PerilProfileEditorRoute viewer={{ userId: "u-manager", canWrite: false }} />, at("pp-1"));
+    renderRoute(<PerilProfileEditor viewer={{ userId: "u-manager", canWrite: false }} />, at("pp-1"));
     // docs/API.md permission table: perils:write is held by the analyst and actuary roles.
     const note = await screen.findByText(/^Read only:/);
     expect(note).toHaveRole("status");
@@ -55,7 +55,7 @@ describe("PerilProfileEditorRoute states", () => {
       if (req.path === "/api/peril-profiles/pp-1") return { body: perilProfileRecord(locked ? { locked: true, lockedBy: { modelVersions: [], runIds: ["r-9"] } } : {}) };
       return preview(req);
     });
-    renderRoute(<PerilProfileEditorRoute viewer={owner} />, at("pp-1"));
+    renderRoute(<PerilProfileEditor viewer={owner} />, at("pp-1"));
     await userEvent.click(await screen.findByRole("button", { name: "Save changes" }));
 
     const alert = await screen.findByRole("alert");
@@ -75,7 +75,7 @@ describe("PerilProfileEditorRoute states", () => {
       if (req.path === "/api/peril-profiles/pp-1") return { body: perilProfileRecord() };
       return preview(req);
     });
-    renderRoute(<PerilProfileEditorRoute viewer={owner} />, at("pp-1"));
+    renderRoute(<PerilProfileEditor viewer={owner} />, at("pp-1"));
     await userEvent.click(await screen.findByRole("button", { name: "Delete" }));
     const alert = await screen.findByRole("alert");
     expect(within(alert).getByText("A draft model version still names this profile")).toBeInTheDocument();
@@ -90,7 +90,7 @@ describe("PerilProfileEditorRoute states", () => {
       if (req.path === "/api/peril-profiles/pp-1") return { body: perilProfileRecord() };
       return preview(req);
     });
-    renderRoute(<PerilProfileEditorRoute viewer={owner} />, at("pp-1"));
+    renderRoute(<PerilProfileEditor viewer={owner} />, at("pp-1"));
     await userEvent.click(await screen.findByRole("button", { name: "Save changes" }));
     const alert = await screen.findByRole("alert");
     expect(within(alert).getByText("Only the profile's creator can change it")).toBeInTheDocument();
@@ -99,7 +99,7 @@ describe("PerilProfileEditorRoute states", () => {
 
   it("says the curve is the last valid draft while a field is not a number, without asking the server", async () => {
     const server = stubFetch((req) => preview(req));
-    renderRoute(<PerilProfileEditorRoute viewer={owner} />, { path: "/peril-lens/profiles/new", url: "/peril-lens/profiles/new" });
+    renderRoute(<PerilProfileEditor viewer={owner} />, { path: "/peril-lens/profiles/new", url: "/peril-lens/profiles/new" });
     await vi.waitFor(() => expect(server.count("POST", "/api/peril-profiles/preview")).toBe(1));
     const warming = screen.getByLabelText(/Warming already in the risk view/);
     await userEvent.clear(warming);

@@ -5,7 +5,7 @@ import { MemoryRouter, Route, Routes } from "react-router-dom";
 import { testQueryClient } from "@/testing/render-with-client";
 
 /**
- * Renders a peril-lens route at a URL so `useParams` sees its id, on the same real
+ * Renders a page at a URL so `useParams` sees its id, on the same real
  * QueryClient as renderWithClient; a catch-all route records where navigation went.
  */
 export function renderRoute(ui: ReactElement, { path, url }: { path: string; url: string }) {
