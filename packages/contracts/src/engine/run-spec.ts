@@ -99,6 +99,12 @@ export const constraintSchema = z
     to: year(),
     observed: finite(),
     sd: finite().refine((v) => v > 0, "must be > 0"),
+    /**
+     * Internal variability of the window's mean warming, 1 sd (K), added in quadrature to sd in
+     * the likelihood. Default 0.21 K: IPCC AR6 WGI SPM A.1.3's −0.2 to +0.2 °C (likely) for
+     * 2010–2019, read as a 17–83 % normal range (the engine's constraint-defaults.ts).
+     */
+    internalVariability: finite().refine((v) => v >= 0, "must be ≥ 0").default(0.21),
   })
   .strict();
 

@@ -185,6 +185,8 @@ function validateModel(spec: RunSpec): void {
     if (c.to < c.from) throw new SpecError("model.constraint.to", "must not be before from");
     if (!Number.isFinite(c.observed)) throw new SpecError("model.constraint.observed", "must be finite");
     if (!(Number.isFinite(c.sd) && c.sd > 0)) throw new SpecError("model.constraint.sd", "must be > 0");
+    if (!(Number.isFinite(c.internalVariability) && c.internalVariability >= 0))
+      throw new SpecError("model.constraint.internalVariability", "must be a finite number ≥ 0");
   }
   const pairs = new Set<string>();
   model.correlations.forEach((correlation, i) => {
