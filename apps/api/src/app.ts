@@ -9,6 +9,7 @@ import { AppError } from "./errors/app-error.js";
 import { errorHandler } from "./errors/error-handler.js";
 import { serveWebBuild } from "./http/serve-web-build.js";
 import { noStore } from "./middleware/no-store.js";
+import { rejectControlCharacters } from "./middleware/reject-control-characters.js";
 import { requireTrustedOrigin } from "./middleware/require-trusted-origin.js";
 import { moduleRouters } from "./modules/index.js";
 
@@ -55,6 +56,7 @@ export function createApp(ctx: AppContext): express.Express {
   app.use(express.json({ limit: JSON_LIMIT }));
   const api = express.Router();
   api.use(requireTrustedOrigin);
+  api.use(rejectControlCharacters);
   for (const [mountPath, router] of moduleRouters) api.use(mountPath, router);
   api.use((req, _res, next) => next(new AppError(404, "not_found", `No API endpoint ${req.method} ${req.baseUrl}${req.path}.`)));
   app.use("/api", api);
