@@ -14,6 +14,7 @@ import { requireTrustedOrigin } from "./middleware/require-trusted-origin.js";
 import { moduleRouters } from "./modules/index.js";
 
 const JSON_LIMIT = "1mb";
+const PERMISSIONS_POLICY = "accelerometer=(), camera=(), geolocation=(), gyroscope=(), magnetometer=(), microphone=(), payment=(), usb=(), interest-cohort=()";
 
 /** Builds the Express app around a context without listening, so tests drive it in-process. */
 export function createApp(ctx: AppContext): express.Express {
@@ -22,6 +23,11 @@ export function createApp(ctx: AppContext): express.Express {
   app.disable("x-powered-by");
   app.set("trust proxy", "loopback");
   app.use(helmet());
+  // helmet does not set this one: the app uses no camera, microphone, location, payment or USB.
+  app.use((_req, res, next) => {
+    res.setHeader("Permissions-Policy", PERMISSIONS_POLICY);
+    next();
+  });
   // gzip/deflate (or brotli, when the client asks for it) for JSON and the web build's text
   // assets; responses that already carry a Content-Encoding (a stored gzip result) pass through.
   app.use(compression());
