@@ -129,6 +129,9 @@ export async function recordRunOutcome(
     }
   }
   await ctx.sequelize.transaction(async (transaction) => {
+    // The guard first: a holder that lost the job (or a second report of one outcome) writes nothing.
+    const finished = await queue.finish(job.id, job.lockedBy, status, transaction, error ?? undefined);
+    if (!finished) throw new OutcomeDiscarded(`job ${job.id} is no longer held by ${job.lockedBy}; outcome discarded`);
     if (status === "succeeded" && outcome.kind === "done") {
       await storeRunResult(ctx.models, run.id, outcome.result, transaction, compressed);
       await run.update(
@@ -138,8 +141,6 @@ export async function recordRunOutcome(
     } else {
       await run.update({ status, finishedAt, error }, { transaction });
     }
-    const finished = await queue.finish(job.id, job.lockedBy, status, transaction, error ?? undefined);
-    if (!finished) throw new OutcomeDiscarded(`job ${job.id} is no longer held by ${job.lockedBy}; outcome discarded`);
     await recordAudit(
       ctx,
       {
