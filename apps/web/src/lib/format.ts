@@ -2,10 +2,22 @@
 
 // One home for the rules a figure is written by, shared with the PDF report (contracts).
 export { formatFixed, formatKelvin, formatPercent, formatProbability, formatMoney, formatSignificant, moneyScale, moneyUnit, type MoneyScale } from "@plumeline/contracts";
-import { formatFixed } from "@plumeline/contracts";
+import { formatFixed, formatPercent } from "@plumeline/contracts";
 
 export const formatNumber = (v: number | null | undefined, digits = 2) =>
   v === null || v === undefined || !Number.isFinite(v) ? "–" : formatFixed(v, digits);
+
+/**
+ * A probability to a tenth of a percent, for tables where a chance can be small (weighted
+ * exceedance can be 5e-109): below 0.05 % it reads "< 0.1 %", from 99.95 % below 1 it reads
+ * "> 99.9 %" — never 0.0 % or 100.0 % unless exactly none or all, and never scientific notation.
+ */
+export function formatProbabilityTenths(share: number | null | undefined): string {
+  if (share === null || share === undefined || !Number.isFinite(share)) return "–";
+  if (share > 0 && share < 0.0005) return "< 0.1 %";
+  if (share < 1 && share >= 0.9995) return "> 99.9 %";
+  return formatPercent(share, 1);
+}
 
 export const formatInteger = (v: number | null | undefined) =>
   v === null || v === undefined || !Number.isFinite(v) ? "–" : Math.round(v).toLocaleString("en-GB");

@@ -16,7 +16,7 @@ export const MEMBER_BLOCK = 2048;
 
 /**
  * First pass, years [t0, t1), members [lo, hi): advance the state with forcing held constant
- * over each year (exact propagator) and add the end-of-year upper-layer temperature to the
+ * over each year (exact propagator) and add the year's MEAN upper-layer temperature to the
  * member's baseline sum and constraint-window sum in the years that fall in those periods.
  * Only the states are needed; the forcing goes to the block's scratch (state.blockForcing).
  */

@@ -68,7 +68,7 @@ describe("feedback from the forcing a member feels at doubled CO2", () => {
     expectEquilibriumIsEcs(doublingSpec({ erf: step(0, 3.93) }, fastClimate(ecs, fixed(3.93))));
   });
 
-  it("the AR6 expression's doubled-CO2 forcing is the assessed 3.93 W m-2 (Forster et al. 2021, AR6 WGI §7.3.2.1)", () => {
+  it("the AR6 expression's doubled-CO2 forcing is the assessed 3.93 W m-2 (Forster et al. 2021, AR6 WGI Ch. 7 Section 7.3.2.1)", () => {
     // Assessed ERF for 2×CO2: 3.93 ± 0.47 W m-2; the refit reproduces it to 3 significant figures.
     expect(Math.abs(expressionDoublingForcing("ar6") - 3.93)).toBeLessThan(0.01);
     // Myhre et al. (1998): 5.35 ln 2 = 3.708 W m-2.
@@ -88,7 +88,7 @@ describe("feedback from the forcing a member feels at doubled CO2", () => {
       spec.model.correlations = [];
       const felt = 1.2 * f2x;
       const p = { lambda: felt / 3, upperHeatCapacity: 7.3, deepHeatCapacity: 106, heatExchange: 0.73, deepEfficacy: 1.28 };
-      // 1 %/yr CO2: F(t) = F2x·t·ln(1.01)/ln 2 (AR6 WGI §7.5 defines TCR at year 70).
+      // 1 %/yr CO2: F(t) = F2x·t·ln(1.01)/ln 2 (AR6 WGI Ch. 7 Section 7.5 defines TCR at year 70).
       const tcr = rampResponse(p, (felt * Math.log(1.01)) / Math.LN2, 70).upper;
       const result = runEnsemble(spec);
       expect(result.implied.tcr.p50!).toBeCloseTo(tcr, 10);

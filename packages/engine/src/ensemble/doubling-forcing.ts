@@ -26,7 +26,7 @@ export function doublingSourceOf(pathway: PathwaySpec): DoublingSource {
  * The concentration expression's forcing for CO2 doubled from its 1750 level (278.3 →
  * 556.6 ppm, CH4 and N2O at their 1750 levels), W m-2. For the AR6 expression this is
  * about 3.93 W m-2, the ERF for doubled CO2 assessed in IPCC AR6 WGI Chapter 7 (Forster
- * et al. 2021, §7.3.2.1: 3.93 ± 0.47 W m-2).
+ * et al. 2021, Section 7.3.2.1: 3.93 ± 0.47 W m-2).
  */
 export function expressionDoublingForcing(expression: ForcingExpressionName): number {
   return gasForcingSeries(expression, "co2", { co2: [2 * AR6_1750_CONCENTRATIONS.co2] }, 1)[0]!;

@@ -49,9 +49,9 @@ export function layOutKernels(
 }
 
 function frameOf(memory: KernelMemory, climate: MemberClimate, state: EnsembleState): Int32Array {
-  const { a11, a12, a21, a22, b1, b2, lambda, extraUptake } = climate;
+  const { a11, a12, a21, a22, b1, b2, lambda, extraUptake, m11, m12, m21, m22, r1, r2 } = climate;
   const { upper, deep, baselineMean, windowMean, nextThreshold, crossedMembers } = state;
-  const arrays = [a11, a12, a21, a22, b1, b2, upper, deep, baselineMean, windowMean, nextThreshold, lambda, extraUptake, crossedMembers];
+  const arrays = [a11, a12, a21, a22, b1, b2, upper, deep, baselineMean, windowMean, nextThreshold, lambda, extraUptake, crossedMembers, m11, m12, m21, m22, r1, r2];
   const frame = memory.int32(arrays.length);
   arrays.forEach((array, i) => (frame[i] = array.byteOffset));
   return frame;

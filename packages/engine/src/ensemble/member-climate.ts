@@ -21,6 +21,11 @@ export interface MemberClimate {
   /** Response to a forcing rising linearly through the year (used for TCR). */
   r1: Float64Array;
   r2: Float64Array;
+  /** The year's mean state from its start (two-layer-propagator.ts m11 …): with r, annual means. */
+  m11: Float64Array;
+  m12: Float64Array;
+  m21: Float64Array;
+  m22: Float64Array;
   lambda: Float64Array;
   /** (ε − 1)·γ: the extra heat uptake term of the imbalance with efficacy. */
   extraUptake: Float64Array;
@@ -104,6 +109,10 @@ export function allocateMemberClimate(columns: ClimateColumns, allocate: Allocat
     b2: allocate(n),
     r1: allocate(n),
     r2: allocate(n),
+    m11: allocate(n),
+    m12: allocate(n),
+    m21: allocate(n),
+    m22: allocate(n),
     lambda: allocate(n),
     extraUptake: allocate(n),
     ecs: columns.ecs,
@@ -113,14 +122,15 @@ export function allocateMemberClimate(columns: ClimateColumns, allocate: Allocat
 
 function checkMemberPropagators(columns: ClimateColumns, out: MemberClimate): void {
   const n = out.a11.length;
-  const { a11, a12, a21, a22, b1, b2, r1, r2 } = out;
+  const { a11, a12, a21, a22, b1, b2, r1, r2, m11, m12, m21, m22 } = out;
   for (let m = 0; m < n; m++) {
     const lambda = columns.doublingForcing[m]! / columns.ecs[m]!;
     // fillMemberClimate skipped this member: twoLayerPropagator gives the error it gives buildMemberClimate.
     if (!isPositive(lambda)) twoLayerPropagator(propagatorInputs(columns, m, lambda));
     const finite =
       Number.isFinite(a11[m]!) && Number.isFinite(a12[m]!) && Number.isFinite(a21[m]!) && Number.isFinite(a22[m]!) &&
-      Number.isFinite(b1[m]!) && Number.isFinite(b2[m]!) && Number.isFinite(r1[m]!) && Number.isFinite(r2[m]!);
+      Number.isFinite(b1[m]!) && Number.isFinite(b2[m]!) && Number.isFinite(r1[m]!) && Number.isFinite(r2[m]!) &&
+      Number.isFinite(m11[m]!) && Number.isFinite(m12[m]!) && Number.isFinite(m21[m]!) && Number.isFinite(m22[m]!);
     if (!finite)
       throw new SpecError(
         "model.climate",
@@ -147,7 +157,7 @@ function propagatorInputs(columns: ClimateColumns, m: number, lambda: number) {
  */
 function fillMemberClimate(columns: ClimateColumns, out: MemberClimate, lo: number, hi: number): boolean {
   const { ecs: ecsColumn, doublingForcing: doublingColumn, upperHeatCapacity: cColumn, deepHeatCapacity: c0Column, heatExchange: gammaColumn, deepEfficacy: epsilonColumn } = columns;
-  const { a11, a12, a21, a22, b1, b2, r1, r2, lambda: lambdaColumn, extraUptake } = out;
+  const { a11, a12, a21, a22, b1, b2, r1, r2, m11, m12, m21, m22, lambda: lambdaColumn, extraUptake } = out;
   const terms = new Float64Array(PROPAGATOR_TERMS);
   let skipped = false;
   // Sum of v − v over every term: 0 while all are finite, NaN for good once one is not
@@ -174,6 +184,10 @@ function fillMemberClimate(columns: ClimateColumns, out: MemberClimate, lo: numb
     const t5 = terms[5]!;
     const t6 = terms[6]!;
     const t7 = terms[7]!;
+    const t8 = terms[8]!;
+    const t9 = terms[9]!;
+    const t10 = terms[10]!;
+    const t11 = terms[11]!;
     a11[m] = t0;
     a12[m] = t1;
     a21[m] = t2;
@@ -182,7 +196,12 @@ function fillMemberClimate(columns: ClimateColumns, out: MemberClimate, lo: numb
     b2[m] = t5;
     r1[m] = t6;
     r2[m] = t7;
+    m11[m] = t8;
+    m12[m] = t9;
+    m21[m] = t10;
+    m22[m] = t11;
     notFinite += t0 - t0 + (t1 - t1) + (t2 - t2) + (t3 - t3) + (t4 - t4) + (t5 - t5) + (t6 - t6) + (t7 - t7);
+    notFinite += t8 - t8 + (t9 - t9) + (t10 - t10) + (t11 - t11);
     lambdaColumn[m] = lambda;
     extraUptake[m] = (deepEfficacy - 1) * heatExchange;
   }

@@ -67,8 +67,9 @@ describe("runEnsemble", () => {
       const upper: number[] = [];
       for (let t = 0; t < years; t++) {
         const f = co2[t]! + scale * aerosol[t]!;
+        // The year's mean upper-layer temperature (exact, from the state at the year's start).
+        upper.push(p.m11 * x + p.m12 * y + p.r1 * f);
         [x, y] = [p.a11 * x + p.a12 * y + p.b1 * f, p.a21 * x + p.a22 * y + p.b2 * f];
-        upper.push(x);
       }
       const baseline = upper.slice(100, 151).reduce((s, v) => s + v, 0) / 51;
       upper.forEach((v, t) => anomalies[t]!.push(v - baseline));

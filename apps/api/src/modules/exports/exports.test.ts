@@ -2,7 +2,7 @@ import request from "supertest";
 import ExcelJS from "exceljs";
 import { parse } from "csv-parse/sync";
 import type { RunResult } from "@plumeline/contracts";
-import { RESULT_CAUTIONS } from "@plumeline/contracts";
+import { RESULT_CAUTIONS, RESULT_TABLES } from "@plumeline/contracts";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createSqlJobQueue } from "../../queue/sql-job-queue.js";
 import { signIn, type SignedInAgent } from "../../test-support/sign-in.js";
@@ -13,6 +13,8 @@ import { createModelVersion } from "../model-versions/model-versions.service.js"
 import { createPathway } from "../pathways/pathways.service.js";
 import { testModelVersionBody, testPathwayBody } from "../runs/runs.fixtures.js";
 import { binaryBody } from "../../test-support/binary-body.js";
+import SSF from "ssf";
+import { buildRunWorkbook, type WorkbookManifest } from "./workbook-builder.js";
 import { requestUserOf } from "../../test-support/request-user.js";
 import { execFileSync } from "node:child_process";
 import { createHash } from "node:crypto";
@@ -28,6 +30,8 @@ let actuary: SignedInAgent;
 let admin: SignedInAgent;
 let runId: string;
 let result: RunResult;
+/** The calibrated likelihood terms of IPCC AR6 WG1 (likely, very likely, unlikely, …). */
+const CALIBRATED_TERM = /\b(?:un)?likely\b|\bvirtually certain\b/i;
 
 
 beforeAll(async () => {
@@ -84,7 +88,7 @@ describe("GET /api/runs/:id/workbook.xlsx", () => {
         row.eachCell((cell) => {
           if (typeof cell.value !== "number") return;
           numeric++;
-          expect(cell.numFmt, `${sheet.name}!${cell.address} (row ${rowNumber})`).toMatch(/^(0|0\.0+|0\.0#|#,##0(\.0+)?|0\.0%)$/);
+          expect(cell.numFmt, `${sheet.name}!${cell.address} (row ${rowNumber})`).toMatch(/^(0|0\.0+|0\.0#|#,##0(\.0+)?|0\.0%|"< 0\.1%"|"> 99\.9%")$/);
         }),
       );
     }
@@ -116,6 +120,22 @@ describe("GET /api/runs/:id/workbook.xlsx", () => {
     expect(values.some((v) => /^[0-9a-f]{64}$/.test(v))).toBe(true); // pathway checksum
     const cautions = workbook.getWorksheet("Cautions")!.getSheetValues().flat().map(String);
     for (const c of RESULT_CAUTIONS) expect(cautions).toContain(c);
+  });
+
+  it("labels bands by their percentiles: no calibrated likelihood word on any sheet", () => {
+    // IPCC AR6 WG1 reserves "likely", "very likely", … (calibrated uncertainty language, after
+    // Mastrandrea et al. 2010) for its authors' assessed ranges; an ensemble's 17th–83rd or
+    // 5th–95th percentile band is not one, so the workbook never calls it that.
+    for (const sheet of workbook.worksheets) {
+      const text = sheet.getSheetValues().flat().map(String).join("\n");
+      expect(text, sheet.name).not.toMatch(CALIBRATED_TERM);
+    }
+    const header = (workbook.getWorksheet("Horizons")!.getRow(2).values as unknown[]).slice(1);
+    expect(header).toContain("temperature_p17_K");
+    // A range input is named for its fit: a split (two-piece) law whose density jumps at the median.
+    const inputs = workbook.getWorksheet("Inputs")!.getSheetValues().flat().map(String);
+    expect(inputs).toContain("median 3, 5th–95th percentiles 2 to 5, split (two-piece) lognormal");
+    expect(header).toContain("temperature_p95_K");
   });
 
   it("neutralises text that a spreadsheet would run as a formula", () => {
@@ -160,6 +180,14 @@ describe("GET /api/runs/:id/tables/:table.csv", () => {
     for (const table of ["temperature", "forcing", "imbalance", "horizons", "crossing", "sensitivity"])
       expect((await actuary.get(`/api/runs/${runId}/tables/${table}.csv`)).status).toBe(200);
     expect((await t.ctx.models.ExportRecord.count({ where: { runId, format: "csv" } }))).toBe(7);
+  });
+
+  it("names bands by their percentiles in every table: no calibrated likelihood word", async () => {
+    for (const table of RESULT_TABLES) {
+      const res = await actuary.get(`/api/runs/${runId}/tables/${table}.csv`);
+      expect(res.status).toBe(200);
+      expect(res.text, table).not.toMatch(CALIBRATED_TERM);
+    }
   });
 
   it("answers 400 for an unknown table, 401 and 404", async () => {
@@ -231,5 +259,52 @@ describe("GET /api/exports/:exportId/file", () => {
     expect((await request(t.app).get(`/api/exports/${record.id}/file`)).status).toBe(401);
     expect((await admin.get(`/api/exports/${record.id}/file`)).status).toBe(403);
     expect((await actuary.get("/api/exports/missing/file")).status).toBe(404);
+  });
+});
+
+describe("probabilities on the workbook", () => {
+  it("show as percentages that never round a possibility away, never in scientific notation; the cell keeps the value", async () => {
+    // A weighted ensemble can give a chance such as 5e-109. SheetJS SSF (an independent
+    // implementation of the ECMA-376 number formats) renders each cell as a spreadsheet would.
+    const tweaked = structuredClone(result);
+    const p = tweaked.pathways[0]!;
+    const i = p.years.indexOf(2100);
+    const shown: Array<[number, string]> = [
+      [5e-109, "< 0.1%"],
+      [0.0004, "< 0.1%"],
+      [0.0005, "0.1%"],
+      [0.123456, "12.3%"],
+      [0.9996, "> 99.9%"],
+      [0, "0.0%"],
+      [1, "100.0%"],
+    ];
+    shown.forEach(([v], k) => (p.exceedance["2"]![i - k] = v));
+    const run = (await t.ctx.models.Run.findByPk(runId))!;
+    const manifest = {
+      runId, runName: run.name, exploratory: true, createdBy: "a", createdAt: run.createdAt.toISOString(), finishedAt: null,
+      modelVersion: { id: run.modelVersionId, name: "v", versionNumber: 1, status: "draft", changeClass: null, decidedBy: null, decidedAt: null },
+      pathways: [], seed: run.seed, members: run.members, sampling: run.sampling, baseline: run.spec.baseline, percentiles: run.spec.percentiles,
+      thresholds: run.spec.thresholds, horizons: run.spec.horizons, engineVersion: result.engineVersion, inputHash: result.inputHash,
+      resultHash: result.resultHash, exportedBy: "b", exportedAt: new Date(0).toISOString(), statements: [],
+    } as WorkbookManifest;
+    const book = new ExcelJS.Workbook();
+    await book.xlsx.load((await buildRunWorkbook(manifest, tweaked, run.spec.model)) as unknown as ArrayBuffer);
+    const sheet = book.getWorksheet("Exceedance")!;
+    const column = (sheet.getRow(2).values as unknown[]).indexOf("p_exceed_2K");
+    shown.forEach(([v, text], k) => {
+      const cell = sheet.getRow(3 + i - k).getCell(column);
+      expect(cell.value).toBe(v);
+      expect(SSF.format(cell.numFmt, cell.value as number)).toBe(text);
+    });
+    // Every probability cell on every sheet reads as a percentage.
+    for (const ws of book.worksheets) {
+      const header = (ws.getRow(2).values as unknown[]).map(String);
+      header.forEach((name, c) => {
+        if (!/^(p_exceed_|share_)/.test(name)) return;
+        ws.getColumn(c).eachCell((cell, r) => {
+          if (r > 2 && typeof cell.value === "number") expect(SSF.format(cell.numFmt, cell.value)).toMatch(/^(< 0\.1%|> 99\.9%|\d{1,3}\.\d%)$/);
+        });
+      });
+    }
   });
 });

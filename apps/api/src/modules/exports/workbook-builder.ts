@@ -3,6 +3,7 @@ import {
   CLIMATE_INPUT_UNITS,
   PERIL_RULES,
   PORTFOLIO_TOTAL_NOTES,
+  RANGE_SHAPE_LABELS,
   RESULT_CAUTIONS,
   type Distribution,
   type ModelSpec,
@@ -11,6 +12,7 @@ import {
 } from "@plumeline/contracts";
 import { PERIL_TABLE_SHEETS } from "../peril-profiles/peril-result-tables.js";
 import { columnNumberFormat } from "./column-number-format.js";
+import { PROBABILITY_FORMAT, probabilityNumberFormat } from "./probability-number-format.js";
 import { neutraliseFormula } from "./neutralise-formula.js";
 import { withFixedEntryDates } from "./stable-zip.js";
 import { resultTable, type Table, type TableCell } from "./result-tables.js";
@@ -58,7 +60,8 @@ function safe(cell: TableCell): TableCell {
 /**
  * A result table on its own sheet: an italic note, the bold header, the rows; the two top
  * rows frozen; each column as wide as its header or widest text (within 10–40 characters);
- * every numeric cell formatted by its column (columnNumberFormat), the value kept in full.
+ * every numeric cell formatted by its column (columnNumberFormat; a probability by its value too,
+ * probabilityNumberFormat), the value kept in full.
  */
 function addTableSheet(workbook: ExcelJS.Workbook, name: string, table: Table, note: string, quantity: "money" | "physical" = "physical"): ExcelJS.Worksheet {
   const sheet = workbook.addWorksheet(name, { views: [{ state: "frozen", ySplit: 2 }] });
@@ -72,7 +75,7 @@ function addTableSheet(workbook: ExcelJS.Workbook, name: string, table: Table, n
     sheet.getColumn(i + 1).eachCell({ includeEmpty: false }, (cell, rowNumber) => {
       if (rowNumber <= 2) return;
       if (typeof cell.value === "number") {
-        cell.numFmt = numFmt;
+        cell.numFmt = numFmt === PROBABILITY_FORMAT ? probabilityNumberFormat(cell.value) : numFmt;
         widest = Math.max(widest, numFmt.includes("#,##") ? 14 : 9);
       } else if (typeof cell.value === "string") widest = Math.max(widest, cell.value.length);
     });
@@ -96,7 +99,7 @@ function describeDistribution(d: Distribution): string {
     case "truncated-normal":
       return `truncated normal, mean ${d.mean}, sd ${d.sd}, within ${d.min} to ${d.max}`;
     case "range":
-      return `median ${d.p50}, ${d.coverage === 90 ? "5–95" : "17–83"} % range ${d.low} to ${d.high}, fitted ${d.shape}`;
+      return `median ${d.p50}, ${d.coverage === 90 ? "5th–95th" : "17th–83rd"} percentiles ${d.low} to ${d.high}, ${RANGE_SHAPE_LABELS[d.shape]}`;
   }
 }
 
