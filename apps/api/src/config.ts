@@ -24,6 +24,7 @@ const envSchema = z.object({
   QUEUE: z.enum(["sqlite", "bullmq"]).default("sqlite"),
   REDIS_URL: z.url().optional(),
   SIGN_IN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+  RUNS_QUEUED_PER_PERSON: z.coerce.number().int().min(1).max(1000).default(10),
   WEB_DIST: z.string().min(1).optional(),
   SEED_DEMO: z.enum(["true", "false"]).default("true"),
 });
@@ -48,6 +49,8 @@ export interface Config {
   redisUrl: string | undefined;
   /** Sign-in attempts allowed per client address per minute. */
   signInRateLimit: number;
+  /** Runs one person may have queued or running at once; the next is refused (429). */
+  runsQueuedPerPerson: number;
   webDist: string;
   seedDemo: boolean;
 }
@@ -87,6 +90,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     queue: e.QUEUE,
     redisUrl: e.REDIS_URL,
     signInRateLimit: e.SIGN_IN_RATE_LIMIT,
+    runsQueuedPerPerson: e.RUNS_QUEUED_PER_PERSON,
     webDist: path.resolve(repoRoot, e.WEB_DIST ?? "apps/web/dist"),
     seedDemo: e.SEED_DEMO === "true",
   };

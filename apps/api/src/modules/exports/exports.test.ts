@@ -182,6 +182,18 @@ describe("GET /api/runs/:id/tables/:table.csv", () => {
     expect((await t.ctx.models.ExportRecord.count({ where: { runId, format: "csv" } }))).toBe(7);
   });
 
+  it("writes the sensitivity budget with each input's variance share beside its rank correlation", async () => {
+    const rows = parse((await actuary.get(`/api/runs/${runId}/tables/sensitivity.csv`)).text, { columns: true }) as Array<Record<string, string>>;
+    const entries = result.pathways[0]!.sensitivity;
+    expect(entries.length).toBeGreaterThan(0);
+    expect(rows).toHaveLength(entries.length);
+    entries.forEach((e, k) => {
+      expect(rows[k]).toMatchObject({ horizon: String(e.horizon), input: e.input });
+      expect(Number(rows[k]!.variance_share)).toBe(e.varianceShare);
+      expect(Number(rows[k]!.rank_correlation)).toBe(e.index);
+    });
+  });
+
   it("names bands by their percentiles in every table: no calibrated likelihood word", async () => {
     for (const table of RESULT_TABLES) {
       const res = await actuary.get(`/api/runs/${runId}/tables/${table}.csv`);

@@ -198,7 +198,7 @@ const TABLE_SHEETS: Array<[ResultTable, string, string]> = [
   ["horizons", "Horizons", "At each horizon: temperature percentiles (K), probability of exceeding each threshold, committed warming (K), total forcing (W m-2)"],
   ["exceedance", "Exceedance", "Probability (0–1) that the year's temperature anomaly exceeds each threshold"],
   ["crossing", "Crossing years", "Percentiles of the first year each threshold is crossed; share_never = members that never cross within the pathway"],
-  ["sensitivity", "Sensitivity", "Which inputs drive the spread at each horizon (index as reported by the engine)"],
+  ["sensitivity", "Sensitivity", "What drives the spread at each horizon: variance_share = the input's first-order share of the variance of warming (the shares of one horizon add up to at most 100 %; the rest is interactions between inputs); rank_correlation = Spearman rank correlation with warming (sign = direction). Both weighted under an observational constraint"],
   ["forcing", "Forcing", "Total effective radiative forcing (W m-2), percentiles by year"],
   ["imbalance", "Imbalance", "Top-of-atmosphere imbalance (W m-2), percentiles by year"],
 ];
