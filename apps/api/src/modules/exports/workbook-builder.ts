@@ -14,6 +14,7 @@ import { PERIL_TABLE_SHEETS } from "../peril-profiles/peril-result-tables.js";
 import { columnNumberFormat } from "./column-number-format.js";
 import { PROBABILITY_FORMAT, probabilityNumberFormat } from "./probability-number-format.js";
 import { neutraliseFormula } from "./neutralise-formula.js";
+import { withFixedEntryDates } from "./stable-zip.js";
 import { resultTable, type Table, type TableCell } from "./result-tables.js";
 
 /** What the manifest sheet states about the run (all of it read from the database, not the request). */
@@ -244,5 +245,5 @@ export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunRe
     cautions.addRow(["Peril lens — how the multipliers were applied"]).font = BOLD;
     for (const rule of PERIL_RULES) cautions.addRow([neutraliseFormula(rule)]);
   }
-  return Buffer.from(await workbook.xlsx.writeBuffer());
+  return withFixedEntryDates(Buffer.from(await workbook.xlsx.writeBuffer()), new Date(manifest.exportedAt));
 }
