@@ -28,8 +28,8 @@ const round = (v: number) => Math.round(v * 1000) / 1000;
 
 const PRIOR_NOTES = [
   "ILLUSTRATIVE demo assumptions for Harbourline Mutual (invented insurer). Sources, with how sure each value is:",
-  "- ECS: median 3 K, 5–95 % 2 to 5 K (IPCC AR6 WGI SPM A.4.4 and TS §TS.3.2.1, 'very likely'), drawn from a two-piece lognormal (log-spread below the median from the 5 % end, above it from the 95 % end), as AR6's range is not one lognormal; the shape is our choice.",
-  "- F2x (ERF of doubled CO2): 3.93 W m-2, ±0.47 read as a 5–95 % range (AR6 WGI Ch. 7 §7.3.2.1, quoted in a secondary copy; the Technical Summary prints 3.9 ± 0.5).",
+  "- ECS: median 3 K, 5th–95th percentiles 2 to 5 K (IPCC 2021, AR6 WGI SPM A.4.4 and TS Section TS.3.2.1: “very likely range” 2 to 5 K), drawn from a split (two-piece) lognormal (log-spread below the median from the 5 % end, above it from the 95 % end, so its density jumps at the median), as AR6's range is not one lognormal; the shape is our choice.",
+  "- F2x (ERF of doubled CO2): 3.93 W m-2, ±0.47 read as a 5–95 % range (AR6 WGI Ch. 7 Section 7.3.2.1, quoted in a secondary copy; the Technical Summary prints 3.9 ± 0.5).",
   "- Forcing scale factors: 5–95 % ranges of AR6 WGI Ch. 7 Table 7.8 (Forster et al. 2021; 2019 vs 1750) divided by their central values — CO2 2.16 [1.90–2.41], CH4 0.54 [0.43–0.65], N2O 0.21 [0.18–0.24], halogenated 0.41 [0.33–0.49], ozone 0.47 [0.24–0.71], aerosol–radiation −0.22 [−0.47 to +0.04], aerosol–cloud −0.84 [−1.45 to −0.25], land use −0.20 [−0.30 to −0.10]. The central values for CO2–ozone and land use are printed in the AR6 Technical Summary; the ranges for CO2/CH4/N2O/halogens and the aerosol split were read in secondary copies of the table.",
   "- Other (stratospheric water vapour from CH4 0.05 [0.00–0.10], light-absorbing particles on snow and ice 0.08 [0.00–0.18], contrails and aviation-induced cirrus 0.06 [0.02–0.10]; Table 7.8 rows from memory): 0.19 W m-2, range 0.088–0.309 from adding the three half-widths in quadrature (independent parts). With it the 2019 total anthropogenic ERF is AR6's 2.72 [1.96 to 3.48] W m-2 (SPM A.4.1).",
   "- Two-layer ocean: upper heat capacity ~7.3, deep ~106 W yr m-2 K-1, exchange ~0.73 W m-2 K-1 (CMIP5 multi-model means after Geoffroy et al. 2013a, from memory, not verified); deep-ocean efficacy 1 to 1.6 around ~1.28 (Geoffroy et al. 2013b, from memory). Spreads are our illustrative choice.",
@@ -87,11 +87,11 @@ const allPathways = ["harbourline-low", "harbourline-middle", "harbourline-high"
  * demo-approved-warming.test.ts.
  */
 export const APPROVED_REPRODUCES = {
-  engineVersion: "0.2.0",
+  engineVersion: "0.3.0",
   members: 5000,
   erf2019: { p5: 1.95, p50: 2.72, p95: 3.5 },
-  erf2019Weighted: { p5: 2.23, p50: 2.73, p95: 3.27 },
-  warming2011to2020: { p5: 0.97, p50: 1.08, p95: 1.21 },
+  erf2019Weighted: { p5: 2.21, p50: 2.73, p95: 3.32 },
+  warming2011to2020: { p5: 0.97, p50: 1.09, p95: 1.2 },
 } as const;
 
 const f2 = (v: number) => v.toFixed(2);

@@ -9,7 +9,7 @@
  * particles on snow and ice 0.08, contrails and aviation-induced cirrus 0.06) are Table 7.8
  * rows quoted from memory. With them the anthropogenic agents add up to AR6's total
  * anthropogenic ERF of 2.72 W m-2 (AR6 WGI SPM A.4.1).
- * Concentrations 1750 and 2019: AR6 TS §TS.2.2 (2019 values and increases as printed, 1750
+ * Concentrations 1750 and 2019: AR6 TS Section TS.2.2 (2019 values and increases as printed, 1750
  * by subtraction; CH4 729.2 ppb from memory).
  */
 export const AR6_ERF_2019 = {

@@ -18,7 +18,7 @@ describe("demo pathways", () => {
   });
 
   it("reach the AR6 2019 ERFs they cite and start from zero in 1750", () => {
-    // IPCC AR6 WGI Ch. 7 Table 7.8 (Forster et al. 2021) / TS §TS.2.2: ERF 2019 vs 1750, W m-2.
+    // IPCC AR6 WGI Ch. 7 Table 7.8 (Forster et al. 2021) / TS Section TS.2.2: ERF 2019 vs 1750, W m-2.
     const anchors = { co2: 2.16, ch4: 0.54, n2o: 0.21, "other-wmghg": 0.41, ozone: 0.47, "aerosol-radiation": -0.22, "aerosol-cloud": -0.84, "land-use": -0.2 };
     for (const p of demoPathways.filter((x) => x.key !== "harbourline-middle-gases"))
       for (const [agent, value] of Object.entries(anchors)) {
@@ -29,7 +29,7 @@ describe("demo pathways", () => {
   });
 
   it("give the AR6 1750 and 2019 concentrations in the gas pathway", () => {
-    // AR6 WGI TS §TS.2.2: 2019 = 409.9 ppm, 1866.3 ppb, 332.1 ppb; 1750 by subtraction (1750 CH4 from memory).
+    // AR6 WGI TS Section TS.2.2: 2019 = 409.9 ppm, 1866.3 ppb, 332.1 ppb; 1750 by subtraction (1750 CH4 from memory).
     const p = demoPathways.find((x) => x.key === "harbourline-middle-gases")!;
     const co2 = (p.agents.co2 as { ppm: number[] }).ppm;
     const ch4 = (p.agents.ch4 as { ppb: number[] }).ppb;

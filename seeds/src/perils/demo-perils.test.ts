@@ -25,6 +25,8 @@ describe("demo peril seed", () => {
   it("names every profile's published source or says it is illustrative, without notes-file tags", () => {
     for (const p of demoPerilProfiles) {
       expect(p.source).toMatch(/IPCC|illustrative/i);
+      // How sure, in words.
+      expect(p.source).toMatch(/secondary|reproductions|common practice|from memory|illustrative/i);
       expect(p.source).not.toMatch(/\[read-|\[memory\]|§\d/);
     }
   });

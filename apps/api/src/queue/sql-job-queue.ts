@@ -6,7 +6,7 @@ import type { ClaimedJob, JobQueue } from "./job-queue.js";
 const DEFAULT_MAX_ATTEMPTS = 3;
 
 /**
- * The durable queue as a table (STYLE.md example 5). Claims are a guarded update: the row
+ * The durable queue as a table. Claims are a guarded update: the row
  * changes from 'queued' to 'running' only if it is still 'queued', so of two workers racing
  * for one row exactly one sees "1 row updated"; the other moves on to the next candidate.
  * Every later write is guarded by `locked_by`, so a worker whose job was re-queued under it

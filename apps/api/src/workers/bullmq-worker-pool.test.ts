@@ -79,7 +79,7 @@ describe("QUEUE=bullmq", () => {
       await waitFor(async () => pool.deliveries.succeeded === 1);
       const [a, b] = [await runOf(viaTable.body.id), await runOf(viaRedis.body.id)];
       expect(b.resultHash).toBe(a.resultHash);
-      // Reproducibility rule of the engine contract (DESIGN.md): the same spec straight through the engine.
+      // Reproducibility rule of the engine contract (packages/engine/README.md: same spec, engine version and Node major → same hash): the same spec straight through the engine.
       expect(b.resultHash).toBe(runEnsemble(b.spec).resultHash);
       const job = await jobOf(b.id);
       expect(job).toMatchObject({ status: "succeeded", attempts: 1 });

@@ -21,7 +21,7 @@ export interface StepOptions {
 export type StepOutcome = "idle" | "succeeded" | "failed" | "cancelled" | "requeued";
 
 /**
- * One worker step (STYLE.md example 5): claim the oldest queued run job, run the engine in
+ * One worker step: claim the oldest queued run job, run the engine in
  * `thread`, and write the outcome (QUEUE=sqlite: the poller's step).
  */
 export async function processNextRunJob(

@@ -13,6 +13,7 @@ export const RESULT_TABLES = [
   "peril-multipliers",
   "peril-return-periods",
   "peril-losses",
+  "portfolio-totals",
 ] as const;
 export type ResultTable = (typeof RESULT_TABLES)[number];
 
@@ -43,8 +44,8 @@ export const exportRecordSchema = z.object({
 export type ExportRecord = z.infer<typeof exportRecordSchema>;
 
 /**
- * Limitations shown beside results on screens and in every export (JOB.md "Cautions to show",
- * DESIGN.md "Cautions the product shows").
+ * Limitations shown beside results on screens and in every export (README "Cautions" says the
+ * same in prose).
  */
 export const RESULT_CAUTIONS = [
   "Global mean only: a two-layer energy balance model says nothing by itself about regional climate, extremes or sea level.",

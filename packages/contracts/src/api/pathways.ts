@@ -15,7 +15,7 @@ export const pathwayMetadataSchema = z
     description: text(2000).default(""),
     /** Where the numbers came from (publication, dataset, or "invented, shaped from …"). */
     source: requiredText(500),
-    /** Which release/edition of the source (inputs get revised upstream: JOB.md caution 7). */
+    /** Which release/edition of the source (inputs get revised upstream: see RESULT_CAUTIONS). */
     vintage: requiredText(120),
   })
   .strict();

@@ -3,7 +3,7 @@ import currencyCodes from "currency-codes";
 import { distributionSchema, type Distribution } from "./distribution.js";
 
 /**
- * Peril lens (DESIGN.md "Peril lens"): how a hazard or loss metric scales with global
+ * Peril lens: how a hazard or loss metric scales with global
  * warming beyond the warming already in the insurer's own view of risk, and the portfolio
  * baseline figures it is applied to.
  *
@@ -227,7 +227,7 @@ export const perilProfileSchema = z
       `must lie between ${BASELINE_WARMING_RANGE[0]} and ${BASELINE_WARMING_RANGE[1]} K (warming above 1850–1900 already in the risk view)`,
     ),
     scaling: perilScalingSchema,
-    /** Where the scaling comes from (e.g. "IPCC AR6 WGI SPM B.2.4"), and how sure it is in plain words. */
+    /** Where the scaling comes from and how sure it is (e.g. "AR6 WGI SPM B.2.4; common practice"). */
     source: z.string({ error: "must be text" }).trim().max(500, "must be at most 500 characters").optional(),
   })
   .strict();
@@ -379,9 +379,26 @@ export const perilProfileResultSchema = z.object({
   horizons: z.array(perilHorizonResultSchema),
 });
 
+const portfolioFiguresSchema = z.object({ aal: z.number(), loss100: z.number(), loss200: z.number() });
+
+/**
+ * The portfolio's totals in one currency: every member's projected figures added over all the
+ * rows in that currency (rows no profile projects enter at their baseline figures), then
+ * summarised; `baseline` is today's sum of the rows. Currencies are never added together.
+ */
+export const portfolioTotalSchema = z.object({
+  currency: z.string(),
+  rows: z.number().int(),
+  projectedRows: z.number().int(),
+  baseline: portfolioFiguresSchema,
+  horizons: z.array(z.object({ year: z.number().int(), aal: perilSummarySchema, loss100: perilSummarySchema, loss200: perilSummarySchema })),
+});
+
 export const pathwayPerilResultSchema = z.object({
   pathwayId: z.string(),
   profiles: z.array(perilProfileResultSchema),
+  /** With a portfolio: its totals, one per currency (absent in results made before totals existed, or when refused). */
+  totals: z.array(portfolioTotalSchema).optional(),
 });
 
 export const perilResultSchema = z.object({
@@ -389,6 +406,8 @@ export const perilResultSchema = z.object({
   pathways: z.array(pathwayPerilResultSchema),
   /** Portfolio rows no profile matched (same peril and region): not projected. */
   unmatchedRows: z.array(z.object({ region: z.string(), peril: z.string() })),
+  /** Why the portfolio has no totals (a row two profiles would project). */
+  totalsRefused: z.string().optional(),
 });
 
 /** The rules above in plain words, for result screens and workbook cautions. */
@@ -400,6 +419,14 @@ export const PERIL_RULES: readonly string[] = [
   "Frequency profiles: an event of return period T becomes one of return period T / m(T); AAL scales by the multiplier of the most frequent table's return period; a loss level of baseline return period t is exceeded m(t) times as often, so the loss at return period T becomes the baseline loss at the smallest t with t / m(t) ≥ T (T × m when every return period has the same multiplier), read on a straight line through the 1-in-100 and 1-in-200 losses against the logarithm of the return period (same slope beyond them, never below 0).",
   "Severity profiles: AAL scales by the most frequent table's multiplier, the 1-in-100 and 1-in-200 losses by the multipliers of those return periods; return periods are not shifted.",
   "Not a catastrophe model: multipliers adjust the firm's own view of risk. Scaling differs by region, peril and return period (rarer events can change more in frequency); exposure growth, adaptation, compound perils and tipping points are not included.",
+];
+
+/** What the portfolio totals are and are not; shown beside them on screen, in the workbook and the report. */
+export const PORTFOLIO_TOTAL_NOTES: readonly string[] = [
+  "Totals are added member by member: each ensemble member's projected figures are summed over all rows of the portfolio, then percentiles are taken; percentiles are never added.",
+  "Rows no peril profile projects enter the totals at their baseline figures, unchanged.",
+  "Adding 1-in-100 and 1-in-200 losses within a member gives no diversification credit between perils and regions: read the tail totals as an upper bound (they assume every row's tail event strikes in the same year), not as the portfolio's own 1-in-100 or 1-in-200 loss. Defer to the firm's capital model for aggregate tail losses.",
+  "Currencies are kept apart: a portfolio with rows in several currencies gets one total per currency and no combined total. Plumeline converts no currency.",
 ];
 
 export type PerKelvinScaling = z.output<typeof perKelvinScalingSchema>;
@@ -414,5 +441,6 @@ export type PerilSummary = z.infer<typeof perilSummarySchema>;
 export type ProjectedLoss = z.infer<typeof projectedLossSchema>;
 export type PerilHorizonResult = z.infer<typeof perilHorizonResultSchema>;
 export type PerilProfileResult = z.infer<typeof perilProfileResultSchema>;
+export type PortfolioTotal = z.infer<typeof portfolioTotalSchema>;
 export type PathwayPerilResult = z.infer<typeof pathwayPerilResultSchema>;
 export type PerilResult = z.infer<typeof perilResultSchema>;

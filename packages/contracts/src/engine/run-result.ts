@@ -14,7 +14,8 @@ export const percentileSeriesSchema = z.record(z.string(), z.array(z.number()));
 export type PercentileSeries = z.infer<typeof percentileSeriesSchema>;
 
 /**
- * Distribution-free 95 % interval for each reported percentile (order statistics, CHECKS.md §7.3);
+ * Distribution-free 95 % interval for each reported percentile (order statistics; Conover,
+ * Practical Nonparametric Statistics, 3rd ed., Section 3.2);
  * null when the ensemble is too small for such an interval to exist.
  */
 export const precisionSchema = z.record(z.string(), z.tuple([z.number(), z.number()]).nullable());

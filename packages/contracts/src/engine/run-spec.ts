@@ -97,7 +97,7 @@ export const modelSpecSchema = z
       .default({}),
     correlations: z.array(correlationSchema).default([]),
     constraint: constraintSchema.nullable().default(null),
-    /** Concentration-to-forcing expression; AR6 refit by default (CHECKS.md §1.3). */
+    /** Concentration-to-forcing expression; by default the Meinshausen et al. 2020 re-fit that IPCC AR6 WGI Ch. 7 uses. */
     forcingExpression: z.enum(FORCING_EXPRESSIONS).default("ar6"),
   })
   .strict();

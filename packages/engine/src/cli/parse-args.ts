@@ -4,7 +4,7 @@ export const USAGE = `usage:
   engine run SPEC.json [--out FILE] [--threads T]   result JSON on stdout (or FILE)
   engine validate SPEC.json                        checks a spec without running it
   engine bench --members N [--threads T] [--full] [--debug]
-                                                   one W1 benchmark line (bench/W1.md);
+                                                   one W1 benchmark line (bench-reference/README.md);
                                                    --full also summarises forcing and imbalance;
                                                    --debug adds the process CPU seconds (cpu_s)`;
 

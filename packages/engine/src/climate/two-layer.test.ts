@@ -155,13 +155,12 @@ describe("one-box limit (closed form of C dT/dt = F − λT)", () => {
 
 describe("twoLayerPropagator against an independent fine-step integration", () => {
   /** Classical fourth-order Runge–Kutta over one year, 20,000 sub-steps, forcing F + ΔF·s. */
-  function rungeKuttaYear(p: TwoLayerParameters, start: [number, number], forcing: number, rise: number): [number, number] {
+  function rungeKuttaYear(p: TwoLayerParameters, start: [number, number], forcing: number, rise: number, steps = 20_000): [number, number] {
     const { lambda, upperHeatCapacity: c, deepHeatCapacity: c0, heatExchange: g, deepEfficacy: e } = p;
     const rate = (s: number, t: number, t0: number): [number, number] => [
       (forcing + rise * s - lambda * t - e * g * (t - t0)) / c,
       (g * (t - t0)) / c0,
     ];
-    const steps = 20_000;
     const h = 1 / steps;
     let [t, t0] = start;
     for (let i = 0; i < steps; i++) {
@@ -192,6 +191,26 @@ describe("twoLayerPropagator against an independent fine-step integration", () =
     ];
     expect(Math.abs(stepped[0]! - t)).toBeLessThan(1e-11);
     expect(Math.abs(stepped[1]! - t0)).toBeLessThan(1e-11);
+  });
+
+  it.each(cases)("gives the year's mean state (Simpson's rule over the RK4 path) for a constant forcing: %o", (p) => {
+    // Mean over the year of T and T0 from the states at 200 equal sub-intervals, each stepped
+    // by RK4 (a sub-interval of 1/200 yr is the same system with capacities × 200), combined
+    // by composite Simpson's rule (error O(h⁴), ~1e-12 here).
+    const propagator = twoLayerPropagator(p);
+    const start: [number, number] = [0.8, 0.3];
+    const pieces = 200;
+    const sub = { ...p, upperHeatCapacity: p.upperHeatCapacity * pieces, deepHeatCapacity: p.deepHeatCapacity * pieces };
+    let state = start;
+    let sums: [number, number] = [start[0], start[1]];
+    for (let i = 1; i <= pieces; i++) {
+      state = rungeKuttaYear(sub, state, 2.5, 0, 100);
+      const w = i === pieces ? 1 : i % 2 === 1 ? 4 : 2;
+      sums = [sums[0] + w * state[0], sums[1] + w * state[1]];
+    }
+    const mean = [sums[0] / (3 * pieces), sums[1] / (3 * pieces)];
+    expect(Math.abs(propagator.m11 * start[0] + propagator.m12 * start[1] + propagator.r1 * 2.5 - mean[0]!)).toBeLessThan(1e-10);
+    expect(Math.abs(propagator.m21 * start[0] + propagator.m22 * start[1] + propagator.r2 * 2.5 - mean[1]!)).toBeLessThan(1e-10);
   });
 });
 

@@ -19,7 +19,8 @@ describe("runEnsemble", () => {
   it("with only an agent scale uncertain, percentiles = deterministic response × (1 + sd·z_p)", () => {
     // Closed form: the model is linear in forcing, so a member whose only forcing agent is
     // scaled by s has anomaly s·D(t); with s ~ Normal(1, 0.2) the p-percentile is D(t)(1 + 0.2 z_p).
-    const pathway = { ...rampPathway(), agents: { co2: rampPathway().agents.co2! } };
+    // Not the CO2 scale: it also sets each member's feedback (λ = scale_co2 · F2x / ECS).
+    const pathway = { ...rampPathway(), agents: { ozone: rampPathway().agents.co2! } };
     const common = baseSpec({ pathways: [pathway], horizons: [], thresholds: [] });
     const deterministic = runEnsemble({
       ...common,
@@ -29,7 +30,7 @@ describe("runEnsemble", () => {
     const result = runEnsemble({
       ...common,
       members: 20_000,
-      model: { ...common.model, climate: fixedClimate(), agents: { co2: { scale: { type: "normal", mean: 1, sd: 0.2 } } } },
+      model: { ...common.model, climate: fixedClimate(), agents: { ozone: { scale: { type: "normal", mean: 1, sd: 0.2 } } } },
     });
     const temperature = result.pathways[0]!.temperature;
     for (const t of [200, 280, 350]) {
@@ -66,8 +67,9 @@ describe("runEnsemble", () => {
       const upper: number[] = [];
       for (let t = 0; t < years; t++) {
         const f = co2[t]! + scale * aerosol[t]!;
+        // The year's mean upper-layer temperature (exact, from the state at the year's start).
+        upper.push(p.m11 * x + p.m12 * y + p.r1 * f);
         [x, y] = [p.a11 * x + p.a12 * y + p.b1 * f, p.a21 * x + p.a22 * y + p.b2 * f];
-        upper.push(x);
       }
       const baseline = upper.slice(100, 151).reduce((s, v) => s + v, 0) / 51;
       upper.forEach((v, t) => anomalies[t]!.push(v - baseline));

@@ -79,7 +79,7 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
       advanceReportedYears(plan, p, t0, t1, 0, n);
       if (times) lap("simulate");
       for (let t = t0; t < t1; t++) {
-        summariser.summarise(t, pathway.years, slots[t % slots.length]!, weighting.weights, weighting.totalWeight, byYear[t]!);
+        summariser.summarise(p, t, pathway.years, slots[t % slots.length]!, weighting.weights, weighting.totalWeight, byYear[t]!);
         tick();
       }
       if (times) lap("summarise");

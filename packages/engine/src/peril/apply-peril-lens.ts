@@ -2,6 +2,7 @@ import { PercentileSelector } from "../summary/percentile-selector.js";
 import { SpecError } from "../spec/spec-error.js";
 import { perKelvinMultiplier } from "./per-kelvin-multiplier.js";
 import { projectRowAcrossReturnPeriods } from "./project-losses.js";
+import { planPortfolioTotals, PortfolioTotalsAccumulator } from "./portfolio-totals.js";
 import { multiplierAtReturnPeriod } from "./return-period-multiplier.js";
 import { tableProfileReader } from "./table-profile.js";
 import { sampleRates } from "./sample-rates.js";
@@ -54,7 +55,9 @@ export interface PerilLensInput {
  * and region (projectRowAcrossReturnPeriods). Each output is summarised by weighted R-7
  * percentiles and the weighted mean (summariseValues). For a table profile each horizon also
  * reports the weighted share of members whose warming lies below or above the warming range
- * every table covers, so a held or extrapolated end value is never silent.
+ * every table covers, so a held or extrapolated end value is never silent. With a portfolio,
+ * the portfolio totals per currency are added up member by member across all rows before they
+ * are summarised (PortfolioTotalsAccumulator), so no percentiles are ever added.
  * Memory O(members × tables); cost O(members × horizons × (tables + outputs)) plus O(members)
  * sampling per profile. Pure: same inputs, same numbers.
  *
@@ -65,6 +68,9 @@ export function applyPerilLens(input: PerilLensInput): PathwayPerilResult {
   const members = checkLensInput(input);
   const selector = new PercentileSelector();
   const scratch = new Float64Array(members);
+  const plan = input.portfolio ? planPortfolioTotals(input.profiles, input.portfolio) : null;
+  const totals =
+    input.portfolio && plan && !("refused" in plan) ? new PortfolioTotalsAccumulator(input.portfolio, plan, input.horizons, members) : null;
   const profiles = input.profiles.map((profile, index): PerilProfileResult => {
     const lens = memberLens(profile, index, members, input);
     const tables = lens.returnPeriods.length;
@@ -94,13 +100,17 @@ export function applyPerilLens(input: PerilLensInput): PathwayPerilResult {
               "200": summarise((i) => shiftedReturnPeriod(BASELINE_RETURN_PERIODS[1], at200[i]!)),
             }
           : null;
+      const figuresOf = (row: PortfolioRow, i: number) => {
+        for (let k = 0; k < tables; k++) one[k] = perTable[k]![i]!;
+        return projectRowAcrossReturnPeriods(row, profile.metric, { returnPeriods: lens.returnPeriods, multipliers: one, beyond: lens.beyondReturnPeriods });
+      };
+      totals?.addProfile(index, h, figuresOf);
       const losses = rows.map((row): ProjectedLoss => {
         const aal = new Float64Array(members);
         const loss100 = new Float64Array(members);
         const loss200 = new Float64Array(members);
         for (let i = 0; i < members; i++) {
-          for (let k = 0; k < tables; k++) one[k] = perTable[k]![i]!;
-          const figures = projectRowAcrossReturnPeriods(row, profile.metric, { returnPeriods: lens.returnPeriods, multipliers: one, beyond: lens.beyondReturnPeriods });
+          const figures = figuresOf(row, i);
           aal[i] = figures.aal;
           loss100[i] = figures.loss100;
           loss200[i] = figures.loss200;
@@ -137,7 +147,9 @@ export function applyPerilLens(input: PerilLensInput): PathwayPerilResult {
       horizons,
     };
   });
-  return { pathwayId: input.pathwayId, profiles };
+  const result: PathwayPerilResult = { pathwayId: input.pathwayId, profiles };
+  if (totals) result.totals = totals.summarise(input.weights, input.percentiles, selector);
+  return result;
 }
 
 /** Portfolio rows a profile projects: same peril and same region (exact text). */

@@ -15,6 +15,8 @@ export type {
   PerilProfileResult,
   PathwayPerilResult,
   PerilResult,
+  PortfolioFigures,
+  PortfolioTotal,
 } from "./types.js";
 export { clausiusClapeyronRate, saturationVapourPressure, MAGNUS_FORMS, type MagnusForm } from "./clausius-clapeyron.js";
 export { perKelvinMultiplier } from "./per-kelvin-multiplier.js";
@@ -34,6 +36,7 @@ export {
 export { sampleRates } from "./sample-rates.js";
 export { summariseValues } from "./summarise-values.js";
 export { applyPerilLens, matchingRows, shareBeyond, type PerilLensInput } from "./apply-peril-lens.js";
+export { planPortfolioTotals, PortfolioTotalsAccumulator, type TotalsPlan } from "./portfolio-totals.js";
 export { assemblePerilResult } from "./assemble-peril-result.js";
 export { perilMultiplierCurve, type MultiplierCurve } from "./multiplier-curve.js";
 export { validatePerilInputs, BASELINE_WARMING_RANGE } from "./validate-peril-inputs.js";

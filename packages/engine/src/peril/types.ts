@@ -127,13 +127,38 @@ export interface PerilProfileResult {
   horizons: PerilHorizonResult[];
 }
 
+/** Portfolio figures in one currency: the sum of its rows' baseline figures. */
+export interface PortfolioFigures {
+  aal: number;
+  loss100: number;
+  loss200: number;
+}
+
+/**
+ * The portfolio's totals in one currency at each horizon, added member by member over all
+ * its rows (portfolio-totals.ts), then summarised. `baseline` is today's total (the rows as
+ * given), so the change of any percentile against today is that percentile minus it.
+ */
+export interface PortfolioTotal {
+  currency: string;
+  /** Rows in this currency, and how many of them a profile projected (the rest enter unchanged). */
+  rows: number;
+  projectedRows: number;
+  baseline: PortfolioFigures;
+  horizons: { year: number; aal: PerilSummary; loss100: PerilSummary; loss200: PerilSummary }[];
+}
+
 export interface PathwayPerilResult {
   pathwayId: string;
   profiles: PerilProfileResult[];
+  /** With a portfolio: its totals, one per currency; absent without a portfolio or when refused (PerilResult.totalsRefused). */
+  totals?: PortfolioTotal[];
 }
 
 export interface PerilResult {
   portfolioId: string | null;
   pathways: PathwayPerilResult[];
   unmatchedRows: { region: string; peril: string }[];
+  /** Why the portfolio has no totals (a row projected by two profiles); absent otherwise. */
+  totalsRefused?: string;
 }

@@ -2,7 +2,7 @@ import request from "supertest";
 import ExcelJS from "exceljs";
 import { parse } from "csv-parse/sync";
 import type { RunResult } from "@plumeline/contracts";
-import { RESULT_CAUTIONS } from "@plumeline/contracts";
+import { RESULT_CAUTIONS, RESULT_TABLES } from "@plumeline/contracts";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createSqlJobQueue } from "../../queue/sql-job-queue.js";
 import { signIn, type SignedInAgent } from "../../test-support/sign-in.js";
@@ -21,6 +21,8 @@ let actuary: SignedInAgent;
 let admin: SignedInAgent;
 let runId: string;
 let result: RunResult;
+/** The calibrated likelihood terms of IPCC AR6 WG1 (likely, very likely, unlikely, …). */
+const CALIBRATED_TERM = /\b(?:un)?likely\b|\bvirtually certain\b/i;
 
 
 beforeAll(async () => {
@@ -70,6 +72,33 @@ describe("GET /api/runs/:id/workbook.xlsx", () => {
     expect(hRow.slice(3, 9)).toEqual([2100, h2100.temperature.p5, h2100.temperature.p17, h2100.temperature.p50, h2100.temperature.p83, h2100.temperature.p95]);
   });
 
+  it("formats every numeric cell (years as 0, chances as %, kelvin as 0.00), freezes the header rows, sizes the columns", () => {
+    let numeric = 0;
+    for (const sheet of workbook.worksheets) {
+      sheet.eachRow((row, rowNumber) =>
+        row.eachCell((cell) => {
+          if (typeof cell.value !== "number") return;
+          numeric++;
+          expect(cell.numFmt, `${sheet.name}!${cell.address} (row ${rowNumber})`).toMatch(/^(0|0\.0+|0\.0#|#,##0(\.0+)?|0\.0%)$/);
+        }),
+      );
+    }
+    expect(numeric).toBeGreaterThan(1000);
+    const horizons = workbook.getWorksheet("Horizons")!;
+    const columns = (horizons.getRow(2).values as string[]).slice(1);
+    const cell = (name: string) => horizons.getRow(3).getCell(columns.indexOf(name) + 1);
+    expect(cell("year").numFmt).toBe("0");
+    expect(cell("temperature_p50_K").numFmt).toBe("0.00");
+    expect(cell("p_exceed_2K").numFmt).toBe("0.0%");
+    expect(cell("forcing_p50_Wm2").numFmt).toBe("0.00");
+    expect(workbook.getWorksheet("Crossing years")!.getRow(3).getCell(4).numFmt).toBe("0");
+    for (const name of ["Temperature", "Horizons", "Exceedance", "Crossing years", "Sensitivity", "Forcing", "Imbalance"]) {
+      const sheet = workbook.getWorksheet(name)!;
+      expect(sheet.views[0], name).toMatchObject({ state: "frozen", ySplit: 2 });
+      sheet.columns.forEach((c) => expect(c.width, `${name} column ${c.number}`).toBeGreaterThanOrEqual(10));
+    }
+  });
+
   it("states EXPLORATORY in bold on the manifest with the hashes, checksums and cautions", () => {
     const manifest = workbook.getWorksheet("Manifest")!;
     const status = manifest.getRow(1).getCell(2);
@@ -82,6 +111,22 @@ describe("GET /api/runs/:id/workbook.xlsx", () => {
     expect(values.some((v) => /^[0-9a-f]{64}$/.test(v))).toBe(true); // pathway checksum
     const cautions = workbook.getWorksheet("Cautions")!.getSheetValues().flat().map(String);
     for (const c of RESULT_CAUTIONS) expect(cautions).toContain(c);
+  });
+
+  it("labels bands by their percentiles: no calibrated likelihood word on any sheet", () => {
+    // IPCC AR6 WG1 reserves "likely", "very likely", … (calibrated uncertainty language, after
+    // Mastrandrea et al. 2010) for its authors' assessed ranges; an ensemble's 17th–83rd or
+    // 5th–95th percentile band is not one, so the workbook never calls it that.
+    for (const sheet of workbook.worksheets) {
+      const text = sheet.getSheetValues().flat().map(String).join("\n");
+      expect(text, sheet.name).not.toMatch(CALIBRATED_TERM);
+    }
+    const header = (workbook.getWorksheet("Horizons")!.getRow(2).values as unknown[]).slice(1);
+    expect(header).toContain("temperature_p17_K");
+    // A range input is named for its fit: a split (two-piece) law whose density jumps at the median.
+    const inputs = workbook.getWorksheet("Inputs")!.getSheetValues().flat().map(String);
+    expect(inputs).toContain("median 3, 5th–95th percentiles 2 to 5, split (two-piece) lognormal");
+    expect(header).toContain("temperature_p95_K");
   });
 
   it("neutralises text that a spreadsheet would run as a formula", () => {
@@ -126,6 +171,14 @@ describe("GET /api/runs/:id/tables/:table.csv", () => {
     for (const table of ["temperature", "forcing", "imbalance", "horizons", "crossing", "sensitivity"])
       expect((await actuary.get(`/api/runs/${runId}/tables/${table}.csv`)).status).toBe(200);
     expect((await t.ctx.models.ExportRecord.count({ where: { runId, format: "csv" } }))).toBe(7);
+  });
+
+  it("names bands by their percentiles in every table: no calibrated likelihood word", async () => {
+    for (const table of RESULT_TABLES) {
+      const res = await actuary.get(`/api/runs/${runId}/tables/${table}.csv`);
+      expect(res.status).toBe(200);
+      expect(res.text, table).not.toMatch(CALIBRATED_TERM);
+    }
   });
 
   it("answers 400 for an unknown table, 401 and 404", async () => {

@@ -1,5 +1,6 @@
 import type { PathwayResult, ResultTable, RunResult } from "@plumeline/contracts";
 import { perilTable } from "../peril-profiles/peril-result-tables.js";
+import { portfolioTotalsTable } from "../peril-profiles/portfolio-totals-table.js";
 
 export type TableCell = string | number | null;
 export interface Table {
@@ -113,5 +114,7 @@ export function resultTable(result: RunResult, table: ResultTable): Table {
     case "peril-return-periods":
     case "peril-losses":
       return perilTable(result, table);
+    case "portfolio-totals":
+      return portfolioTotalsTable(result);
   }
 }

@@ -1,4 +1,4 @@
-import { modelSpecSchema, PERIL_RULES, RESULT_CAUTIONS, type PerilProfile, type Portfolio, type RunResult } from "@plumeline/contracts";
+import { modelSpecSchema, PERIL_RULES, PORTFOLIO_TOTAL_NOTES, RESULT_CAUTIONS, type PerilProfile, type Portfolio, type RunResult } from "@plumeline/contracts";
 import { applyPerilLens, assemblePerilResult, runEnsemble } from "@plumeline/engine";
 import ExcelJS from "exceljs";
 import { parse } from "csv-parse/sync";
@@ -9,6 +9,7 @@ import { buildRunWorkbook, type WorkbookManifest } from "../exports/workbook-bui
 import { testModelVersionBody, testPathwayBody } from "../runs/runs.fixtures.js";
 import { PERIL_TABLE_SHEETS, perilTable } from "./peril-result-tables.js";
 import { perilWarnings } from "./peril-warnings.js";
+import { portfolioTotalsTable } from "./portfolio-totals-table.js";
 
 /**
  * The peril tables and workbook sheets against the result JSON they come from. The result is
@@ -162,7 +163,7 @@ describe("peril result tables", () => {
     expect(row.slice(10, 16)).toEqual([json.p5, json.p17, json.p50, json.p83, json.p95, json.mean]);
     // One 10-year table: the 1-in-100 figures are read beyond it.
     expect(row[16]).toBe("yes");
-    // Return-period identity T' = T / m (the lens's stated rule): the 5th percentile of 100/m sits next to 100 / (95th percentile of m).
+    // Return-period identity T' = T / m (return period = 1 / annual frequency): the 5th percentile of 100/m sits next to 100 / (95th percentile of m).
     // Not equal: R-7 interpolates between order statistics, and 100/m is convex, so the interpolated value is the larger.
     const identity = 100 / heat.multiplier.p95!;
     expect(row[10] as number).toBeGreaterThanOrEqual(identity - 1e-12);
@@ -174,7 +175,7 @@ describe("peril result tables", () => {
     expect(table.rows).toHaveLength(2 * 3 * 3);
     expect(table.rows.some((r) => r[4] === "hail")).toBe(false);
     expect(result.perils!.unmatchedRows).toEqual([{ region: "South", peril: "hail" }]);
-    // Severity: AAL scales by the multiplier, member by member (the lens's stated rule); the median of m·AAL is AAL × median m.
+    // Severity: AAL scales by the multiplier, member by member (severity scaling of the peril lens, packages/engine/src/peril); the median of m·AAL is AAL × median m.
     const flood = result.perils!.pathways[0]!.profiles[0]!.horizons[0]!;
     const aal = table.rows.find((r) => r[2] === "flood" && r[8] === 2030 && r[10] === "aal")!;
     expect(aal[13]).toBeCloseTo(1000 * flood.multiplier.p50!, 6);
@@ -190,6 +191,33 @@ describe("peril result tables", () => {
   it("a result without a perils block gives headers only", () => {
     const { perils: _p, ...plain } = result;
     for (const t of ["peril-multipliers", "peril-return-periods", "peril-losses"] as const) expect(perilTable(plain as RunResult, t).rows).toEqual([]);
+  });
+});
+
+describe("portfolio totals table", () => {
+  it("one row per pathway, horizon, metric and currency; percentiles as in the JSON; change = percentile − today's total", () => {
+    const table = portfolioTotalsTable(result);
+    expect(table.columns).toEqual([
+      "pathway_id", "pathway_name", "horizon", "metric", "currency", "rows", "projected_rows", "baseline",
+      "p5", "p17", "p50", "p83", "p95", "mean", "change_p5", "change_p17", "change_p50", "change_p83", "change_p95",
+    ]);
+    expect(table.rows).toHaveLength(3 * 3);
+    const total = result.perils!.pathways[0]!.totals![0]!;
+    // Today's total is the plain sum of the three rows, hail included (no profile: unchanged).
+    expect(total.baseline).toEqual({ aal: 1350, loss100: 25900, loss200: 33000 });
+    expect([total.rows, total.projectedRows]).toEqual([3, 2]);
+    const row = table.rows.find((r) => r[2] === 2100 && r[3] === "loss_1_in_200")!;
+    const json = total.horizons[2]!.loss200;
+    expect(row.slice(4, 14)).toEqual(["EUR", 3, 2, 33000, json.p5, json.p17, json.p50, json.p83, json.p95, json.mean]);
+    expect(row[16]).toBeCloseTo(json.p50! - 33000, 9);
+    // CSV keeps full precision: reading it back gives the same doubles.
+    const back = parse(tableToCsv(resultTable(result, "portfolio-totals")), { columns: true }) as Array<Record<string, string>>;
+    expect(Number(back.find((r) => r.horizon === "2100" && r.metric === "loss_1_in_200")!.p50)).toBe(json.p50);
+  });
+
+  it("a result without totals gives the header alone", () => {
+    const { perils: _p, ...plain } = result;
+    expect(portfolioTotalsTable(plain as RunResult).rows).toEqual([]);
   });
 });
 
@@ -223,6 +251,16 @@ describe("peril workbook sheets", () => {
     // The run's own warnings: the one 10-year heat table is read beyond itself for 1-in-100 and 1-in-200.
     expect(perilWarnings(result)).toEqual(["Heat, North: the tables are for 10-year events, so the 1-in-100 and 1-in-200 figures are read beyond them (the nearest table held)."]);
     for (const w of perilWarnings(result)) expect(texts).toContain(w);
+  });
+
+  it("has a Portfolio totals sheet in money format with the notes on what the totals are", async () => {
+    const wb = await readBack(result);
+    const sheet = wb.getWorksheet("Portfolio totals")!;
+    expect((sheet.getRow(2).values as unknown[]).slice(1)).toEqual(portfolioTotalsTable(result).columns);
+    expect(sheet.getRow(3).getCell("I").numFmt).toBe("#,##0");
+    expect(sheet.getRow(3).getCell("C").numFmt).toBe("0");
+    const texts = (sheet.getColumn(1).values as unknown[]).filter((v): v is string => typeof v === "string");
+    for (const note of PORTFOLIO_TOTAL_NOTES) expect(texts).toContain(note);
   });
 
   it("leaves the peril sheets out when the run carried no profiles", async () => {

@@ -27,7 +27,7 @@ export function fixedClimate(): RunSpec["model"]["climate"] {
   };
 }
 
-/** An uncertain climate like the W1 workload's (bench/W1.md). */
+/** An uncertain climate like the W1 workload's (bench-reference/README.md). */
 export function uncertainClimate(): RunSpec["model"]["climate"] {
   return {
     ecs: { type: "lognormal", median: 3, logSd: 0.3 },

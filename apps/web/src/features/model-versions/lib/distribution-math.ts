@@ -3,7 +3,7 @@ import { standardNormalCdf, standardNormalDensity, standardNormalQuantile } from
 
 /**
  * Quantiles and densities of every input distribution, for the editor's live preview. The
- * methods are the ones DESIGN.md names: closed-form inverse CDFs; truncated normal by
+ * methods are the engine's: closed-form inverse CDFs; truncated normal by
  * inverting Φ between the truncation points; "range" as the median-preserving two-piece
  * fit (each half carries probability 1/2 and reproduces the published end on its side:
  * lognormal in ln x, or split-normal), with z = Φ⁻¹(0.95) for a 90 % range and Φ⁻¹(0.83) for 66 %.

@@ -84,7 +84,7 @@ export function standardNormalQuantile(p: number): number {
 
 /**
  * Φ(x), the standard normal CDF, through erfc with the Chebyshev fit of Numerical Recipes
- * (2nd ed., §6.2 "erfcc"; fractional error below 1.2e-7 everywhere). Cost O(1).
+ * (2nd ed., Section 6.2 "erfcc"; fractional error below 1.2e-7 everywhere). Cost O(1).
  * Example: standardNormalCdf(1.959963984540054) → 0.975 (R: pnorm(1.959964)).
  */
 export function standardNormalCdf(x: number): number {

@@ -207,7 +207,7 @@ export function PerilProfileForm({
           </div>
         </fieldset>
       )}
-      <Field label="Source" hint="Where the scaling comes from, with its flag or “illustrative”." error={errors.source}>
+      <Field label="Source" hint="Where the scaling comes from (publication, table or figure) and how sure it is, or “illustrative”." error={errors.source}>
         {(a) => <Textarea {...a} {...text("source")} />}
       </Field>
     </div>

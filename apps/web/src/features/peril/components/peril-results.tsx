@@ -9,7 +9,7 @@ import { PercentileNote } from "@/components/ui/percentile-note";
 import { formatInteger, formatNumber, percentileHeading } from "@/lib/format";
 import { AalBandChart } from "./aal-band-chart";
 
-/** The peril cautions in plain words (issue "Peril lens", DESIGN.md "Cautions the product shows"). */
+/** The peril cautions in plain words (the peril lens's limits, as README "Cautions" states them). */
 export const PERIL_CAUTIONS = [
   "Not a catastrophe model: these multipliers adjust the firm's own view of risk; they do not replace it.",
   "Scaling factors differ by region and by return period (rarer events can change more in frequency).",

@@ -49,7 +49,7 @@ export const RATE_PARAMS: Record<RateType, ParamDef[]> = {
   ],
   triangular: [
     { key: "min", label: "Lowest (% per K)", percent: true },
-    { key: "mode", label: "Most likely (% per K)", percent: true },
+    { key: "mode", label: "Mode (% per K)", percent: true },
     { key: "max", label: "Highest (% per K)", percent: true },
   ],
   "truncated-normal": [

@@ -91,7 +91,7 @@ export function ResultView({ run, result }: { run: Run; result: RunResult }) {
                 series={toFocusedFanSeries(result.pathways, pathway.id)}
                 description={
                   result.pathways.length > 1
-                    ? `Filled: ${pathway.name} (in focus), median line with 17–83 % (likely) and 5–95 % (very likely) bands. Outlined: the other pathways — solid edges 17–83 %, dotted edges 5–95 %, dashed median. Hover or use arrow keys to read a year.`
+                    ? `Filled: ${pathway.name} (in focus), median line with 17th–83rd and 5th–95th percentile bands. Outlined: the other pathways — solid edges 17th–83rd, dotted edges 5th–95th percentile, dashed median. Hover or use arrow keys to read a year.`
                     : undefined
                 }
                 yLabel={`Warming above ${baselineLabel} (K)`}
