@@ -1,6 +1,5 @@
-import { existsSync } from "node:fs";
-import path from "node:path";
 import { toNodeHandler } from "better-auth/node";
+import compression from "compression";
 import express from "express";
 import { rateLimit } from "express-rate-limit";
 import helmet from "helmet";
@@ -8,6 +7,8 @@ import type { AppContext } from "./context.js";
 import { CLIENT_IP_HEADER } from "./auth/create-auth.js";
 import { AppError } from "./errors/app-error.js";
 import { errorHandler } from "./errors/error-handler.js";
+import { serveWebBuild } from "./http/serve-web-build.js";
+import { noStore } from "./middleware/no-store.js";
 import { requireTrustedOrigin } from "./middleware/require-trusted-origin.js";
 import { moduleRouters } from "./modules/index.js";
 
@@ -20,6 +21,10 @@ export function createApp(ctx: AppContext): express.Express {
   app.disable("x-powered-by");
   app.set("trust proxy", "loopback");
   app.use(helmet());
+  // gzip/deflate (or brotli, when the client asks for it) for JSON and the web build's text
+  // assets; responses that already carry a Content-Encoding (a stored gzip result) pass through.
+  app.use(compression());
+  app.use("/api", noStore);
 
   // Sign-in attempts per client address; on top of better-auth's own limiter.
   app.use(
@@ -57,12 +62,4 @@ export function createApp(ctx: AppContext): express.Express {
   serveWebBuild(app, ctx.config.webDist);
   app.use(errorHandler);
   return app;
-}
-
-/** Serves the built web app with an SPA fallback: any non-/api GET gets index.html. */
-function serveWebBuild(app: express.Express, webDist: string): void {
-  const indexHtml = path.join(webDist, "index.html");
-  if (!existsSync(indexHtml)) return;
-  app.use(express.static(webDist, { index: false, maxAge: "1h" }));
-  app.get(/^(?!\/api(?:\/|$)).*/, (_req, res) => res.sendFile(indexHtml));
 }

@@ -2,7 +2,9 @@
  * @plumeline/engine — pure TypeScript numerics of Plumeline: no I/O, no DOM, no Node APIs.
  * The worker-thread runner lives in the "./node" entry.
  */
-export { runEnsemble, type RunOptions, type StageTimes } from "./ensemble/run-ensemble.js";
+export { runEnsemble, type RunOptions, type StageTimes, type PathwayMembers } from "./ensemble/run-ensemble.js";
+export { memberTable, type MemberTable } from "./ensemble/member-table.js";
+export { memberTableCsv } from "./ensemble/member-table-csv.js";
 export { preparePlan } from "./ensemble/prepare-plan.js";
 export { applyDefaults } from "./spec/apply-defaults.js";
 export { validateSpec } from "./spec/validate-spec.js";

@@ -106,8 +106,11 @@ export function createSqlJobQueue(Job: typeof JobModel): JobQueue {
         { where: { id: jobId, status: "queued" }, ...opts },
       );
       if (cancelledQueued === 1) return "cancelled";
-      const [flagged] = await Job.update({ cancelRequested: true }, { where: { id: jobId, status: "running" }, ...opts });
-      return flagged === 1 ? "requested" : "finished";
+      // Guarded on the flag too, so of two cancels racing exactly one sees "requested".
+      const [flagged] = await Job.update({ cancelRequested: true }, { where: { id: jobId, status: "running", cancelRequested: false }, ...opts });
+      if (flagged === 1) return "requested";
+      const row = await Job.findByPk(jobId, { attributes: ["status", "cancelRequested"], ...opts });
+      return row && (row.status === "cancelled" || (row.status === "running" && row.cancelRequested)) ? "already" : "finished";
     },
 
     async requeueAbandoned(filter) {

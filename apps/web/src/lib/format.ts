@@ -31,6 +31,18 @@ export function formatProbability(share: number | null | undefined): string {
   return formatPercent(share, 0);
 }
 
+/**
+ * A probability to a tenth of a percent, for tables where a chance can be small (weighted
+ * exceedance can be 5e-109): below 0.05 % it reads "< 0.1 %", from 99.95 % below 1 it reads
+ * "> 99.9 %" — never 0.0 % or 100.0 % unless exactly none or all, and never scientific notation.
+ */
+export function formatProbabilityTenths(share: number | null | undefined): string {
+  if (share === null || share === undefined || !Number.isFinite(share)) return "–";
+  if (share > 0 && share < 0.0005) return "< 0.1 %";
+  if (share < 1 && share >= 0.9995) return "> 99.9 %";
+  return formatPercent(share, 1);
+}
+
 export const formatInteger = (v: number | null | undefined) =>
   v === null || v === undefined || !Number.isFinite(v) ? "–" : Math.round(v).toLocaleString("en-GB");
 

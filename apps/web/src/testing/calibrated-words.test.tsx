@@ -45,6 +45,9 @@ describe("calibrated likelihood words (IPCC AR6 WG1 uncertainty language)", () =
     const page = render(<ResultView run={runFixture()} result={runResultFixture()} />);
     const pageText = everyText(page.container);
     expect(pageText).toContain("17th–83rd and 5th–95th percentile bands");
+    // The sensitivity panel shows the variance budget with its interactions remainder.
+    expect(pageText).toContain("What drives the spread in 2100 — Middle road");
+    expect(pageText).toContain("Interactions (remainder)");
     expect(uncitedLikelihoodTerms(pageText)).toEqual([]);
     page.unmount();
 

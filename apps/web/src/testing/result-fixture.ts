@@ -20,12 +20,12 @@ function pathway(id: string, name: string, offset: number): PathwayResult {
       committed: { p5: 0.1, p17: 0.2, p50: 0.3, p83: 0.4, p95: 0.5 },
       precision: { p5: [t.p5 - 0.02, t.p5 + 0.02], p17: null, p50: [t.p50 - 0.01, t.p50 + 0.01], p83: null, p95: null } as Record<string, [number, number] | null>,
       forcing: { p5: 2, p17: 2.5, p50: 3, p83: 3.5, p95: 4 },
-      forcingByAgent: { co2: { p5: 2, p50: 2.2, p95: 2.4 }, aerosolCloud: { p5: -1, p50: -0.6, p95: -0.2 } },
+      forcingByAgent: { co2: { p5: 2, p50: 2.2, p95: 2.4 }, "aerosol-cloud": { p5: -1, p50: -0.6, p95: -0.2 } },
     };
   };
   const sensitivity = [2050, 2100].flatMap((year) => [
     { input: "ecs", horizon: year, index: 0.8, varianceShare: 0.55 },
-    { input: "aerosolCloud", horizon: year, index: -0.4, varianceShare: 0.2 },
+    { input: "aerosol-cloud", horizon: year, index: -0.4, varianceShare: 0.2 },
     { input: "f2x", horizon: year, index: 0.1, varianceShare: 0.05 },
   ]);
   return {

@@ -64,6 +64,11 @@ export const runSummarySchema = z.object({
   startedAt: z.string().nullable(),
   finishedAt: z.string().nullable(),
   error: z.string().nullable(),
+  /**
+   * The owner asked to cancel and the worker has not confirmed yet (the run is still queued
+   * or running); the final state follows once the worker stops at its next year boundary.
+   */
+  cancelRequested: z.boolean(),
 });
 export type RunSummary = z.infer<typeof runSummarySchema>;
 

@@ -39,7 +39,14 @@ export const horizonSchema = z.object({
 export const sensitivityEntrySchema = z.object({
   input: z.string(),
   horizon: z.number().int(),
+  /** Spearman's rank correlation of the input with the horizon warming; weighted under a constraint (engine 0.3.0 on). */
   index: z.number(),
+  /**
+   * The input's first-order share (0–1) of the variance of the horizon warming (a Sobol main
+   * effect estimated from the ensemble; weighted under a constraint). The shares of all inputs
+   * add up to at most 1; the remainder is interactions. Absent in results of engines before 0.3.0.
+   */
+  varianceShare: z.number().min(0).max(1).optional(),
 });
 
 export const pathwayResultSchema = z.object({

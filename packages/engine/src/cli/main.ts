@@ -1,6 +1,8 @@
 #!/usr/bin/env node
 import { writeFileSync } from "node:fs";
 import { runW1 } from "../bench/run-w1.js";
+import { memberTableCsv } from "../ensemble/member-table-csv.js";
+import { memberTable } from "../ensemble/member-table.js";
 import { preparePlan } from "../ensemble/prepare-plan.js";
 import { inputHash } from "../hash/run-hashes.js";
 import { runEnsembleParallel } from "../node/run-ensemble-parallel.js";
@@ -26,6 +28,12 @@ async function main(argv: string[]): Promise<void> {
     const { spec: withDefaults } = preparePlan(spec);
     const answer = { valid: true, members: withDefaults.members, pathways: withDefaults.pathways.length, inputHash: inputHash(withDefaults) };
     process.stdout.write(`${JSON.stringify(answer)}\n`);
+    return;
+  }
+  if (args.command === "members") {
+    const csv = memberTableCsv(memberTable(spec));
+    if (args.out) writeFileSync(userPath(args.out), csv);
+    else process.stdout.write(csv);
     return;
   }
   const onProgress = progressBar();

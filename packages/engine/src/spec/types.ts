@@ -125,7 +125,14 @@ export interface HorizonResult {
 export interface SensitivityEntry {
   input: string;
   horizon: number;
+  /** Spearman's rank correlation of the input with the horizon warming (weighted under a constraint). */
   index: number;
+  /**
+   * The input's first-order share (0–1) of the variance of the horizon warming (Sobol main
+   * effect from the ensemble itself; weighted under a constraint). Optional in the type
+   * because results of engine versions before 0.3.0 lack it; this engine always sets it.
+   */
+  varianceShare?: number;
 }
 
 export interface ConstraintResult {

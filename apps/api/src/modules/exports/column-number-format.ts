@@ -20,6 +20,6 @@ export function columnNumberFormat(column: string, quantity: "money" | "physical
   if (column.startsWith("multiplier_")) return "0.000";
   if (column.startsWith("loss_") || column === "baseline" || column.startsWith("change_") || ["aal", "loss100", "loss200"].includes(column))
     return "#,##0";
-  if (column.endsWith("_K") || column.endsWith("_Wm2") || column === "index" || column === "baseline_warming_K") return "0.00";
+  if (column.endsWith("_K") || column.endsWith("_Wm2") || column === "index" || column === "rank_correlation" || column === "baseline_warming_K") return "0.00";
   return "#,##0.00";
 }

@@ -13,6 +13,8 @@ import { createModelVersion } from "../model-versions/model-versions.service.js"
 import { createPathway } from "../pathways/pathways.service.js";
 import { testModelVersionBody, testPathwayBody } from "../runs/runs.fixtures.js";
 import { binaryBody } from "../../test-support/binary-body.js";
+import SSF from "ssf";
+import { buildRunWorkbook, type WorkbookManifest } from "./workbook-builder.js";
 import { requestUserOf } from "../../test-support/request-user.js";
 
 let t: TestContext;
@@ -173,6 +175,18 @@ describe("GET /api/runs/:id/tables/:table.csv", () => {
     expect((await t.ctx.models.ExportRecord.count({ where: { runId, format: "csv" } }))).toBe(7);
   });
 
+  it("writes the sensitivity budget with each input's variance share beside its rank correlation", async () => {
+    const rows = parse((await actuary.get(`/api/runs/${runId}/tables/sensitivity.csv`)).text, { columns: true }) as Array<Record<string, string>>;
+    const entries = result.pathways[0]!.sensitivity;
+    expect(entries.length).toBeGreaterThan(0);
+    expect(rows).toHaveLength(entries.length);
+    entries.forEach((e, k) => {
+      expect(rows[k]).toMatchObject({ horizon: String(e.horizon), input: e.input });
+      expect(Number(rows[k]!.variance_share)).toBe(e.varianceShare);
+      expect(Number(rows[k]!.rank_correlation)).toBe(e.index);
+    });
+  });
+
   it("names bands by their percentiles in every table: no calibrated likelihood word", async () => {
     for (const table of RESULT_TABLES) {
       const res = await actuary.get(`/api/runs/${runId}/tables/${table}.csv`);
@@ -187,5 +201,52 @@ describe("GET /api/runs/:id/tables/:table.csv", () => {
     expect(bad.body.error.details[0].path).toBe("table");
     expect((await request(t.app).get(`/api/runs/${runId}/tables/temperature.csv`)).status).toBe(401);
     expect((await actuary.get("/api/runs/missing/tables/temperature.csv")).status).toBe(404);
+  });
+});
+
+describe("probabilities on the workbook", () => {
+  it("show as percentages that never round a possibility away, never in scientific notation; the cell keeps the value", async () => {
+    // A weighted ensemble can give a chance such as 5e-109. SheetJS SSF (an independent
+    // implementation of the ECMA-376 number formats) renders each cell as a spreadsheet would.
+    const tweaked = structuredClone(result);
+    const p = tweaked.pathways[0]!;
+    const i = p.years.indexOf(2100);
+    const shown: Array<[number, string]> = [
+      [5e-109, "< 0.1%"],
+      [0.0004, "< 0.1%"],
+      [0.0005, "0.1%"],
+      [0.123456, "12.3%"],
+      [0.9996, "> 99.9%"],
+      [0, "0.0%"],
+      [1, "100.0%"],
+    ];
+    shown.forEach(([v], k) => (p.exceedance["2"]![i - k] = v));
+    const run = (await t.ctx.models.Run.findByPk(runId))!;
+    const manifest = {
+      runId, runName: run.name, exploratory: true, createdBy: "a", createdAt: run.createdAt.toISOString(), finishedAt: null,
+      modelVersion: { id: run.modelVersionId, name: "v", versionNumber: 1, status: "draft", changeClass: null, decidedBy: null, decidedAt: null },
+      pathways: [], seed: run.seed, members: run.members, sampling: run.sampling, baseline: run.spec.baseline, percentiles: run.spec.percentiles,
+      thresholds: run.spec.thresholds, horizons: run.spec.horizons, engineVersion: result.engineVersion, inputHash: result.inputHash,
+      resultHash: result.resultHash, exportedBy: "b", exportedAt: new Date(0).toISOString(), statements: [],
+    } as WorkbookManifest;
+    const book = new ExcelJS.Workbook();
+    await book.xlsx.load((await buildRunWorkbook(manifest, tweaked, run.spec.model)) as unknown as ArrayBuffer);
+    const sheet = book.getWorksheet("Exceedance")!;
+    const column = (sheet.getRow(2).values as unknown[]).indexOf("p_exceed_2K");
+    shown.forEach(([v, text], k) => {
+      const cell = sheet.getRow(3 + i - k).getCell(column);
+      expect(cell.value).toBe(v);
+      expect(SSF.format(cell.numFmt, cell.value as number)).toBe(text);
+    });
+    // Every probability cell on every sheet reads as a percentage.
+    for (const ws of book.worksheets) {
+      const header = (ws.getRow(2).values as unknown[]).map(String);
+      header.forEach((name, c) => {
+        if (!/^(p_exceed_|share_)/.test(name)) return;
+        ws.getColumn(c).eachCell((cell, r) => {
+          if (r > 2 && typeof cell.value === "number") expect(SSF.format(cell.numFmt, cell.value)).toMatch(/^(< 0\.1%|> 99\.9%|\d{1,3}\.\d%)$/);
+        });
+      });
+    }
   });
 });

@@ -84,10 +84,17 @@ function horizonsTable(result: RunResult): Table {
   };
 }
 
+/**
+ * The sensitivity budget: per pathway, horizon and input, the first-order share (0–1) of the
+ * variance of warming (`variance_share`; empty for results of engines before 0.3.0) and the
+ * rank correlation with warming (`rank_correlation`, Spearman; both weighted under a
+ * constraint). The shares of one horizon add up to at most 1; the rest is interactions.
+ */
 function sensitivityTable(result: RunResult): Table {
   const rows: TableCell[][] = [];
-  for (const p of result.pathways) for (const s of p.sensitivity) rows.push([p.id, p.name, s.horizon, s.input, s.index]);
-  return { columns: ["pathway_id", "pathway_name", "horizon", "input", "index"], rows };
+  for (const p of result.pathways)
+    for (const s of p.sensitivity) rows.push([p.id, p.name, s.horizon, s.input, s.varianceShare ?? null, s.index]);
+  return { columns: ["pathway_id", "pathway_name", "horizon", "input", "variance_share", "rank_correlation"], rows };
 }
 
 /**

@@ -13,6 +13,7 @@ import {
 import { PERIL_TABLE_SHEETS } from "../peril-profiles/peril-result-tables.js";
 import { perilWarnings } from "../peril-profiles/peril-warnings.js";
 import { columnNumberFormat } from "./column-number-format.js";
+import { PROBABILITY_FORMAT, probabilityNumberFormat } from "./probability-number-format.js";
 import { neutraliseFormula } from "./neutralise-formula.js";
 import { resultTable, type Table, type TableCell } from "./result-tables.js";
 
@@ -59,7 +60,8 @@ function safe(cell: TableCell): TableCell {
 /**
  * A result table on its own sheet: an italic note, the bold header, the rows; the two top
  * rows frozen; each column as wide as its header or widest text (within 10–40 characters);
- * every numeric cell formatted by its column (columnNumberFormat), the value kept in full.
+ * every numeric cell formatted by its column (columnNumberFormat; a probability by its value too,
+ * probabilityNumberFormat), the value kept in full.
  */
 function addTableSheet(workbook: ExcelJS.Workbook, name: string, table: Table, note: string, quantity: "money" | "physical" = "physical"): ExcelJS.Worksheet {
   const sheet = workbook.addWorksheet(name, { views: [{ state: "frozen", ySplit: 2 }] });
@@ -73,7 +75,7 @@ function addTableSheet(workbook: ExcelJS.Workbook, name: string, table: Table, n
     sheet.getColumn(i + 1).eachCell({ includeEmpty: false }, (cell, rowNumber) => {
       if (rowNumber <= 2) return;
       if (typeof cell.value === "number") {
-        cell.numFmt = numFmt;
+        cell.numFmt = numFmt === PROBABILITY_FORMAT ? probabilityNumberFormat(cell.value) : numFmt;
         widest = Math.max(widest, numFmt.includes("#,##") ? 14 : 9);
       } else if (typeof cell.value === "string") widest = Math.max(widest, cell.value.length);
     });
@@ -196,7 +198,7 @@ const TABLE_SHEETS: Array<[ResultTable, string, string]> = [
   ["horizons", "Horizons", "At each horizon: temperature percentiles (K), probability of exceeding each threshold, committed warming (K), total forcing (W m-2)"],
   ["exceedance", "Exceedance", "Probability (0–1) that the year's temperature anomaly exceeds each threshold"],
   ["crossing", "Crossing years", "Percentiles of the first year each threshold is crossed; share_never = members that never cross within the pathway"],
-  ["sensitivity", "Sensitivity", "Which inputs drive the spread at each horizon (index as reported by the engine)"],
+  ["sensitivity", "Sensitivity", "What drives the spread at each horizon: variance_share = the input's first-order share of the variance of warming (the shares of one horizon add up to at most 100 %; the rest is interactions between inputs); rank_correlation = Spearman rank correlation with warming (sign = direction). Both weighted under an observational constraint"],
   ["forcing", "Forcing", "Total effective radiative forcing (W m-2), percentiles by year"],
   ["imbalance", "Imbalance", "Top-of-atmosphere imbalance (W m-2), percentiles by year"],
 ];

@@ -2,7 +2,7 @@ import { CLIMATE_INPUTS, CLIMATE_INPUT_UNITS, FORCING_AGENTS, RANGE_SHAPE_LABELS
 import { Table, Td, Th } from "@/components/ui/table";
 import { formatFixed } from "@/lib/format";
 import { inputLabel, SCALE_FACTOR_UNIT } from "@/lib/input-labels";
-import { percentileValues } from "../lib/distribution-math";
+import { percentileValues } from "../lib/preview-percentiles";
 import { DISTRIBUTION_TYPE_LABELS } from "../lib/distribution-fields";
 
 /** Parameters as "key value" pairs; a range's shape by its full name (a split, two-piece law). */

@@ -3,7 +3,8 @@ import { distributionSchema, RANGE_SHAPE_LABELS, type Distribution, type Distrib
 import { DensityPreview } from "@/components/charts/density-preview";
 import { Input, Select } from "@/components/ui/field";
 import { cx } from "@/components/ui/cx";
-import { densityCurve, percentileValues } from "../lib/distribution-math";
+import { densityCurve } from "@plumeline/engine";
+import { percentileValues } from "../lib/preview-percentiles";
 import { convertDistribution, DISTRIBUTION_FIELDS, DISTRIBUTION_TYPE_LABELS } from "../lib/distribution-fields";
 import { PRESETS } from "../lib/presets";
 
@@ -175,7 +176,7 @@ export function DistributionEditor({
         {shown.type === "fixed" ? (
           <div className="flex h-24 items-center justify-center rounded bg-surface-2 text-xs text-muted">Fixed at {shown.value} {unit}: no spread</div>
         ) : (
-          <DensityPreview xs={preview.curve.xs} density={preview.curve.density} markers={preview.values} unit={unit} label={label} width={288} />
+          <DensityPreview xs={preview.curve.x} density={preview.curve.density} markers={preview.values} unit={unit} label={label} width={288} />
         )}
       </div>
     </div>
