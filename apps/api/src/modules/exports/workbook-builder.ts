@@ -15,6 +15,7 @@ import { perilWarnings } from "../peril-profiles/peril-warnings.js";
 import { columnNumberFormat } from "./column-number-format.js";
 import { PROBABILITY_FORMAT, probabilityNumberFormat } from "./probability-number-format.js";
 import { neutraliseFormula } from "./neutralise-formula.js";
+import { withFixedEntryDates } from "./stable-zip.js";
 import { resultTable, type Table, type TableCell } from "./result-tables.js";
 
 /** What the manifest sheet states about the run (all of it read from the database, not the request). */
@@ -251,5 +252,5 @@ export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunRe
       for (const w of warnings) cautions.addRow([neutraliseFormula(w)]);
     }
   }
-  return Buffer.from(await workbook.xlsx.writeBuffer());
+  return withFixedEntryDates(Buffer.from(await workbook.xlsx.writeBuffer()), new Date(manifest.exportedAt));
 }
