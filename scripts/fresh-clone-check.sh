@@ -4,10 +4,10 @@
 #   1. `corepack enable && pnpm install && pnpm start` in the background; wait for
 #      /api/health, sign in through the API with a demo user, read /api/me, stop the server.
 #   2. `pnpm test` (unit, integration and end-to-end).
-# Usage: scripts/fresh-clone-check.sh [repository (default: /work/main)] [port (default: 4000)]
+# Usage: scripts/fresh-clone-check.sh [repository (default: this checkout)] [port (default: 4000)]
 set -euo pipefail
 
-repo="${1:-/work/main}"
+repo="${1:-$(git -C "$(dirname "$0")" rev-parse --show-toplevel)}"
 port="${2:-4000}"
 work="$(mktemp -d -t plumeline-fresh-XXXXXX)"
 clone="$work/plumeline"

@@ -13,8 +13,10 @@ const apiTarget = process.env.PLUMELINE_API_URL ?? "http://localhost:4000";
 export const sharedResolve = {
   alias: {
     "@": fileURLToPath(new URL("./src", import.meta.url)),
-    // Read the contracts from source so the web app never depends on a stale dist build.
+    // Read the contracts and the engine's pure library from source so the web app never depends
+    // on a stale dist build (the engine library has no Node APIs; its ./node entry is not for here).
     "@plumeline/contracts": fileURLToPath(new URL("../../packages/contracts/src/index.ts", import.meta.url)),
+    "@plumeline/engine": fileURLToPath(new URL("../../packages/engine/src/index.ts", import.meta.url)),
   },
 };
 

@@ -106,7 +106,7 @@ test("analyst runs the approved version, reads the fan chart and horizons, compa
 });
 
 test("a run on an unapproved version is marked exploratory on its page and on the desk", async ({ page, baseURL }, testInfo) => {
-  // The seeded v2 draft (observational constraint) is not approved: any run of it is exploratory.
+  // The seeded v2 draft (a trial 2001–2020 observational constraint) is not approved: any run of it is exploratory.
   const api = await apiAs("analyst", baseURL!);
   const draft = (await getJson<VersionSummary[]>(api, "/api/model-versions?status=draft")).find((v) => v.name === seededVersionName)!;
   const run = await postJson<RunSummary>(api, "/api/runs", {

@@ -1,6 +1,5 @@
-import { existsSync } from "node:fs";
-import path from "node:path";
 import { toNodeHandler } from "better-auth/node";
+import compression from "compression";
 import express from "express";
 import { rateLimit } from "express-rate-limit";
 import helmet from "helmet";
@@ -9,10 +8,14 @@ import { CLIENT_IP_HEADER } from "./auth/create-auth.js";
 import { AppError } from "./errors/app-error.js";
 import { errorHandler } from "./errors/error-handler.js";
 import { httpLogger } from "./logging/http-logger.js";
+import { serveWebBuild } from "./http/serve-web-build.js";
+import { noStore } from "./middleware/no-store.js";
+import { rejectControlCharacters } from "./middleware/reject-control-characters.js";
 import { requireTrustedOrigin } from "./middleware/require-trusted-origin.js";
 import { moduleRouters } from "./modules/index.js";
 
 const JSON_LIMIT = "1mb";
+const PERMISSIONS_POLICY = "accelerometer=(), camera=(), geolocation=(), gyroscope=(), magnetometer=(), microphone=(), payment=(), usb=(), interest-cohort=()";
 
 /** Builds the Express app around a context without listening, so tests drive it in-process. */
 export function createApp(ctx: AppContext): express.Express {
@@ -22,6 +25,15 @@ export function createApp(ctx: AppContext): express.Express {
   app.set("trust proxy", "loopback");
   app.use(httpLogger());
   app.use(helmet());
+  // helmet does not set this one: the app uses no camera, microphone, location, payment or USB.
+  app.use((_req, res, next) => {
+    res.setHeader("Permissions-Policy", PERMISSIONS_POLICY);
+    next();
+  });
+  // gzip/deflate (or brotli, when the client asks for it) for JSON and the web build's text
+  // assets; responses that already carry a Content-Encoding (a stored gzip result) pass through.
+  app.use(compression());
+  app.use("/api", noStore);
 
   // Sign-in attempts per client address; on top of better-auth's own limiter.
   app.use(
@@ -52,6 +64,7 @@ export function createApp(ctx: AppContext): express.Express {
   app.use(express.json({ limit: JSON_LIMIT }));
   const api = express.Router();
   api.use(requireTrustedOrigin);
+  api.use(rejectControlCharacters);
   for (const [mountPath, router] of moduleRouters) api.use(mountPath, router);
   api.use((req, _res, next) => next(new AppError(404, "not_found", `No API endpoint ${req.method} ${req.baseUrl}${req.path}.`)));
   app.use("/api", api);
@@ -59,12 +72,4 @@ export function createApp(ctx: AppContext): express.Express {
   serveWebBuild(app, ctx.config.webDist);
   app.use(errorHandler);
   return app;
-}
-
-/** Serves the built web app with an SPA fallback: any non-/api GET gets index.html. */
-function serveWebBuild(app: express.Express, webDist: string): void {
-  const indexHtml = path.join(webDist, "index.html");
-  if (!existsSync(indexHtml)) return;
-  app.use(express.static(webDist, { index: false, maxAge: "1h" }));
-  app.get(/^(?!\/api(?:\/|$)).*/, (_req, res) => res.sendFile(indexHtml));
 }

@@ -21,10 +21,11 @@ const envSchema = z.object({
   SMTP_URL: z.url().optional(),
   SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(0),
   MAIL_FROM: z.string().min(3).default("Plumeline <no-reply@plumeline.invalid>"),
-  WORKERS: z.coerce.number().int().min(1).max(64).optional(),
+  WORKERS: z.coerce.number().int().min(0).max(64).optional(),
   QUEUE: z.enum(["sqlite", "bullmq"]).default("sqlite"),
   REDIS_URL: z.url().optional(),
   SIGN_IN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+  RUNS_QUEUED_PER_PERSON: z.coerce.number().int().min(1).max(1000).default(10),
   WEB_DIST: z.string().min(1).optional(),
   SEED_DEMO: z.enum(["true", "false"]).default("true"),
   LOG_LEVEL: z.enum(LOG_LEVELS).optional(),
@@ -45,11 +46,14 @@ export interface Config {
   /** Port of the embedded SMTP server; 0 picks a free one. */
   smtpPort: number;
   mailFrom: string;
+  /** Engine threads in this process; 0 (QUEUE=bullmq only) = the API computes nothing itself. */
   workers: number;
   queue: "sqlite" | "bullmq";
   redisUrl: string | undefined;
   /** Sign-in attempts allowed per client address per minute. */
   signInRateLimit: number;
+  /** Runs one person may have queued or running at once; the next is refused (429). */
+  runsQueuedPerPerson: number;
   webDist: string;
   seedDemo: boolean;
   /** Least severe level written to the log; tests default to `silent`. */
@@ -69,11 +73,19 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   }
   const e = parsed.data;
   if (e.QUEUE === "bullmq" && !e.REDIS_URL) throw new ConfigError("Invalid configuration:\n  REDIS_URL: required when QUEUE=bullmq");
+  // Mailed links (run finished, review, reset) start with the public origin; without it each
+  // process would fall back to its own port, and a worker's mail would point at the worker.
+  if (e.NODE_ENV === "production" && !e.PUBLIC_ORIGIN)
+    throw new ConfigError("Invalid configuration:\n  PUBLIC_ORIGIN: required when NODE_ENV=production (the address people open; mailed links start with it)");
+  // WORKERS=0 means "this process computes nothing": only workers elsewhere (QUEUE=bullmq) could run the jobs.
+  if (e.QUEUE === "sqlite" && e.WORKERS === 0)
+    throw new ConfigError("Invalid configuration:\n  WORKERS: 0 needs QUEUE=bullmq (with the table queue nothing else would run the jobs)");
 
   const dataDir = path.resolve(repoRoot, e.PLUMELINE_DATA_DIR ?? "data");
   const publicOrigin = (e.PUBLIC_ORIGIN ?? `http://localhost:${e.PORT}`).replace(/\/$/, "");
   const extraOrigins = (e.TRUSTED_ORIGINS ?? "").split(",").map((o) => o.trim()).filter(Boolean);
-  const localOrigins = [`http://localhost:${e.PORT}`, `http://127.0.0.1:${e.PORT}`, "http://localhost:5173"];
+  // The Vite dev server and the loopback spellings of this port are trusted in development only.
+  const localOrigins = e.NODE_ENV === "development" ? [`http://localhost:${e.PORT}`, `http://127.0.0.1:${e.PORT}`, "http://localhost:5173"] : [];
 
   return {
     env: e.NODE_ENV,
@@ -91,6 +103,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     queue: e.QUEUE,
     redisUrl: e.REDIS_URL,
     signInRateLimit: e.SIGN_IN_RATE_LIMIT,
+    runsQueuedPerPerson: e.RUNS_QUEUED_PER_PERSON,
     webDist: path.resolve(repoRoot, e.WEB_DIST ?? "apps/web/dist"),
     seedDemo: e.SEED_DEMO === "true",
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === "test" ? "silent" : "info"),

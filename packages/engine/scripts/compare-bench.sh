@@ -1,18 +1,27 @@
 #!/usr/bin/env bash
-# Times benchmark workload W1 (/work/shared/bench/W1.md) for the engine and both reference
-# programs in the same session, RUNS times each (interleaved, so machine load hits all three
-# alike), and prints the median total_s of each, the engine's ratios to the references, and
+# Times benchmark workload W1 (bench-reference/README.md) for the engine and both reference
+# programs of bench-reference/ in the same session, RUNS times each (interleaved, so machine
+# load hits all three alike), and prints the median total_s of each, the engine's ratios to the references, and
 # the check values, plus each program's median stage timings. The engine runs twice per
 # round: W1's own outputs (plumeline-ts) and with the product's full per-year summaries
 # (plumeline-ts-full: forcing and imbalance too). Extra engine options (e.g. --threads 1)
-# can be given in ENGINE_ARGS. The load average is printed before and after. Usage: scripts/compare-bench.sh [MEMBERS=100000] [RUNS=3]
+# can be given in ENGINE_ARGS. The references run with the engine's conventions where they
+# differ from W1's definition (REFERENCE_ARGS, default below; "" for W1 as defined), so the
+# check values are comparable. The load average is printed before and after.
+# Needs gcc and python3 with numpy. Usage: scripts/compare-bench.sh [MEMBERS=100000] [RUNS=3]
 set -euo pipefail
 MEMBERS="${1:-100000}"
 RUNS="${2:-3}"
 HERE="$(cd "$(dirname "$0")/.." && pwd)"
-BENCH_DIR="${BENCH_DIR:-/work/shared/bench}"
-C_BIN="$(mktemp -d)/ebm_ref"
-gcc -O3 -march=native -o "$C_BIN" "$BENCH_DIR/ebm_ref.c" -lm
+BENCH_DIR="${BENCH_DIR:-$HERE/bench-reference}"
+REFERENCE_ARGS="${REFERENCE_ARGS-"--feedback co2-scaled"}"
+for tool in gcc python3; do
+  command -v "$tool" >/dev/null || { echo "compare-bench: $tool is needed for the reference programs" >&2; exit 2; }
+done
+python3 -c "import numpy" 2>/dev/null || { echo "compare-bench: python3 needs numpy (Debian: python3-numpy)" >&2; exit 2; }
+C_BIN="$(mktemp -d)/w1-reference"
+gcc -O3 -march=native -o "$C_BIN" "$BENCH_DIR/w1-reference.c" -lm
+echo "reference options: ${REFERENCE_ARGS:-(W1 as defined)}"
 node "$HERE/bin/plumeline-engine.mjs" bench --members 1000 >/dev/null # builds dist if needed, warms caches
 OUT="$(mktemp)"
 echo "load average before: $(cut -d' ' -f1-3 /proc/loadavg)"
@@ -21,8 +30,10 @@ for _ in $(seq "$RUNS"); do
   node "$HERE/bin/plumeline-engine.mjs" bench --members "$MEMBERS" ${ENGINE_ARGS:-} >>"$OUT"
   # shellcheck disable=SC2086
   node "$HERE/bin/plumeline-engine.mjs" bench --members "$MEMBERS" --full ${ENGINE_ARGS:-} >>"$OUT"
-  "$C_BIN" "$MEMBERS" >>"$OUT"
-  python3 "$BENCH_DIR/ebm_ref.py" "$MEMBERS" >>"$OUT"
+  # shellcheck disable=SC2086 # REFERENCE_ARGS is a list of words
+  "$C_BIN" "$MEMBERS" $REFERENCE_ARGS >>"$OUT"
+  # shellcheck disable=SC2086
+  python3 "$BENCH_DIR/w1_reference.py" "$MEMBERS" $REFERENCE_ARGS >>"$OUT"
 done
 echo "load average after: $(cut -d' ' -f1-3 /proc/loadavg)"
 python3 - "$OUT" <<'PY'

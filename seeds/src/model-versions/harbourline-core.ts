@@ -1,11 +1,16 @@
 import type { CreateModelVersionBody } from "@plumeline/contracts";
 
 /**
- * Demo model versions: AR6-based defaults, each with its source in the notes (CHECKS.md flags
- * in brackets). ILLUSTRATIVE: the ocean-layer parameters in particular are not a fit.
+ * Demo model versions: AR6-based defaults, each with its source in the notes (and how sure
+ * the value is, in plain words). ILLUSTRATIVE: the ocean-layer parameters are not a fit.
+ *
+ * v1 is the approved one: the prior below constrained by the observed 2011–2020 warming, so
+ * it reproduces the observed decade (its approval comment states the numbers, checked by
+ * demo-approved-warming.test.ts). v2 is a draft trial of the same prior constrained by the
+ * 2001–2020 observations instead.
  */
 export interface DemoModelVersion {
-  key: "harbourline-core-v1" | "harbourline-core-v2-constrained";
+  key: "harbourline-core-v1" | "harbourline-core-v2-trial-2001-2020";
   /** Demo user key of the author (an analyst); approval, when any, is by the first manager. */
   author: "analyst";
   approve: { by: "manager"; changeClass: "major" | "minor"; comment: string } | null;
@@ -21,19 +26,31 @@ function scaleFromRange(central: number, low: number, high: number) {
 }
 const round = (v: number) => Math.round(v * 1000) / 1000;
 
-const NOTES_V1 = [
+const PRIOR_NOTES = [
   "ILLUSTRATIVE demo assumptions for Harbourline Mutual (invented insurer). Sources, with how sure each value is:",
-  "- ECS: median 3 K, 5–95 % 2 to 5 K (IPCC AR6 WGI SPM A.4.4 / TS §TS.3.2.1, 'very likely'), fitted lognormal. AR6's range is not exactly lognormal; the fit is a choice (see CHECKS.md §3.3).",
-  "- F2x (ERF of doubled CO2): 3.93 W m-2, ±0.47 read as a 5–95 % range (AR6 §7.3.2.1 via a secondary copy; the TS rounds to 3.9 ± 0.5).",
-  "- Forcing scale factors: 5–95 % ranges of AR6 Table 7.8 (2019 vs 1750) divided by their central values — CO2 2.16 [1.90–2.41], CH4 0.54 [0.43–0.65], N2O 0.21 [0.18–0.24], halogenated 0.41 [0.33–0.49], ozone 0.47 [0.24–0.71], aerosol–radiation −0.22 [−0.47 to +0.04], aerosol–cloud −0.84 [−1.45 to −0.25], land use −0.20 [−0.30 to −0.10]. Ranges for CO2/CH4/N2O/halogens/aerosol split are [read-S].",
+  "- ECS: median 3 K, 5th–95th percentiles 2 to 5 K (IPCC 2021, AR6 WGI SPM A.4.4 and TS Section TS.3.2.1: “very likely range” 2 to 5 K), drawn from a split (two-piece) lognormal (log-spread below the median from the 5 % end, above it from the 95 % end, so its density jumps at the median), as AR6's range is not one lognormal; the shape is our choice.",
+  "- F2x (ERF of doubled CO2): 3.93 W m-2, ±0.47 read as a 5–95 % range (AR6 WGI Ch. 7 Section 7.3.2.1, quoted in a secondary copy; the Technical Summary prints 3.9 ± 0.5).",
+  "- Forcing scale factors: 5–95 % ranges of AR6 WGI Ch. 7 Table 7.8 (Forster et al. 2021; 2019 vs 1750) divided by their central values — CO2 2.16 [1.90–2.41], CH4 0.54 [0.43–0.65], N2O 0.21 [0.18–0.24], halogenated 0.41 [0.33–0.49], ozone 0.47 [0.24–0.71], aerosol–radiation −0.22 [−0.47 to +0.04], aerosol–cloud −0.84 [−1.45 to −0.25], land use −0.20 [−0.30 to −0.10]. The central values for CO2–ozone and land use are printed in the AR6 Technical Summary; the ranges for CO2/CH4/N2O/halogens and the aerosol split were read in secondary copies of the table.",
+  "- Other (stratospheric water vapour from CH4 0.05 [0.00–0.10], light-absorbing particles on snow and ice 0.08 [0.00–0.18], contrails and aviation-induced cirrus 0.06 [0.02–0.10]; Table 7.8 rows from memory): 0.19 W m-2, range 0.088–0.309 from adding the three half-widths in quadrature (independent parts). With it the 2019 total anthropogenic ERF is AR6's 2.72 [1.96 to 3.48] W m-2 (SPM A.4.1).",
   "- Two-layer ocean: upper heat capacity ~7.3, deep ~106 W yr m-2 K-1, exchange ~0.73 W m-2 K-1 (CMIP5 multi-model means after Geoffroy et al. 2013a, from memory, not verified); deep-ocean efficacy 1 to 1.6 around ~1.28 (Geoffroy et al. 2013b, from memory). Spreads are our illustrative choice.",
-  "- No observational constraint, no input correlations.",
+  "- No input correlations.",
 ].join("\n");
 
+/** Gaussian stand-in for a 5–95 % range: its width over 2 × 1.645 (the normal's 95th percentile). */
+const sdOf90Range = (low: number, high: number) => Math.round(((high - low) / (2 * 1.6448536269514722)) * 1000) / 1000;
+
+/** AR6 WGI SPM A.1.2: observed GMST 2011–2020 vs 1850–1900, 1.09 [0.95 to 1.20] K. */
+const OBSERVED_2011_2020 = { from: 2011, to: 2020, observed: 1.09, sd: sdOf90Range(0.95, 1.2) };
+/** AR6 WGI SPM A.1.2: observed GMST 2001–2020 vs 1850–1900, 0.99 [0.84 to 1.10] K. */
+const OBSERVED_2001_2020 = { from: 2001, to: 2020, observed: 0.99, sd: sdOf90Range(0.84, 1.1) };
+
+const NOTES_V1 =
+  PRIOR_NOTES +
+  `\n- Observational constraint: members weighted by how well their 2011–2020 mean warming matches the observed 1.09 K [0.95–1.20] over 1850–1900 (IPCC AR6 WGI SPM A.1.2, 5–95 %); observational sd ${OBSERVED_2011_2020.sd} K = (1.20 − 0.95) / (2 × 1.645).`;
+
 const NOTES_V2 =
-  NOTES_V1.replace("- No observational constraint, no input correlations.", "") +
-  "- Observational constraint: GMST 2011–2020 vs 1850–1900 = 1.09 K [0.95–1.20] very likely (AR6 SPM A.1.2); sd 0.076 K = (1.20 − 0.95) / (2 × 1.645) (CHECKS.md §4, computed).\n" +
-  "- No input correlations.";
+  PRIOR_NOTES +
+  `\n- Trial observational constraint: the 2001–2020 mean instead, observed 0.99 K [0.84–1.10] over 1850–1900 (IPCC AR6 WGI SPM A.1.2, 5–95 %); observational sd ${OBSERVED_2001_2020.sd} K = (1.10 − 0.84) / (2 × 1.645). Draft: for comparison with v1, not approved.`;
 
 const climate = {
   ecs: { type: "range", p50: 3, low: 2, high: 5, coverage: 90, shape: "lognormal" },
@@ -53,36 +70,60 @@ const agents = {
   "aerosol-radiation": { scale: scaleFromRange(-0.22, -0.47, 0.04) },
   "aerosol-cloud": { scale: scaleFromRange(-0.84, -1.45, -0.25) },
   "land-use": { scale: scaleFromRange(-0.2, -0.3, -0.1) },
+  // Stratospheric water vapour 0.05 [0.00–0.10] + particles on snow and ice 0.08 [0.00–0.18] +
+  // contrails and cirrus 0.06 [0.02–0.10] (AR6 Table 7.8, from memory): independent parts,
+  // half-widths added in quadrature below and above the summed centre -> 0.19 [0.088–0.309].
+  other: { scale: scaleFromRange(0.19, 0.19 - Math.hypot(0.05, 0.08, 0.04), 0.19 + Math.hypot(0.05, 0.1, 0.04)) },
 };
 
 const defaults = { percentiles: [5, 17, 50, 83, 95], thresholds: [1.5, 2, 3], horizons: [2030, 2050, 2100], baseline: [1850, 1900] as [number, number] };
 const allPathways = ["harbourline-low", "harbourline-middle", "harbourline-high", "harbourline-middle-gases"];
 
+/**
+ * What the approved version reproduces, as its approval comment states it: 2019 total
+ * anthropogenic ERF as sampled (before and after the constraint's weights) and 2011–2020 warming
+ * (weighted 5/50/95 %), measured with the engine (version and members below, Latin hypercube) on
+ * the Harbourline Middle pathway (the same as the other pathways up to 2019) and checked in
+ * demo-approved-warming.test.ts.
+ */
+export const APPROVED_REPRODUCES = {
+  engineVersion: "0.3.0",
+  members: 5000,
+  erf2019: { p5: 1.95, p50: 2.72, p95: 3.5 },
+  erf2019Weighted: { p5: 2.21, p50: 2.73, p95: 3.32 },
+  warming2011to2020: { p5: 0.97, p50: 1.09, p95: 1.2 },
+} as const;
+
+const f2 = (v: number) => v.toFixed(2);
+const APPROVAL_COMMENT =
+  `Approved for the illustrative scenario set. Checked before approval: 2019 total anthropogenic ERF ` +
+  `${f2(APPROVED_REPRODUCES.erf2019.p50)} [${f2(APPROVED_REPRODUCES.erf2019.p5)} to ${f2(APPROVED_REPRODUCES.erf2019.p95)}] W m-2 ` +
+  `as sampled (AR6: 2.72 [1.96 to 3.48]), ${f2(APPROVED_REPRODUCES.erf2019Weighted.p50)} [${f2(APPROVED_REPRODUCES.erf2019Weighted.p5)} to ` +
+  `${f2(APPROVED_REPRODUCES.erf2019Weighted.p95)}] after the constraint's weights; 2011–2020 warming with the observational constraint ` +
+  `${f2(APPROVED_REPRODUCES.warming2011to2020.p50)} [${f2(APPROVED_REPRODUCES.warming2011to2020.p5)}–${f2(APPROVED_REPRODUCES.warming2011to2020.p95)}] K, 5–95 % ` +
+  `(observed: 1.09 [0.95–1.20]); engine ${APPROVED_REPRODUCES.engineVersion}, ${APPROVED_REPRODUCES.members.toLocaleString("en-GB")} members. The ocean parameters are illustrative, not a fit; sources and their standing are in the notes.`;
+
 export const demoModelVersions: readonly DemoModelVersion[] = [
   {
     key: "harbourline-core-v1",
     author: "analyst",
-    approve: {
-      by: "manager",
-      changeClass: "major",
-      comment: "Approved for the illustrative scenario set: AR6 ranges reproduced, sources cited in the notes.",
-    },
+    approve: { by: "manager", changeClass: "major", comment: APPROVAL_COMMENT },
     body: {
       name: "Harbourline Core Assumptions",
       notes: NOTES_V1,
-      model: { climate, agents, correlations: [], constraint: null, forcingExpression: "ar6" },
+      model: { climate, agents, correlations: [], constraint: OBSERVED_2011_2020, forcingExpression: "ar6" },
       defaults,
       pathwayKeys: allPathways,
     },
   },
   {
-    key: "harbourline-core-v2-constrained",
+    key: "harbourline-core-v2-trial-2001-2020",
     author: "analyst",
     approve: null,
     body: {
       name: "Harbourline Core Assumptions",
       notes: NOTES_V2,
-      model: { climate, agents, correlations: [], constraint: { from: 2011, to: 2020, observed: 1.09, sd: 0.076 }, forcingExpression: "ar6" },
+      model: { climate, agents, correlations: [], constraint: OBSERVED_2001_2020, forcingExpression: "ar6" },
       defaults,
       pathwayKeys: allPathways,
     },

@@ -1,4 +1,4 @@
-import { createModelVersionBodySchema, pathwaySpecSchema } from "@plumeline/contracts";
+import { createModelVersionBodySchema, createPathwayBodySchema, pathwaySpecSchema } from "@plumeline/contracts";
 import { describe, expect, it } from "vitest";
 import { demoModelVersions } from "../model-versions/harbourline-core.js";
 import { demoPathways } from "./harbourline-pathways.js";
@@ -9,14 +9,16 @@ describe("demo pathways", () => {
   it("are valid engine pathway specs, 1750–2100, one value per year", () => {
     for (const p of demoPathways) {
       expect(pathwaySpecSchema.safeParse({ id: p.key, name: p.name, startYear: p.startYear, agents: p.agents }).success).toBe(true);
-      for (const s of Object.values(p.agents)) expect(Object.values(s)[0]!.length).toBe(351);
+      const { key: _key, ...body } = p;
+      expect(createPathwayBodySchema.safeParse(body).error?.issues ?? []).toEqual([]);
+      for (const s of Object.values(p.agents)) expect(Object.values(s!)[0]!.length).toBe(351);
       expect(p.description).toContain("ILLUSTRATIVE");
       expect(p.source).toContain("AR6");
     }
   });
 
   it("reach the AR6 2019 ERFs they cite and start from zero in 1750", () => {
-    // IPCC AR6 WGI Ch. 7 Table 7.8 / TS §TS.2.2 (CHECKS.md §3.1): ERF 2019 vs 1750, W m-2.
+    // IPCC AR6 WGI Ch. 7 Table 7.8 (Forster et al. 2021) / TS Section TS.2.2: ERF 2019 vs 1750, W m-2.
     const anchors = { co2: 2.16, ch4: 0.54, n2o: 0.21, "other-wmghg": 0.41, ozone: 0.47, "aerosol-radiation": -0.22, "aerosol-cloud": -0.84, "land-use": -0.2 };
     for (const p of demoPathways.filter((x) => x.key !== "harbourline-middle-gases"))
       for (const [agent, value] of Object.entries(anchors)) {
@@ -27,7 +29,7 @@ describe("demo pathways", () => {
   });
 
   it("give the AR6 1750 and 2019 concentrations in the gas pathway", () => {
-    // AR6 WGI TS §TS.2.2: 2019 = 409.9 ppm, 1866.3 ppb, 332.1 ppb; 1750 by subtraction (CHECKS.md §1.4).
+    // AR6 WGI TS Section TS.2.2: 2019 = 409.9 ppm, 1866.3 ppb, 332.1 ppb; 1750 by subtraction (1750 CH4 from memory).
     const p = demoPathways.find((x) => x.key === "harbourline-middle-gases")!;
     const co2 = (p.agents.co2 as { ppm: number[] }).ppm;
     const ch4 = (p.agents.ch4 as { ppb: number[] }).ppb;

@@ -1,5 +1,5 @@
 import type { ForcingAgent } from "@plumeline/contracts";
-import { AR6_CONCENTRATIONS, AR6_ERF_2019, AR6_SOURCE_NOTE } from "./ar6-anchors.js";
+import { AR6_CONCENTRATIONS, AR6_ERF_2019, AR6_OTHER_PARTS_2019, AR6_SOURCE_NOTE, OTHER_AGENT_NOTE } from "./ar6-anchors.js";
 import { acceleratingRise, easeInOut, logisticRise, round, yearsBetween } from "./shapes.js";
 
 /** A demo pathway as the API's create body takes it (POST /api/pathways). */
@@ -25,15 +25,18 @@ interface FutureTargets {
   n2o: number;
   "other-wmghg": number;
   ozone: number;
-  aerosol: number; // multiplier on both aerosol agents' 2019 values
+  aerosol: number; // multiplier on both aerosol agents' 2019 values (and on particles on snow and ice)
   "land-use": number;
+  contrails: number; // contrails and aviation-induced cirrus, W m-2 in 2100
 }
+
+type ShapedAgent = Exclude<keyof typeof AR6_ERF_2019, "other">;
 
 /**
  * Historical shape per agent (invented curves, pinned to the AR6 2019 values): well-mixed
  * gases accelerate (CO2 slowest e-folding), aerosols and ozone rise mostly after 1900.
  */
-function historical(agent: keyof typeof AR6_ERF_2019, year: number): number {
+function historical(agent: ShapedAgent, year: number): number {
   const target = AR6_ERF_2019[agent];
   switch (agent) {
     case "co2":
@@ -61,8 +64,29 @@ function future(from: number, to: number, year: number, settleBy = END): number 
   return from + (to - from) * easeInOut(year, ANCHOR, settleBy);
 }
 
+/**
+ * The `other` agent: AR6's three smaller categories, each on its own invented shape —
+ * stratospheric water vapour from CH4 oxidation follows the CH4 forcing (in proportion, past
+ * and future); light-absorbing particles on snow and ice follow the aerosol curve (black
+ * carbon) and clear with it; contrails and aviation-induced cirrus grow with aviation from
+ * 1940 (accelerating, e-folding 30 years) to the scenario's 2100 value.
+ */
+function otherSeries(targets: FutureTargets): number[] {
+  const water = AR6_OTHER_PARTS_2019.stratosphericWaterVapour.central;
+  const snow = AR6_OTHER_PARTS_2019.snowAndIceParticles.central;
+  const contrails = AR6_OTHER_PARTS_2019.contrailsAndCirrus.central;
+  return YEARS.map((y) => {
+    if (y <= ANCHOR) {
+      const aerosolShape = logisticRise(y, START, ANCHOR, 1955, 18);
+      return round(water * acceleratingRise(y, START, ANCHOR, 65) + snow * aerosolShape + contrails * acceleratingRise(y, 1940, ANCHOR, 30));
+    }
+    const ch4Share = future(AR6_ERF_2019.ch4, targets.ch4, y) / AR6_ERF_2019.ch4;
+    return round(water * ch4Share + future(snow, snow * targets.aerosol, y, 2070) + future(contrails, targets.contrails, y));
+  });
+}
+
 function erfSeries(targets: FutureTargets): DemoPathway["agents"] {
-  const series = (agent: keyof typeof AR6_ERF_2019, to2100: number | null, settleBy = END) =>
+  const series = (agent: ShapedAgent, to2100: number | null, settleBy = END) =>
     YEARS.map((y) => round(y <= ANCHOR || to2100 === null ? historical(agent, Math.min(y, ANCHOR)) : future(AR6_ERF_2019[agent], to2100, y, settleBy)));
   const solar = YEARS.map((y) => historical("solar", y));
   return {
@@ -74,13 +98,14 @@ function erfSeries(targets: FutureTargets): DemoPathway["agents"] {
     "aerosol-radiation": { erf: series("aerosol-radiation", AR6_ERF_2019["aerosol-radiation"] * targets.aerosol, 2070) },
     "aerosol-cloud": { erf: series("aerosol-cloud", AR6_ERF_2019["aerosol-cloud"] * targets.aerosol, 2070) },
     "land-use": { erf: series("land-use", targets["land-use"]) },
+    other: { erf: otherSeries(targets) },
     solar: { erf: solar },
   };
 }
 
-const LOW: FutureTargets = { co2: 2.55, ch4: 0.3, n2o: 0.24, "other-wmghg": 0.25, ozone: 0.3, aerosol: 0.35, "land-use": -0.18 };
-const MIDDLE: FutureTargets = { co2: 4.1, ch4: 0.62, n2o: 0.36, "other-wmghg": 0.35, ozone: 0.5, aerosol: 0.55, "land-use": -0.24 };
-const HIGH: FutureTargets = { co2: 6.6, ch4: 0.95, n2o: 0.48, "other-wmghg": 0.45, ozone: 0.75, aerosol: 0.75, "land-use": -0.28 };
+const LOW: FutureTargets = { co2: 2.55, ch4: 0.3, n2o: 0.24, "other-wmghg": 0.25, ozone: 0.3, aerosol: 0.35, "land-use": -0.18, contrails: 0.05 };
+const MIDDLE: FutureTargets = { co2: 4.1, ch4: 0.62, n2o: 0.36, "other-wmghg": 0.35, ozone: 0.5, aerosol: 0.55, "land-use": -0.24, contrails: 0.1 };
+const HIGH: FutureTargets = { co2: 6.6, ch4: 0.95, n2o: 0.48, "other-wmghg": 0.45, ozone: 0.75, aerosol: 0.75, "land-use": -0.28, contrails: 0.14 };
 
 const VINTAGE = "Harbourline scenario set 2025.1 (illustrative)";
 const ILLUSTRATIVE =
@@ -90,7 +115,7 @@ function erfPathway(key: DemoPathway["key"], name: string, story: string, target
   return {
     key,
     name,
-    description: `${ILLUSTRATIVE} ${story} ERF per agent in W m-2, one value per year ${START}–${END}.`,
+    description: `${ILLUSTRATIVE} ${story} ERF per agent in W m-2, one value per year ${START}–${END}. ${OTHER_AGENT_NOTE}`,
     source: `Invented by Plumeline for the demo; ${AR6_SOURCE_NOTE}; 2020–${END} invented (${targets.co2} W m-2 CO2 ERF in ${END}).`,
     vintage: VINTAGE,
     startYear: START,
@@ -113,11 +138,11 @@ function concentrationPathway(): DemoPathway {
     name: "Harbourline Middle (gas concentrations)",
     description:
       `${ILLUSTRATIVE} The Middle story with CO2 (ppm), CH4 and N2O (ppb) given as concentrations; ` +
-      `the engine turns them into forcing with the chosen published expression. Other agents: ERF in W m-2.`,
+      `the engine turns them into forcing with the chosen published expression. Other agents: ERF in W m-2. ${OTHER_AGENT_NOTE}`,
     source:
-      `Invented by Plumeline for the demo; concentrations 1750 (278.3 ppm, 729.2 ppb, 270.1 ppb) and 2019 ` +
-      `(409.9 ppm, 1866.3 ppb, 332.1 ppb) from IPCC AR6 WGI Technical Summary §TS.2.2; other agents ${AR6_SOURCE_NOTE}; ` +
-      `2020–${END} invented (560 ppm CO2 in ${END}).`,
+      `Invented by Plumeline for the demo; CO2, CH4, N2O in 1750 (278.3 ppm, 729.2 ppb, 270.1 ppb) and 2019 ` +
+      `(409.9 ppm, 1866.3 ppb, 332.1 ppb) from IPCC AR6 WGI TS §TS.2.2; other agents as Harbourline Middle (ERFs of ` +
+      `AR6 WGI Ch. 7 Table 7.8 in 2019); 2020–${END} invented (560 ppm CO2 in ${END}).`,
     vintage: VINTAGE,
     startYear: START,
     agents: {
@@ -129,6 +154,7 @@ function concentrationPathway(): DemoPathway {
       "aerosol-radiation": middle["aerosol-radiation"]!,
       "aerosol-cloud": middle["aerosol-cloud"]!,
       "land-use": middle["land-use"]!,
+      other: middle.other!,
       solar: middle.solar!,
     },
   };

@@ -45,8 +45,8 @@ describe("sign-in (better-auth on the Sequelize adapter)", () => {
   });
 
   it("appends an auth.signed-in row per successful sign-in, readable by an admin through GET /api/audit", async () => {
-    // Checks the governance rule in /work/shared/JOB.md ("append-only audit log", "Read the
-    // audit trail"): a sign-in is who-did-what too. The row must hold the person and their IP like
+    // Checks the product's governance rule (README "Cautions"; docs/API.md, audit): the audit log is
+    // append-only and admins read the trail; a sign-in is who-did-what too. The row must hold the person and their IP like
     // a failure row does, and nothing of the password or the session token.
     const manager = demoUser("manager");
     const res = await request(t.app)

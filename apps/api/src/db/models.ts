@@ -9,7 +9,7 @@ import { initPathwayModel } from "../modules/pathways/pathway.model.js";
 import { initModelVersionModel } from "../modules/model-versions/model-version.model.js";
 import { initRunModel } from "../modules/runs/run.model.js";
 import { initJobModel } from "../queue/job.model.js";
-import { initRunResultModel, initRunResultRowModel } from "../modules/results/run-result.model.js";
+import { initRunResultModel } from "../modules/results/run-result.model.js";
 import { initExportRecordModel } from "../modules/exports/export-record.model.js";
 import { initRunStatementModel } from "../modules/run-statements/run-statement.model.js";
 import { initPerilProfileModel } from "../modules/peril-profiles/peril-profile.model.js";
@@ -35,7 +35,6 @@ export function initModels(sequelize: Sequelize) {
     Run: initRunModel(sequelize),
     Job: initJobModel(sequelize),
     RunResult: initRunResultModel(sequelize),
-    RunResultRow: initRunResultRowModel(sequelize),
     ExportRecord: initExportRecordModel(sequelize),
     RunStatement: initRunStatementModel(sequelize),
     // peril (peril profiles, portfolios)

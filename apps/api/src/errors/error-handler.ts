@@ -3,9 +3,14 @@ import type { ApiError, ErrorDetail } from "@plumeline/contracts";
 import { formatPath } from "@plumeline/contracts";
 import multer from "multer";
 import { ZodError } from "zod";
+import { DatabaseBusyError } from "../db/serialize-writes.js";
+import { MalformedMultipartError } from "../uploads/single-file-upload.js";
 import { AppError, type AppErrorStatus } from "./app-error.js";
 import { redactUrl } from "../logging/http-logger.js";
 import { logger } from "../logging/logger.js";
+
+/** Seconds a client is asked to wait before retrying a write the database could not take. */
+export const BUSY_RETRY_AFTER_SECONDS = 5;
 
 /**
  * The status each AppError status maps to. Written out on purpose (not `err.status || 500`):
@@ -18,11 +23,13 @@ const statusByAppErrorStatus: Record<AppErrorStatus, number> = {
   404: 404,
   409: 409,
   413: 413,
+  429: 429,
 };
 
 interface Mapped {
   status: number;
   body: ApiError;
+  headers?: Record<string, string>;
 }
 
 /** Turns any thrown value into a status and the one error body shape (docs/API.md). */
@@ -32,6 +39,13 @@ export function toErrorResponse(err: unknown): Mapped {
     if (status !== undefined) {
       return { status, body: { error: { code: err.code, message: err.message, ...(err.details ? { details: err.details } : {}) } } };
     }
+  }
+  if (err instanceof DatabaseBusyError) {
+    return {
+      status: 503,
+      headers: { "Retry-After": String(BUSY_RETRY_AFTER_SECONDS) },
+      body: { error: { code: "database_busy", message: `The database is busy with other changes; nothing was saved. Try again in ${BUSY_RETRY_AFTER_SECONDS} seconds.` } },
+    };
   }
   if (err instanceof ZodError) {
     const details: ErrorDetail[] = err.issues.map((issue) => ({ path: formatPath(issue.path), message: issue.message }));
@@ -51,22 +65,45 @@ export function toErrorResponse(err: unknown): Mapped {
     if (err.type === "entity.parse.failed") {
       return { status: 400, body: { error: { code: "malformed_json", message: "The request body is not valid JSON." } } };
     }
+    if (err.type === "encoding.unsupported" || err.status === 415) {
+      return {
+        status: 415,
+        body: { error: { code: "unsupported_content_encoding", message: "The request's Content-Encoding is not supported; send identity, gzip, deflate or br." } },
+      };
+    }
+    // Any other client-side body failure (a gzip header on a plain body, a stream cut short).
+    if (err.status >= 400 && err.status < 500) {
+      return { status: 400, body: { error: { code: "malformed_body", message: "The request body could not be read as sent (check its Content-Encoding and length)." } } };
+    }
+  }
+  if (err instanceof MalformedMultipartError) {
+    return {
+      status: 400,
+      body: { error: { code: "malformed_multipart", message: `The upload is not well-formed multipart: ${err.message}.`, details: [{ path: "file", message: err.message }] } },
+    };
   }
   return { status: 500, body: { error: { code: "internal_error", message: "Something went wrong on our side. It has been logged." } } };
 }
 
-function isBodyParserError(err: unknown): err is { type: string; status: number } {
-  return typeof err === "object" && err !== null && typeof (err as { type?: unknown }).type === "string" && typeof (err as { status?: unknown }).status === "number";
+function isBodyParserError(err: unknown): err is { type?: string; status: number } {
+  if (typeof err !== "object" || err === null) return false;
+  const e = err as { type?: unknown; status?: unknown; expose?: unknown };
+  // body-parser's own errors carry a `type`; a stream error it wrapped (zlib's "incorrect
+  // header check" for a gzip header on a plain body) only gets http-errors' status and expose.
+  return typeof e.status === "number" && (typeof e.type === "string" || e.expose === true);
 }
 
 /** The ONE error handler, mounted last in app.ts. Logs only unexpected failures. */
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
-  const { status, body } = toErrorResponse(err);
+  const { status, body, headers } = toErrorResponse(err);
   // req.log (pino-http) ties the line to the request's id; an app without it uses the process logger.
-  if (status === 500) ("log" in req ? req.log : logger).error({ err }, `${req.method} ${redactUrl(req.originalUrl)} failed`);
+  const log = "log" in req ? req.log : logger;
+  if (status === 500) log.error({ err }, `${req.method} ${redactUrl(req.originalUrl)} failed`);
+  else if (status === 503) log.warn({ reason: (err as Error).message }, `${req.method} ${redactUrl(req.originalUrl)}: database busy`);
   if (res.headersSent) {
     res.end();
     return;
   }
+  if (headers) res.set(headers);
   res.status(status).json(body);
 };

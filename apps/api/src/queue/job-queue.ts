@@ -41,8 +41,12 @@ export interface JobQueue {
     reason: string,
     options?: { refundAttempt?: boolean },
   ): Promise<"queued" | "failed" | "cancelled" | null>;
-  /** Asks for cancellation; a queued job is cancelled at once (returns "cancelled"), a running one when its worker next checks. */
-  requestCancel(jobId: string, transaction?: Transaction): Promise<"cancelled" | "requested" | "finished">;
+  /**
+   * Asks for cancellation; a queued job is cancelled at once (returns "cancelled"), a running one
+   * when its worker next checks ("requested"). Asking again changes nothing: "already" when
+   * cancellation was asked for before (or the job ended cancelled), "finished" when it ended otherwise.
+   */
+  requestCancel(jobId: string, transaction?: Transaction): Promise<"cancelled" | "requested" | "already" | "finished">;
   /**
    * Jobs left running by a dead worker go back to the queue (or fail when out of attempts).
    * With no filter every running job counts as abandoned (one process: on its start-up nothing

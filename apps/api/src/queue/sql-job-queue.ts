@@ -6,7 +6,7 @@ import type { ClaimedJob, JobQueue } from "./job-queue.js";
 const DEFAULT_MAX_ATTEMPTS = 3;
 
 /**
- * The durable queue as a table (STYLE.md example 5). Claims are a guarded update: the row
+ * The durable queue as a table. Claims are a guarded update: the row
  * changes from 'queued' to 'running' only if it is still 'queued', so of two workers racing
  * for one row exactly one sees "1 row updated"; the other moves on to the next candidate.
  * Every later write is guarded by `locked_by`, so a worker whose job was re-queued under it
@@ -106,8 +106,11 @@ export function createSqlJobQueue(Job: typeof JobModel): JobQueue {
         { where: { id: jobId, status: "queued" }, ...opts },
       );
       if (cancelledQueued === 1) return "cancelled";
-      const [flagged] = await Job.update({ cancelRequested: true }, { where: { id: jobId, status: "running" }, ...opts });
-      return flagged === 1 ? "requested" : "finished";
+      // Guarded on the flag too, so of two cancels racing exactly one sees "requested".
+      const [flagged] = await Job.update({ cancelRequested: true }, { where: { id: jobId, status: "running", cancelRequested: false }, ...opts });
+      if (flagged === 1) return "requested";
+      const row = await Job.findByPk(jobId, { attributes: ["status", "cancelRequested"], ...opts });
+      return row && (row.status === "cancelled" || (row.status === "running" && row.cancelRequested)) ? "already" : "finished";
     },
 
     async requeueAbandoned(filter) {

@@ -8,7 +8,8 @@ import type { SeededUserIds } from "./seed-users.js";
 
 /**
  * Demo domain data on first start: the Harbourline pathways, the approved core model version
- * (drafted by the analyst, approved by the first manager) and a constrained draft built on it.
+ * (constrained by the observed 2011–2020 warming; drafted by the analyst, approved by the first
+ * manager with a comment stating what it reproduces) and a draft trial built on it.
  * It goes through the same services as the API, so the audit trail and outbox show the story.
  */
 export async function seedDomain(ctx: AppContext, userIds: SeededUserIds): Promise<{ pathways: number; modelVersions: number }> {
@@ -34,7 +35,7 @@ export async function seedDomain(ctx: AppContext, userIds: SeededUserIds): Promi
       pathwayIds: pathwayKeys.map((k) => pathwayIds.get(k)!).filter(Boolean),
     });
     if (v.approve) {
-      await submitModelVersion(ctx, author, created.id, v.approve.changeClass, "Demo seed: first approved assumptions.");
+      await submitModelVersion(ctx, author, created.id, v.approve.changeClass, "Demo seed: first assumptions for approval, constrained by the observed 2011–2020 warming.");
       await decideModelVersion(ctx, await asUser(v.approve.by), created.id, "approved", v.approve.comment);
     }
     parentId = created.id;

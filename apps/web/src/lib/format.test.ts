@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { formatFixed, formatNumber, formatPercent, formatProbability, percentileHeading } from "./format";
+import { formatFixed, formatNumber, formatPercent, formatProbability, formatProbabilityTenths, percentileHeading } from "./format";
 
 // Expected strings follow Number.prototype.toFixed (ECMAScript spec: -0.0004.toFixed(3) is "-0.000"),
 // with the minus dropped only where the rounded value is zero.
@@ -42,5 +42,19 @@ describe("formatProbability", () => {
   it("prints exact none, exact all and ordinary shares as whole percents", () => {
     expect([0, 1, 0.005, 0.2132, 0.9949].map(formatProbability)).toEqual(["0 %", "100 %", "1 %", "21 %", "99 %"]);
     expect(formatProbability(undefined)).toBe("–");
+  });
+});
+
+describe("formatProbabilityTenths", () => {
+  it("prints a vanishing weighted chance as < 0.1 %, never in scientific notation", () => {
+    // String(5e-109) is "5e-109" (ECMAScript Number::toString); the screen must not show that.
+    expect(formatProbabilityTenths(5e-109)).toBe("< 0.1 %");
+    expect(formatProbabilityTenths(0.00049)).toBe("< 0.1 %");
+    expect(formatProbabilityTenths(1 - 1e-6)).toBe("> 99.9 %");
+  });
+
+  it("prints exact none, exact all and ordinary shares to a tenth of a percent", () => {
+    expect([0, 1, 0.0005, 0.123456, 0.9994].map(formatProbabilityTenths)).toEqual(["0.0 %", "100.0 %", "0.1 %", "12.3 %", "99.9 %"]);
+    expect(formatProbabilityTenths(Number.NaN)).toBe("–");
   });
 });

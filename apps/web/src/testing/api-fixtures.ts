@@ -21,6 +21,7 @@ export function runSummary(over: Partial<RunSummary> = {}): RunSummary {
     startedAt: null,
     finishedAt: null,
     error: null,
+    cancelRequested: false,
     ...over,
   };
 }

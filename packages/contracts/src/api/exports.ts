@@ -13,10 +13,11 @@ export const RESULT_TABLES = [
   "peril-multipliers",
   "peril-return-periods",
   "peril-losses",
+  "portfolio-totals",
 ] as const;
 export type ResultTable = (typeof RESULT_TABLES)[number];
 
-export const EXPORT_FORMATS = ["csv", "xlsx"] as const;
+export const EXPORT_FORMATS = ["csv", "xlsx", "pdf", "zip"] as const;
 
 export const listExportsQuerySchema = z.object({
   mine: z.enum(["true", "false"], { error: 'must be "true" or "false"' }).optional(),
@@ -28,7 +29,7 @@ export const exportRecordSchema = z.object({
   runId: z.string(),
   runName: z.string().nullable(),
   format: z.enum(EXPORT_FORMATS),
-  /** Table name for a CSV, "workbook" for an XLSX. */
+  /** Table name for a CSV, "workbook" for an XLSX, "report" for the PDF, "tables" for the zip of every CSV. */
   table: z.string(),
   fileName: z.string(),
   exploratory: z.boolean(),
@@ -43,8 +44,8 @@ export const exportRecordSchema = z.object({
 export type ExportRecord = z.infer<typeof exportRecordSchema>;
 
 /**
- * Limitations shown beside results on screens and in every export (JOB.md "Cautions to show",
- * DESIGN.md "Cautions the product shows").
+ * Limitations shown beside results on screens and in every export (README "Cautions" says the
+ * same in prose).
  */
 export const RESULT_CAUTIONS = [
   "Global mean only: a two-layer energy balance model says nothing by itself about regional climate, extremes or sea level.",

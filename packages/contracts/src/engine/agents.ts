@@ -35,7 +35,7 @@ export const AGENT_LABELS: Record<ForcingAgent, string> = {
 /** Agents that may be given as concentrations and the unit they take. */
 export const CONCENTRATION_UNITS = { co2: "ppm", ch4: "ppb", n2o: "ppb" } as const;
 
-/** Climate inputs of the two-layer model, with units (DESIGN.md). */
+/** Climate inputs of the two-layer model, with units. */
 export const CLIMATE_INPUTS = [
   "ecs",
   "f2x",
@@ -55,6 +55,7 @@ export const CLIMATE_INPUT_UNITS: Record<ClimateInput, string> = {
   deepEfficacy: "1",
 };
 
-/** Published concentration-to-forcing expressions the engine implements (CHECKS.md §1). */
+/** Published concentration-to-forcing expressions the engine implements: the Meinshausen et al. 2020 re-fit used
+ * in IPCC AR6 WGI Ch. 7, Etminan et al. 2016, Myhre et al. 1998. */
 export const FORCING_EXPRESSIONS = ["ar6", "etminan-2016", "myhre-1998"] as const;
 export type ForcingExpression = (typeof FORCING_EXPRESSIONS)[number];

@@ -1,10 +1,11 @@
 import { z } from "zod";
 
 /**
- * One uncertain input, as the engine contract spells it (DESIGN.md "Engine contract").
+ * One uncertain input, as the engine contract spells it (packages/engine/README.md).
  * Units follow the input it describes (K, W m-2, W yr m-2 K-1, W m-2 K-1, or a unitless scale).
  * "range" is how assessment reports publish an input: a median with a 90 % (5–95) or
- * 66 % (17–83) range, fitted as a lognormal or a split-normal.
+ * 66 % (17–83) range, fitted as a split (two-piece) law — lognormal or normal — whose halves
+ * have their own spreads, so its density jumps at the median when the range is asymmetric.
  */
 const finite = () => z.number({ error: "must be a number" }).refine(Number.isFinite, "must be finite");
 const positive = () => finite().refine((v) => v > 0, "must be > 0");
@@ -71,4 +72,13 @@ export const distributionSchema = z.discriminatedUnion(
 );
 
 export type Distribution = z.infer<typeof distributionSchema>;
+
+/**
+ * What a range's `shape` fits, named for what it is: two half-laws of probability 1/2 each
+ * that meet at the median with different spreads (not a single fitted lognormal or normal).
+ */
+export const RANGE_SHAPE_LABELS: Record<"lognormal" | "split-normal", string> = {
+  lognormal: "split (two-piece) lognormal",
+  "split-normal": "split (two-piece) normal",
+};
 export type DistributionType = Distribution["type"];

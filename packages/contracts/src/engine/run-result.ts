@@ -14,7 +14,8 @@ export const percentileSeriesSchema = z.record(z.string(), z.array(z.number()));
 export type PercentileSeries = z.infer<typeof percentileSeriesSchema>;
 
 /**
- * Distribution-free 95 % interval for each reported percentile (order statistics, CHECKS.md §7.3);
+ * Distribution-free 95 % interval for each reported percentile (order statistics; Conover,
+ * Practical Nonparametric Statistics, 3rd ed., Section 3.2);
  * null when the ensemble is too small for such an interval to exist.
  */
 export const precisionSchema = z.record(z.string(), z.tuple([z.number(), z.number()]).nullable());
@@ -38,7 +39,14 @@ export const horizonSchema = z.object({
 export const sensitivityEntrySchema = z.object({
   input: z.string(),
   horizon: z.number().int(),
+  /** Spearman's rank correlation of the input with the horizon warming; weighted under a constraint (engine 0.3.0 on). */
   index: z.number(),
+  /**
+   * The input's first-order share (0–1) of the variance of the horizon warming (a Sobol main
+   * effect estimated from the ensemble; weighted under a constraint). The shares of all inputs
+   * add up to at most 1; the remainder is interactions. Absent in results of engines before 0.3.0.
+   */
+  varianceShare: z.number().min(0).max(1).optional(),
 });
 
 export const pathwayResultSchema = z.object({
@@ -61,6 +69,9 @@ export const pathwayResultSchema = z.object({
       to: z.number().int(),
       observed: z.number(),
       sd: z.number(),
+      /** Internal variability used (1 sd, K) and the likelihood's total sd; absent before engine 0.3.0. */
+      internalVariability: z.number().optional(),
+      likelihoodSd: z.number().optional(),
       effectiveMembers: z.number(),
       windowWarmingPrior: percentileSetSchema,
       windowWarmingPosterior: percentileSetSchema,

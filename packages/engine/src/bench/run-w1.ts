@@ -2,7 +2,7 @@ import type { StageTimes } from "../ensemble/run-ensemble.js";
 import { runEnsembleParallel } from "../node/run-ensemble-parallel.js";
 import { w1Spec } from "./w1-spec.js";
 
-/** One W1 line, with the fields and meaning of bench/W1.md. */
+/** One W1 line, with the fields and meaning of bench-reference/README.md. */
 export interface W1Line {
   impl: "plumeline-ts" | "plumeline-ts-full";
   members: number;

@@ -1,13 +1,13 @@
 import type { RunSpec } from "../spec/types.js";
 
 /**
- * Benchmark workload W1 (/work/shared/bench/W1.md) as an ordinary run spec, so the bench
+ * Benchmark workload W1 (bench-reference/README.md) as an ordinary run spec, so the bench
  * goes through the engine's real code path: 351 years 1750–2100, eight agents with base
  * series amp[k]·(t/350)^(2.5 + 0.3k) and Normal(1, sd[k]) scales, ECS lognormal (median 3,
  * log-sd 0.3039), F2x Normal(3.93, 0.24), and the four ocean inputs. W1 clips the normal
  * ocean inputs below (e.g. max(3, Normal(8, 1))); the spec language has truncated normals
  * instead, which differ only in the clipped mass: at most 2·10⁻⁴ of members (efficacy
- * below 0.5), far inside the ±0.5 agreement W1 asks of the check value. Plain Monte Carlo,
+ * below 0.5), far below the check value's sampling noise (standard deviation about 0.7 at 100,000 members). Plain Monte Carlo,
  * as the reference programs draw.
  */
 const AMPLITUDES = [2.2, 0.6, 0.25, 0.4, 0.45, -0.35, -1.0, -0.2];

@@ -1,6 +1,8 @@
 #!/usr/bin/env node
 import { writeFileSync } from "node:fs";
 import { runW1 } from "../bench/run-w1.js";
+import { memberTableCsv } from "../ensemble/member-table-csv.js";
+import { memberTable } from "../ensemble/member-table.js";
 import { preparePlan } from "../ensemble/prepare-plan.js";
 import { inputHash } from "../hash/run-hashes.js";
 import { runEnsembleParallel } from "../node/run-ensemble-parallel.js";
@@ -11,7 +13,7 @@ import { progressBar } from "./progress-bar.js";
 import { readSpecFile, userPath } from "./read-spec-file.js";
 
 /**
- * The engine's command line (DESIGN.md "Engine contract"): stdout carries only the JSON
+ * The engine's command line (its stable contract, described in packages/engine/README.md): stdout carries only the JSON
  * answer; problems go to stderr with a non-zero exit code (2 for bad input, 1 otherwise).
  */
 async function main(argv: string[]): Promise<void> {
@@ -26,6 +28,12 @@ async function main(argv: string[]): Promise<void> {
     const { spec: withDefaults } = preparePlan(spec);
     const answer = { valid: true, members: withDefaults.members, pathways: withDefaults.pathways.length, inputHash: inputHash(withDefaults) };
     process.stdout.write(`${JSON.stringify(answer)}\n`);
+    return;
+  }
+  if (args.command === "members") {
+    const csv = memberTableCsv(memberTable(spec));
+    if (args.out) writeFileSync(userPath(args.out), csv);
+    else process.stdout.write(csv);
     return;
   }
   const onProgress = progressBar();

@@ -2,14 +2,16 @@ import { CliError } from "./cli-error.js";
 
 export const USAGE = `usage:
   engine run SPEC.json [--out FILE] [--threads T]   result JSON on stdout (or FILE)
+  engine members SPEC.json [--out FILE]            CSV, one row per member: member, inputs,
+                                                   weight, <pathwayId>@<year> warming (K)
   engine validate SPEC.json                        checks a spec without running it
   engine bench --members N [--threads T] [--full] [--debug]
-                                                   one W1 benchmark line (bench/W1.md);
+                                                   one W1 benchmark line (bench-reference/README.md);
                                                    --full also summarises forcing and imbalance;
                                                    --debug adds the process CPU seconds (cpu_s)`;
 
 export interface ParsedArgs {
-  command: "run" | "validate" | "bench";
+  command: "run" | "members" | "validate" | "bench";
   file?: string;
   out?: string;
   members?: number;
@@ -23,7 +25,7 @@ export interface ParsedArgs {
 /** Parses the CLI's small grammar; anything unexpected is a CliError naming the argument. */
 export function parseArgs(argv: string[]): ParsedArgs {
   const [command, ...rest] = argv;
-  if (command !== "run" && command !== "validate" && command !== "bench")
+  if (command !== "run" && command !== "members" && command !== "validate" && command !== "bench")
     throw new CliError(command ? `unknown command "${command}"\n${USAGE}` : USAGE);
   const parsed: ParsedArgs = { command };
   for (let i = 0; i < rest.length; i++) {
@@ -38,8 +40,8 @@ export function parseArgs(argv: string[]): ParsedArgs {
       if (!Number.isInteger(v) || v < 1) throw new CliError(`${name} must be a whole number ≥ 1`);
       return v;
     };
-    if (arg === "--out" && command === "run") parsed.out = value();
-    else if (arg === "--threads" && command !== "validate") parsed.threads = count("--threads");
+    if (arg === "--out" && (command === "run" || command === "members")) parsed.out = value();
+    else if (arg === "--threads" && (command === "run" || command === "bench")) parsed.threads = count("--threads");
     else if (arg === "--members" && command === "bench") parsed.members = count("--members");
     else if (arg === "--full" && command === "bench") parsed.full = true;
     else if (arg === "--debug" && command === "bench") parsed.debug = true;

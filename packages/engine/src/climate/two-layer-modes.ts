@@ -1,6 +1,6 @@
 import { type TwoLayerParameters, validateTwoLayerParameters } from "./two-layer-parameters.js";
 
-/** Mode decomposition of the two-layer model (Geoffroy et al. 2013a,b; CHECKS.md §5.2). */
+/** Mode decomposition of the two-layer model (Geoffroy et al. 2013a,b). */
 export interface TwoLayerModes {
   /** Fast time scale τ_f (years). */
   tauFast: number;
@@ -20,7 +20,7 @@ export interface TwoLayerModes {
 /**
  * Time scales, amplitudes and mode shapes of the two-layer model.
  *
- * Method (CHECKS.md §5.2, Geoffroy et al. 2013a Part I; ε as in Part II):
+ * Method (Geoffroy et al. 2013a Part I, analytical solution; ε as in Part II, 2013b):
  * b = (λ+εγ)/C + γ/C0, b* = (λ+εγ)/C − γ/C0, δ = b² − 4λγ/(C·C0),
  * τ_f = C·C0/(2λγ)·(b − √δ), τ_s = C·C0/(2λγ)·(b + √δ),
  * φ_f = C/(2εγ)·(b* − √δ), φ_s = C/(2εγ)·(b* + √δ),
@@ -31,7 +31,7 @@ export interface TwoLayerModes {
  * Reference: Geoffroy et al. (2013a), J. Climate 26, 1841–1857; (2013b) 1859–1876.
  *
  * Example: C = 7.3, C0 = 106, λ = 1.13, γ = 0.73, ε = 1 → τ_f = 3.883 yr, τ_s = 241.59 yr,
- * a_f = 0.59453 (CHECKS.md §5.3).
+ * a_f = 0.59453 (computed from the closed form with these illustrative inputs).
  */
 export function twoLayerModes(p: TwoLayerParameters): TwoLayerModes {
   validateTwoLayerParameters(p);
@@ -61,11 +61,11 @@ export function twoLayerModes(p: TwoLayerParameters): TwoLayerModes {
  * Closed-form response to a step forcing F switched on at t = 0 (from equilibrium at 0):
  * T(t) = (F/λ)[1 − a_f e^(−t/τ_f) − a_s e^(−t/τ_s)],
  * T0(t) = (F/λ)[1 − a_f φ_f e^(−t/τ_f) − a_s φ_s e^(−t/τ_s)].
- * Cost O(1). Reference: Geoffroy et al. (2013a); CHECKS.md §5.2. The independent check of
+ * Cost O(1). Reference: Geoffroy et al. (2013a), step-forcing solution. The independent check of
  * twoLayerPropagator.
  *
  * Example: C = 7.3, C0 = 106, λ = 1.13, γ = 0.73, ε = 1, F = 1, t = 10 →
- * { upper: 0.500631, deep: 0.023114 } (CHECKS.md §5.3).
+ * { upper: 0.500631, deep: 0.023114 } (computed from the closed form).
  */
 export function stepResponse(p: TwoLayerParameters, forcing: number, t: number): { upper: number; deep: number } {
   requireTime(t);
@@ -85,10 +85,10 @@ export function stepResponse(p: TwoLayerParameters, forcing: number, t: number):
  * (the time integral of the step response):
  * T(t) = (κ/λ)[t − a_f τ_f (1 − e^(−t/τ_f)) − a_s τ_s (1 − e^(−t/τ_s))],
  * T0(t) = (κ/λ)[t − a_f φ_f τ_f (1 − e^(−t/τ_f)) − a_s φ_s τ_s (1 − e^(−t/τ_s))].
- * Cost O(1). Reference: Geoffroy et al. (2013a) linear-forcing solution; CHECKS.md §5.2.
+ * Cost O(1). Reference: Geoffroy et al. (2013a) linear-forcing solution.
  *
- * Example: 1 %/yr CO2 with F2x = 3.71 (slope 3.71·ln 1.01/ln 2) and the CHECKS.md §5.3
- * parameters gives T(70) = 2.0290 K, the model's TCR.
+ * Example: 1 %/yr CO2 with F2x = 3.71 (slope 3.71·ln 1.01/ln 2) and the illustrative inputs
+ * above (C = 7.3, C0 = 106, λ = 1.13, γ = 0.73) gives T(70) = 2.0290 K, the model's TCR.
  */
 export function rampResponse(p: TwoLayerParameters, slope: number, t: number): { upper: number; deep: number } {
   requireTime(t);

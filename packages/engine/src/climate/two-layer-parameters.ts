@@ -14,7 +14,7 @@ export interface TwoLayerParameters {
   deepHeatCapacity: number;
   /** Heat-exchange coefficient γ between the layers (W m⁻² K⁻¹). */
   heatExchange: number;
-  /** Efficacy ε of deep-ocean heat uptake (1 = Part I model; Part II mean ≈ 1.28 [memory]). */
+  /** Efficacy ε of deep-ocean heat uptake (1 = Part I model; Part II mean ≈ 1.28, from memory of Geoffroy et al. 2013b). */
   deepEfficacy: number;
 }
 

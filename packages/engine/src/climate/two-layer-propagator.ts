@@ -20,10 +20,21 @@ export interface TwoLayerPropagator {
   /** Extra response to forcing rising linearly from 0 to 1 within the year: A⁻²(e^A − I − A)(1/C, 0). */
   r1: number;
   r2: number;
+  /**
+   * The year's MEAN state: x̄ = [[m11, m12], [m21, m22]]·x + (r1, r2)·F for forcing F held over
+   * the year, with [[m11 m12] [m21 m22]] = ∫₀¹ e^{As} ds = A⁻¹(e^A − I). (The mean of
+   * x(s) = e^{As}x + A⁻¹(e^{As} − I)B·F over s in [0, 1] is g1(A)x + A⁻¹(g1(A) − I)B·F, and
+   * A⁻¹(g1(A) − I) = A⁻²(e^A − I − A): the r terms.) Observations and assessments report a
+   * year's warming as its annual mean.
+   */
+  m11: number;
+  m12: number;
+  m21: number;
+  m22: number;
 }
 
-/** How many numbers twoLayerPropagatorInto writes: a11, a12, a21, a22, b1, b2, r1, r2 in that order. */
-export const PROPAGATOR_TERMS = 8;
+/** How many numbers twoLayerPropagatorInto writes: a11, a12, a21, a22, b1, b2, r1, r2, m11, m12, m21, m22 in that order. */
+export const PROPAGATOR_TERMS = 12;
 
 /**
  * Exact one-year propagator of C dT/dt = F − λT − εγ(T − T0), C0 dT0/dt = γ(T − T0).
@@ -38,20 +49,21 @@ export const PROPAGATOR_TERMS = 8;
  * digits) the augmented 4×4 matrix exponential of Van Loan (1978) by scaling and squaring is
  * used instead. Stepping a constant forcing reproduces the analytic step response to
  * rounding; a linear ramp is stepped exactly with the r term.
+ * Also g1(A) = ∫₀¹ e^{As} ds, which gives the year's MEAN state (TwoLayerPropagator.m11 …).
  * Cost O(1): one exp and three expm1 calls.
  * References: Held et al. (2010), J. Climate 23, 2418–2427; Geoffroy et al. (2013a,b),
  * J. Climate 26, 1841–1857 and 1859–1876; C. F. Van Loan (1978), IEEE Trans. Automat.
- * Control 23(3), 395–404; CHECKS.md §5.2.
+ * Control 23(3), 395–404.
  *
  * Example: for C = 7.3, C0 = 106, λ = 1.13, γ = 0.73, ε = 1, one year of F = 1 from rest
- * gives T = b1 = 0.120941 K (CHECKS.md §5.3, t = 1).
+ * gives T = b1 = 0.120941 K (the Geoffroy et al. 2013a step solution at t = 1, computed).
  */
 export function twoLayerPropagator(p: TwoLayerParameters): TwoLayerPropagator {
   validateTwoLayerParameters(p);
   const terms = new Float64Array(PROPAGATOR_TERMS);
   twoLayerPropagatorInto(p.lambda, p.upperHeatCapacity, p.deepHeatCapacity, p.heatExchange, p.deepEfficacy, terms);
-  const [a11, a12, a21, a22, b1, b2, r1, r2] = terms;
-  return { a11: a11!, a12: a12!, a21: a21!, a22: a22!, b1: b1!, b2: b2!, r1: r1!, r2: r2! };
+  const [a11, a12, a21, a22, b1, b2, r1, r2, m11, m12, m21, m22] = terms;
+  return { a11: a11!, a12: a12!, a21: a21!, a22: a22!, b1: b1!, b2: b2!, r1: r1!, r2: r2!, m11: m11!, m12: m12!, m21: m21!, m22: m22! };
 }
 
 /**
@@ -109,6 +121,11 @@ export function twoLayerPropagatorInto(
   out[5] = g1Beta * a21 * inverseC;
   out[6] = (g2Alpha + g2Beta * a11) * inverseC;
   out[7] = g2Beta * a21 * inverseC;
+  // g1(A) itself: the year's mean state from the state at its start.
+  out[8] = g1Alpha + g1Beta * a11;
+  out[9] = g1Beta * a12;
+  out[10] = g1Beta * a21;
+  out[11] = g1Alpha + g1Beta * a22;
 }
 
 /** g1(μ) = ∫₀¹ e^{μs} ds = (e^μ − 1)/μ, given expm1(μ). */

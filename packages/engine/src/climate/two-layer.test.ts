@@ -4,13 +4,14 @@ import { rampResponse, stepResponse, twoLayerModes } from "./two-layer-modes.js"
 import type { TwoLayerParameters } from "./two-layer-parameters.js";
 import { twoLayerPropagator } from "./two-layer-propagator.js";
 
-// CHECKS.md §5.3: illustrative CMIP5-mean-like inputs (Geoffroy 2013a values [memory]; the
-// check values below are [computed] from the formulas with these inputs).
+// Illustrative CMIP5-mean-like inputs (the multi-model means of Geoffroy et al. 2013a, Part I,
+// from memory, not checked against its tables); the check values below are computed from the
+// closed-form solution of Geoffroy et al. 2013a with these inputs (analytic = numeric to 6 d.p.).
 const CMIP5_LIKE: TwoLayerParameters = { lambda: 1.13, upperHeatCapacity: 7.3, deepHeatCapacity: 106, heatExchange: 0.73, deepEfficacy: 1 };
 const TIMES = [1, 5, 10, 20, 50, 100, 150, 300, 1000];
 
-describe("two-layer step response (CHECKS.md §5.3)", () => {
-  // CHECKS.md §5.3 [computed; analytic = numeric to 6 d.p.]: step F = 1 W m⁻².
+describe("two-layer step response (Geoffroy et al. 2013a closed form)", () => {
+  // Computed from the closed form (analytic = numeric to 6 d.p.): step F = 1 W m⁻².
   const upperTable = [0.120941, 0.388321, 0.500631, 0.551592, 0.593213, 0.647756, 0.6921, 0.781303, 0.879238];
   const deepTable = [0.000433, 0.007956, 0.023114, 0.057088, 0.15369, 0.290401, 0.401554, 0.625144, 0.870624];
 
@@ -33,14 +34,15 @@ describe("two-layer step response (CHECKS.md §5.3)", () => {
     });
   });
 
-  it("tends to the equilibrium F/λ (ECS = F2x/λ: 3.0531 K for F2x = 3.45, CHECKS.md §5.3)", () => {
+  it("tends to the equilibrium F/λ (ECS = F2x/λ: 3.0531 K for F2x = 3.45, computed)", () => {
     const run = stepYears(twoLayerPropagator(CMIP5_LIKE), () => 3.45, 10_000);
     expect(run.upper[10_000]).toBeCloseTo(3.0531, 4);
     expect(run.deep[10_000]).toBeCloseTo(3.45 / 1.13, 10);
   });
 
   it("with deep-ocean efficacy ε = 1.28 gives T(10, 100, 1000) = 0.461599, 0.601675, 0.875069 K", () => {
-    // CHECKS.md §5.3, efficacy case [computed]; ε = 1.28 is illustrative (Part II mean [memory]).
+    // Efficacy case, computed from the closed form; ε = 1.28 is illustrative (the Part II mean of
+    // Geoffroy et al. 2013b, from memory).
     const withEfficacy = { ...CMIP5_LIKE, deepEfficacy: 1.28 };
     const run = stepYears(twoLayerPropagator(withEfficacy), () => 1, 1000);
     const expected: Array<[number, number]> = [
@@ -56,10 +58,10 @@ describe("two-layer step response (CHECKS.md §5.3)", () => {
   });
 });
 
-describe("twoLayerModes (CHECKS.md §5.3 table)", () => {
+describe("twoLayerModes (Geoffroy et al. 2013a mode formulas, computed)", () => {
   it("gives b, b*, δ, τ, φ and a for the CMIP5-like inputs", () => {
     const m = twoLayerModes(CMIP5_LIKE);
-    // CHECKS.md §5.3 [computed]: 0.261681, 0.247908, 0.064213; 3.883, 241.59 yr;
+    // Computed from the closed form: 0.261681, 0.247908, 0.064213; 3.883, 241.59 yr;
     // −0.027475, 2.50655; 0.59453, 0.40547.
     expect(m.b).toBeCloseTo(0.261681, 6);
     expect(m.bStar).toBeCloseTo(0.247908, 6);
@@ -74,7 +76,7 @@ describe("twoLayerModes (CHECKS.md §5.3 table)", () => {
   });
 
   it("gives the ε = 1.28 and the λ = 1.31 (AR6-consistent) variants", () => {
-    // CHECKS.md §5.3 [computed]: ε = 1.28 → τ_f 3.497, τ_s 268.24, a_f 0.53527, a_s 0.46473,
+    // Computed from the closed form: ε = 1.28 → τ_f 3.497, τ_s 268.24, a_f 0.53527, a_s 0.46473,
     // φ_f −0.024678, φ_s 2.18021; λ = 1.31 → τ_f 3.547, τ_s 228.15, a_f 0.6307.
     const efficacy = twoLayerModes({ ...CMIP5_LIKE, deepEfficacy: 1.28 });
     expect(efficacy.tauFast).toBeCloseTo(3.497, 3);
@@ -90,10 +92,10 @@ describe("twoLayerModes (CHECKS.md §5.3 table)", () => {
   });
 });
 
-describe("linear forcing: TCR of a 1 %/yr CO2 increase (CHECKS.md §5.2–§5.3)", () => {
-  // F(t) = F2x·t·ln 1.01/ln 2 is linear in t; TCR := T(70) (AR6 definition, [read-P]).
+describe("linear forcing: TCR of a 1 %/yr CO2 increase (Geoffroy et al. 2013a linear-forcing solution)", () => {
+  // F(t) = F2x·t·ln 1.01/ln 2 is linear in t; TCR := T(70) (IPCC AR6 WGI Ch. 7, Section 7.5: "at year 70").
   const cases: Array<[number, number, number, number]> = [
-    // F2x, TCR = T(70), T(69.66), ECS — CHECKS.md §5.3 [computed].
+    // F2x, TCR = T(70), T(69.66), ECS — computed from the closed form.
     [3.45, 1.8868, 1.8765, 3.0531],
     [3.71, 2.029, 2.0179, 3.2832],
     [3.93, 2.1493, 2.1375, 3.4779],
@@ -124,8 +126,8 @@ describe("linear forcing: TCR of a 1 %/yr CO2 increase (CHECKS.md §5.2–§5.3)
   });
 });
 
-describe("one-box limit (CHECKS.md §6)", () => {
-  // CHECKS.md §6 [standard; computed]: C = 8, λ = 1.13 (τ = 7.0796 yr); the two-layer model
+describe("one-box limit (closed form of C dT/dt = F − λT)", () => {
+  // One-box model, standard closed form, values computed: C = 8, λ = 1.13 (τ = 7.0796 yr); the two-layer model
   // tends to the one-box model as C0 → ∞ with γ → 0. Here γ = 1e-9, C0 = 1e9: the coupling
   // changes T by less than γ·t/λ ≈ 5e-8 K over 50 years, so compare to 1e-6 K.
   const oneBox: TwoLayerParameters = { lambda: 1.13, upperHeatCapacity: 8, deepHeatCapacity: 1e9, heatExchange: 1e-9, deepEfficacy: 1 };
@@ -142,7 +144,7 @@ describe("one-box limit (CHECKS.md §6)", () => {
     for (const [t, stepValue, rampValue] of table) {
       expect(Math.abs(step.upper[t]! - stepValue)).toBeLessThan(1e-6);
       expect(Math.abs(ramp.upper[t]! - rampValue)).toBeLessThan(1e-6);
-      // One-box closed forms themselves (CHECKS.md §6): (F/λ)(1 − e^(−t/τ)), (κ/λ)[t − τ(1 − e^(−t/τ))].
+      // One-box closed forms themselves (standard): (F/λ)(1 − e^(−t/τ)), (κ/λ)[t − τ(1 − e^(−t/τ))].
       const tau = 8 / 1.13;
       expect(Math.abs((1 / 1.13) * -Math.expm1(-t / tau) - stepValue)).toBeLessThan(1e-6);
       expect(Math.abs((0.05 / 1.13) * (t + tau * Math.expm1(-t / tau)) - rampValue)).toBeLessThan(1e-6);
@@ -153,13 +155,12 @@ describe("one-box limit (CHECKS.md §6)", () => {
 
 describe("twoLayerPropagator against an independent fine-step integration", () => {
   /** Classical fourth-order Runge–Kutta over one year, 20,000 sub-steps, forcing F + ΔF·s. */
-  function rungeKuttaYear(p: TwoLayerParameters, start: [number, number], forcing: number, rise: number): [number, number] {
+  function rungeKuttaYear(p: TwoLayerParameters, start: [number, number], forcing: number, rise: number, steps = 20_000): [number, number] {
     const { lambda, upperHeatCapacity: c, deepHeatCapacity: c0, heatExchange: g, deepEfficacy: e } = p;
     const rate = (s: number, t: number, t0: number): [number, number] => [
       (forcing + rise * s - lambda * t - e * g * (t - t0)) / c,
       (g * (t - t0)) / c0,
     ];
-    const steps = 20_000;
     const h = 1 / steps;
     let [t, t0] = start;
     for (let i = 0; i < steps; i++) {
@@ -190,6 +191,26 @@ describe("twoLayerPropagator against an independent fine-step integration", () =
     ];
     expect(Math.abs(stepped[0]! - t)).toBeLessThan(1e-11);
     expect(Math.abs(stepped[1]! - t0)).toBeLessThan(1e-11);
+  });
+
+  it.each(cases)("gives the year's mean state (Simpson's rule over the RK4 path) for a constant forcing: %o", (p) => {
+    // Mean over the year of T and T0 from the states at 200 equal sub-intervals, each stepped
+    // by RK4 (a sub-interval of 1/200 yr is the same system with capacities × 200), combined
+    // by composite Simpson's rule (error O(h⁴), ~1e-12 here).
+    const propagator = twoLayerPropagator(p);
+    const start: [number, number] = [0.8, 0.3];
+    const pieces = 200;
+    const sub = { ...p, upperHeatCapacity: p.upperHeatCapacity * pieces, deepHeatCapacity: p.deepHeatCapacity * pieces };
+    let state = start;
+    let sums: [number, number] = [start[0], start[1]];
+    for (let i = 1; i <= pieces; i++) {
+      state = rungeKuttaYear(sub, state, 2.5, 0, 100);
+      const w = i === pieces ? 1 : i % 2 === 1 ? 4 : 2;
+      sums = [sums[0] + w * state[0], sums[1] + w * state[1]];
+    }
+    const mean = [sums[0] / (3 * pieces), sums[1] / (3 * pieces)];
+    expect(Math.abs(propagator.m11 * start[0] + propagator.m12 * start[1] + propagator.r1 * 2.5 - mean[0]!)).toBeLessThan(1e-10);
+    expect(Math.abs(propagator.m21 * start[0] + propagator.m22 * start[1] + propagator.r2 * 2.5 - mean[1]!)).toBeLessThan(1e-10);
   });
 });
 

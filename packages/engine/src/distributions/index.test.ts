@@ -112,10 +112,10 @@ describe("validateDistribution", () => {
 });
 
 describe("summarizeDistribution", () => {
-  it("gives the CHECKS.md §7.2 percentiles of LN(ln 3, 0.27853) under p-keys", () => {
+  it("gives the percentiles of LN(ln 3, 0.27853) under p-keys", () => {
     const summary = summarizeDistribution({ type: "lognormal", median: 3, logSd: 0.27853 });
     expect(Object.keys(summary)).toEqual(["p5", "p17", "p50", "p83", "p95"]);
-    // CHECKS.md §7.2: 1.8974 / 2.2999 / 3.0000 / 3.9133 / 4.7434.
+    // exp(ln 3 + 0.27853·z_p), computed from the closed form: 1.8974 / 2.2999 / 3.0000 / 3.9133 / 4.7434.
     expect(summary.p5).toBeCloseTo(1.8974, 4);
     expect(summary.p17).toBeCloseTo(2.2999, 4);
     expect(summary.p50).toBeCloseTo(3, 12);

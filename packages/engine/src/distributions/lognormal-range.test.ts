@@ -4,7 +4,8 @@ import { cdfLognormal, densityLognormal, quantileLognormal } from "./lognormal.j
 import { cdfRange, densityRange, fitRange, quantileRange } from "./range.js";
 import type { RangeDistribution } from "./types.js";
 
-// CHECKS.md §7.2 [standard; computed]: LN(ln 3, 0.27853) has 5/17/50/83/95 % =
+// Lognormal from a median and a 5–95 % range (standard; values computed from the closed form
+// q_p = exp(μ + σ·z_p), mean exp(μ + σ²/2)): LN(ln 3, 0.27853) has 5/17/50/83/95 % =
 // 1.8974 / 2.2999 / 3.0000 / 3.9133 / 4.7434 and mean 3.1187; σ_upper 0.31056, σ_lower 0.24651
 // for median 3 with [2, 5].
 const CHECK_PERCENTILES: Array<[number, number]> = [
@@ -18,7 +19,7 @@ const CHECK_PERCENTILES: Array<[number, number]> = [
 describe("lognormal from median and logSd", () => {
   const d = { type: "lognormal", median: 3, logSd: 0.27853 } as const;
 
-  it.each(CHECK_PERCENTILES)("q(%f) matches CHECKS.md §7.2 to 4 decimals", (p, expected) => {
+  it.each(CHECK_PERCENTILES)("q(%f) matches the closed form to 4 decimals", (p, expected) => {
     expect(Math.abs(quantileLognormal(d, p) - expected)).toBeLessThan(5e-5);
   });
 
@@ -34,7 +35,7 @@ describe("lognormal from median and logSd", () => {
     }
     const mean = sum / n;
     const sd = Math.sqrt(sumSquares / n - mean * mean);
-    // CHECKS.md §7.2 mean 3.1187; allow 4 standard errors.
+    // Closed-form mean exp(ln 3 + 0.27853²/2) = 3.1187; allow 4 standard errors.
     expect(Math.abs(mean - 3.1187)).toBeLessThan((4 * sd) / Math.sqrt(n));
   });
 
@@ -49,7 +50,7 @@ describe("lognormal from median and logSd", () => {
 });
 
 describe("fitRange", () => {
-  it("fits the one-sided log σs of CHECKS.md §7.2 for median 3 with a 5–95 % range [2, 5]", () => {
+  it("fits the one-sided log σs ln(5/3)/1.6449 and ln(3/2)/1.6449 for median 3 with a 5–95 % range [2, 5]", () => {
     const fit = fitRange({ type: "range", p50: 3, low: 2, high: 5, coverage: 90, shape: "lognormal" });
     if (fit.kind !== "lognormal") throw new Error("expected a lognormal fit");
     expect(fit.mu).toBeCloseTo(Math.log(3), 15);
@@ -57,8 +58,8 @@ describe("fitRange", () => {
     expect(fit.sigmaHigh).toBeCloseTo(0.31056, 5);
   });
 
-  it("reduces to the symmetric lognormal of CHECKS.md §7.2 when the range is log-symmetric", () => {
-    // Ends of LN(ln 3, 0.27853) at 5 and 95 %: 3·exp(∓0.27853·1.6448536270) (CHECKS.md §7.1/§7.2).
+  it("reduces to the symmetric lognormal LN(ln 3, 0.27853) when the range is log-symmetric", () => {
+    // Ends of LN(ln 3, 0.27853) at 5 and 95 %: 3·exp(∓0.27853·1.6448536270) (z95 from scipy.stats.norm.ppf, SciPy 1.17).
     const z95 = 1.644853627;
     const d: RangeDistribution = {
       type: "range",

@@ -4,7 +4,8 @@ import type { LognormalDistribution } from "./types.js";
 
 /*
  * Lognormal law given by its median and the sd of ln X (logSd): ln X ~ N(ln median, logSd²).
- * Reference: standard (CHECKS.md §7.2).
+ * Reference: standard (e.g. Johnson, Kotz & Balakrishnan, Continuous Univariate Distributions,
+ * vol. 1, 2nd ed., ch. 14).
  */
 
 /**
@@ -19,7 +20,7 @@ export function validateLognormal(d: LognormalDistribution, name: string): void 
 /**
  * Lognormal quantile median·exp(logSd·Φ⁻¹(p)) (AS241 for Φ⁻¹). Cost O(1).
  * Example: `quantileLognormal({ type: "lognormal", median: 3, logSd: 0.27853 }, 0.95)` → 4.7434
- * (4 d.p., CHECKS.md §7.2).
+ * (4 d.p.; 3·exp(0.27853·1.6448536), computed).
  */
 export function quantileLognormal(d: LognormalDistribution, p: number): number {
   return d.median * Math.exp(d.logSd * standardNormalQuantile(p));

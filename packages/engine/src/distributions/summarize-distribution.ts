@@ -9,7 +9,7 @@ import { validateDistribution } from "./validate-distribution.js";
  * ("p5", "p17", "p50", …). Percentiles must lie strictly between 0 and 100. Cost O(k).
  *
  * Example: `summarizeDistribution({ type: "lognormal", median: 3, logSd: 0.27853 })`
- * → { p5: 1.8974…, p17: 2.2999…, p50: 3, p83: 3.9133…, p95: 4.7434… } (CHECKS.md §7.2).
+ * → { p5: 1.8974…, p17: 2.2999…, p50: 3, p83: 3.9133…, p95: 4.7434… } (exp(ln 3 + 0.27853·z_p), computed).
  */
 export function summarizeDistribution(
   d: Distribution,

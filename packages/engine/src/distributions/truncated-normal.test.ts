@@ -7,7 +7,7 @@ function truncated(mean: number, sd: number, min: number, max: number): Truncate
 }
 
 // Reference: SciPy 1.17 `truncnorm.ppf / cdf / pdf(·, a, b, loc=mean, scale=sd)` with
-// a = (min − mean)/sd, b = (max − mean)/sd [computed]; cdf and pdf at min + 0.3·(max − min).
+// a = (min − mean)/sd, b = (max − mean)/sd (computed); cdf and pdf at min + 0.3·(max − min).
 const SCIPY_CASES: Array<{ d: TruncatedNormalDistribution; q: [number, number, number]; cdf: number; pdf: number }> = [
   { d: truncated(3, 1, 2, 6), q: [2.034132336136782, 3.198447899603447, 5.335837870954196], cdf: 0.5007226609670384, pdf: 0.4655298718668711 },
   { d: truncated(0, 1, 0, 10), q: [0.012533469508069276, 0.6744897501960817, 2.575829303548901], cdf: 0.9973002039367398, pdf: 0.00886369682387602 },
@@ -46,7 +46,7 @@ describe("truncated normal", () => {
 
   it("is the plain normal when the bounds are far from the mass", () => {
     const d = truncated(3, 0.5, -100, 100);
-    // mean + sd·Φ⁻¹(0.95), Φ⁻¹(0.95) from CHECKS.md §7.1.
+    // mean + sd·Φ⁻¹(0.95), Φ⁻¹(0.95) = scipy.stats.norm.ppf(0.95) (SciPy 1.17).
     expect(quantileTruncatedNormal(d, 0.95)).toBeCloseTo(3 + 0.5 * 1.644853627, 9);
   });
 

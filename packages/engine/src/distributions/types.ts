@@ -1,6 +1,6 @@
 /**
  * One uncertain input. Identical in shape to the run-spec distribution of the contracts
- * package (DESIGN.md "Engine contract"), re-declared here because the engine library depends
+ * package (the run spec's schema, `runSpecSchema`), re-declared here because the engine library depends
  * on nothing of ours.
  *
  * "range" is how assessment reports publish an input: a median `p50` with a 5–95 %

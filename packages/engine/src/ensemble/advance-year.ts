@@ -16,7 +16,7 @@ export const MEMBER_BLOCK = 2048;
 
 /**
  * First pass, years [t0, t1), members [lo, hi): advance the state with forcing held constant
- * over each year (exact propagator) and add the end-of-year upper-layer temperature to the
+ * over each year (exact propagator) and add the year's MEAN upper-layer temperature to the
  * member's baseline sum and constraint-window sum in the years that fall in those periods.
  * Only the states are needed; the forcing goes to the block's scratch (state.blockForcing).
  */
@@ -34,7 +34,7 @@ export function advanceBaselineYears(
   const pathway = plan.pathways[pathwayIndex]!;
   const columns = plan.kernels.forcingColumns[pathwayIndex]!.byteOffset;
   const coefficients = plan.kernels.forcingCoefficients[pathwayIndex]!.byteOffset;
-  const frame = plan.kernels.frame.byteOffset;
+  const frame = plan.kernels.frames[plan.pathwayClimate[pathwayIndex]!]!.byteOffset;
   const scratch = plan.state.blockForcing.byteOffset;
   for (let b = lo; b < hi; b += MEMBER_BLOCK) {
     const n = Math.min(hi, b + MEMBER_BLOCK) - b;
@@ -83,7 +83,7 @@ export function advanceReportedMembers(plan: EnsemblePlan, pathwayIndex: number,
   const pathway = plan.pathways[pathwayIndex]!;
   const columns = plan.kernels.forcingColumns[pathwayIndex]!.byteOffset;
   const coefficients = plan.kernels.forcingCoefficients[pathwayIndex]!.byteOffset;
-  const frame = plan.kernels.frame.byteOffset;
+  const frame = plan.kernels.frames[plan.pathwayClimate[pathwayIndex]!]!.byteOffset;
   const crossed = plan.state.crossedMembers;
   for (let t = t0; t < t1; t++) {
     const slot = slots[t % ring]!;

@@ -48,7 +48,16 @@ export interface EnsemblePlan {
   columns: Float64Array[];
   /** Where the member kernels find the plan's arrays (kernel-layout.ts). */
   kernels: KernelLayout;
+  /** The first pathway's member climate (implied ECS and TCR are read from it). */
   climate: MemberClimate;
+  /**
+   * One member climate per source of F2x the pathways use (doubling-forcing.ts): a
+   * concentration pathway's members feel the expression's doubled-CO2 forcing, an ERF
+   * pathway's the sampled f2x, so their feedbacks differ.
+   */
+  climates: MemberClimate[];
+  /** Per pathway, the index of its climate in `climates`. */
+  pathwayClimate: number[];
   pathways: PathwayForcing[];
   /** Requested percentiles as probabilities, in the order asked. */
   probs: number[];

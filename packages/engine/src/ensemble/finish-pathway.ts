@@ -4,7 +4,8 @@ import type { EnsemblePlan } from "./ensemble-plan.js";
 import { crossingShareByYear, crossingSummary } from "./crossing-summary.js";
 import { percentilePrecision } from "./percentile-precision.js";
 import { percentileKey, percentileSet } from "./percentile-set.js";
-import { correlationOfRanks, rankColumn } from "./rank-correlation.js";
+import { likelihoodSd } from "./constraint-weights.js";
+import { sensitivityBudget } from "./sensitivity-budget.js";
 import { QUANTITIES, exceedanceRow, summaryRow } from "./yearly-layout.js";
 
 export interface PathwayWeights {
@@ -17,14 +18,14 @@ export interface PathwayWeights {
  * Turns the streamed per-year summaries and the horizon snapshots of one pathway into its
  * result: series, exceedance, crossing years, horizon tables (with committed warming,
  * forcing by agent and precision), sensitivity budget and constraint diagnostics.
- * `inputRanks` caches the ranks of each uncertain input across pathways.
+ * `inputOrders` caches each uncertain input's member order across pathways.
  */
 export function finishPathway(
   spec: RunSpec,
   plan: EnsemblePlan,
   pathwayIndex: number,
   weighting: PathwayWeights,
-  inputRanks: Map<number, Float64Array>,
+  inputOrders: Map<number, Uint32Array>,
 ): PathwayResult {
   const pathwaySpec = spec.pathways[pathwayIndex]!;
   const pathway = plan.pathways[pathwayIndex]!;
@@ -89,20 +90,7 @@ export function finishPathway(
     };
   });
 
-  const sensitivity: PathwayResult["sensitivity"] = [];
-  if (plan.members >= 3) {
-    const relevant = plan.inputs
-      .map((input, i) => ({ input, i }))
-      .filter(({ input }) => input.distribution.type !== "fixed" && (input.kind === "climate" || pathway.agents.includes(input.name as never)));
-    spec.horizons.forEach((year, h) => {
-      const temperatureRanks = rankColumn(plan.state.horizonTemperature[h]!);
-      for (const { input, i } of relevant) {
-        let inputRank = inputRanks.get(i);
-        if (!inputRank) inputRanks.set(i, (inputRank = rankColumn(plan.columns[i]!)));
-        sensitivity.push({ input: input.name, horizon: year, index: correlationOfRanks(inputRank, temperatureRanks) });
-      }
-    });
-  }
+  const sensitivity = sensitivityBudget(plan, pathwayIndex, weighting, inputOrders);
 
   const c = spec.model.constraint;
   const constraint = c
@@ -111,6 +99,8 @@ export function finishPathway(
         to: c.to,
         observed: c.observed,
         sd: c.sd,
+        internalVariability: c.internalVariability,
+        likelihoodSd: likelihoodSd(c),
         effectiveMembers,
         windowWarmingPrior: percentileSet(selector, plan.state.windowMean, percentiles, null, 0),
         windowWarmingPosterior: percentileSet(selector, plan.state.windowMean, percentiles, weights, totalWeight),

@@ -5,7 +5,8 @@ export const TCR_YEAR = 70;
 
 /**
  * Each member's transient climate response: the upper-layer warming at year 70 of a
- * 1 %/yr CO2 increase, whose forcing F2x·t·ln(1.01)/ln 2 rises linearly (CHECKS.md §5.2).
+ * 1 %/yr CO2 increase, whose forcing F2x_felt·t·ln(1.01)/ln 2 rises linearly (F2x_felt = scale_co2 · F2x,
+ * the forcing the member feels at doubled CO2, doubling-forcing.ts; Geoffroy et al. 2013a, linear forcing).
  * Each year uses the member's exact propagator for a forcing rising linearly within the
  * year (b·F at the year's start plus r·ΔF), so the result equals the closed form of
  * Geoffroy et al. 2013a for a linear forcing. Cost O(members × 70).
@@ -25,7 +26,7 @@ export function impliedTcr(climate: MemberClimate): Float64Array {
 const RISE = Math.log(1.01) / Math.LN2;
 
 function tcrOf(c: MemberClimate, m: number): number {
-  const step = c.f2x[m]! * RISE;
+  const step = c.doublingForcing[m]! * RISE;
   const a11 = c.a11[m]!, a12 = c.a12[m]!, a21 = c.a21[m]!, a22 = c.a22[m]!;
   const b1 = c.b1[m]!, b2 = c.b2[m]!, r1 = c.r1[m]!, r2 = c.r2[m]!;
   let upper = 0;
@@ -41,8 +42,8 @@ function tcrOf(c: MemberClimate, m: number): number {
 
 function tcrOfPair(c: MemberClimate, m: number, out: Float64Array): void {
   const k = m + 1;
-  const stepM = c.f2x[m]! * RISE;
-  const stepK = c.f2x[k]! * RISE;
+  const stepM = c.doublingForcing[m]! * RISE;
+  const stepK = c.doublingForcing[k]! * RISE;
   const a11m = c.a11[m]!, a12m = c.a12[m]!, a21m = c.a21[m]!, a22m = c.a22[m]!;
   const b1m = c.b1[m]!, b2m = c.b2[m]!, r1m = c.r1[m]!, r2m = c.r2[m]!;
   const a11k = c.a11[k]!, a12k = c.a12[k]!, a21k = c.a21[k]!, a22k = c.a22[k]!;

@@ -6,6 +6,10 @@ import type { Allocate } from "./sample-inputs.js";
  * Per member, the one-year propagator of the two-layer model (Held et al. 2010; Geoffroy
  * et al. 2013a,b) as flat arrays, plus what the imbalance needs: N = F − λT − (ε−1)γ(T − T0).
  * Struct of arrays so the yearly loop streams through memory.
+ *
+ * The feedback parameter comes from the forcing this member itself feels at doubled CO2:
+ * λ = F2x_felt / ECS with F2x_felt = scale_co2 · F2x (doubling-forcing.ts), so the member's
+ * equilibrium warming for doubled CO2 is exactly its sampled ECS.
  */
 export interface MemberClimate {
   a11: Float64Array;
@@ -17,16 +21,23 @@ export interface MemberClimate {
   /** Response to a forcing rising linearly through the year (used for TCR). */
   r1: Float64Array;
   r2: Float64Array;
+  /** The year's mean state from its start (two-layer-propagator.ts m11 …): with r, annual means. */
+  m11: Float64Array;
+  m12: Float64Array;
+  m21: Float64Array;
+  m22: Float64Array;
   lambda: Float64Array;
   /** (ε − 1)·γ: the extra heat uptake term of the imbalance with efficacy. */
   extraUptake: Float64Array;
   ecs: Float64Array;
-  f2x: Float64Array;
+  /** The forcing this member feels at doubled CO2 (W m-2): scale_co2 · F2x. */
+  doublingForcing: Float64Array;
 }
 
 export interface ClimateColumns {
   ecs: Float64Array;
-  f2x: Float64Array;
+  /** Per member, scale_co2 · F2x (doubling-forcing.ts). */
+  doublingForcing: Float64Array;
   upperHeatCapacity: Float64Array;
   deepHeatCapacity: Float64Array;
   heatExchange: Float64Array;
@@ -45,13 +56,23 @@ function requirePositiveSamples(column: Float64Array, field: string): void {
   }
 }
 
+/** A sampled input behind the climate columns, with the field a refusal names. */
+export interface ClimateInputColumn {
+  field: string;
+  values: Float64Array;
+}
+
 /**
  * Builds every member's propagator. Cost O(members), a few exponentials each. Refuses a
- * non-positive input (first by column, then by member) and then the first member whose
- * propagator is not finite (checked once all are built).
+ * non-positive input (first by column of `inputs`, then by member) and then the first
+ * member whose propagator is not finite (checked once all are built).
  */
-export function buildMemberClimate(columns: ClimateColumns, allocate: Allocate, early?: EarlyMembers): MemberClimate {
-  const out = allocateMemberClimate(columns, allocate);
+export function buildMemberClimate(
+  columns: ClimateColumns,
+  inputs: ClimateInputColumn[],
+  out: MemberClimate,
+  early?: EarlyMembers,
+): MemberClimate {
   const n = out.ecs.length;
   const first = early ? Math.min(n, early.members) : 0;
   const firstClean = fillMemberClimate(columns, out, 0, first);
@@ -61,7 +82,7 @@ export function buildMemberClimate(columns: ClimateColumns, allocate: Allocate, 
   // anything: skip their two passes over every column. Otherwise they find and word the
   // first refusal, in their order.
   if (firstClean && restClean) return out;
-  checkClimateInputs(columns);
+  for (const input of inputs) requirePositiveSamples(input.values, input.field);
   checkMemberPropagators(columns, out);
   return out;
 }
@@ -76,7 +97,8 @@ export interface EarlyMembers {
   filled(climate: MemberClimate): void;
 }
 
-function allocateMemberClimate(columns: ClimateColumns, allocate: Allocate): MemberClimate {
+/** A member climate's arrays, not yet filled (buildMemberClimate fills them). */
+export function allocateMemberClimate(columns: ClimateColumns, allocate: Allocate): MemberClimate {
   const n = columns.ecs.length;
   return {
     a11: allocate(n),
@@ -87,27 +109,28 @@ function allocateMemberClimate(columns: ClimateColumns, allocate: Allocate): Mem
     b2: allocate(n),
     r1: allocate(n),
     r2: allocate(n),
+    m11: allocate(n),
+    m12: allocate(n),
+    m21: allocate(n),
+    m22: allocate(n),
     lambda: allocate(n),
     extraUptake: allocate(n),
     ecs: columns.ecs,
-    f2x: columns.f2x,
+    doublingForcing: columns.doublingForcing,
   };
-}
-
-function checkClimateInputs(columns: ClimateColumns): void {
-  for (const [name, column] of Object.entries(columns) as Array<[string, Float64Array]>) requirePositiveSamples(column, `model.climate.${name}`);
 }
 
 function checkMemberPropagators(columns: ClimateColumns, out: MemberClimate): void {
   const n = out.a11.length;
-  const { a11, a12, a21, a22, b1, b2, r1, r2 } = out;
+  const { a11, a12, a21, a22, b1, b2, r1, r2, m11, m12, m21, m22 } = out;
   for (let m = 0; m < n; m++) {
-    const lambda = columns.f2x[m]! / columns.ecs[m]!;
+    const lambda = columns.doublingForcing[m]! / columns.ecs[m]!;
     // fillMemberClimate skipped this member: twoLayerPropagator gives the error it gives buildMemberClimate.
     if (!isPositive(lambda)) twoLayerPropagator(propagatorInputs(columns, m, lambda));
     const finite =
       Number.isFinite(a11[m]!) && Number.isFinite(a12[m]!) && Number.isFinite(a21[m]!) && Number.isFinite(a22[m]!) &&
-      Number.isFinite(b1[m]!) && Number.isFinite(b2[m]!) && Number.isFinite(r1[m]!) && Number.isFinite(r2[m]!);
+      Number.isFinite(b1[m]!) && Number.isFinite(b2[m]!) && Number.isFinite(r1[m]!) && Number.isFinite(r2[m]!) &&
+      Number.isFinite(m11[m]!) && Number.isFinite(m12[m]!) && Number.isFinite(m21[m]!) && Number.isFinite(m22[m]!);
     if (!finite)
       throw new SpecError(
         "model.climate",
@@ -133,8 +156,8 @@ function propagatorInputs(columns: ClimateColumns, m: number, lambda: number) {
  * would pass; they run after the loop, so the loop stays small.
  */
 function fillMemberClimate(columns: ClimateColumns, out: MemberClimate, lo: number, hi: number): boolean {
-  const { ecs: ecsColumn, f2x: f2xColumn, upperHeatCapacity: cColumn, deepHeatCapacity: c0Column, heatExchange: gammaColumn, deepEfficacy: epsilonColumn } = columns;
-  const { a11, a12, a21, a22, b1, b2, r1, r2, lambda: lambdaColumn, extraUptake } = out;
+  const { ecs: ecsColumn, doublingForcing: doublingColumn, upperHeatCapacity: cColumn, deepHeatCapacity: c0Column, heatExchange: gammaColumn, deepEfficacy: epsilonColumn } = columns;
+  const { a11, a12, a21, a22, b1, b2, r1, r2, m11, m12, m21, m22, lambda: lambdaColumn, extraUptake } = out;
   const terms = new Float64Array(PROPAGATOR_TERMS);
   let skipped = false;
   // Sum of v − v over every term: 0 while all are finite, NaN for good once one is not
@@ -142,13 +165,13 @@ function fillMemberClimate(columns: ClimateColumns, out: MemberClimate, lo: numb
   let notFinite = 0;
   for (let m = lo; m < hi; m++) {
     const ecs = ecsColumn[m]!;
-    const f2x = f2xColumn[m]!;
+    const doubling = doublingColumn[m]!;
     const upperHeatCapacity = cColumn[m]!;
     const deepHeatCapacity = c0Column[m]!;
     const heatExchange = gammaColumn[m]!;
     const deepEfficacy = epsilonColumn[m]!;
-    const lambda = f2x / ecs;
-    if (!(isPositive(ecs) && isPositive(f2x) && isPositive(upperHeatCapacity) && isPositive(deepHeatCapacity) && isPositive(heatExchange) && isPositive(deepEfficacy) && isPositive(lambda))) {
+    const lambda = doubling / ecs;
+    if (!(isPositive(ecs) && isPositive(doubling) && isPositive(upperHeatCapacity) && isPositive(deepHeatCapacity) && isPositive(heatExchange) && isPositive(deepEfficacy) && isPositive(lambda))) {
       skipped = true;
       continue;
     }
@@ -161,6 +184,10 @@ function fillMemberClimate(columns: ClimateColumns, out: MemberClimate, lo: numb
     const t5 = terms[5]!;
     const t6 = terms[6]!;
     const t7 = terms[7]!;
+    const t8 = terms[8]!;
+    const t9 = terms[9]!;
+    const t10 = terms[10]!;
+    const t11 = terms[11]!;
     a11[m] = t0;
     a12[m] = t1;
     a21[m] = t2;
@@ -169,7 +196,12 @@ function fillMemberClimate(columns: ClimateColumns, out: MemberClimate, lo: numb
     b2[m] = t5;
     r1[m] = t6;
     r2[m] = t7;
+    m11[m] = t8;
+    m12[m] = t9;
+    m21[m] = t10;
+    m22[m] = t11;
     notFinite += t0 - t0 + (t1 - t1) + (t2 - t2) + (t3 - t3) + (t4 - t4) + (t5 - t5) + (t6 - t6) + (t7 - t7);
+    notFinite += t8 - t8 + (t9 - t9) + (t10 - t10) + (t11 - t11);
     lambdaColumn[m] = lambda;
     extraUptake[m] = (deepEfficacy - 1) * heatExchange;
   }

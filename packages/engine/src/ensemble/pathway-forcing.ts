@@ -25,7 +25,7 @@ export interface PathwayForcing {
 
 /**
  * Turns each agent's series into ERF: given as "erf", or CO2 ppm / CH4, N2O ppb through the
- * model's concentration expression (forcing module; AR6 refit by default, CHECKS.md §1).
+ * model's concentration expression (forcing module; by default the Meinshausen et al. 2020 re-fit used in IPCC AR6).
  * Agents whose scale is fixed are summed once here, so the member loop only touches the
  * agents whose scale varies between members.
  */

@@ -6,7 +6,7 @@ import { MAX_SPAN_YEARS } from "./year-spans.js";
  * The two passes over one pathway, for members [lo, hi). Anomalies are against each
  * member's own baseline-period mean, which is only known once the baseline period has been
  * simulated, so a first pass runs up to the later of the baseline end and the constraint
- * window end (the same two-pass scheme as bench/ebm_ref.c) and the reporting pass restarts
+ * window end (the same two-pass scheme as bench-reference/w1-reference.c) and the reporting pass restarts
  * from the pathway's first year. Members are independent, so any split gives the same numbers.
  */
 export function firstPassYears(plan: EnsemblePlan, pathwayIndex: number): number {

@@ -5,9 +5,9 @@ import { percentileKey } from "./percentile-set.js";
 /**
  * Monte Carlo precision of each reported percentile: the distribution-free 95 % interval
  * [X(r), X(s)] of order statistics that covers the true percentile with probability ≥ 95 %
- * (binomial argument; Conover, Practical Nonparametric Statistics; CHECKS.md §7.3). With
+ * (binomial argument; Conover, Practical Nonparametric Statistics, 3rd ed., Section 3.2). With
  * constraint weights the interval uses Kish's effective size in place of n and reads the
- * weighted percentiles at r/n_eff and s/n_eff — an approximation, as CHECKS.md §7.3 says.
+ * weighted percentiles at r/n_eff and s/n_eff — an approximation only, since weighted draws are not i.i.d. order statistics.
  * null when the ensemble is too small for a 95 % interval.
  */
 export function percentilePrecision(

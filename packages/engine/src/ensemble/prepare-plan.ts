@@ -6,7 +6,8 @@ import { createKernelMemory, type KernelMemory } from "../kernels/kernel-memory.
 import { MEMBER_BLOCK } from "./advance-year.js";
 import { ALL_SUMMARIES, allocateState, type EnsemblePlan, type SummaryChoice } from "./ensemble-plan.js";
 import { layOutKernels } from "./kernel-layout.js";
-import { buildMemberClimate, type MemberClimate } from "./member-climate.js";
+import { doublingSourceOf, expressionDoublingForcing, fillDoublingForcing } from "./doubling-forcing.js";
+import { allocateMemberClimate, buildMemberClimate, type MemberClimate } from "./member-climate.js";
 import { buildPathwayForcing, type PathwayForcing } from "./pathway-forcing.js";
 import { sampleInputs } from "./sample-inputs.js";
 import { listModelInputs, type ModelInput } from "./uncertain-inputs.js";
@@ -39,42 +40,61 @@ export function preparePlan(
   // A pathway's forcing error is given after the samples' own refusals (their order before
   // `early` existed); the forcing is built first so the plan can be handed out early.
   let pathways: PathwayForcing[] | null = null;
-  // Boxed so that a thrown `null` or `undefined` is rethrown as it was, too.
-  let pathwayFailure: { error: unknown } | null = null;
+  let pathwayError: unknown = null;
   try {
     pathways = spec.pathways.map((_, i) => buildPathwayForcing(spec, i, names));
   } catch (error) {
-    pathwayFailure = { error };
+    pathwayError = error;
   }
   let plan: EnsemblePlan | null = null;
-  const climate = buildMemberClimate(
-    {
-      ecs: column("ecs"),
-      f2x: column("f2x"),
-      upperHeatCapacity: column("upperHeatCapacity"),
-      deepHeatCapacity: column("deepHeatCapacity"),
-      heatExchange: column("heatExchange"),
-      deepEfficacy: column("deepEfficacy"),
-    },
-    memory.float64,
-    early && pathways
-      ? {
-          members: early.members,
-          filled: (climate) => {
-            plan = assemblePlan(spec, inputs, columns, climate, pathways, spansInRing, memory, summaries);
-            early.ready(plan);
-          },
-        }
-      : undefined,
-  );
+  const sources = spec.pathways.map(doublingSourceOf);
+  const variants = [...new Set(sources)];
+  const pathwayClimate = sources.map((s) => variants.indexOf(s));
+  const co2Index = names.indexOf("co2");
+  const climateInputs = [
+    { field: "model.climate.ecs", values: column("ecs") },
+    { field: "model.climate.f2x", values: column("f2x") },
+    ...(co2Index >= 0 ? [{ field: "model.agents.co2.scale", values: columns[co2Index]! }] : []),
+    ...(["upperHeatCapacity", "deepHeatCapacity", "heatExchange", "deepEfficacy"] as const).map((name) => ({
+      field: `model.climate.${name}`,
+      values: column(name),
+    })),
+  ];
+  const expressionF2x = variants.includes("concentration") ? expressionDoublingForcing(spec.model.forcingExpression) : NaN;
+  // One climate per source of F2x the pathways use (at most two), all allocated first so a
+  // plan handed out early (to worker threads, which get a copy of the plan object over the
+  // same shared memory) already holds every one; the first pathway's is filled first, so the
+  // workers can warm on its first members while the rest are built.
+  const climateColumns = variants.map((source) => ({
+    ecs: column("ecs"),
+    doublingForcing: fillDoublingForcing(source, column("f2x"), expressionF2x, co2Index >= 0 ? columns[co2Index]! : null, 1, memory.float64(spec.members)),
+    upperHeatCapacity: column("upperHeatCapacity"),
+    deepHeatCapacity: column("deepHeatCapacity"),
+    heatExchange: column("heatExchange"),
+    deepEfficacy: column("deepEfficacy"),
+  }));
+  const climates = climateColumns.map((c) => allocateMemberClimate(c, memory.float64));
+  climateColumns.forEach((c, v) => {
+    const earlyClimate =
+      v === 0 && early && pathways
+        ? {
+            members: early.members,
+            filled: () => {
+              plan = assemblePlan(spec, inputs, columns, climates, pathwayClimate, pathways!, spansInRing, memory, summaries);
+              early.ready(plan);
+            },
+          }
+        : undefined;
+    buildMemberClimate(c, climateInputs, climates[v]!, earlyClimate);
+  });
   inputs.forEach((x, i) => {
     if (x.kind !== "agent") return;
     const values = columns[i]!;
     for (let m = 0; m < values.length; m++)
       if (!Number.isFinite(values[m]!)) throw new SpecError(x.field, `sampled a non-finite value at member ${m + 1}`);
   });
-  if (pathwayFailure) throw pathwayFailure.error;
-  return { spec, plan: plan ?? assemblePlan(spec, inputs, columns, climate, pathways!, spansInRing, memory, summaries) };
+  if (pathwayError !== null) throw pathwayError;
+  return { spec, plan: plan ?? assemblePlan(spec, inputs, columns, climates, pathwayClimate, pathways!, spansInRing, memory, summaries) };
 }
 
 /**
@@ -91,7 +111,8 @@ function assemblePlan(
   spec: RunSpec,
   inputs: ModelInput[],
   columns: Float64Array[],
-  climate: MemberClimate,
+  climates: MemberClimate[],
+  pathwayClimate: number[],
   pathways: PathwayForcing[],
   spansInRing: number,
   memory: KernelMemory,
@@ -114,8 +135,10 @@ function assemblePlan(
     members: spec.members,
     inputs,
     columns,
-    kernels: layOutKernels(memory, climate, state, columns, pathways),
-    climate,
+    kernels: layOutKernels(memory, climates, state, columns, pathways),
+    climate: climates[0]!,
+    climates,
+    pathwayClimate,
     pathways,
     probs,
     thresholds: [...spec.thresholds],

@@ -5,7 +5,7 @@ import { preparePlan } from "./prepare-plan.js";
 import { runEnsemble } from "./run-ensemble.js";
 import { baseSpec, fixedClimate, rampPathway } from "./test-support/specs.js";
 
-// Standard normal quantiles, CHECKS.md §7.1 (SciPy 1.17).
+// Standard normal quantiles, scipy.stats.norm.ppf (SciPy 1.17).
 const Z: Record<string, number> = { p5: -1.644853627, p17: -0.9541652531, p50: 0, p83: 0.9541652531, p95: 1.644853627 };
 
 function hasNonFinite(value: unknown): boolean {
@@ -15,11 +15,13 @@ function hasNonFinite(value: unknown): boolean {
   return false;
 }
 
-describe("runEnsemble", () => {
+// Ensembles of thousands of members: a generous timeout for a busy shared machine.
+describe("runEnsemble", { timeout: 60_000 }, () => {
   it("with only an agent scale uncertain, percentiles = deterministic response × (1 + sd·z_p)", () => {
     // Closed form: the model is linear in forcing, so a member whose only forcing agent is
     // scaled by s has anomaly s·D(t); with s ~ Normal(1, 0.2) the p-percentile is D(t)(1 + 0.2 z_p).
-    const pathway = { ...rampPathway(), agents: { co2: rampPathway().agents.co2! } };
+    // Not the CO2 scale: it also sets each member's feedback (λ = scale_co2 · F2x / ECS).
+    const pathway = { ...rampPathway(), agents: { ozone: rampPathway().agents.co2! } };
     const common = baseSpec({ pathways: [pathway], horizons: [], thresholds: [] });
     const deterministic = runEnsemble({
       ...common,
@@ -29,7 +31,7 @@ describe("runEnsemble", () => {
     const result = runEnsemble({
       ...common,
       members: 20_000,
-      model: { ...common.model, climate: fixedClimate(), agents: { co2: { scale: { type: "normal", mean: 1, sd: 0.2 } } } },
+      model: { ...common.model, climate: fixedClimate(), agents: { ozone: { scale: { type: "normal", mean: 1, sd: 0.2 } } } },
     });
     const temperature = result.pathways[0]!.temperature;
     for (const t of [200, 280, 350]) {
@@ -66,8 +68,9 @@ describe("runEnsemble", () => {
       const upper: number[] = [];
       for (let t = 0; t < years; t++) {
         const f = co2[t]! + scale * aerosol[t]!;
+        // The year's mean upper-layer temperature (exact, from the state at the year's start).
+        upper.push(p.m11 * x + p.m12 * y + p.r1 * f);
         [x, y] = [p.a11 * x + p.a12 * y + p.b1 * f, p.a21 * x + p.a22 * y + p.b2 * f];
-        upper.push(x);
       }
       const baseline = upper.slice(100, 151).reduce((s, v) => s + v, 0) / 51;
       upper.forEach((v, t) => anomalies[t]!.push(v - baseline));
@@ -104,7 +107,8 @@ describe("runEnsemble", () => {
     expect(windowPrior.constraint).toBeNull();
     const constrained = runEnsemble({
       ...spec,
-      model: { ...spec.model, constraint: { from: 2011, to: 2020, observed: 0.9, sd: 0.08 } },
+      // A tight likelihood (no internal variability) so the weighted window warming lands near 0.9.
+      model: { ...spec.model, constraint: { from: 2011, to: 2020, observed: 0.9, sd: 0.08, internalVariability: 0 } },
     });
     const c = constrained.pathways[0]!.constraint!;
     expect(c.ecsPosterior.p95! - c.ecsPosterior.p5!).toBeLessThan(c.ecsPrior.p95! - c.ecsPrior.p5!);
@@ -133,7 +137,7 @@ describe("runEnsemble", () => {
     expect(runEnsemble(rest).inputHash).toBe(runEnsemble(spec).inputHash);
   });
 
-  it("implied TCR of a fixed climate equals the closed form (CHECKS.md §5.3: 2.0290 K for F2x = 3.71)", () => {
+  it("implied TCR of a fixed climate equals the closed form (Geoffroy et al. 2013a ramp solution, computed: 2.0290 K for F2x = 3.71)", () => {
     const spec = baseSpec({ members: 3, model: { ...baseSpec().model, climate: fixedClimate(), agents: {} } });
     const result = runEnsemble(spec);
     expect(result.implied.tcr.p50).toBeCloseTo(2.029, 3);

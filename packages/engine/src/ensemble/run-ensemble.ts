@@ -24,6 +24,25 @@ export interface RunOptions {
    * switched off is returned empty ({}); the benchmark uses this to time W1's own workload.
    */
   summaries?: Partial<SummaryChoice>;
+  /**
+   * Called once per pathway, after its summaries, with its members' horizon warming and
+   * constraint weights (views into the run's arrays, valid only during the call) and the
+   * sampled inputs: what memberTable (member-table.ts) lists.
+   */
+  onPathwayMembers?(members: PathwayMembers): void;
+}
+
+/** One pathway's per-member values, as onPathwayMembers hands them out. */
+export interface PathwayMembers {
+  pathwayIndex: number;
+  /** Per horizon (spec order), each member's warming (annual-mean anomaly, K). */
+  horizonWarming: Float64Array[];
+  /** Constraint weights (largest 1), or null when the run has no constraint. */
+  weights: Float64Array | null;
+  /** Every model input with its sampled column, in the sampler's order. */
+  inputs: { name: string; kind: "climate" | "agent"; fixed: boolean; values: Float64Array }[];
+  /** Agents this pathway carries. */
+  agents: string[];
 }
 
 /** Wall-clock seconds per stage; parallel stages count thread-seconds divided by threads. */
@@ -64,7 +83,7 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
   const pathways: PathwayResult[] = [];
   const perils: (PathwayPerilResult | null)[] = [];
   let implied: { ecs: PercentileSet; tcr: PercentileSet } | null = null;
-  const inputRanks = new Map<number, Float64Array>();
+  const inputOrders = new Map<number, Uint32Array>();
   const summariser = new YearSummariser(plan);
   const slots = plan.state.slots;
   const span = plan.spanYears;
@@ -79,12 +98,19 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
       advanceReportedYears(plan, p, t0, t1, 0, n);
       if (times) lap("simulate");
       for (let t = t0; t < t1; t++) {
-        summariser.summarise(t, pathway.years, slots[t % slots.length]!, weighting.weights, weighting.totalWeight, byYear[t]!);
+        summariser.summarise(p, t, pathway.years, slots[t % slots.length]!, weighting.weights, weighting.totalWeight, byYear[t]!);
         tick();
       }
       if (times) lap("summarise");
     }
-    pathways.push(finishPathway(spec, plan, p, weighting, inputRanks));
+    pathways.push(finishPathway(spec, plan, p, weighting, inputOrders));
+    options.onPathwayMembers?.({
+      pathwayIndex: p,
+      horizonWarming: plan.state.horizonTemperature,
+      weights: weighting.weights,
+      inputs: plan.inputs.map((x, i) => ({ name: x.name, kind: x.kind, fixed: x.distribution.type === "fixed", values: plan.columns[i]! })),
+      agents: pathway.agents,
+    });
     perils.push(pathwayPerils(spec, plan, p, weighting));
     if (p === 0) implied = impliedSensitivities(plan, spec.percentiles, weighting);
     lap("finish");

@@ -36,7 +36,15 @@ export class YearSummariser {
    * weights: null when the ensemble is unweighted; totalWeight their sum in member order.
    * horizonIndexes: the horizons (indexes into plan.horizons) that fall in this year.
    */
-  summarise(t: number, years: number, slot: YearSlot, weights: Float64Array | null, totalWeight: number, horizonIndexes: number[]): void {
+  summarise(
+    pathwayIndex: number,
+    t: number,
+    years: number,
+    slot: YearSlot,
+    weights: Float64Array | null,
+    totalWeight: number,
+    horizonIndexes: number[],
+  ): void {
     const plan = this.plan;
     const percentiles = plan.probs.length;
     const yearly = plan.state.yearly;
@@ -47,7 +55,7 @@ export class YearSummariser {
       yearly[exceedanceRow(i, percentiles) * years + t] = weights ? exceed[i]! / totalWeight : exceed[i]! / n;
     if (plan.summaries.forcing) this.describe(1, t, years, slot.forcing, slot.extremes, 0, weights, totalWeight);
     if (plan.summaries.imbalance) this.describe(2, t, years, slot.imbalance, slot.extremes, 4, weights, totalWeight);
-    for (const h of horizonIndexes) this.keepHorizon(h, slot);
+    for (const h of horizonIndexes) this.keepHorizon(pathwayIndex, h, slot);
   }
 
   /** Members above each threshold (in spec order) from the step's per-block counts (ascending order). */
@@ -132,9 +140,9 @@ export class YearSummariser {
   }
 
   /** Committed warming: equilibrium F/λ minus the current warming, both from the pathway start. */
-  private keepHorizon(h: number, slot: YearSlot): void {
+  private keepHorizon(pathwayIndex: number, h: number, slot: YearSlot): void {
     const { horizonTemperature, horizonForcing, horizonCommitted, baselineMean } = this.plan.state;
-    const lambda = this.plan.climate.lambda;
+    const lambda = this.plan.climates[this.plan.pathwayClimate[pathwayIndex]!]!.lambda;
     const temperature = horizonTemperature[h]!;
     const forcing = horizonForcing[h]!;
     const committed = horizonCommitted[h]!;

@@ -10,7 +10,7 @@ export interface ModelInput {
 }
 
 /**
- * Every input the spec gives, in a fixed order (climate inputs in DESIGN.md order, then
+ * Every input the spec gives, in a fixed order (climate inputs in the order of the spec's climate block, then
  * agent scales in agent order), so the same spec always samples the same way. Agents absent
  * from model.agents are not inputs: their scale is fixed at 1.
  */

@@ -3,13 +3,13 @@ import { requireConcentration } from "./checks.js";
 /*
  * The AR6 simplified expressions: Meinshausen et al. (2020), Geosci. Model Dev. 13,
  * 3571–3605, doi:10.5194/gmd-13-3571-2020, a re-fit of the Etminan et al. (2016) line-by-line
- * results used by IPCC AR6 WGI Chapter 7 §7.3.2 (coefficients of AR6 Table 7.SM.1).
- * Flags (CHECKS.md §1.3): the form and coefficients are [memory]; they reproduce four
- * [read-P]/[read-S] AR6 headline numbers to 3 significant figures (CO2 2.16, CH4 0.54,
+ * results used by IPCC AR6 WGI Chapter 7 Section 7.3.2 (coefficients of AR6 Table 7.SM.1).
+ * The form and coefficients are written from memory, not checked against Table 7.SM.1; they
+ * reproduce four published AR6 headline numbers (TS Section TS.2.2 and Section 7.3.2.1) to 3 significant figures (CO2 2.16, CH4 0.54,
  * N2O 0.21 W m⁻² for 1750–2019; 3.93 W m⁻² for 2×CO2), which is strong support.
  * Each gas's SARF is written relative to the fit's own pre-industrial state
  * (C0 = 277.15 ppm, N0 = 273.87 ppb, M0 = 731.41 ppb); the forcing between two states is
- * the difference of the two values (the convention CHECKS.md §1.3 uses).
+ * the difference of the two values.
  */
 const CO2_A1 = -2.4785e-7;
 const CO2_B1 = 7.5906e-4;
@@ -28,7 +28,7 @@ const FIT_M0 = 731.41;
 /** CO2 concentration where the quadratic α′ peaks, C0 − b1/(2·a1) ≈ 1808 ppm. */
 const CO2_ALPHA_MAX = FIT_C0 - CO2_B1 / (2 * CO2_A1);
 
-/** SARF → ERF tropospheric-adjustment factors, AR6 WGI §7.3.2 [memory, CHECKS.md §1.3]. */
+/** SARF → ERF tropospheric-adjustment factors, AR6 WGI Ch. 7 Section 7.3.2 (from memory). */
 export const AR6_ADJUSTMENT = { co2: 1.05, ch4: 0.86, n2o: 1.07 } as const;
 
 function co2SarfFromFitReference(c: number, n: number): number {
@@ -52,7 +52,7 @@ function n2oSarfFromFitReference(n: number, c: number, m: number): number {
  * the reference state. α′ = d1 + a1(C−C0)² + b1(C−C0) between C0fit and ≈1808 ppm, constant
  * outside. N2O at the reference state defaults to the current one. Cost O(1).
  *
- * Example: `co2SarfAr6(554.3, 277.15, 273.87)` → 3.746 (3 d.p.; CHECKS.md §1.3).
+ * Example: `co2SarfAr6(554.3, 277.15, 273.87)` → 3.746 (3 d.p.; computed from the expression).
  */
 export function co2SarfAr6(c: number, c0: number, n: number, n0 = n): number {
   requireConcentration(c, "c");
@@ -66,7 +66,7 @@ export function co2SarfAr6(c: number, c0: number, n: number, n0 = n): number {
  * CH4 SARF between two states (AR6 form): (a3√M + b3√N + d3)(√M − √M0fit) minus the same at
  * the reference. Cost O(1).
  *
- * Example: `ch4SarfAr6(1866.3, 729.2, 332.1, 270.1)` → 0.633 (3 d.p.; CHECKS.md §1.3).
+ * Example: `ch4SarfAr6(1866.3, 729.2, 332.1, 270.1)` → 0.633 (3 d.p.; computed from the expression).
  */
 export function ch4SarfAr6(m: number, m0: number, n: number, n0 = n): number {
   requireConcentration(m, "m");
@@ -80,7 +80,7 @@ export function ch4SarfAr6(m: number, m0: number, n: number, n0 = n): number {
  * N2O SARF between two states (AR6 form): (a2√C + b2√N + c2√M + d2)(√N − √N0fit) minus the
  * same at the reference. Cost O(1).
  *
- * Example: `n2oSarfAr6(332.1, 270.1, 409.9, 1866.3, 278.3, 729.2)` → 0.195 (3 d.p.; CHECKS.md §1.3).
+ * Example: `n2oSarfAr6(332.1, 270.1, 409.9, 1866.3, 278.3, 729.2)` → 0.195 (3 d.p.; computed from the expression).
  */
 export function n2oSarfAr6(n: number, n0: number, c: number, m: number, c0 = c, m0 = m): number {
   requireConcentration(n, "n");

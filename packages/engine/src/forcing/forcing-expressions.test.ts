@@ -4,16 +4,17 @@ import { ch4ForcingEtminan, co2ForcingEtminan, n2oForcingEtminan } from "./etmin
 import { ch4ForcingTar, co2ForcingMyhre, n2oForcingTar } from "./myhre-1998.js";
 
 describe("Myhre et al. 1998 / IPCC TAR expressions", () => {
-  it("gives 5.35·ln 2 = 3.7083 W m⁻² for doubled CO2 (CHECKS.md §1.1, quoted 3.71 in TAR)", () => {
-    // CHECKS.md §1.1: F2x = 5.35 ln 2 = 3.7083 [computed]; TAR p. 358 quotes 3.71 [read-S].
+  it("gives 5.35·ln 2 = 3.7083 W m⁻² for doubled CO2 (Myhre et al. 1998, quoted 3.71 in TAR)", () => {
+    // F2x = 5.35 ln 2 = 3.7083, computed from the Myhre et al. 1998 expression; IPCC TAR WGI
+    // p. 358 quotes 3.71 (seen only in a secondary source).
     expect(co2ForcingMyhre(556, 278)).toBeCloseTo(3.7083, 4);
     expect(co2ForcingMyhre(278, 278)).toBe(0);
-    // CHECKS.md §1.4 check [computed]: 5.35 ln(409.9/278.3) = 2.072.
+    // Computed from the closed form with the AR6 TS Section TS.2.2 concentrations: 5.35 ln(409.9/278.3) = 2.072.
     expect(co2ForcingMyhre(409.9, 278.3)).toBeCloseTo(2.072, 3);
   });
 
-  it("reproduces the TAR CH4 and N2O check values and AR5's 0.48 / 0.17 (CHECKS.md §1.1)", () => {
-    // CHECKS.md §1.1 [computed; expressions memory]: CH4 722→1803 (N0 = 270) → 0.492;
+  it("reproduces the TAR CH4 and N2O check values and AR5's 0.48 / 0.17 (IPCC TAR WGI Table 6.2)", () => {
+    // Computed from the TAR expressions (written from memory): CH4 722→1803 (N0 = 270) → 0.492;
     // N2O 270→324 (M0 = 722) → 0.177. AR5 1750–2011: 0.48 and 0.17 (±0.015 as advised).
     expect(ch4ForcingTar(1803, 722, 270)).toBeCloseTo(0.492, 3);
     expect(n2oForcingTar(324, 270, 722)).toBeCloseTo(0.177, 3);
@@ -29,8 +30,9 @@ describe("Myhre et al. 1998 / IPCC TAR expressions", () => {
 });
 
 describe("Etminan et al. 2016 expressions", () => {
-  // CHECKS.md §1.2: coefficients [read-S], CO2 constant/form [memory]; check values [computed]
-  // that reproduce the paper's abstract [read-P].
+  // Coefficients as quoted from Etminan et al. 2016 Table 1 by public codes, CO2 constant and form
+  // from memory; check values computed from the expressions, and they reproduce the paper's abstract
+  // (CH4 0.48 → 0.61 W m⁻²; CO2 within 1 % of AR5; about 10 % higher at 2000 ppm).
   it("gives 3.802 W m⁻² for 278 → 556 ppm with N = 270 ppb", () => {
     expect(co2ForcingEtminan(556, 278, 270)).toBeCloseTo(3.802, 3);
   });
@@ -53,7 +55,7 @@ describe("Etminan et al. 2016 expressions", () => {
     expect(n2oForcingEtminan(324, 270, (278 + 390.5) / 2, (722 + 1803) / 2)).toBeCloseTo(0.172, 3);
   });
 
-  it("uses brackets linear in the mean concentrations, not their square roots (CHECKS.md §1.2 trap)", () => {
+  it("uses brackets linear in the mean concentrations, not their square roots (Etminan et al. 2016 form)", () => {
     // With √-means the CH4 value would be far from 0.61; the linear form gives 0.607.
     const nBar = (270 + 324) / 2;
     const sqrtForm = (-1.3e-6 * Math.sqrt((1803 + 722) / 2) + -8.2e-6 * Math.sqrt(nBar) + 0.043) * (Math.sqrt(1803) - Math.sqrt(722));
@@ -63,14 +65,15 @@ describe("Etminan et al. 2016 expressions", () => {
 });
 
 describe("AR6 (Meinshausen et al. 2020 re-fit) with tropospheric adjustments", () => {
-  // CHECKS.md §1.3: coefficients [memory] but they reproduce AR6 headline numbers that are
-  // [read-P] (CO2 2.16, CH4 0.54, N2O 0.21, TS §TS.2.2) and [read-S] (3.93 for 2×CO2).
-  // 1750 = 278.3 / 729.2 / 270.1, 2019 = 409.9 / 1866.3 / 332.1 (CHECKS.md §1.4).
+  // Coefficients of AR6 Table 7.SM.1 from memory, but they reproduce published AR6 headline numbers:
+  // CO2 2.16, CH4 0.54, N2O 0.21 (AR6 WGI TS Section TS.2.2) and 3.93 for 2×CO2 (AR6 WGI Ch. 7
+  // Section 7.3.2.1, seen in a secondary copy). 1750 = 278.3 / 729.2 / 270.1, 2019 = 409.9 / 1866.3 /
+  // 332.1 (AR6 TS Section TS.2.2: 2019 values minus their increases since 1750).
   it("reproduces the AR6 1750–2019 ERFs 2.16 / 0.54 / 0.21 W m⁻²", () => {
     expect(co2ErfAr6(409.9, 278.3, 332.1, 270.1)).toBeCloseTo(2.16, 2);
     expect(ch4ErfAr6(1866.3, 729.2, 332.1, 270.1)).toBeCloseTo(0.54, 2);
     expect(n2oErfAr6(332.1, 270.1, 409.9, 1866.3, 278.3, 729.2)).toBeCloseTo(0.21, 2);
-    // The SARFs behind them, CHECKS.md §1.3 [computed]: 2.055, 0.633, 0.195.
+    // The SARFs behind them, computed from the expressions: 2.055, 0.633, 0.195.
     expect(co2SarfAr6(409.9, 278.3, 332.1, 270.1)).toBeCloseTo(2.055, 3);
     expect(ch4SarfAr6(1866.3, 729.2, 332.1, 270.1)).toBeCloseTo(0.633, 3);
     expect(n2oSarfAr6(332.1, 270.1, 409.9, 1866.3, 278.3, 729.2)).toBeCloseTo(0.195, 3);
@@ -81,7 +84,7 @@ describe("AR6 (Meinshausen et al. 2020 re-fit) with tropospheric adjustments", (
     expect(co2ErfAr6(2 * 277.15, 277.15, 273.87)).toBeCloseTo(3.93, 2);
   });
 
-  it("differs from Etminan for 2×CO2 as CHECKS.md §1.3 notes (3.75 vs 3.80 SARF)", () => {
+  it("differs from Etminan for 2×CO2 (3.75 vs 3.80 SARF, computed from both forms)", () => {
     expect(co2ForcingEtminan(556, 278, 270) - co2SarfAr6(556, 278, 270)).toBeGreaterThan(0.04);
   });
 

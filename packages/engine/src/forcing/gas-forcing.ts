@@ -31,9 +31,10 @@ const GASES: readonly ForcingGas[] = ["co2", "ch4", "n2o"];
  * The Etminan and Myhre/TAR expressions are stratospheric-adjusted RF, used as ERF with no
  * adjustment factor (AR5 practice for the well-mixed gases).
  * Validity ranges of the fits (Etminan: CO2 180–2000 ppm, CH4 340–3500 ppb, N2O 200–525 ppb
- * [memory]) are documented, not enforced. A concentration that is not finite or ≤ 0 throws
+ * from memory) are documented, not enforced. A concentration that is not finite or ≤ 0 throws
  * a RangeError naming the gas and the year index. Cost O(length).
- * Reference: CHECKS.md §1.1–§1.4.
+ * Reference: Myhre et al. (1998); Etminan et al. (2016); Meinshausen et al. (2020) as used in
+ * IPCC AR6 WGI Ch. 7 Section 7.3.2; reference concentrations from AR6 TS Section TS.2.2.
  *
  * Example: `gasForcingSeries("myhre-1998", "co2", { co2: [278.3, 556.6] }, 2)` →
  * Float64Array [0, 3.7083].

@@ -7,7 +7,7 @@ import { memberKernels } from "./member-kernels.js";
 /*
  * The kernels against the plain arithmetic they stand for, written here in TypeScript one
  * member at a time, in the same order of operations (the two-layer step as
- * two-layer-propagator.ts defines it; the closed-form checks of CHECKS.md §5.3 and §6 run
+ * two-layer-propagator.ts defines it; the closed-form checks (Geoffroy et al. 2013a, one-box model) run
  * through these kernels in climate/ and ensemble/ tests). IEEE 754 double arithmetic
  * in the same order gives the same bits, so equality is exact: any difference is a bug.
  */
@@ -78,12 +78,15 @@ function stepFixture(members: number, seed: number) {
     a11: a(0.8, 0.9), a12: a(0.01, 0.02), a21: a(0.001, 0.003), a22: a(0.99, 0.999), b1: a(0.1, 0.13), b2: a(0.0005, 0.001),
     upper: a(-0.5, 2), deep: a(-0.2, 1), baselineMean: a(-0.1, 0.1), windowMean: a(0, 0.2), nextThreshold: a(0.5, 2.5),
     lambda: a(0.8, 1.6), extraUptake: a(0, 0.2),
+    m11: a(0.9, 0.95), m12: a(0.005, 0.01), m21: a(0.0005, 0.002), m22: a(0.995, 0.9995), r1: a(0.05, 0.07), r2: a(0.0001, 0.0004),
   };
   const crossed = memory.int32(members);
   const order = ["a11", "a12", "a21", "a22", "b1", "b2", "upper", "deep", "baselineMean", "windowMean", "nextThreshold", "lambda", "extraUptake"] as const;
-  const frame = memory.int32(14);
+  const meanOrder = ["m11", "m12", "m21", "m22", "r1", "r2"] as const;
+  const frame = memory.int32(20);
   order.forEach((name, i) => (frame[i] = arrays[name].byteOffset));
   frame[13] = crossed.byteOffset;
+  meanOrder.forEach((name, i) => (frame[14 + i] = arrays[name].byteOffset));
   const forcing = a(-1, 4);
   const copy = Object.fromEntries(Object.entries(arrays).map(([k, v]) => [k, Float64Array.from(v)])) as typeof arrays;
   return { memory, arrays, before: copy, crossed, frame, forcing };
@@ -91,19 +94,22 @@ function stepFixture(members: number, seed: number) {
 
 describe("step kernels", () => {
   for (const n of [1, 2, 9, 64]) {
-    it(`baseline step, ${n} members from member 1: the exact propagator and the baseline and window sums`, () => {
-      const x = stepFixture(n + 2, n);
-      memberKernels(x.memory.memory).baselineStep(x.frame.byteOffset, 1, n, x.forcing.byteOffset, 1, 0);
-      const b = x.before;
-      for (let m = 1; m <= n; m++) {
-        const next = b.a11[m]! * b.upper[m]! + b.a12[m]! * b.deep[m]! + b.b1[m]! * x.forcing[m]!;
-        expect(x.arrays.upper[m]).toBe(next);
-        expect(x.arrays.deep[m]).toBe(b.a21[m]! * b.upper[m]! + b.a22[m]! * b.deep[m]! + b.b2[m]! * x.forcing[m]!);
-        expect(x.arrays.baselineMean[m]).toBe(b.baselineMean[m]! + next);
-        expect(x.arrays.windowMean[m]).toBe(b.windowMean[m]!); // not in the window this year
-      }
-      expect([x.arrays.upper[0], x.arrays.upper[n + 1]]).toEqual([b.upper[0], b.upper[n + 1]]);
-    });
+    for (const [inBaseline, inWindow] of [[1, 0], [0, 1], [0, 0]] as const)
+      it(`baseline step, ${n} members from member 1, baseline ${inBaseline} window ${inWindow}: the exact propagator and the sums of the year's mean`, () => {
+        const x = stepFixture(n + 2, n);
+        memberKernels(x.memory.memory).baselineStep(x.frame.byteOffset, 1, n, x.forcing.byteOffset, inBaseline, inWindow);
+        const b = x.before;
+        for (let m = 1; m <= n; m++) {
+          const f = x.forcing[m]!;
+          const next = b.a11[m]! * b.upper[m]! + b.a12[m]! * b.deep[m]! + b.b1[m]! * f;
+          const mean = b.m11[m]! * b.upper[m]! + b.m12[m]! * b.deep[m]! + b.r1[m]! * f;
+          expect(x.arrays.upper[m]).toBe(next);
+          expect(x.arrays.deep[m]).toBe(b.a21[m]! * b.upper[m]! + b.a22[m]! * b.deep[m]! + b.b2[m]! * f);
+          expect(x.arrays.baselineMean[m]).toBe(inBaseline ? b.baselineMean[m]! + mean : b.baselineMean[m]!);
+          expect(x.arrays.windowMean[m]).toBe(inWindow ? b.windowMean[m]! + mean : b.windowMean[m]!);
+        }
+        expect([x.arrays.upper[0], x.arrays.upper[n + 1]]).toEqual([b.upper[0], b.upper[n + 1]]);
+      });
 
     for (const withImbalance of [false, true])
       it(`reporting step, ${n} members from member 1${withImbalance ? ", with imbalance" : ""}: anomaly, count above the lowest threshold, crossings, extremes`, () => {
@@ -125,14 +131,17 @@ describe("step kernels", () => {
           const f = x.forcing[m]!;
           const next = b.a11[m]! * b.upper[m]! + b.a12[m]! * b.deep[m]! + b.b1[m]! * f;
           const deep = b.a21[m]! * b.upper[m]! + b.a22[m]! * b.deep[m]! + b.b2[m]! * f;
-          const a = next - b.baselineMean[m]!;
+          // The year's mean states, from the state at its start.
+          const meanUpper = b.m11[m]! * b.upper[m]! + b.m12[m]! * b.deep[m]! + b.r1[m]! * f;
+          const meanDeep = b.m21[m]! * b.upper[m]! + b.m22[m]! * b.deep[m]! + b.r2[m]! * f;
+          const a = meanUpper - b.baselineMean[m]!;
           expect([x.arrays.upper[m], x.arrays.deep[m], anomaly[m]]).toEqual([next, deep, a]);
           if (a > lowest) above++;
           if (a > b.nextThreshold[m]!) crossed.push(m);
           if (a < amin) amin = a;
           if (a > amax) amax = a;
           if (withImbalance) {
-            const net = f - b.lambda[m]! * next - b.extraUptake[m]! * (next - deep);
+            const net = f - b.lambda[m]! * meanUpper - b.extraUptake[m]! * (meanUpper - meanDeep);
             expect(imbalance[m]).toBe(net);
             if (net < nmin) nmin = net;
             if (net > nmax) nmax = net;

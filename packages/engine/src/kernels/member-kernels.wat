@@ -26,6 +26,10 @@
   ;; the next threshold, λ and (ε − 1)γ for the imbalance, and the list of crossing members.
   ;;   0 a11   4 a12   8 a21  12 a22  16 b1  20 b2  24 upper  28 deep  32 baselineMean
   ;;  36 windowMean  40 nextThreshold  44 lambda  48 extraUptake  52 crossed (Int32Array)
+  ;;  56 m11  60 m12  64 m21  68 m22  72 r1  76 r2
+  ;; where [[m11 m12] [m21 m22]] = ∫₀¹ e^{As} ds and (r1, r2) = A⁻²(e^A − I − A)(1/C, 0): the
+  ;; MEAN state over the year is that matrix times the state at the year's start plus r·F
+  ;; (two-layer-propagator.ts), exactly, for forcing F held over the year.
 
   ;; forcing: out[m] = base + Σ_j scale_j[m] · coefficient_j for m in [lo, lo + n), the sum
   ;; over j = 0 … width − 1 in order. width is 0, 4, 8 or 12 (pathway-forcing.ts pads with an
@@ -132,16 +136,18 @@
       (then (f64.store offset=8 (local.get $at) (local.get $x)))))
 
   ;; First pass: members [lo, lo + n) one year on under forcing[m] (upper' = a11·upper +
-  ;; a12·deep + b1·F, deep' = a21·upper + a22·deep + b2·F); the new upper-layer temperature is
-  ;; added to the baseline sum if inBaseline and to the window sum if inWindow.
+  ;; a12·deep + b1·F, deep' = a21·upper + a22·deep + b2·F); the year's mean upper-layer
+  ;; temperature (m11·upper + m12·deep + r1·F, from the state at the year's start) is added to
+  ;; the baseline sum if inBaseline and to the window sum if inWindow.
   (func (export "baselineStep")
       (param $frame i32) (param $lo i32) (param $n i32) (param $forcing i32)
       (param $inBaseline i32) (param $inWindow i32)
     (local $first i32) (local $end i32) (local $i i32)
     (local $a11 i32) (local $a12 i32) (local $a21 i32) (local $a22 i32) (local $b1 i32) (local $b2 i32)
     (local $up i32) (local $dp i32) (local $bl i32) (local $win i32)
-    (local $x v128) (local $y v128) (local $f v128) (local $next v128)
-    (local $sx f64) (local $sy f64) (local $sf f64) (local $snext f64)
+    (local $m11 i32) (local $m12 i32) (local $r1 i32) (local $summed i32)
+    (local $x v128) (local $y v128) (local $f v128) (local $next v128) (local $mean v128)
+    (local $sx f64) (local $sy f64) (local $sf f64) (local $snext f64) (local $smean f64)
     (local.set $first (i32.shl (local.get $lo) (i32.const 3)))
     (local.set $a11 (i32.add (i32.load offset=0 (local.get $frame)) (local.get $first)))
     (local.set $a12 (i32.add (i32.load offset=4 (local.get $frame)) (local.get $first)))
@@ -153,6 +159,10 @@
     (local.set $dp (i32.add (i32.load offset=28 (local.get $frame)) (local.get $first)))
     (local.set $bl (i32.add (i32.load offset=32 (local.get $frame)) (local.get $first)))
     (local.set $win (i32.add (i32.load offset=36 (local.get $frame)) (local.get $first)))
+    (local.set $m11 (i32.add (i32.load offset=56 (local.get $frame)) (local.get $first)))
+    (local.set $m12 (i32.add (i32.load offset=60 (local.get $frame)) (local.get $first)))
+    (local.set $r1 (i32.add (i32.load offset=72 (local.get $frame)) (local.get $first)))
+    (local.set $summed (i32.or (local.get $inBaseline) (local.get $inWindow)))
     (local.set $forcing (i32.add (local.get $forcing) (local.get $first)))
     (local.set $end (i32.and (i32.shl (local.get $n) (i32.const 3)) (i32.const -16)))
     (local.set $i (i32.const 0))
@@ -175,12 +185,20 @@
               (f64x2.mul (v128.load (i32.add (local.get $a21) (local.get $i))) (local.get $x))
               (f64x2.mul (v128.load (i32.add (local.get $a22) (local.get $i))) (local.get $y)))
             (f64x2.mul (v128.load (i32.add (local.get $b2) (local.get $i))) (local.get $f))))
-        (if (local.get $inBaseline)
-          (then (v128.store (i32.add (local.get $bl) (local.get $i))
-            (f64x2.add (v128.load (i32.add (local.get $bl) (local.get $i))) (local.get $next)))))
-        (if (local.get $inWindow)
-          (then (v128.store (i32.add (local.get $win) (local.get $i))
-            (f64x2.add (v128.load (i32.add (local.get $win) (local.get $i))) (local.get $next)))))
+        (if (local.get $summed)
+          (then
+            (local.set $mean
+              (f64x2.add
+                (f64x2.add
+                  (f64x2.mul (v128.load (i32.add (local.get $m11) (local.get $i))) (local.get $x))
+                  (f64x2.mul (v128.load (i32.add (local.get $m12) (local.get $i))) (local.get $y)))
+                (f64x2.mul (v128.load (i32.add (local.get $r1) (local.get $i))) (local.get $f))))
+            (if (local.get $inBaseline)
+              (then (v128.store (i32.add (local.get $bl) (local.get $i))
+                (f64x2.add (v128.load (i32.add (local.get $bl) (local.get $i))) (local.get $mean)))))
+            (if (local.get $inWindow)
+              (then (v128.store (i32.add (local.get $win) (local.get $i))
+                (f64x2.add (v128.load (i32.add (local.get $win) (local.get $i))) (local.get $mean)))))))
         (local.set $i (i32.add (local.get $i) (i32.const 16)))
         (br $pairs)))
     (if (i32.and (local.get $n) (i32.const 1))
@@ -201,17 +219,26 @@
               (f64.mul (f64.load (i32.add (local.get $a21) (local.get $i))) (local.get $sx))
               (f64.mul (f64.load (i32.add (local.get $a22) (local.get $i))) (local.get $sy)))
             (f64.mul (f64.load (i32.add (local.get $b2) (local.get $i))) (local.get $sf))))
-        (if (local.get $inBaseline)
-          (then (f64.store (i32.add (local.get $bl) (local.get $i))
-            (f64.add (f64.load (i32.add (local.get $bl) (local.get $i))) (local.get $snext)))))
-        (if (local.get $inWindow)
-          (then (f64.store (i32.add (local.get $win) (local.get $i))
-            (f64.add (f64.load (i32.add (local.get $win) (local.get $i))) (local.get $snext))))))))
+        (if (local.get $summed)
+          (then
+            (local.set $smean
+              (f64.add
+                (f64.add
+                  (f64.mul (f64.load (i32.add (local.get $m11) (local.get $i))) (local.get $sx))
+                  (f64.mul (f64.load (i32.add (local.get $m12) (local.get $i))) (local.get $sy)))
+                (f64.mul (f64.load (i32.add (local.get $r1) (local.get $i))) (local.get $sf))))
+            (if (local.get $inBaseline)
+              (then (f64.store (i32.add (local.get $bl) (local.get $i))
+                (f64.add (f64.load (i32.add (local.get $bl) (local.get $i))) (local.get $smean)))))
+            (if (local.get $inWindow)
+              (then (f64.store (i32.add (local.get $win) (local.get $i))
+                (f64.add (f64.load (i32.add (local.get $win) (local.get $i))) (local.get $smean))))))))))
 
   ;; Reporting pass: members [lo, lo + n) one year on under forcing[m], as baselineStep; writes
-  ;; anomaly[m] = upper − baselineMean[m] and, if imbalance is not 0, the top-of-atmosphere
-  ;; imbalance N = F − λ·upper − (ε − 1)γ·(upper − deep) (Geoffroy et al. 2013b) to
-  ;; imbalance[m]. Folds the min and max of the anomalies into the f64 pair at extremes + 16
+  ;; anomaly[m] = (the year's mean upper-layer temperature) − baselineMean[m] and, if imbalance
+  ;; is not 0, the year's mean top-of-atmosphere imbalance N = F − λ·upper − (ε − 1)γ·(upper −
+  ;; deep) of the mean states (Geoffroy et al. 2013b; N is linear in the state, so the mean of N
+  ;; is N of the means) to imbalance[m]. Folds the min and max of the anomalies into the f64 pair at extremes + 16
   ;; and, with imbalance, of N into the pair at extremes + 32. If above is not 0, stores there
   ;; (as f64) how many anomalies exceed `lowest`. Members whose anomaly exceeds their
   ;; nextThreshold are listed, in member order, in the frame's crossed array from index lo;
@@ -224,6 +251,8 @@
     (local $a11 i32) (local $a12 i32) (local $a21 i32) (local $a22 i32) (local $b1 i32) (local $b2 i32)
     (local $up i32) (local $dp i32) (local $bl i32) (local $next_threshold i32)
     (local $lambda i32) (local $uptake i32) (local $crossed i32)
+    (local $m11 i32) (local $m12 i32) (local $m21 i32) (local $m22 i32) (local $r1 i32) (local $r2 i32)
+    (local $mu v128) (local $md v128) (local $smu f64) (local $smd f64)
     (local $x v128) (local $y v128) (local $f v128) (local $next v128) (local $deep v128)
     (local $a v128) (local $t v128) (local $net v128) (local $low v128) (local $count v128)
     (local $amin v128) (local $amax v128) (local $nmin v128) (local $nmax v128)
@@ -242,6 +271,12 @@
     (local.set $lambda (i32.add (i32.load offset=44 (local.get $frame)) (local.get $first)))
     (local.set $uptake (i32.add (i32.load offset=48 (local.get $frame)) (local.get $first)))
     (local.set $crossed (i32.add (i32.load offset=52 (local.get $frame)) (i32.shl (local.get $lo) (i32.const 2))))
+    (local.set $m11 (i32.add (i32.load offset=56 (local.get $frame)) (local.get $first)))
+    (local.set $m12 (i32.add (i32.load offset=60 (local.get $frame)) (local.get $first)))
+    (local.set $m21 (i32.add (i32.load offset=64 (local.get $frame)) (local.get $first)))
+    (local.set $m22 (i32.add (i32.load offset=68 (local.get $frame)) (local.get $first)))
+    (local.set $r1 (i32.add (i32.load offset=72 (local.get $frame)) (local.get $first)))
+    (local.set $r2 (i32.add (i32.load offset=76 (local.get $frame)) (local.get $first)))
     (local.set $forcing (i32.add (local.get $forcing) (local.get $first)))
     (local.set $anomaly (i32.add (local.get $anomaly) (local.get $first)))
     (if (local.get $imbalance) (then (local.set $imbalance (i32.add (local.get $imbalance) (local.get $first)))))
@@ -273,7 +308,14 @@
             (f64x2.mul (v128.load (i32.add (local.get $b2) (local.get $i))) (local.get $f))))
         (v128.store (i32.add (local.get $up) (local.get $i)) (local.get $next))
         (v128.store (i32.add (local.get $dp) (local.get $i)) (local.get $deep))
-        (local.set $a (f64x2.sub (local.get $next) (v128.load (i32.add (local.get $bl) (local.get $i)))))
+        ;; The year's mean upper-layer temperature, from the state at the year's start.
+        (local.set $mu
+          (f64x2.add
+            (f64x2.add
+              (f64x2.mul (v128.load (i32.add (local.get $m11) (local.get $i))) (local.get $x))
+              (f64x2.mul (v128.load (i32.add (local.get $m12) (local.get $i))) (local.get $y)))
+            (f64x2.mul (v128.load (i32.add (local.get $r1) (local.get $i))) (local.get $f))))
+        (local.set $a (f64x2.sub (local.get $mu) (v128.load (i32.add (local.get $bl) (local.get $i)))))
         (v128.store (i32.add (local.get $anomaly) (local.get $i)) (local.get $a))
         ;; A true lane of f64x2.gt is all ones, i.e. −1: subtracting it counts it.
         (local.set $count (i64x2.sub (local.get $count) (f64x2.gt (local.get $a) (local.get $low))))
@@ -292,10 +334,16 @@
                 (local.set $crossings (i32.add (local.get $crossings) (i32.const 1)))))))
         (if (local.get $imbalance)
           (then
+            (local.set $md
+              (f64x2.add
+                (f64x2.add
+                  (f64x2.mul (v128.load (i32.add (local.get $m21) (local.get $i))) (local.get $x))
+                  (f64x2.mul (v128.load (i32.add (local.get $m22) (local.get $i))) (local.get $y)))
+                (f64x2.mul (v128.load (i32.add (local.get $r2) (local.get $i))) (local.get $f))))
             (local.set $net
               (f64x2.sub
-                (f64x2.sub (local.get $f) (f64x2.mul (v128.load (i32.add (local.get $lambda) (local.get $i))) (local.get $next)))
-                (f64x2.mul (v128.load (i32.add (local.get $uptake) (local.get $i))) (f64x2.sub (local.get $next) (local.get $deep)))))
+                (f64x2.sub (local.get $f) (f64x2.mul (v128.load (i32.add (local.get $lambda) (local.get $i))) (local.get $mu)))
+                (f64x2.mul (v128.load (i32.add (local.get $uptake) (local.get $i))) (f64x2.sub (local.get $mu) (local.get $md)))))
             (v128.store (i32.add (local.get $imbalance) (local.get $i)) (local.get $net))
             (local.set $nmin (f64x2.pmin (local.get $nmin) (local.get $net)))
             (local.set $nmax (f64x2.pmax (local.get $nmax) (local.get $net)))))
@@ -321,7 +369,13 @@
             (f64.mul (f64.load (i32.add (local.get $b2) (local.get $i))) (local.get $sf))))
         (f64.store (i32.add (local.get $up) (local.get $i)) (local.get $snext))
         (f64.store (i32.add (local.get $dp) (local.get $i)) (local.get $sdeep))
-        (local.set $sa (f64.sub (local.get $snext) (f64.load (i32.add (local.get $bl) (local.get $i)))))
+        (local.set $smu
+          (f64.add
+            (f64.add
+              (f64.mul (f64.load (i32.add (local.get $m11) (local.get $i))) (local.get $sx))
+              (f64.mul (f64.load (i32.add (local.get $m12) (local.get $i))) (local.get $sy)))
+            (f64.mul (f64.load (i32.add (local.get $r1) (local.get $i))) (local.get $sf))))
+        (local.set $sa (f64.sub (local.get $smu) (f64.load (i32.add (local.get $bl) (local.get $i)))))
         (f64.store (i32.add (local.get $anomaly) (local.get $i)) (local.get $sa))
         ;; Into lane 0 only: lane 1 keeps its count and extremes.
         (if (f64.gt (local.get $sa) (local.get $lowest))
@@ -336,10 +390,16 @@
             (local.set $crossings (i32.add (local.get $crossings) (i32.const 1)))))
         (if (local.get $imbalance)
           (then
+            (local.set $smd
+              (f64.add
+                (f64.add
+                  (f64.mul (f64.load (i32.add (local.get $m21) (local.get $i))) (local.get $sx))
+                  (f64.mul (f64.load (i32.add (local.get $m22) (local.get $i))) (local.get $sy)))
+                (f64.mul (f64.load (i32.add (local.get $r2) (local.get $i))) (local.get $sf))))
             (local.set $sf
               (f64.sub
-                (f64.sub (local.get $sf) (f64.mul (f64.load (i32.add (local.get $lambda) (local.get $i))) (local.get $snext)))
-                (f64.mul (f64.load (i32.add (local.get $uptake) (local.get $i))) (f64.sub (local.get $snext) (local.get $sdeep)))))
+                (f64.sub (local.get $sf) (f64.mul (f64.load (i32.add (local.get $lambda) (local.get $i))) (local.get $smu)))
+                (f64.mul (f64.load (i32.add (local.get $uptake) (local.get $i))) (f64.sub (local.get $smu) (local.get $smd)))))
             (f64.store (i32.add (local.get $imbalance) (local.get $i)) (local.get $sf))
             (local.set $nmin (f64x2.replace_lane 0 (local.get $nmin)
               (select (local.get $sf) (f64x2.extract_lane 0 (local.get $nmin)) (f64.lt (local.get $sf) (f64x2.extract_lane 0 (local.get $nmin))))))

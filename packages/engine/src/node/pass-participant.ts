@@ -104,7 +104,7 @@ export class PassParticipant {
         const j = Atomics.add(control.yearClaims, s, 1);
         if (t0 + j >= t1) break;
         const t = t0 + j;
-        this.summariser.summarise(t, pathway.years, plan.state.slots[t % ring]!, weights, order.totalWeight, order.horizonsByYear[t]!);
+        this.summariser.summarise(order.pathway, t, pathway.years, plan.state.slots[t % ring]!, weights, order.totalWeight, order.horizonsByYear[t]!);
         addAndWake(control.summarised, t, 1);
         yield "claim";
       }

@@ -9,7 +9,12 @@ describe("runEnsembleParallel", () => {
     // and an odd member count split over 2 and 3 threads.
     const spec = baseSpec({
       members: 2_001,
-      pathways: [rampPathway("a"), rampPathway("b", 1800, 301)],
+      // "b" gives CO2 in ppm: its members step with a second set of propagators (λ from the
+      // expression's doubled-CO2 forcing), "a" with the sampled f2x's.
+      pathways: [
+        rampPathway("a"),
+        { ...rampPathway("b", 1800, 301), agents: { ...rampPathway("b", 1800, 301).agents, co2: { ppm: Array.from({ length: 301 }, (_, t) => 280 + 300 * (t / 300) ** 2) } } },
+      ],
       perils: [
         {
           id: "flood",
@@ -21,7 +26,11 @@ describe("runEnsembleParallel", () => {
           scaling: { kind: "per-kelvin", rate: { type: "normal", mean: 0.07, sd: 0.01 } },
         },
       ],
-      model: { ...baseSpec().model, constraint: { from: 2011, to: 2020, observed: 1.0, sd: 0.1 } },
+      model: {
+        ...baseSpec().model,
+        agents: { ...baseSpec().model.agents, co2: { scale: { type: "normal", mean: 1, sd: 0.1 } } },
+        constraint: { from: 2011, to: 2020, observed: 1.0, sd: 0.1, internalVariability: 0.21 },
+      },
     });
     const single = runEnsemble(spec);
     const two = await runEnsembleParallel(spec, { threads: 2 });

@@ -116,7 +116,7 @@ async function runWithPool(
     const pathways: PathwayResult[] = [];
     const perils: (PathwayPerilResult | null)[] = [];
     let implied: { ecs: PercentileSet; tcr: PercentileSet } | null = null;
-    const inputRanks = new Map<number, Float64Array>();
+    const inputOrders = new Map<number, Uint32Array>();
     const times = options.stageTimes;
     // Runs one pass on every thread; stage times are thread-seconds over threads.
     const everyThread = async (order: ToWorker, pass: Generator<PassPause, boolean>, meanwhile?: () => void) => {
@@ -156,7 +156,7 @@ async function runWithPool(
       const finishStart = performance.now();
       finishedYears += plan.pathways[p]!.years;
       control.summarised.fill(0);
-      pathways.push(finishPathway(spec, plan, p, weighting, inputRanks));
+      pathways.push(finishPathway(spec, plan, p, weighting, inputOrders));
       perils.push(pathwayPerils(spec, plan, p, weighting));
       if (p === 0) implied = impliedSensitivities(plan, spec.percentiles, weighting, tcr);
       if (times) times.finish += (performance.now() - finishStart) / 1000;

@@ -19,7 +19,7 @@ const flood: PerilProfile = {
   scaling: { kind: "per-kelvin", rate: { type: "fixed", value: 0.07 } },
 };
 
-/** AR6 SPM.6 10-year hot extreme, times per 10 years at 0/1/1.5/2/4 °C (CHECKS.md §8.3, [read-S]). */
+/** AR6 WGI SPM Figure SPM.6 10-year hot extreme, times per 10 years at 0/1/1.5/2/4 °C (read in a secondary reproduction of the figure). */
 const heat: PerilProfile = {
   id: "heat-south",
   name: "Heat, South Fen",
@@ -113,21 +113,21 @@ describe("applyPerilLens", () => {
     expect(curve.bands.p95![0]).toBeCloseTo(Math.pow(1.07 + 0.02 * 1.6448536, 2.5), 6);
   });
 
-  it("reproduces the AR6 SPM.6 hot-extreme frequencies when all members sit at a warming level [read-S]", () => {
-    // CHECKS.md §8.3 [read-S]: 2.8 / 4.1 / 5.6 / 9.4 times per 10 years at 1 / 1.5 / 2 / 4 °C.
+  it("reproduces the AR6 SPM.6 hot-extreme frequencies when all members sit at a warming level", () => {
+    // AR6 WGI SPM Figure SPM.6 (secondary reproduction): 2.8 / 4.1 / 5.6 / 9.4 times per 10 years at 1 / 1.5 / 2 / 4 °C.
     const levels = [1, 1.5, 2, 4];
     const expected = [2.8, 4.1, 5.6, 9.4];
     const result = lens({ profiles: [heat], horizons: [2030, 2050, 2070, 2100], warmingAtHorizons: levels.map((w) => constant(7, w)) });
     result.profiles[0]!.horizons.forEach((h, k) => {
       expect(h.multiplier.p50).toBeCloseTo(expected[k]!, 12);
-      // Return-period identity (JOB.md): today's 1-in-100 event becomes 1-in-(100 / m).
+      // Return-period identity (return period = 1 / annual frequency): today's 1-in-100 event becomes 1-in-(100 / m).
       expect(h.returnPeriods!["100"].p50).toBeCloseTo(100 / expected[k]!, 10);
       expect(h.returnPeriods!["200"].p50).toBeCloseTo(200 / expected[k]!, 10);
     });
   });
 
   it("projects matching portfolio rows: frequency tail losses move along the log-return-period line", () => {
-    // Table doubling frequency at 1 K: m = 2, so the new 1-in-100 loss is the old 1-in-200 loss (JOB.md identity).
+    // Table doubling frequency at 1 K: m = 2, so the new 1-in-100 loss is the old 1-in-200 loss (return period = 1 / annual frequency).
     const doubling: PerilProfile = {
       ...heat,
       scaling: { kind: "table", points: [{ warming: 0, multiplier: 1 }, { warming: 1, multiplier: 2 }], beyondTable: "hold" },
@@ -210,5 +210,64 @@ describe("assemblePerilResult", () => {
     expect(result.portfolioId).toBe("demo");
     expect(result.unmatchedRows).toEqual([{ region: "South Fen", peril: "wind" }]);
     expect(assemblePerilResult([flood], null, pathways).portfolioId).toBeNull();
+  });
+});
+
+describe("table profiles with return periods", () => {
+  const points = (heat.scaling as { points: { warming: number; multiplier: number }[] }).points;
+  /** AR6 WGI SPM Figure SPM.6 50-year hot extreme, times per 50 years at 0/1/1.5/2/4 °C (secondary reproductions of the figure). */
+  const fifty = [
+    { warming: 0, multiplier: 1 },
+    { warming: 1, multiplier: 4.8 },
+    { warming: 1.5, multiplier: 8.6 },
+    { warming: 2, multiplier: 13.9 },
+    { warming: 4, multiplier: 39.2 },
+  ];
+  const both: PerilProfile = {
+    ...heat,
+    scaling: { kind: "table", tables: [{ returnPeriod: 10, points }, { returnPeriod: 50, points: fifty }], beyondTable: "hold" },
+  };
+  const lens = (profile: PerilProfile, warming: number[], weights: number[] | null = null) =>
+    applyPerilLens({
+      pathwayId: "p",
+      seed: "s",
+      sampling: "monte-carlo",
+      profiles: [profile],
+      portfolio,
+      horizons: [2100],
+      warmingAtHorizons: [Float64Array.from(warming)],
+      weights: weights ? Float64Array.from(weights) : null,
+      percentiles: [50],
+    }).profiles[0]!;
+
+  it("reads a table saved without a return period as one 10-year table: same numbers as before, flagged", () => {
+    const legacy = lens(heat, [1, 2, 3]);
+    const stated = lens({ ...heat, scaling: { kind: "table", tables: [{ returnPeriod: 10, points }], beyondTable: "hold" } }, [1, 2, 3]);
+    expect(legacy.horizons).toEqual(stated.horizons);
+    expect(legacy.table).toMatchObject({ returnPeriods: [10], readOutside: [100, 200] });
+    expect(legacy.multiplierReturnPeriod).toBeNull();
+  });
+
+  it("uses the 50-year table for the 1-in-100 and 1-in-200 events when held beyond it, the 10-year table for AAL", () => {
+    const result = lens(both, [2]);
+    const h = result.horizons[0]!;
+    expect(h.multiplier.p50).toBe(5.6);
+    expect(h.tailMultipliers["100"].p50).toBe(13.9);
+    expect(h.returnPeriods!["100"].p50).toBeCloseTo(100 / 13.9, 12);
+    expect(result.multiplierReturnPeriod).toBe(10);
+    expect(result.table).toMatchObject({ returnPeriods: [10, 50], warmingRange: [0, 4], readOutside: [100, 200] });
+    const row = h.losses[0]!;
+    expect(row.aal.p50).toBeCloseTo(4 * 5.6, 12);
+    // 1-in-100 after scaling = baseline loss at 100 · 13.9 years (log-linear through 80 and 110).
+    expect(row.loss100.p50).toBeCloseTo(80 + 30 * Math.log2(13.9), 9);
+  });
+
+  it("reports the weighted share of members beyond the table's warming range", () => {
+    expect(lens(both, [1, 2, 4.5, 5]).horizons[0]!.beyondTable).toEqual({ below: 0, above: 0.5 });
+    // Weights 1, 1, 2, 0: above = 2 / 4.
+    expect(lens(both, [1, 2, 4.5, 5], [1, 1, 2, 0]).horizons[0]!.beyondTable).toEqual({ below: 0, above: 0.5 });
+    expect(lens(both, [1, 2, 4.5, 5], [1, 1, 0, 2]).horizons[0]!.beyondTable).toEqual({ below: 0, above: 0.5 });
+    expect(lens(both, [1, 2, 4.5, 5], [3, 1, 0, 0]).horizons[0]!.beyondTable).toEqual({ below: 0, above: 0 });
+    expect(lens(flood, [1, 5]).horizons[0]!.beyondTable).toBeNull();
   });
 });

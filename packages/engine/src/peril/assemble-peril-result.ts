@@ -1,4 +1,5 @@
 import { matchingRows } from "./apply-peril-lens.js";
+import { planPortfolioTotals } from "./portfolio-totals.js";
 import type { PathwayPerilResult, PerilProfile, PerilResult, Portfolio } from "./types.js";
 
 /**
@@ -16,5 +17,8 @@ export function assemblePerilResult(
 ): PerilResult {
   const matched = new Set(profiles.flatMap((p) => matchingRows(p, portfolio)));
   const unmatchedRows = (portfolio?.rows ?? []).filter((r) => !matched.has(r)).map((r) => ({ region: r.region, peril: r.peril }));
-  return { portfolioId: portfolio?.id ?? null, pathways, unmatchedRows };
+  const result: PerilResult = { portfolioId: portfolio?.id ?? null, pathways, unmatchedRows };
+  const plan = portfolio ? planPortfolioTotals(profiles, portfolio) : null;
+  if (plan && "refused" in plan) result.totalsRefused = plan.refused;
+  return result;
 }

@@ -2,7 +2,7 @@
  * Saturation vapour pressure over water and its Clausius–Clapeyron rate, from the Magnus
  * form e_s(T) = A · exp(b·T / (T + c)), T in °C, e_s in hPa. The rate
  * d ln e_s / dT = b·c / (T + c)² is the documented source of the common "about 7 % per K"
- * default for heavy-rainfall scaling (CHECKS.md §8.1; AR6 TS Box TS.6 and SPM B.2.4).
+ * default for heavy-rainfall scaling (Bolton 1980; AR6 WGI TS Box TS.6 and SPM B.2.4).
  *
  * Coefficients:
  * * Alduchov & Eskridge (1996), J. Appl. Meteor. 35(4), 601–609: A = 6.1094 hPa,

@@ -25,8 +25,8 @@ describe("projectRow", () => {
     expect(projectRow(row, "severity", 1.5)).toEqual({ aal: 18, loss100: 450, loss200: 630 });
   });
 
-  it("frequency: AAL scales by m and the 1-in-200 loss becomes the 1-in-100 loss when m = 2 (JOB.md identity)", () => {
-    // An event twice as likely goes from 1-in-200 to 1-in-100 (JOB.md), so its loss is now the 1-in-100 loss.
+  it("frequency: AAL scales by m and the 1-in-200 loss becomes the 1-in-100 loss when m = 2 (return period = 1 / annual frequency)", () => {
+    // An event twice as likely goes from 1-in-200 to 1-in-100 (return period = 1 / annual frequency), so its loss is now the 1-in-100 loss.
     const doubled = projectRow(row, "frequency", 2);
     expect(doubled.aal).toBe(24);
     expect(doubled.loss100).toBeCloseTo(420, 9);

@@ -4,7 +4,7 @@ export const BASELINE_RETURN_PERIODS = [100, 200] as const;
 /**
  * Return period of an event after its frequency is multiplied by `multiplier`: T / m.
  * An event r times as likely has r times the annual frequency, so a 1-in-T event becomes
- * 1-in-(T/r) (JOB.md: "a 1-in-100 event becomes about 1-in-(100/r)"). Return periods here
+ * 1-in-(T/r) (a 1-in-100 event becomes about 1-in-(100/r)). Return periods here
  * are reciprocal annual exceedance frequencies; for T ≥ 100 years they equal reciprocal
  * annual probabilities to within 0.5 %. Cost O(1).
  *

@@ -3,8 +3,8 @@ import { tableMultiplier, tableValue } from "./table-multiplier.js";
 
 /**
  * AR6 WGI SPM Figure SPM.6: a 10-year hot extreme of 1850–1900 happens 2.8, 4.1, 5.6 and 9.4
- * times per 10 years at 1, 1.5, 2 and 4 °C of global warming (CHECKS.md §8.3, flagged
- * [read-S]: secondary reproduction of the figure). 1 time per 10 years at 1850–1900 by the
+ * times per 10 years at 1, 1.5, 2 and 4 °C of global warming (read in a secondary
+ * reproduction of the figure, not the figure itself). 1 time per 10 years at 1850–1900 by the
  * event's definition.
  */
 const SPM6_HOT_10YR = [
@@ -27,7 +27,7 @@ describe("tableValue and tableMultiplier", () => {
       for (const p of points) expect(tableValue(points, rule, p.warming)).toBe(p.multiplier);
   });
 
-  it("reproduces the AR6 SPM.6 hot-extreme frequencies at their warming levels [read-S]", () => {
+  it("reproduces the AR6 SPM.6 hot-extreme frequencies at their warming levels", () => {
     // Baseline warming 0: the insurer's view is 1850–1900, so the table values are the multipliers.
     expect(tableMultiplier(SPM6_HOT_10YR, "hold", 1, 0)).toBe(2.8);
     expect(tableMultiplier(SPM6_HOT_10YR, "hold", 1.5, 0)).toBe(4.1);

@@ -11,7 +11,7 @@ function spearmanReference(x: Float64Array, y: Float64Array): number {
   return sampleRankCorrelation(Array.from(x), Array.from(y));
 }
 
-describe("imanConover", () => {
+describe("imanConover", { timeout: 60_000 }, () => {
   const n = 5000;
   const target = [
     [1, -0.3, 0.6],
@@ -27,13 +27,39 @@ describe("imanConover", () => {
   ];
   const correlated = imanConover(inputs, target, createRandom("ic-scores"));
 
-  it("achieves Spearman −0.3 and 0.6 within sampling error at n = 5000 (Iman & Conover 1982; CHECKS.md §7.6)", () => {
-    // CHECKS.md §7.6: the induced rank correlation approximately equals the target; the sd of a
-    // sample Spearman coefficient is about 1/√n = 0.014, so ±0.03 is generous.
-    expect(spearmanReference(correlated[0]!, correlated[1]!)).toBeCloseTo(-0.3, 1);
-    expect(Math.abs(spearmanReference(correlated[0]!, correlated[1]!) + 0.3)).toBeLessThan(0.03);
-    expect(Math.abs(spearmanReference(correlated[0]!, correlated[2]!) - 0.6)).toBeLessThan(0.03);
-    expect(Math.abs(spearmanReference(correlated[1]!, correlated[2]!))).toBeLessThan(0.03);
+  it("hits the requested Spearman −0.3, 0.6 and 0 within 3 run-to-run sd at n = 5000 (Iman & Conover 1982)", () => {
+    // The run-to-run sd of the achieved Spearman at n = 5000 is 0.0038–0.0043 (measured over
+    // 40 seeds; Iman–Conover removes the scores' chance correlation, so it is well below the
+    // 1/√n ≈ 0.014 of an independent sample). ±0.012 is about 3 sd: pairing normal scores at
+    // the rank target itself (0.582 for a requested 0.6, −0.287 for −0.3) fails it.
+    expect(Math.abs(spearmanReference(correlated[0]!, correlated[1]!) + 0.3)).toBeLessThan(0.012);
+    expect(Math.abs(spearmanReference(correlated[0]!, correlated[2]!) - 0.6)).toBeLessThan(0.012);
+    expect(Math.abs(spearmanReference(correlated[1]!, correlated[2]!))).toBeLessThan(0.012);
+  });
+
+  it("is unbiased: over 20 seeds the mean achieved Spearman is within 4 standard errors of the target", () => {
+    // Normal scores are paired at Pearson 2·sin(π·ρ/6), the inverse of ρ_s = (6/π)·arcsin(ρ/2)
+    // for a bivariate normal (K. Pearson 1907, from memory). The standard error of the mean is
+    // estimated from the 20 runs themselves (about 0.0009 here), so the old bias of −0.018
+    // (about 20 standard errors) cannot pass, and an unbiased method fails 4 SE by chance
+    // with probability ~1e-4.
+    const seeds = 20;
+    const achieved: number[][] = [[], [], []];
+    for (let k = 0; k < seeds; k++) {
+      const u = latinHypercube(n, 3, createRandom(`ic-bias-${k}`));
+      const c = imanConover(u, target, createRandom(`ic-bias-scores-${k}`));
+      achieved[0]!.push(spearmanReference(c[0]!, c[1]!));
+      achieved[1]!.push(spearmanReference(c[0]!, c[2]!));
+      achieved[2]!.push(spearmanReference(c[1]!, c[2]!));
+    }
+    const requested = [-0.3, 0.6, 0];
+    achieved.forEach((values, i) => {
+      const mean = values.reduce((a, b) => a + b, 0) / seeds;
+      const sd = Math.sqrt(values.reduce((a, b) => a + (b - mean) ** 2, 0) / (seeds - 1));
+      const standardError = sd / Math.sqrt(seeds);
+      expect(standardError).toBeLessThan(0.0015);
+      expect(Math.abs(mean - requested[i]!)).toBeLessThan(4 * standardError);
+    });
   });
 
   it("preserves every marginal exactly (sorted columns unchanged) and leaves the inputs alone", () => {

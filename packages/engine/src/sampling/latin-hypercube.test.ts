@@ -15,8 +15,8 @@ function isPermutationOfStrata(column: Float64Array): boolean {
 }
 
 describe("latinHypercube", () => {
-  it.each([1, 2, 7, 1000, 100_000])("puts exactly one value in each stratum per column, n = %i (CHECKS.md §7.5)", (n) => {
-    // CHECKS.md §7.5 [read-P, SciPy qmc.LatinHypercube docs]: floor(n·u) of every column is a
+  it.each([1, 2, 7, 1000, 100_000])("puts exactly one value in each stratum per column, n = %i (McKay et al. 1979)", (n) => {
+    // McKay, Beckman & Conover 1979; SciPy scipy.stats.qmc.LatinHypercube docs: floor(n·u) of every column is a
     // permutation of 0 … n−1.
     const columns = latinHypercube(n, 3, createRandom(`lhs-${n}`));
     expect(columns).toHaveLength(3);

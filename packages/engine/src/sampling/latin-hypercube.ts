@@ -12,7 +12,7 @@ import { shuffleInPlace } from "./shuffle.js";
  * 1 that rounding would push the value into the next stratum (or onto 1) is redrawn.
  * Cost O(members·dimensions) time, one Float64Array per column.
  * Reference: M. D. McKay, R. J. Beckman, W. J. Conover (1979), Technometrics 21(2), 239–245;
- * CHECKS.md §7.5.
+ * SciPy scipy.stats.qmc.LatinHypercube docs.
  *
  * Example: `latinHypercube(4, 1, createRandom("s"))[0]` holds one value in each of
  * [0, .25), [.25, .5), [.5, .75), [.75, 1), in random order.

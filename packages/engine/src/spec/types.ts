@@ -1,7 +1,7 @@
 /**
  * The run spec and result as the engine sees them. They mirror the shared contracts
  * (packages/contracts/src/engine) field for field, but the engine library imports nothing
- * of ours, so the shapes are restated here. DESIGN.md "Engine contract" fixes the names.
+ * of ours, so the shapes are restated here. The contracts schema fixes the names.
  */
 import type { Distribution } from "../distributions/types.js";
 import type { PerilProfile, PerilResult, Portfolio } from "../peril/types.js";
@@ -60,7 +60,14 @@ export interface ObservationalConstraint {
   from: number;
   to: number;
   observed: number;
+  /** Observational uncertainty of the window's mean warming, 1 sd (K). */
   sd: number;
+  /**
+   * Internal variability of the window's mean warming, 1 sd (K): the part of the observed
+   * warming no forced response explains. The likelihood uses √(sd² + internalVariability²).
+   * Default DEFAULT_INTERNAL_VARIABILITY (spec/constraint-defaults.ts).
+   */
+  internalVariability: number;
 }
 
 export interface ModelSpec {
@@ -101,7 +108,7 @@ export type RunSpecInput = Omit<RunSpec, "baseline" | "percentiles" | "threshold
   model: Omit<ModelSpec, "agents" | "correlations" | "constraint" | "forcingExpression"> & {
     agents?: ModelSpec["agents"];
     correlations?: Correlation[];
-    constraint?: ObservationalConstraint | null;
+    constraint?: (Omit<ObservationalConstraint, "internalVariability"> & { internalVariability?: number }) | null;
     forcingExpression?: ForcingExpressionName;
   };
 };
@@ -125,7 +132,14 @@ export interface HorizonResult {
 export interface SensitivityEntry {
   input: string;
   horizon: number;
+  /** Spearman's rank correlation of the input with the horizon warming (weighted under a constraint). */
   index: number;
+  /**
+   * The input's first-order share (0–1) of the variance of the horizon warming (Sobol main
+   * effect from the ensemble itself; weighted under a constraint). Optional in the type
+   * because results of engine versions before 0.3.0 lack it; this engine always sets it.
+   */
+  varianceShare?: number;
 }
 
 export interface ConstraintResult {
@@ -133,6 +147,9 @@ export interface ConstraintResult {
   to: number;
   observed: number;
   sd: number;
+  /** Internal variability used (1 sd, K) and the likelihood's total sd √(sd² + internalVariability²). */
+  internalVariability: number;
+  likelihoodSd: number;
   effectiveMembers: number;
   windowWarmingPrior: PercentileSet;
   windowWarmingPosterior: PercentileSet;

@@ -9,7 +9,7 @@
  * n = 2e6). Tail sums are accumulated from the small end for accuracy.
  * Cost O(√(n·p·(1−p)) + 1) time and memory (≈ 13,000 counts at n = 2e6, p = 0.5).
  * Reference: standard recurrence of binomial probabilities (e.g. Johnson, Kemp & Kotz,
- * Univariate Discrete Distributions, 3rd ed., §3.2).
+ * Univariate Discrete Distributions, 3rd ed., Section 3.2).
  */
 export interface BinomialWindow {
   /** Smallest count held in the window. */

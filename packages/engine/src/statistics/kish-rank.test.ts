@@ -5,8 +5,8 @@ import { kishEffectiveSize } from "./kish.js";
 import { ranks, spearman } from "./rank.js";
 
 describe("kishEffectiveSize", () => {
-  it("meets the checks of CHECKS.md §7.4 (Kish 1965)", () => {
-    // CHECKS.md §7.4 [computed]: equal weights → n; one non-zero weight → 1; (1,2,3,4) → 100/30.
+  it("meets the closed-form checks of Kish (1965)", () => {
+    // (Σw)²/Σw², computed by hand: equal weights → n; one non-zero weight → 1; (1,2,3,4) → 100/30.
     expect(kishEffectiveSize(new Float64Array(250).fill(0.37))).toBeCloseTo(250, 10);
     expect(kishEffectiveSize([0, 0, 4.2, 0])).toBe(1);
     expect(kishEffectiveSize([1, 2, 3, 4])).toBeCloseTo(100 / 30, 14);

@@ -4,7 +4,7 @@
  * Equal weights give n, a single non-zero weight gives 1. The weights are scaled by their
  * maximum first so the squares cannot overflow or underflow. Weights must be finite and
  * ≥ 0 with a positive sum. Cost O(n).
- * Reference: L. Kish (1965), Survey Sampling, Wiley; CHECKS.md §7.4.
+ * Reference: L. Kish (1965), Survey Sampling, Wiley.
  *
  * Example: `kishEffectiveSize([1, 2, 3, 4])` → 3.3333333333333335 (= 100/30).
  */

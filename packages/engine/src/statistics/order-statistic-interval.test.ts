@@ -6,7 +6,8 @@ const SCIPY_CDF_9800 = 0.02221251036473548;
 const SCIPY_SF_10200 = 0.022208913236922253;
 
 describe("orderStatisticInterval", () => {
-  // CHECKS.md §7.3 [formula: Conover / David & Nagaraja; numbers computed]: near-symmetric
+  // Formula: Conover, Practical Nonparametric Statistics; David & Nagaraja, Order Statistics
+  // (citation details from memory); numbers computed with the binomial CDF: near-symmetric
   // rank pairs and their coverage B(s−1; n, p) − B(r−1; n, p).
   const table: Array<[number, number, number, number, number]> = [
     [100, 0.5, 40, 61, 0.9648],
@@ -15,7 +16,7 @@ describe("orderStatisticInterval", () => {
     [1000, 0.95, 936, 964, 0.9581],
     [10000, 0.05, 458, 544, 0.9515],
   ];
-  it.each(table)("n = %i, p = %f → ranks (%i, %i), coverage %f (CHECKS.md §7.3)", (n, p, lower, upper, coverage) => {
+  it.each(table)("n = %i, p = %f → ranks (%i, %i), coverage %f (binomial CDF, computed)", (n, p, lower, upper, coverage) => {
     const interval = orderStatisticInterval(n, p, 0.95);
     expect(interval).not.toBeNull();
     expect(interval!.lower).toBe(lower);
@@ -65,7 +66,7 @@ describe("binomialWindow", () => {
   });
 
   it("matches SciPy binom.cdf in the tails for n = 10^6, p = 0.01 (12 digits)", () => {
-    // Reference: scipy.stats.binom.cdf(9800, 1e6, 0.01) and binom.sf(10200, 1e6, 0.01) [computed].
+    // Reference: scipy.stats.binom.cdf(9800, 1e6, 0.01) and binom.sf(10200, 1e6, 0.01), computed with SciPy.
     const window = binomialWindow(1_000_000, 0.01);
     expect(lowerTailAt(window, 9800)).toBeCloseTo(SCIPY_CDF_9800, 12);
     expect(upperTailAt(window, 10200)).toBeCloseTo(SCIPY_SF_10200, 12);

@@ -14,8 +14,8 @@ import { binomialWindow, lowerTailAt, upperTailAt } from "./binomial-window.js";
  * The binomial CDF is exact (recurrence over the mass window, see binomial-window.ts), not a
  * normal approximation, and cheap up to n = 2e6.
  * Cost O(√(n·p·(1−p)) + 1).
- * Reference: Conover, Practical Nonparametric Statistics (3rd ed.), §3.2; David & Nagaraja,
- * Order Statistics (3rd ed.), §7.1; CHECKS.md §7.3.
+ * Reference: Conover, Practical Nonparametric Statistics (3rd ed.), Section 3.2; David & Nagaraja,
+ * Order Statistics (3rd ed.), Section 7.1.
  *
  * Example: `orderStatisticInterval(100, 0.5)` → { lower: 40, upper: 61, coverage: 0.9648 (4 d.p.) }.
  */

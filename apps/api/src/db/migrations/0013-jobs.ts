@@ -2,7 +2,7 @@ import { DataTypes } from "sequelize";
 import type { MigrationModule } from "../migrate.js";
 
 /**
- * The durable queue (STYLE.md example 5): one row per job. A worker claims a row with a
+ * The durable queue as a table: one row per job. A worker claims a row with a
  * guarded update (status 'queued' -> 'running' only if still queued), beats a heartbeat
  * while it works, and finishes the row in the same transaction as the job's results.
  */

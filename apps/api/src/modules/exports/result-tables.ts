@@ -1,5 +1,6 @@
 import type { PathwayResult, ResultTable, RunResult } from "@plumeline/contracts";
 import { perilTable } from "../peril-profiles/peril-result-tables.js";
+import { portfolioTotalsTable } from "../peril-profiles/portfolio-totals-table.js";
 
 export type TableCell = string | number | null;
 export interface Table {
@@ -83,10 +84,17 @@ function horizonsTable(result: RunResult): Table {
   };
 }
 
+/**
+ * The sensitivity budget: per pathway, horizon and input, the first-order share (0–1) of the
+ * variance of warming (`variance_share`; empty for results of engines before 0.3.0) and the
+ * rank correlation with warming (`rank_correlation`, Spearman; both weighted under a
+ * constraint). The shares of one horizon add up to at most 1; the rest is interactions.
+ */
 function sensitivityTable(result: RunResult): Table {
   const rows: TableCell[][] = [];
-  for (const p of result.pathways) for (const s of p.sensitivity) rows.push([p.id, p.name, s.horizon, s.input, s.index]);
-  return { columns: ["pathway_id", "pathway_name", "horizon", "input", "index"], rows };
+  for (const p of result.pathways)
+    for (const s of p.sensitivity) rows.push([p.id, p.name, s.horizon, s.input, s.varianceShare ?? null, s.index]);
+  return { columns: ["pathway_id", "pathway_name", "horizon", "input", "variance_share", "rank_correlation"], rows };
 }
 
 /**
@@ -113,5 +121,7 @@ export function resultTable(result: RunResult, table: ResultTable): Table {
     case "peril-return-periods":
     case "peril-losses":
       return perilTable(result, table);
+    case "portfolio-totals":
+      return portfolioTotalsTable(result);
   }
 }

@@ -2,6 +2,8 @@ import ExcelJS from "exceljs";
 import {
   CLIMATE_INPUT_UNITS,
   PERIL_RULES,
+  PORTFOLIO_TOTAL_NOTES,
+  RANGE_SHAPE_LABELS,
   RESULT_CAUTIONS,
   type Distribution,
   type ModelSpec,
@@ -9,7 +11,11 @@ import {
   type RunResult,
 } from "@plumeline/contracts";
 import { PERIL_TABLE_SHEETS } from "../peril-profiles/peril-result-tables.js";
+import { perilWarnings } from "../peril-profiles/peril-warnings.js";
+import { columnNumberFormat } from "./column-number-format.js";
+import { PROBABILITY_FORMAT, probabilityNumberFormat } from "./probability-number-format.js";
 import { neutraliseFormula } from "./neutralise-formula.js";
+import { withFixedEntryDates } from "./stable-zip.js";
 import { resultTable, type Table, type TableCell } from "./result-tables.js";
 
 /** What the manifest sheet states about the run (all of it read from the database, not the request). */
@@ -52,14 +58,31 @@ function safe(cell: TableCell): TableCell {
   return typeof cell === "string" ? neutraliseFormula(cell) : cell;
 }
 
-function addTableSheet(workbook: ExcelJS.Workbook, name: string, table: Table, note: string): void {
-  const sheet = workbook.addWorksheet(name);
+/**
+ * A result table on its own sheet: an italic note, the bold header, the rows; the two top
+ * rows frozen; each column as wide as its header or widest text (within 10–40 characters);
+ * every numeric cell formatted by its column (columnNumberFormat; a probability by its value too,
+ * probabilityNumberFormat), the value kept in full.
+ */
+function addTableSheet(workbook: ExcelJS.Workbook, name: string, table: Table, note: string, quantity: "money" | "physical" = "physical"): ExcelJS.Worksheet {
+  const sheet = workbook.addWorksheet(name, { views: [{ state: "frozen", ySplit: 2 }] });
   sheet.addRow([note]).font = { italic: true };
   const header = sheet.addRow(table.columns.map(safe));
   header.font = BOLD;
   for (const row of table.rows) sheet.addRow(row.map(safe));
-  sheet.views = [{ state: "frozen", ySplit: 2 }];
-  table.columns.forEach((_, i) => (sheet.getColumn(i + 1).width = i < 2 ? 22 : 14));
+  table.columns.forEach((column, i) => {
+    const numFmt = columnNumberFormat(column, quantity);
+    let widest = column.length;
+    sheet.getColumn(i + 1).eachCell({ includeEmpty: false }, (cell, rowNumber) => {
+      if (rowNumber <= 2) return;
+      if (typeof cell.value === "number") {
+        cell.numFmt = numFmt === PROBABILITY_FORMAT ? probabilityNumberFormat(cell.value) : numFmt;
+        widest = Math.max(widest, numFmt.includes("#,##") ? 14 : 9);
+      } else if (typeof cell.value === "string") widest = Math.max(widest, cell.value.length);
+    });
+    sheet.getColumn(i + 1).width = Math.min(40, Math.max(10, widest + 2));
+  });
+  return sheet;
 }
 
 function describeDistribution(d: Distribution): string {
@@ -77,7 +100,7 @@ function describeDistribution(d: Distribution): string {
     case "truncated-normal":
       return `truncated normal, mean ${d.mean}, sd ${d.sd}, within ${d.min} to ${d.max}`;
     case "range":
-      return `median ${d.p50}, ${d.coverage === 90 ? "5–95" : "17–83"} % range ${d.low} to ${d.high}, fitted ${d.shape}`;
+      return `median ${d.p50}, ${d.coverage === 90 ? "5th–95th" : "17th–83rd"} percentiles ${d.low} to ${d.high}, ${RANGE_SHAPE_LABELS[d.shape]}`;
   }
 }
 
@@ -117,7 +140,15 @@ function addManifest(workbook: ExcelJS.Workbook, m: WorkbookManifest, result: Ru
     ["Exported by", m.exportedBy],
     ["Exported at", m.exportedAt],
   ];
-  for (const [k, v] of pairs) sheet.addRow([k, safe(v)]).getCell(1).font = BOLD;
+  for (const [k, v] of pairs) {
+    const row = sheet.addRow([k, safe(v)]);
+    row.getCell(1).font = BOLD;
+    // Counts read as counts (10,000), effective members to one decimal; left-aligned like the text beside them.
+    if (typeof v === "number") {
+      row.getCell(2).numFmt = k === "Effective members" ? "#,##0.0" : "#,##0";
+      row.getCell(2).alignment = { horizontal: "left" };
+    }
+  }
   sheet.addRow([]);
   sheet.addRow(["Pathways"]).font = BOLD;
   sheet.addRow(["id", "name", "source", "vintage", "years", "checksum (SHA-256)"]).font = BOLD;
@@ -155,7 +186,7 @@ function addInputs(workbook: ExcelJS.Workbook, model: ModelSpec): void {
   sheet.addRow([]);
   sheet.addRow(["Rank correlations (Iman–Conover)"]).font = BOLD;
   if (model.correlations.length === 0) sheet.addRow(["none"]);
-  for (const c of model.correlations) sheet.addRow([`${c.between[0]} ~ ${c.between[1]}`, c.rank]);
+  for (const c of model.correlations) sheet.addRow([`${c.between[0]} ~ ${c.between[1]}`, c.rank]).getCell(2).numFmt = "0.00";
   sheet.addRow([]);
   sheet.addRow(["Observational constraint"]).font = BOLD;
   const c = model.constraint;
@@ -168,10 +199,28 @@ const TABLE_SHEETS: Array<[ResultTable, string, string]> = [
   ["horizons", "Horizons", "At each horizon: temperature percentiles (K), probability of exceeding each threshold, committed warming (K), total forcing (W m-2)"],
   ["exceedance", "Exceedance", "Probability (0–1) that the year's temperature anomaly exceeds each threshold"],
   ["crossing", "Crossing years", "Percentiles of the first year each threshold is crossed; share_never = members that never cross within the pathway"],
-  ["sensitivity", "Sensitivity", "Which inputs drive the spread at each horizon (index as reported by the engine)"],
+  ["sensitivity", "Sensitivity", "What drives the spread at each horizon: variance_share = the input's first-order share of the variance of warming (the shares of one horizon add up to at most 100 %; the rest is interactions between inputs); rank_correlation = Spearman rank correlation with warming (sign = direction). Both weighted under an observational constraint"],
   ["forcing", "Forcing", "Total effective radiative forcing (W m-2), percentiles by year"],
   ["imbalance", "Imbalance", "Top-of-atmosphere imbalance (W m-2), percentiles by year"],
 ];
+
+/**
+ * The portfolio totals sheet: the table (money as #,##0 in each row's currency), then what
+ * the totals are and are not — member-by-member sums, no diversification credit, currencies
+ * kept apart — so the caveat travels with the numbers.
+ */
+function addPortfolioTotals(workbook: ExcelJS.Workbook, result: RunResult, tag: string): void {
+  const sheet = addTableSheet(
+    workbook,
+    "Portfolio totals",
+    resultTable(result, "portfolio-totals"),
+    `${tag}Portfolio totals per pathway, horizon and currency: each member's projected figures summed over all rows, then percentiles; change_pN = pN − today's total (baseline)`,
+    "money",
+  );
+  sheet.addRow([]);
+  for (const line of PORTFOLIO_TOTAL_NOTES) sheet.addRow([neutraliseFormula(line)]).font = { italic: true };
+  if (result.perils?.totalsRefused) sheet.addRow([neutraliseFormula(`No totals: ${result.perils.totalsRefused}.`)]);
+}
 
 /** The run's workbook: Manifest first, result tables, Inputs, Cautions. Returns the .xlsx bytes. */
 export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunResult, model: ModelSpec): Promise<Buffer> {
@@ -184,6 +233,7 @@ export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunRe
   const tag = manifest.exploratory ? "EXPLORATORY — " : "";
   for (const [table, name, note] of TABLE_SHEETS) addTableSheet(workbook, name, resultTable(result, table), `${tag}${note}`);
   if (result.perils) for (const [table, name, note] of PERIL_TABLE_SHEETS) addTableSheet(workbook, name, resultTable(result, table), `${tag}${note}`);
+  if (result.perils?.portfolioId) addPortfolioTotals(workbook, result, tag);
   addInputs(workbook, model);
   const cautions = workbook.addWorksheet("Cautions");
   cautions.getColumn(1).width = 120;
@@ -195,6 +245,12 @@ export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunRe
     cautions.addRow([]);
     cautions.addRow(["Peril lens — how the multipliers were applied"]).font = BOLD;
     for (const rule of PERIL_RULES) cautions.addRow([neutraliseFormula(rule)]);
+    const warnings = perilWarnings(result);
+    if (warnings.length > 0) {
+      cautions.addRow([]);
+      cautions.addRow(["Peril lens — warnings for this run"]).font = BOLD;
+      for (const w of warnings) cautions.addRow([neutraliseFormula(w)]);
+    }
   }
-  return Buffer.from(await workbook.xlsx.writeBuffer());
+  return withFixedEntryDates(Buffer.from(await workbook.xlsx.writeBuffer()), new Date(manifest.exportedAt));
 }

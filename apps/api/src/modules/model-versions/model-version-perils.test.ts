@@ -63,7 +63,7 @@ describe("peril profiles pinned by a model version", () => {
 
 describe("the database refuses re-pinning the peril profiles of an approved version", () => {
   // Checks the database itself (raw SQL, no service in the way) against the governance rule in
-  // /work/shared/DESIGN.md lines 23-24: only approved versions may feed filings, so what was
+  // product (README: "only approved assumptions feed filings"): only approved versions may feed filings, so what was
   // approved - pinned peril profiles included - must stay what was approved (migration 0052).
   const rawRepin = (id: string, ids: string[]) =>
     t.ctx.sequelize

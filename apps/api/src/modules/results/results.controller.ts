@@ -1,10 +1,19 @@
 import type { Request, Response } from "express";
 import { contextOf } from "../../middleware/request-context.js";
-import { getRunWithResult } from "./results.service.js";
+import { decompressResult } from "./result-document.js";
+import { getStoredResult } from "./results.service.js";
 
 export const resultsController = {
+  /**
+   * The stored gzip document goes out as it is to clients that accept gzip (every browser):
+   * no parse, no re-serialise, no re-compress on the server thread. Others get plain JSON.
+   */
   async result(req: Request, res: Response) {
-    const { result } = await getRunWithResult(contextOf(req), (req.params as { id: string }).id);
-    res.json(result);
+    const { document } = await getStoredResult(contextOf(req), (req.params as { id: string }).id);
+    res.vary("Accept-Encoding");
+    if (req.acceptsEncodings("gzip") === "gzip") {
+      res.type("application/json").setHeader("Content-Encoding", "gzip");
+      res.send(document);
+    } else res.json(decompressResult(document));
   },
 };

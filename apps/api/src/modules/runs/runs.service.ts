@@ -13,6 +13,7 @@ import type { ModelVersionModel } from "../model-versions/model-version.model.js
 import { lockPathways } from "../pathways/pathways.service.js";
 import { resolvePerilLens } from "../peril-profiles/resolve-peril-lens.js";
 import { buildRunSpec } from "./build-run-spec.js";
+import { assertRunQueueRoom } from "./queued-run-limit.js";
 import type { RunModel } from "./run.model.js";
 
 /**
@@ -27,16 +28,22 @@ const iso = (d: Date | null | undefined) => (d ? d.toISOString() : null);
 /** Columns a list needs: the spec (all pathway series) stays out, so the queue screen stays fast. */
 const SUMMARY_ATTRIBUTES = [
   "id", "name", "status", "progress", "exploratory", "modelVersionId", "pathwayIds", "members", "seed", "sampling",
-  "perilProfileIds", "portfolioId", "createdBy", "createdAt", "startedAt", "finishedAt", "error",
+  "perilProfileIds", "portfolioId", "createdBy", "createdAt", "startedAt", "finishedAt", "error", "jobId",
 ];
 
 async function present(ctx: Pick<Ctx, "models">, rows: RunModel[]): Promise<RunSummary[]> {
   const versionIds = [...new Set(rows.map((r) => r.modelVersionId))];
   const userIds = [...new Set(rows.map((r) => r.createdBy))];
-  const [versions, users] = await Promise.all([
+  // Only a run still in progress can be waiting for its worker to confirm a cancel.
+  const activeJobIds = rows.filter((r) => (r.status === "queued" || r.status === "running") && r.jobId).map((r) => r.jobId!);
+  const [versions, users, cancelling] = await Promise.all([
     ctx.models.ModelVersion.findAll({ where: { id: { [Op.in]: versionIds } }, attributes: ["id", "name", "versionNumber", "status"] }),
     ctx.models.User.findAll({ where: { id: { [Op.in]: userIds } }, attributes: ["id", "name"] }),
+    activeJobIds.length === 0
+      ? Promise.resolve([])
+      : ctx.models.Job.findAll({ where: { id: { [Op.in]: activeJobIds }, cancelRequested: true }, attributes: ["id"] }),
   ]);
+  const cancelRequested = new Set(cancelling.map((j) => j.id));
   const versionById = new Map(versions.map((v) => [v.id, v]));
   const nameById = new Map(users.map((u) => [u.id, u.name]));
   return rows.map((r) => {
@@ -60,6 +67,7 @@ async function present(ctx: Pick<Ctx, "models">, rows: RunModel[]): Promise<RunS
       startedAt: iso(r.startedAt),
       finishedAt: iso(r.finishedAt),
       error: r.error ?? null,
+      cancelRequested: (r.status === "queued" || r.status === "running") && r.jobId !== null && cancelRequested.has(r.jobId),
     };
   });
 }
@@ -107,6 +115,7 @@ export async function getRun(ctx: Ctx, id: string): Promise<Run> {
 export async function createRun(ctx: Ctx, user: RequestUser, body: CreateRunBody): Promise<RunSummary> {
   const { inputHash } = await loadEngine();
   const run = await ctx.sequelize.transaction(async (transaction) => {
+    await assertRunQueueRoom(ctx, user.id, transaction);
     const errors: ErrorDetail[] = [];
     const version: ModelVersionModel | null = await ctx.models.ModelVersion.findByPk(body.modelVersionId, { transaction });
     if (!version) errors.push({ path: "modelVersionId", message: `model version ${body.modelVersionId} does not exist` });
@@ -171,28 +180,38 @@ export async function createRun(ctx: Ctx, user: RequestUser, body: CreateRunBody
   return summary!;
 }
 
-/** Owner cancels: a queued run stops at once; a running one at its next simulated year. */
+/**
+ * Owner cancels: a queued run stops at once; a running one at its next simulated year, once its
+ * worker confirms. Idempotent: cancelling a run whose cancel is already under way, or that
+ * ended cancelled, answers its current state and writes nothing (no second audit row).
+ */
 export async function cancelRun(ctx: Ctx, user: RequestUser, id: string): Promise<RunSummary> {
   const run = await findRun(ctx, id);
   if (run.createdBy !== user.id) throw forbidden("Only the person who started a run can cancel it.", "not_owner");
-  if (run.status !== "queued" && run.status !== "running")
+  if (run.status === "succeeded" || run.status === "failed")
     throw conflict(`Run "${run.name}" is already ${run.status}.`, "run_finished");
-  await ctx.sequelize.transaction(async (transaction) => {
-    const outcome = run.jobId ? await createSqlJobQueue(ctx.models.Job).requestCancel(run.jobId, transaction) : "finished";
-    if (outcome === "cancelled") await run.update({ status: "cancelled", finishedAt: new Date() }, { transaction });
-    if (outcome === "finished") throw conflict(`Run "${run.name}" finished meanwhile.`, "run_finished");
-    await recordAudit(
-      ctx,
-      {
-        actorId: user.id,
-        action: outcome === "cancelled" ? "run.cancelled" : "run.cancel-requested",
-        entityType: "run",
-        entityId: id,
-        summary: outcome === "cancelled" ? `Run "${run.name}" cancelled before it started.` : `Cancellation of running run "${run.name}" requested.`,
-      },
-      transaction,
-    );
-  });
+  if (run.status === "queued" || run.status === "running") {
+    const outcome = await ctx.sequelize.transaction(async (transaction) => {
+      const outcome = run.jobId ? await createSqlJobQueue(ctx.models.Job).requestCancel(run.jobId, transaction) : "finished";
+      if (outcome === "finished") throw conflict(`Run "${run.name}" finished meanwhile.`, "run_finished");
+      if (outcome === "already") return outcome;
+      if (outcome === "cancelled") await run.update({ status: "cancelled", finishedAt: new Date() }, { transaction });
+      await recordAudit(
+        ctx,
+        {
+          actorId: user.id,
+          action: outcome === "cancelled" ? "run.cancelled" : "run.cancel-requested",
+          entityType: "run",
+          entityId: id,
+          summary: outcome === "cancelled" ? `Run "${run.name}" cancelled before it started.` : `Cancellation of running run "${run.name}" requested.`,
+        },
+        transaction,
+      );
+      return outcome;
+    });
+    // QUEUE=bullmq: the worker may be on another machine; the transport passes the request on through Redis.
+    if (outcome !== "already" && run.jobId) jobSignal.emit("cancel-requested", run.jobId);
+  }
   await run.reload({ attributes: SUMMARY_ATTRIBUTES });
   const [summary] = await present(ctx, [run]);
   return summary!;

@@ -105,13 +105,17 @@ describe("running a job", () => {
     const direct = runEnsemble(spec);
     expect(result.body.resultHash).toBe(direct.resultHash);
     expect(run.body.manifest).toMatchObject({ resultHash: direct.resultHash, inputHash: direct.inputHash, engineVersion: direct.engineVersion });
-    // Per-year rows are queryable by run, pathway, variable and year and equal the JSON.
-    const p = result.body.pathways[1];
-    const i = p.years.indexOf(2100);
-    const row = await t.ctx.models.RunResultRow.findOne({ where: { runId, pathwayId: pathwayIds[1], variable: "temperature", year: 2100, statistic: "p50" } });
-    expect(row?.value).toBe(p.temperature.p50[i]);
-    const exceed = await t.ctx.models.RunResultRow.findOne({ where: { runId, pathwayId: pathwayIds[1], variable: "exceedance", year: 2100, statistic: "2" } });
-    expect(exceed?.value).toBe(p.exceedance["2"][i]);
+    // Stored as one gzip document: served as those bytes to a client that accepts gzip, and
+    // equal to the engine's own result once inflated (supertest inflates gzip answers).
+    const raw = await actuary.get(`/api/runs/${runId}/result`).set("Accept-Encoding", "gzip");
+    expect(raw.headers["content-encoding"]).toBe("gzip");
+    expect(raw.body).toEqual(JSON.parse(JSON.stringify(direct)));
+    const plain = await actuary.get(`/api/runs/${runId}/result`).set("Accept-Encoding", "identity");
+    expect(plain.headers["content-encoding"]).toBeUndefined();
+    expect(plain.body.resultHash).toBe(direct.resultHash);
+    const stored = (await t.ctx.models.RunResult.findByPk(runId))!;
+    expect(stored.encoding).toBe("gzip-json");
+    expect(stored.document.length).toBeLessThan(stored.jsonBytes / 2);
     expect((await t.ctx.models.Job.findOne({ where: { id: (await t.ctx.models.Run.findByPk(runId))!.jobId! } }))?.status).toBe("succeeded");
   });
 
@@ -141,7 +145,11 @@ describe("running a job", () => {
     expect((await actuary.post(`/api/runs/${res.body.id}/cancel`)).status).toBe(403);
     const cancelled = await analyst.post(`/api/runs/${res.body.id}/cancel`);
     expect(cancelled.body.status).toBe("cancelled");
-    expect((await analyst.post(`/api/runs/${res.body.id}/cancel`)).status).toBe(409);
+    // A second cancel is a no-op: same answer, no second audit row.
+    const again = await analyst.post(`/api/runs/${res.body.id}/cancel`);
+    expect(again.status).toBe(200);
+    expect(again.body).toMatchObject({ status: "cancelled", cancelRequested: false });
+    expect(await t.ctx.models.AuditEvent.count({ where: { action: "run.cancelled", entityId: res.body.id } })).toBe(1);
     expect(await step()).toBe("idle");
   });
 
@@ -149,9 +157,14 @@ describe("running a job", () => {
     const res = await analyst.post("/api/runs").send(runBody({ members: 100_000 }));
     const running = step();
     await waitFor(async () => (await t.ctx.models.Run.findByPk(res.body.id))?.status === "running");
-    const cancel = await analyst.post(`/api/runs/${res.body.id}/cancel`);
-    expect(cancel.status).toBe(200);
+    // Two cancels at once (a double click): both answer "cancelling", one audit row.
+    const [cancel, twice] = await Promise.all([analyst.post(`/api/runs/${res.body.id}/cancel`), analyst.post(`/api/runs/${res.body.id}/cancel`)]);
+    expect([cancel.status, twice.status]).toEqual([200, 200]);
+    for (const answer of [cancel, twice]) expect(answer.body).toMatchObject({ status: "running", cancelRequested: true });
     expect(await running).toBe("cancelled");
+    const after = await analyst.post(`/api/runs/${res.body.id}/cancel`);
+    expect(after.body).toMatchObject({ status: "cancelled", cancelRequested: false });
+    expect(await t.ctx.models.AuditEvent.count({ where: { action: "run.cancel-requested", entityId: res.body.id } })).toBe(1);
     expect((await t.ctx.models.Run.findByPk(res.body.id))?.status).toBe("cancelled");
     expect(await t.ctx.models.RunResult.count({ where: { runId: res.body.id } })).toBe(0);
   });

@@ -1,5 +1,6 @@
 import { useMemo } from "react";
 import { scaleLinear } from "d3";
+import { formatProbability, formatProbabilityTenths } from "@/lib/format";
 import { AxisBottom, AxisLeft } from "./axes";
 import { ChartFrame, DataTable } from "./chart-frame";
 import { DEFAULT_MARGINS, innerSize } from "./margins";
@@ -53,7 +54,8 @@ export function crossingBinsPerYear(years: number[], shares: number[]): Crossing
   return years.flatMap((year, i) => (shares[i] ? [{ from: year, to: year + 1, share: shares[i] }] : []));
 }
 
-const percent = (share: number) => `${(share * 100).toFixed(share > 0 && share < 0.01 ? 1 : 0)} %`;
+/** Whole percents, tenths below 1 % ("< 0.1 %" for a vanishing share, never scientific notation). */
+const percent = (share: number) => (share > 0 && share < 0.01 ? formatProbabilityTenths(share) : formatProbability(share));
 
 /**
  * First-crossing years as a histogram (members in % per year), and beside it, apart and on
@@ -90,7 +92,7 @@ export function CrossingHistogram({ title, crossing, unit = "K", height = 240 }:
           columns={["Percentile", "First-crossing year"]}
           rows={[
             ...Object.entries(crossing.percentiles).map(([k, v]) => [`${k.slice(1)} %`, v === null ? "not crossed" : String(v)]),
-            [`never crosses${by} (share of members)`, `${(crossing.never * 100).toFixed(1)} %`],
+            [`never crosses${by} (share of members)`, formatProbabilityTenths(crossing.never)],
           ]}
         />
       }

@@ -1,5 +1,6 @@
 import { useMemo } from "react";
 import { line, scaleLinear } from "d3";
+import { formatProbabilityTenths } from "@/lib/format";
 import { AxisBottom, AxisLeft } from "./axes";
 import { ChartFrame, DataTable } from "./chart-frame";
 import { DEFAULT_MARGINS, innerSize } from "./margins";
@@ -50,8 +51,8 @@ export function ExceedanceChart({
       table={
         <DataTable
           caption={title}
-          columns={["Year", ...sorted.map((c) => `> ${c.threshold} ${unit} (%)`)]}
-          rows={idx.filter((k) => years[k]! % 10 === 0).map((k) => [years[k]!, ...sorted.map((c) => (c.probability[k]! * 100).toFixed(1))])}
+          columns={["Year", ...sorted.map((c) => `Chance > ${c.threshold} ${unit}`)]}
+          rows={idx.filter((k) => years[k]! % 10 === 0).map((k) => [years[k]!, ...sorted.map((c) => formatProbabilityTenths(c.probability[k]))])}
         />
       }
     >

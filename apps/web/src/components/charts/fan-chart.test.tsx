@@ -66,8 +66,8 @@ describe("FanChart", () => {
     expect(status).toHaveTextContent("2000");
     // 2000: p50 = 1, 17–83 = 0.70–1.35, 5–95 = 0.40–1.80 (fixture arithmetic)
     expect(status).toHaveTextContent("median 1.00 K");
-    expect(status).toHaveTextContent("17–83 0.70–1.35");
-    expect(status).toHaveTextContent("5–95 0.40–1.80");
+    expect(status).toHaveTextContent("17th–83rd 0.70–1.35");
+    expect(status).toHaveTextContent("5th–95th 0.40–1.80");
   });
 
   it("marks the observed window and offers the numbers as a table", () => {
@@ -119,7 +119,7 @@ describe("FanChart", () => {
     // 2100 (i = 10): median 1 + 0.2 × 10 = 3.00, 17–83 2.70–3.35, 5–95 2.40–3.80 (fixture arithmetic)
     expect(status).toHaveTextContent("2100");
     expect(status).toHaveTextContent("median 3.00 K");
-    expect(status).toHaveTextContent("5–95 2.40–3.80");
+    expect(status).toHaveTextContent("5th–95th 2.40–3.80");
   });
 });
 

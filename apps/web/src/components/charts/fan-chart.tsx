@@ -1,6 +1,8 @@
 import { useMemo, useState, type KeyboardEvent, type PointerEvent } from "react";
 import { area, extent, line, max, min, scaleLinear } from "d3";
 import { AxisBottom, AxisLeft } from "./axes";
+import { BandKey } from "./band-key";
+import { BAND_LABELS } from "./band-labels";
 import { ChartFrame, DataTable } from "./chart-frame";
 import { DEFAULT_MARGINS, innerSize } from "./margins";
 import { FanReadout } from "./fan-readout";
@@ -76,7 +78,7 @@ export function fanYDomain(series: FanSeries[], from = -Infinity, to = Infinity)
 }
 
 /**
- * Fan chart: per series, a light 5–95 % band, a stronger 17–83 % band and the solid median,
+ * Fan chart: per series, a light 5th–95th percentile band, a stronger 17th–83rd band and the solid median,
  * over years. Hover or arrow keys read out the year's percentiles; legend buttons toggle
  * series; an optional shaded window marks the observed period used by a constraint.
  */
@@ -183,7 +185,7 @@ export function FanChart({
   return (
     <ChartFrame
       title={title}
-      description={description ?? "Median line, 17–83 % (likely) and 5–95 % (very likely) bands. Hover or use arrow keys to read a year."}
+      description={description ?? `Median line, ${BAND_LABELS.inner} and ${BAND_LABELS.outer} bands. Hover or use arrow keys to read a year.`}
       table={table}
     >
       {series.length > 1 && (
@@ -209,6 +211,7 @@ export function FanChart({
           ))}
         </div>
       )}
+      <BandKey />
       <FanReadout year={readYear} pinned={hoverYear !== null} rows={readout} unit={unit} digits={digits} seriesCount={visible.length} />
       <div ref={ref} className="relative w-full">
         <svg width={width} height={height} role="img" aria-label={`${title}: ${yLabel} against year`} className="block overflow-visible">

@@ -1,3 +1,4 @@
+import { BAND_SHORT_LABELS } from "./band-labels";
 import type { FanSeries } from "./fan-chart";
 
 export interface FanReadoutRow {
@@ -51,10 +52,10 @@ export function FanReadout({
               median <span className="text-text">{f(values[2]!)}</span> {unit}
             </span>
             <span className="num text-muted">
-              17–83 <span className="text-text">{f(values[1]!)}–{f(values[3]!)}</span>
+              {BAND_SHORT_LABELS.inner} <span className="text-text">{f(values[1]!)}–{f(values[3]!)}</span>
             </span>
             <span className="num text-muted">
-              5–95 <span className="text-text">{f(values[0]!)}–{f(values[4]!)}</span>
+              {BAND_SHORT_LABELS.outer} <span className="text-text">{f(values[0]!)}–{f(values[4]!)}</span>
             </span>
           </div>
         ))}

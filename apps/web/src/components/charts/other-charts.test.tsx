@@ -1,4 +1,5 @@
-import { render } from "@testing-library/react";
+import { render, screen, within } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
 import { describe, expect, it } from "vitest";
 import { pathPoints, tickMap } from "@/testing/svg-geometry";
 import { CrossingHistogram, crossingBins, crossingBinsPerYear } from "./crossing-histogram";
@@ -19,6 +20,17 @@ describe("ExceedanceChart", () => {
     // d3-path rounds coordinates to 3 decimals
     expect(pts.map((p) => p[1])).toEqual([y(0), y(25), y(50)].map((v) => expect.closeTo(v, 2)));
     expect(container.textContent).toContain("Probability of exceeding (%)");
+  });
+
+  it("tables a vanishing weighted chance as < 0.1 %, never in scientific notation", async () => {
+    const years = [2000, 2010, 2020];
+    render(<ExceedanceChart title="Exceedance" years={years} curves={[{ threshold: 2, probability: [5e-109, 0.123456, 1 - 1e-9] }]} />);
+    await userEvent.click(screen.getByRole("button", { name: "Show table" }));
+    const table = screen.getByRole("table");
+    expect(within(table).getAllByRole("columnheader").map((c) => c.textContent)).toEqual(["Year", "Chance > 2 K"]);
+    const cells = within(table).getAllByRole("cell").map((c) => c.textContent);
+    expect(cells).toEqual(["2000", "< 0.1 %", "2010", "12.3 %", "2020", "> 99.9 %"]);
+    expect(table.textContent).not.toMatch(/\de-\d/i);
   });
 });
 

@@ -1,6 +1,6 @@
 import { cx } from "./cx";
 
-/** Loud, hatched mark for results made with an unapproved model version (DESIGN.md: never for filing). */
+/** Loud, hatched mark for results made with an unapproved model version (exploratory: never for filing). */
 export function ExploratoryStamp({ size = "md", className }: { size?: "sm" | "md" | "lg"; className?: string }) {
   return (
     <span

@@ -2,7 +2,7 @@ import { useState } from "react";
 import { RESULT_CAUTIONS } from "@plumeline/contracts";
 import { cx } from "./cx";
 
-/** The cautions (DESIGN.md, JOB.md) come from the contracts, so screens and exports say the same words. */
+/** The cautions come from the contracts, so screens and exports say the same words. */
 export const CAUTIONS = RESULT_CAUTIONS;
 
 export function Cautions({ className, defaultOpen = false }: { className?: string; defaultOpen?: boolean }) {

@@ -15,7 +15,7 @@ export function rampPathway(id = "ramp", startYear = 1750, years = 351): RunSpec
   };
 }
 
-/** Climate of CHECKS.md §5.3 (C = 7.3, C0 = 106, λ = 1.13, γ = 0.73, ε = 1) with F2x = 3.71. */
+/** Illustrative CMIP5-mean-like climate (C = 7.3, C0 = 106, λ = 1.13, γ = 0.73, ε = 1; Geoffroy et al. 2013a means, from memory) with F2x = 3.71. */
 export function fixedClimate(): RunSpec["model"]["climate"] {
   return {
     ecs: fixed(3.71 / 1.13),
@@ -27,7 +27,7 @@ export function fixedClimate(): RunSpec["model"]["climate"] {
   };
 }
 
-/** An uncertain climate like the W1 workload's (bench/W1.md). */
+/** An uncertain climate like the W1 workload's (bench-reference/README.md). */
 export function uncertainClimate(): RunSpec["model"]["climate"] {
   return {
     ecs: { type: "lognormal", median: 3, logSd: 0.3 },

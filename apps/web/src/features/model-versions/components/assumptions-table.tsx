@@ -1,14 +1,15 @@
-import { CLIMATE_INPUTS, CLIMATE_INPUT_UNITS, FORCING_AGENTS, type Distribution, type ModelSpec } from "@plumeline/contracts";
+import { CLIMATE_INPUTS, CLIMATE_INPUT_UNITS, FORCING_AGENTS, RANGE_SHAPE_LABELS, type Distribution, type ModelSpec } from "@plumeline/contracts";
 import { Table, Td, Th } from "@/components/ui/table";
 import { formatFixed } from "@/lib/format";
 import { inputLabel, SCALE_FACTOR_UNIT } from "@/lib/input-labels";
-import { percentileValues } from "../lib/distribution-math";
+import { percentileValues } from "../lib/preview-percentiles";
 import { DISTRIBUTION_TYPE_LABELS } from "../lib/distribution-fields";
 
+/** Parameters as "key value" pairs; a range's shape by its full name (a split, two-piece law). */
 function describeParameters(d: Distribution): string {
   const { type: _type, ...params } = d;
   return Object.entries(params)
-    .map(([k, v]) => `${k} ${v}`)
+    .map(([k, v]) => (d.type === "range" && k === "shape" ? `shape ${RANGE_SHAPE_LABELS[d.shape]}` : `${k} ${v}`))
     .join(", ");
 }
 

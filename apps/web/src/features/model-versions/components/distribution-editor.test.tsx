@@ -29,10 +29,19 @@ describe("DistributionEditor", () => {
 
   it("enters an assessed range and reproduces its ends at 5 and 95 %", async () => {
     render(<DistributionEditor id="ecs" label="ECS" unit="K" value={{ type: "normal", mean: 3, sd: 1 }} onChange={() => {}} />);
-    await userEvent.click(screen.getByRole("button", { name: "AR6: 3 K, very likely 2–5 K" }));
+    await userEvent.click(screen.getByRole("button", { name: "AR6: 3 K, 5th–95th pct 2–5 K" }));
     const cells = within(screen.getByRole("table", { name: /percentiles/ })).getAllByRole("cell").map((c) => c.textContent);
-    // A range fit reproduces its published points (AR6 WGI SPM A.4.4: 3 K, 2–5 K very likely).
+    // A range fit reproduces its published points (IPCC 2021, AR6 WG1 SPM A.4.4: 3 K, “very likely range” 2–5 K).
     expect([cells[0], cells[2], cells[4]]).toEqual(["2.000", "3.000", "5.000"]);
     expect(screen.getByLabelText("Range covers")).toHaveValue("90");
+  });
+
+  it("names a range's fit for what it is: a split (two-piece) law, not a fitted lognormal", async () => {
+    render(<DistributionEditor id="ecs" label="ECS" unit="K" value={{ type: "range", p50: 3, low: 2, high: 5, coverage: 90, shape: "lognormal" }} onChange={() => {}} />);
+    const shape = screen.getByLabelText("Fitted as");
+    expect(within(shape).getAllByRole("option").map((o) => o.textContent)).toEqual(["split (two-piece) lognormal", "split (two-piece) normal"]);
+    // Two halves with their own spreads meeting at the median (the two-piece form reviewed by
+    // Wallis 2014, Statistical Science 29(1)); the seeded ECS range uses the lognormal one.
+    expect(screen.getByRole("option", { name: "split (two-piece) lognormal" })).toHaveProperty("selected", true);
   });
 });

@@ -1,9 +1,10 @@
 import { useMemo, useState } from "react";
-import { distributionSchema, type Distribution, type DistributionType } from "@plumeline/contracts";
+import { distributionSchema, RANGE_SHAPE_LABELS, type Distribution, type DistributionType } from "@plumeline/contracts";
 import { DensityPreview } from "@/components/charts/density-preview";
 import { Input, Select } from "@/components/ui/field";
 import { cx } from "@/components/ui/cx";
-import { densityCurve, percentileValues } from "../lib/distribution-math";
+import { densityCurve } from "@plumeline/engine";
+import { percentileValues } from "../lib/preview-percentiles";
 import { convertDistribution, DISTRIBUTION_FIELDS, DISTRIBUTION_TYPE_LABELS } from "../lib/distribution-fields";
 import { PRESETS } from "../lib/presets";
 
@@ -126,13 +127,13 @@ export function DistributionEditor({
                   <option value="66">66 % (17–83)</option>
                 </Select>
               </div>
-              <div className="flex w-32 flex-col gap-0.5">
+              <div className="flex w-52 flex-col gap-0.5">
                 <label htmlFor={`${id}-shape`} className="text-xs text-muted">
                   Fitted as
                 </label>
                 <Select id={`${id}-shape`} value={draft.shape ?? "lognormal"} disabled={readOnly} className="py-1 text-xs" onChange={(e) => update(type, { ...draft, shape: e.target.value })}>
-                  <option value="lognormal">lognormal</option>
-                  <option value="split-normal">split-normal</option>
+                  <option value="lognormal">{RANGE_SHAPE_LABELS.lognormal}</option>
+                  <option value="split-normal">{RANGE_SHAPE_LABELS["split-normal"]}</option>
                 </Select>
                 {errors.shape && <span className="text-[11px] text-danger">{errors.shape}</span>}
               </div>
@@ -175,7 +176,7 @@ export function DistributionEditor({
         {shown.type === "fixed" ? (
           <div className="flex h-24 items-center justify-center rounded bg-surface-2 text-xs text-muted">Fixed at {shown.value} {unit}: no spread</div>
         ) : (
-          <DensityPreview xs={preview.curve.xs} density={preview.curve.density} markers={preview.values} unit={unit} label={label} width={288} />
+          <DensityPreview xs={preview.curve.x} density={preview.curve.density} markers={preview.values} unit={unit} label={label} width={288} />
         )}
       </div>
     </div>

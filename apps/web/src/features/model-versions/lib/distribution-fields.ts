@@ -1,5 +1,5 @@
 import type { Distribution, DistributionType } from "@plumeline/contracts";
-import { quantileOf } from "./distribution-math";
+import { quantileOf } from "@plumeline/engine";
 
 /** Parameters each distribution type takes, in the order the editor shows them. */
 export const DISTRIBUTION_FIELDS: Record<DistributionType, Array<{ key: string; label: string }>> = {

@@ -4,7 +4,7 @@ import type { ImpactSide, ModelVersionImpact } from "@plumeline/contracts";
  * Monte Carlo precision of an impact preview, for the reader of the side-by-side tables.
  *
  * Medians: half the width of the engine's distribution-free 95 % interval for p50 (order
- * statistics, CHECKS.md §7.3), per horizon. A shift counts as beyond preview noise when it is
+ * statistics; Conover, Practical Nonparametric Statistics, 3rd ed., Section 3.2), per horizon. A shift counts as beyond preview noise when it is
  * larger than the two half-widths combined in quadrature — conservative, because both
  * ensembles share the seed and so much of their sampling error cancels in the difference.
  *

@@ -1,15 +1,15 @@
 import type { ModelDraft } from "../components/model-editor";
 
 /**
- * Where a version with no parent starts: assessed ranges with their sources (CHECKS.md §3.3
- * and the values the demo seed cites). Ocean-layer spreads are illustrative.
+ * Where a version with no parent starts: assessed ranges with their sources (IPCC AR6
+ * WGI SPM A.4.4, Ch. 7 Section 7.3.2.1; the values the demo seed cites). Ocean-layer spreads are illustrative.
  */
 export const STARTING_DRAFT: ModelDraft = {
   name: "",
   parentId: null,
   notes: [
     "ECS: median 3 K, 5–95 % 2–5 K (IPCC AR6 WGI SPM A.4.4), lognormal fit.",
-    "F2x: 3.93 W m-2 with ±0.47 read as 5–95 % (AR6 WGI §7.3.2.1).",
+    "F2x: 3.93 W m-2 with ±0.47 read as 5–95 % (AR6 WGI Ch. 7 Section 7.3.2.1).",
     "Two-layer ocean parameters: CMIP5 multi-model means after Geoffroy et al. 2013a,b (illustrative spreads).",
   ].join("\n"),
   model: {

@@ -51,7 +51,7 @@ export function ExportPanel({
       <div>
         <p className="mb-1 text-xs font-medium uppercase tracking-wider text-muted">CSV tables</p>
         <div className="flex flex-wrap gap-1.5">
-          {RESULT_TABLES.filter((t) => hasPerils || !t.startsWith("peril")).map((t) => (
+          {RESULT_TABLES.filter((t) => hasPerils || !(t.startsWith("peril") || t === "portfolio-totals")).map((t) => (
             <a key={t} href={tableCsvUrl(runId, t)} download className={buttonClass("secondary", "sm")} onClick={() => later(`${t}.csv`)}>
               {t}.csv
             </a>

@@ -5,13 +5,14 @@ import { ExceedanceChart } from "@/components/charts/exceedance-chart";
 import { CrossingHistogram } from "@/components/charts/crossing-histogram";
 import { ForcingBreakdownChart } from "@/components/charts/forcing-breakdown-chart";
 import { SensitivityBars } from "@/components/charts/sensitivity-bars";
+import { VarianceShareBars } from "@/components/charts/variance-share-bars";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { Cautions } from "@/components/ui/cautions";
 import { PanelErrorBoundary } from "@/components/ui/panel-error-boundary";
 import { Segmented } from "@/components/ui/segmented";
 import { EmptyState } from "@/components/ui/states";
 import { RESULT_ARRIVED_MARK } from "../api/get-run-result";
-import { hasFanPercentiles, toAgentForcing, toCrossing, toExceedanceCurves, toFocusedFanSeries, toSensitivityBars } from "../lib/result-adapters";
+import { hasFanPercentiles, toAgentForcing, toCrossing, toExceedanceCurves, toFocusedFanSeries, toSensitivityBars, toVarianceShareRows } from "../lib/result-adapters";
 import { ConstraintPanel } from "./constraint-panel";
 import { HorizonTable } from "./horizon-table";
 
@@ -64,6 +65,7 @@ export function ResultView({ run, result }: { run: Run; result: RunResult }) {
   const fanReady = result.pathways.every((p) => hasFanPercentiles(p.temperature));
   const h = pathway.horizons.find((x) => x.year === horizon) ?? pathway.horizons.at(-1);
   const forcing = h ? toAgentForcing(h) : null;
+  const shares = toVarianceShareRows(pathway, horizon);
   const baselineLabel = `${baseline[0]}–${baseline[1]}`;
 
   return (
@@ -91,7 +93,7 @@ export function ResultView({ run, result }: { run: Run; result: RunResult }) {
                 series={toFocusedFanSeries(result.pathways, pathway.id)}
                 description={
                   result.pathways.length > 1
-                    ? `Filled: ${pathway.name} (in focus), median line with 17–83 % (likely) and 5–95 % (very likely) bands. Outlined: the other pathways — solid edges 17–83 %, dotted edges 5–95 %, dashed median. Hover or use arrow keys to read a year.`
+                    ? `Filled: ${pathway.name} (in focus), median line with 17th–83rd and 5th–95th percentile bands. Outlined: the other pathways — solid edges 17th–83rd, dotted edges 5th–95th percentile, dashed median. Hover or use arrow keys to read a year.`
                     : undefined
                 }
                 yLabel={`Warming above ${baselineLabel} (K)`}
@@ -158,8 +160,13 @@ export function ResultView({ run, result }: { run: Run; result: RunResult }) {
         <Card>
           <CardBody>
             <PanelErrorBoundary resetKey={`${pathway.id}-${horizon}-s`}>
-              {toSensitivityBars(pathway, horizon).length > 0 ? (
-                <SensitivityBars title={`Sensitivity budget in ${horizon} — ${pathway.name}`} horizon={horizon} bars={toSensitivityBars(pathway, horizon)} />
+              {shares ? (
+                <VarianceShareBars title={`What drives the spread in ${horizon} — ${pathway.name}`} horizon={horizon} rows={shares} />
+              ) : toSensitivityBars(pathway, horizon).length > 0 ? (
+                <>
+                  <SensitivityBars title={`What drives the spread in ${horizon} — ${pathway.name}`} horizon={horizon} bars={toSensitivityBars(pathway, horizon)} />
+                  <p className="mt-2 text-xs text-muted">This result predates variance shares (engine before 0.3.0): rank correlations only. Run it again for each input's share of the variance.</p>
+                </>
               ) : (
                 <EmptyState title="No sensitivity budget at this horizon" />
               )}

@@ -1,6 +1,7 @@
 import type { PathwayResult } from "@plumeline/contracts";
 import { describe, expect, it } from "vitest";
-import { toCrossing, toFocusedFanSeries } from "./result-adapters";
+import { runResultFixture } from "@/testing/result-fixture";
+import { toCrossing, toFocusedFanSeries, toVarianceShareRows } from "./result-adapters";
 
 const years = [2030, 2031, 2032, 2033];
 const pathway = (extra: Partial<PathwayResult> = {}): PathwayResult => ({
@@ -65,5 +66,23 @@ describe("toFocusedFanSeries", () => {
 
   it("fills a lone pathway", () => {
     expect(toFocusedFanSeries(three.slice(0, 1), "low")[0]!.treatment).toBe("filled");
+  });
+});
+
+describe("toVarianceShareRows", () => {
+  it("pairs each input's variance share with its rank correlation at the horizon", () => {
+    const p = runResultFixture().pathways[0]!;
+    expect(toVarianceShareRows(p, 2100)).toEqual([
+      { input: "ecs", label: "ECS", share: 0.55, rankCorrelation: 0.8 },
+      { input: "aerosol-cloud", label: "Aerosol–cloud scale", share: 0.2, rankCorrelation: -0.4 },
+      { input: "f2x", label: "F2x", share: 0.05, rankCorrelation: 0.1 },
+    ]);
+  });
+
+  it("gives null for a result without variance shares (older engines), so the page shows correlations only", () => {
+    const p = runResultFixture().pathways[0]!;
+    const old = { ...p, sensitivity: p.sensitivity.map(({ input, horizon, index }) => ({ input, horizon, index })) };
+    expect(toVarianceShareRows(old, 2100)).toBeNull();
+    expect(toVarianceShareRows(p, 1999)).toBeNull();
   });
 });

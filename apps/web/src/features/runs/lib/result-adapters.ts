@@ -4,6 +4,7 @@ import type { FanSeries } from "@/components/charts/fan-chart";
 import { crossingBins, crossingBinsPerYear, type CrossingDistribution } from "@/components/charts/crossing-histogram";
 import type { ExceedanceCurve } from "@/components/charts/exceedance-chart";
 import type { SensitivityBar } from "@/components/charts/sensitivity-bars";
+import type { VarianceShareRow } from "@/components/charts/variance-share-bars";
 import { inputLabel } from "@/lib/input-labels";
 
 /**
@@ -69,6 +70,16 @@ export function toAgentForcing(h: HorizonResult): { agents: AgentForcing[]; tota
 
 export function toSensitivityBars(p: PathwayResult, horizon: number): SensitivityBar[] {
   return p.sensitivity.filter((s) => s.horizon === horizon).map((s) => ({ input: s.input, label: inputLabel(s.input), index: s.index }));
+}
+
+/**
+ * The variance budget at a horizon, or null when the result predates variance shares (engines
+ * before 0.3.0 gave rank correlations only) — then the page falls back to the correlations.
+ */
+export function toVarianceShareRows(p: PathwayResult, horizon: number): VarianceShareRow[] | null {
+  const entries = p.sensitivity.filter((s) => s.horizon === horizon);
+  if (entries.length === 0 || entries.some((s) => s.varianceShare === undefined)) return null;
+  return entries.map((s) => ({ input: s.input, label: inputLabel(s.input), share: s.varianceShare!, rankCorrelation: s.index }));
 }
 
 /** Sorted percentile keys of a set: ["p5", "p17", "p50", …]. */
