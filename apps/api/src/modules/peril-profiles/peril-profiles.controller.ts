@@ -40,6 +40,6 @@ export const perilProfilesController = {
   },
   preview(req: Request, res: Response) {
     const body = req.body as PerilCurvePreviewBody;
-    res.json(perilCurve(body.profile, (body.range ?? curveRangeSchema.parse({})) as CurveRange));
+    res.json(perilCurve(body.profile as Parameters<typeof perilCurve>[0], (body.range ?? curveRangeSchema.parse({})) as CurveRange));
   },
 };
