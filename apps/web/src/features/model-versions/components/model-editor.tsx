@@ -1,4 +1,4 @@
-import { useState, type SubmitEvent } from "react";
+import { useReducer, type SubmitEvent } from "react";
 import {
   AGENT_LABELS,
   CLIMATE_INPUTS,
@@ -8,10 +8,7 @@ import {
   createModelVersionBodySchema,
   formatPath,
   type CreateModelVersionBody,
-  type Distribution,
   type ForcingAgent,
-  type ModelSpec,
-  type ModelVersionDefaults,
 } from "@plumeline/contracts";
 import { Button } from "@/components/ui/button";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
@@ -21,16 +18,9 @@ import { CLIMATE_INPUT_LABELS, inputLabel, SCALE_FACTOR_UNIT } from "@/lib/input
 import { DistributionEditor } from "./distribution-editor";
 import { PinnedPerilProfilesPicker, type PinnableProfile } from "./pinned-peril-profiles";
 import { parseNumbers } from "@/lib/parse-numbers";
+import { initialModelDraftForm, modelDraftReducer, NEW_AGENT_SCALE, type ModelDraft } from "../lib/model-draft-form";
 
-export interface ModelDraft {
-  name: string;
-  notes: string;
-  parentId: string | null;
-  model: ModelSpec;
-  defaults: ModelVersionDefaults;
-  /** Peril profiles the version pins (runs that name none use these). */
-  perilProfileIds?: string[];
-}
+export type { ModelDraft } from "../lib/model-draft-form";
 
 const EXPRESSION_LABELS: Record<string, string> = {
   ar6: "AR6 refit (IPCC AR6 WGI Ch. 7)",
@@ -60,28 +50,10 @@ export function ModelEditor({
   /** Profiles that may be pinned (the picker shows once the list is known; the pins are always sent). */
   perilProfiles?: readonly PinnableProfile[];
 }) {
-  const [name, setName] = useState(initial.name);
-  const [notes, setNotes] = useState(initial.notes);
-  const [climate, setClimate] = useState<Record<string, Distribution | null>>({ ...initial.model.climate });
-  const [agents, setAgents] = useState<Partial<Record<ForcingAgent, Distribution | null>>>(
-    Object.fromEntries(Object.entries(initial.model.agents).map(([a, v]) => [a, v?.scale ?? null])),
-  );
-  const [correlations, setCorrelations] = useState(initial.model.correlations.map((c) => ({ a: c.between[0], b: c.between[1], rank: String(c.rank) })));
-  const [constraintOn, setConstraintOn] = useState(initial.model.constraint !== null);
-  const [constraint, setConstraint] = useState(() => {
-    const c = initial.model.constraint ?? { from: 2011, to: 2020, observed: 1.09, sd: 0.076 };
-    return { from: String(c.from), to: String(c.to), observed: String(c.observed), sd: String(c.sd) };
-  });
-  const [expression, setExpression] = useState(initial.model.forcingExpression);
-  const [defaults, setDefaults] = useState({
-    percentiles: initial.defaults.percentiles.join(", "),
-    thresholds: initial.defaults.thresholds.join(", "),
-    horizons: initial.defaults.horizons.join(", "),
-    baseline: initial.defaults.baseline.join(", "),
-  });
-  const [perilProfileIds, setPerilProfileIds] = useState<string[]>(initial.perilProfileIds ?? []);
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const [addAgent, setAddAgent] = useState<ForcingAgent | "">("");
+  // One reducer holds the whole form (lib/model-draft-form.ts); the fields below read from it.
+  const [form, dispatch] = useReducer(modelDraftReducer, initial, initialModelDraftForm);
+  const { name, notes, climate, agents, correlations, constraintOn, constraint, expression, defaults, perilProfileIds, errors } = form;
+  const addAgent = form.agentToAdd;
   const inputs = [...CLIMATE_INPUTS, ...FORCING_AGENTS];
 
   function submit(e: SubmitEvent<HTMLFormElement>) {
@@ -111,12 +83,12 @@ export function ModelEditor({
       if (!parsed.success) {
         for (const i of parsed.error.issues) next[formatPath(i.path.filter((p): p is string | number => typeof p !== "symbol"))] ??= i.message;
       } else {
-        setErrors({});
+        dispatch({ type: "errors", errors: {} });
         onSave(body as CreateModelVersionBody);
         return;
       }
     }
-    setErrors(next);
+    dispatch({ type: "errors", errors: next });
   }
 
   const err = (path: string) => errors[path];
@@ -128,11 +100,11 @@ export function ModelEditor({
         <CardHeader title="About this version" />
         <CardBody className="grid gap-4 lg:grid-cols-2">
           <Field label="Name" error={err("name")}>
-            {(p) => <Input {...p} value={name} onChange={(e) => setName(e.target.value)} maxLength={120} />}
+            {(p) => <Input {...p} value={name} onChange={(e) => dispatch({ type: "name", value: e.target.value })} maxLength={120} />}
           </Field>
           <Field label="Concentration-to-forcing expression" hint="Used for pathways given as CO2/CH4/N2O concentrations.">
             {(p) => (
-              <Select {...p} value={expression} onChange={(e) => setExpression(e.target.value as typeof expression)}>
+              <Select {...p} value={expression} onChange={(e) => dispatch({ type: "expression", value: e.target.value as typeof expression })}>
                 {FORCING_EXPRESSIONS.map((x) => (
                   <option key={x} value={x}>
                     {EXPRESSION_LABELS[x] ?? x}
@@ -142,7 +114,7 @@ export function ModelEditor({
             )}
           </Field>
           <Field label="Notes: sources and justification" error={err("notes")} className="lg:col-span-2" hint="Cite where every assumption comes from; reviewers read this.">
-            {(p) => <Textarea {...p} value={notes} onChange={(e) => setNotes(e.target.value)} rows={5} />}
+            {(p) => <Textarea {...p} value={notes} onChange={(e) => dispatch({ type: "notes", value: e.target.value })} rows={5} />}
           </Field>
         </CardBody>
       </Card>
@@ -157,7 +129,7 @@ export function ModelEditor({
               label={CLIMATE_INPUT_LABELS[k]}
               unit={CLIMATE_INPUT_UNITS[k]}
               value={initial.model.climate[k]}
-              onChange={(d) => setClimate((c) => ({ ...c, [k]: d }))}
+              onChange={(d) => dispatch({ type: "climate", input: k, distribution: d })}
             />
           ))}
         </CardBody>
@@ -172,18 +144,13 @@ export function ModelEditor({
                 id={a}
                 label={`${AGENT_LABELS[a]} scale`}
                 unit={SCALE_FACTOR_UNIT}
-                value={initial.model.agents[a]?.scale ?? { type: "range", p50: 1, low: 0.8, high: 1.2, coverage: 90, shape: "split-normal" }}
-                onChange={(d) => setAgents((s) => ({ ...s, [a]: d }))}
+                value={initial.model.agents[a]?.scale ?? NEW_AGENT_SCALE}
+                onChange={(d) => dispatch({ type: "agent", agent: a, distribution: d })}
               />
               <button
                 type="button"
                 className="absolute bottom-2 right-3 text-xs text-danger hover:underline"
-                onClick={() =>
-                  setAgents((s) => {
-                    const { [a]: _removed, ...next } = s;
-                    return next;
-                  })
-                }
+                onClick={() => dispatch({ type: "removeAgent", agent: a })}
               >
                 Remove {AGENT_LABELS[a]}
               </button>
@@ -192,7 +159,7 @@ export function ModelEditor({
           <div className="flex items-end gap-2">
             <label className="flex flex-col gap-1 text-sm">
               <span className="font-medium text-ink">Add a scale factor for</span>
-              <Select value={addAgent} onChange={(e) => setAddAgent(e.target.value as ForcingAgent)} className="w-64">
+              <Select value={addAgent} onChange={(e) => dispatch({ type: "chooseAgentToAdd", agent: e.target.value as ForcingAgent | "" })} className="w-64">
                 <option value="">Choose an agent…</option>
                 {FORCING_AGENTS.filter((a) => !(a in agents)).map((a) => (
                   <option key={a} value={a}>
@@ -204,11 +171,7 @@ export function ModelEditor({
             <Button
               variant="secondary"
               disabled={!addAgent}
-              onClick={() => {
-                if (!addAgent) return;
-                setAgents((s) => ({ ...s, [addAgent]: { type: "range", p50: 1, low: 0.8, high: 1.2, coverage: 90, shape: "split-normal" } }));
-                setAddAgent("");
-              }}
+              onClick={() => dispatch({ type: "addChosenAgent" })}
             >
               Add
             </Button>
@@ -221,14 +184,14 @@ export function ModelEditor({
         <CardBody className="flex flex-col gap-2">
           {correlations.map((c, i) => (
             <div key={i} className="flex flex-wrap items-start gap-2" data-correlation={i}>
-              <Select aria-label={`Correlation ${i + 1}: first input`} value={c.a} onChange={(e) => setCorrelations((cs) => cs.map((x, j) => (j === i ? { ...x, a: e.target.value } : x)))} className="w-56">
+              <Select aria-label={`Correlation ${i + 1}: first input`} value={c.a} onChange={(e) => dispatch({ type: "correlation", index: i, field: "a", value: e.target.value })} className="w-56">
                 {inputs.map((k) => (
                   <option key={k} value={k}>
                     {inputLabel(k)}
                   </option>
                 ))}
               </Select>
-              <Select aria-label={`Correlation ${i + 1}: second input`} value={c.b} onChange={(e) => setCorrelations((cs) => cs.map((x, j) => (j === i ? { ...x, b: e.target.value } : x)))} className="w-56">
+              <Select aria-label={`Correlation ${i + 1}: second input`} value={c.b} onChange={(e) => dispatch({ type: "correlation", index: i, field: "b", value: e.target.value })} className="w-56">
                 {inputs.map((k) => (
                   <option key={k} value={k}>
                     {inputLabel(k)}
@@ -240,11 +203,11 @@ export function ModelEditor({
                   aria-label={`Correlation ${i + 1}: rank correlation`}
                   className="num w-24"
                   value={c.rank}
-                  onChange={(e) => setCorrelations((cs) => cs.map((x, j) => (j === i ? { ...x, rank: e.target.value } : x)))}
+                  onChange={(e) => dispatch({ type: "correlation", index: i, field: "rank", value: e.target.value })}
                   aria-invalid={err(`model.correlations[${i}].rank`) ? true : undefined}
                 />
               </div>
-              <Button variant="ghost" size="sm" onClick={() => setCorrelations((cs) => cs.filter((_, j) => j !== i))}>
+              <Button variant="ghost" size="sm" onClick={() => dispatch({ type: "removeCorrelation", index: i })}>
                 Remove
               </Button>
               {(err(`model.correlations[${i}].rank`) || err(`model.correlations[${i}].between`)) && (
@@ -255,7 +218,7 @@ export function ModelEditor({
             </div>
           ))}
           <div>
-            <Button variant="secondary" size="sm" onClick={() => setCorrelations((cs) => [...cs, { a: "ecs", b: "aerosol-cloud", rank: "-0.3" }])}>
+            <Button variant="secondary" size="sm" onClick={() => dispatch({ type: "addCorrelation" })}>
               Add correlation
             </Button>
           </div>
@@ -266,7 +229,7 @@ export function ModelEditor({
         <CardHeader title="Observational constraint" subtitle="Weights members by how well their warming over an observed window matches the observation." />
         <CardBody className="flex flex-col gap-3">
           <label className="flex items-center gap-2 text-sm">
-            <input type="checkbox" checked={constraintOn} onChange={(e) => setConstraintOn(e.target.checked)} className="accent-[var(--pl-accent)]" />
+            <input type="checkbox" checked={constraintOn} onChange={(e) => dispatch({ type: "constraintOn", on: e.target.checked })} className="accent-[var(--pl-accent)]" />
             Weight members by observed warming
           </label>
           {constraintOn && (
@@ -280,7 +243,7 @@ export function ModelEditor({
                 ] as const
               ).map(([k, label]) => (
                 <Field key={k} label={label} error={err(`model.constraint.${k}`)}>
-                  {(p) => <Input {...p} className="num" value={constraint[k]} onChange={(e) => setConstraint((c) => ({ ...c, [k]: e.target.value }))} />}
+                  {(p) => <Input {...p} className="num" value={constraint[k]} onChange={(e) => dispatch({ type: "constraint", field: k, value: e.target.value })} />}
                 </Field>
               ))}
               <p className="text-xs text-muted sm:col-span-4">
@@ -303,7 +266,7 @@ export function ModelEditor({
             ] as const
           ).map(([k, label]) => (
             <Field key={k} label={label} error={err(`defaults.${k}`) ?? Object.entries(errors).find(([p]) => p.startsWith(`defaults.${k}[`))?.[1]}>
-              {(p) => <Input {...p} className="num" value={defaults[k]} onChange={(e) => setDefaults((d) => ({ ...d, [k]: e.target.value }))} />}
+              {(p) => <Input {...p} className="num" value={defaults[k]} onChange={(e) => dispatch({ type: "defaults", field: k, value: e.target.value })} />}
             </Field>
           ))}
         </CardBody>
@@ -313,7 +276,7 @@ export function ModelEditor({
         <Card>
           <CardHeader title="Pinned peril profiles" subtitle="Reviewed with this version; a run of it that names no profiles applies these." />
           <CardBody>
-            <PinnedPerilProfilesPicker profiles={perilProfiles} value={perilProfileIds} onChange={setPerilProfileIds} />
+            <PinnedPerilProfilesPicker profiles={perilProfiles} value={perilProfileIds} onChange={(ids) => dispatch({ type: "perilProfileIds", ids })} />
             {err("perilProfileIds") && <p className="mt-2 text-sm text-danger">{err("perilProfileIds")}</p>}
           </CardBody>
         </Card>

@@ -1,4 +1,4 @@
-import type { ModelDraft } from "../components/model-editor";
+import type { ModelDraft } from "./model-draft-form";
 
 /**
  * Where a version with no parent starts: assessed ranges with their sources (IPCC AR6
