@@ -17,7 +17,7 @@ export const RESULT_TABLES = [
 ] as const;
 export type ResultTable = (typeof RESULT_TABLES)[number];
 
-export const EXPORT_FORMATS = ["csv", "xlsx"] as const;
+export const EXPORT_FORMATS = ["csv", "xlsx", "pdf", "zip"] as const;
 
 export const listExportsQuerySchema = z.object({
   mine: z.enum(["true", "false"], { error: 'must be "true" or "false"' }).optional(),
@@ -29,7 +29,7 @@ export const exportRecordSchema = z.object({
   runId: z.string(),
   runName: z.string().nullable(),
   format: z.enum(EXPORT_FORMATS),
-  /** Table name for a CSV, "workbook" for an XLSX. */
+  /** Table name for a CSV, "workbook" for an XLSX, "report" for the PDF, "tables" for the zip of every CSV. */
   table: z.string(),
   fileName: z.string(),
   exploratory: z.boolean(),

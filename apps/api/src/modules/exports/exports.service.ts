@@ -1,37 +1,38 @@
-import { createHash, randomUUID } from "node:crypto";
+import { randomUUID } from "node:crypto";
 import type { ExportRecord, ResultTable } from "@plumeline/contracts";
 import { Op } from "sequelize";
 import type { AppContext } from "../../context.js";
+import { conflict, notFound } from "../../errors/app-error.js";
 import type { RequestUser } from "../../middleware/request-context.js";
 import { recordAudit } from "../audit/audit.service.js";
 import { getRunWithResult } from "../results/results.service.js";
 import type { RunModel } from "../runs/run.model.js";
-import { tableToCsv } from "./csv-writer.js";
+import type { RunResult } from "@plumeline/contracts";
+import { buildExportFile, sha256, type ExportFile, type ExportKind, type ExportSource } from "./export-files.js";
 import type { ExportRecordModel } from "./export-record.model.js";
-import { resultTable } from "./result-tables.js";
-import { buildRunWorkbook, type WorkbookManifest } from "./workbook-builder.js";
+import { gatherRunManifest } from "./run-manifest.js";
+import type { WorkbookManifest } from "./workbook-builder.js";
+
+export type { ExportFile } from "./export-files.js";
 
 type Ctx = Pick<AppContext, "models" | "sequelize">;
 
-export interface ExportFile {
-  fileName: string;
-  contentType: string;
-  bytes: Buffer;
+function sourceOf(run: RunModel, result: RunResult): ExportSource {
+  return { runId: run.id, runName: run.name, exploratory: run.exploratory, spec: run.spec, result };
 }
 
-function baseName(run: RunModel): string {
-  return `plumeline-run-${run.id.slice(0, 8)}${run.exploratory ? "-EXPLORATORY" : ""}`;
-}
+const tableName = (kind: ExportKind) => (kind.format === "csv" ? kind.table : kind.format === "xlsx" ? "workbook" : kind.format === "pdf" ? "report" : "tables");
 
-/** Records the file in the exports table and the audit trail, in one transaction. */
-async function recordExport(ctx: Ctx, user: RequestUser, run: RunModel, format: "csv" | "xlsx", table: string, file: ExportFile) {
-  const checksum = createHash("sha256").update(file.bytes).digest("hex");
+/** Records the file in the exports table (with the manifest it was built from) and the audit trail, in one transaction. */
+async function recordExport(ctx: Ctx, user: RequestUser, run: RunModel, kind: ExportKind, file: ExportFile, manifest: WorkbookManifest) {
+  const checksum = sha256(file.bytes);
+  const table = tableName(kind);
   await ctx.sequelize.transaction(async (transaction) => {
     const row = await ctx.models.ExportRecord.create(
       {
         id: randomUUID(),
         runId: run.id,
-        format,
+        format: kind.format,
         resultTable: table,
         fileName: file.fileName,
         exploratory: run.exploratory,
@@ -39,6 +40,7 @@ async function recordExport(ctx: Ctx, user: RequestUser, run: RunModel, format: 
         checksum,
         byteSize: file.bytes.length,
         createdBy: user.id,
+        manifest,
       },
       { transaction },
     );
@@ -49,78 +51,69 @@ async function recordExport(ctx: Ctx, user: RequestUser, run: RunModel, format: 
         action: "export.created",
         entityType: "run",
         entityId: run.id,
-        summary: `Exported ${file.fileName} (${format.toUpperCase()}${run.exploratory ? ", EXPLORATORY" : ""}) from run "${run.name}".`,
-        data: { exportId: row.id, format, table, checksum, resultHash: run.resultHash },
+        summary: `Exported ${file.fileName} (${kind.format.toUpperCase()}${run.exploratory ? ", EXPLORATORY" : ""}) from run "${run.name}".`,
+        data: { exportId: row.id, format: kind.format, table, checksum, resultHash: run.resultHash },
       },
       transaction,
     );
   });
 }
 
-export async function exportTableCsv(ctx: Ctx, user: RequestUser, runId: string, table: ResultTable): Promise<ExportFile> {
+/** Builds a new export of a run for the user, records it, and returns the file. */
+async function exportRun(ctx: Ctx, user: RequestUser, runId: string, kind: ExportKind): Promise<ExportFile> {
   const { run, result } = await getRunWithResult(ctx, runId);
-  const file: ExportFile = {
-    fileName: `${baseName(run)}-${table}.csv`,
-    contentType: "text/csv; charset=utf-8",
-    bytes: Buffer.from(tableToCsv(resultTable(result, table)), "utf8"),
-  };
-  await recordExport(ctx, user, run, "csv", table, file);
+  const now = new Date();
+  const manifest = await gatherRunManifest(ctx, run, result, user, now);
+  const file = await buildExportFile(kind, sourceOf(run, result), manifest);
+  await recordExport(ctx, user, run, kind, file, manifest);
   return file;
 }
 
-export async function exportWorkbook(ctx: Ctx, user: RequestUser, runId: string): Promise<ExportFile> {
-  const { run, result } = await getRunWithResult(ctx, runId);
-  const version = await ctx.models.ModelVersion.findByPk(run.modelVersionId);
-  const pathways = await ctx.models.Pathway.findAll({ where: { id: { [Op.in]: run.pathwayIds } } });
-  const statements = await ctx.models.RunStatement.findAll({ where: { runId: run.id }, order: [["createdAt", "ASC"], ["id", "ASC"]] });
-  const userIds = [run.createdBy, version?.decidedBy, ...statements.map((s) => s.createdBy)].filter((x): x is string => !!x);
-  const users = await ctx.models.User.findAll({ where: { id: { [Op.in]: userIds } }, attributes: ["id", "name", "email"] });
-  const who = (id: string | null | undefined) => {
-    const u = users.find((x) => x.id === id);
-    return u ? `${u.name} <${u.email}>` : null;
-  };
-  const byId = new Map(pathways.map((p) => [p.id, p]));
-  const manifest: WorkbookManifest = {
-    runId: run.id,
-    runName: run.name,
-    exploratory: run.exploratory,
-    createdBy: who(run.createdBy) ?? run.createdBy,
-    createdAt: run.createdAt.toISOString(),
-    finishedAt: run.finishedAt?.toISOString() ?? null,
-    modelVersion: {
-      id: run.modelVersionId,
-      name: version?.name ?? "?",
-      versionNumber: version?.versionNumber ?? 0,
-      status: version?.status ?? "?",
-      changeClass: version?.changeClass ?? null,
-      decidedBy: who(version?.decidedBy),
-      decidedAt: version?.decidedAt?.toISOString() ?? null,
-    },
-    pathways: run.pathwayIds.map((id) => {
-      const p = byId.get(id);
-      return { id, name: p?.name ?? "?", source: p?.source ?? "", vintage: p?.vintage ?? "", startYear: p?.startYear ?? 0, endYear: p?.endYear ?? 0, checksum: p?.checksum ?? "" };
-    }),
-    seed: run.seed,
-    members: run.members,
-    sampling: run.sampling,
-    baseline: run.spec.baseline,
-    percentiles: run.spec.percentiles,
-    thresholds: run.spec.thresholds,
-    horizons: run.spec.horizons,
-    engineVersion: result.engineVersion,
-    inputHash: result.inputHash,
-    resultHash: result.resultHash,
-    exportedBy: `${user.name} <${user.email}>`,
-    exportedAt: new Date().toISOString(),
-    statements: statements.map((s) => ({ kind: s.kind, text: s.text, by: who(s.createdBy) ?? s.createdBy, at: s.createdAt.toISOString() })),
-  };
-  const file: ExportFile = {
-    fileName: `${baseName(run)}.xlsx`,
-    contentType: "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet",
-    bytes: await buildRunWorkbook(manifest, result, run.spec.model),
-  };
-  await recordExport(ctx, user, run, "xlsx", "workbook", file);
-  return file;
+export const exportTableCsv = (ctx: Ctx, user: RequestUser, runId: string, table: ResultTable) => exportRun(ctx, user, runId, { format: "csv", table });
+export const exportTablesZip = (ctx: Ctx, user: RequestUser, runId: string) => exportRun(ctx, user, runId, { format: "zip" });
+export const exportWorkbook = (ctx: Ctx, user: RequestUser, runId: string) => exportRun(ctx, user, runId, { format: "xlsx" });
+export const exportReport = (ctx: Ctx, user: RequestUser, runId: string) => exportRun(ctx, user, runId, { format: "pdf" });
+
+function kindOf(record: ExportRecordModel): ExportKind {
+  if (record.format === "csv") return { format: "csv", table: record.resultTable as ResultTable };
+  return { format: record.format };
+}
+
+/**
+ * A past export, rebuilt from the stored result and the manifest it was first built with, and
+ * handed out only if its SHA-256 equals the recorded checksum. Anything else — the run's
+ * result changed, an export recorded before manifests were kept, a builder that now writes
+ * different bytes — is a 409 that says so; a different file is never handed out in its place.
+ * Each download again is written to the audit trail.
+ */
+export async function downloadExportAgain(ctx: Ctx, user: RequestUser, exportId: string): Promise<ExportFile> {
+  const record = await ctx.models.ExportRecord.findByPk(exportId);
+  if (!record) throw notFound("Export", exportId);
+  const { run, result } = await getRunWithResult(ctx, record.runId);
+  if (result.resultHash !== record.resultHash)
+    throw conflict(
+      `Export ${record.fileName} was made from result ${record.resultHash.slice(0, 12)}…, but run "${run.name}" now holds result ${result.resultHash.slice(0, 12)}…; it cannot be rebuilt.`,
+      "export_result_changed",
+    );
+  if (!record.manifest && record.format !== "csv")
+    throw conflict(`Export ${record.fileName} was recorded before Plumeline kept the manifest of each export, so it cannot be rebuilt byte for byte.`, "export_not_rebuildable");
+  const manifest = record.manifest ?? (await gatherRunManifest(ctx, run, result, user, record.createdAt));
+  const file = await buildExportFile(kindOf(record), { runId: run.id, runName: run.name, exploratory: run.exploratory, spec: run.spec, result }, manifest);
+  const checksum = sha256(file.bytes);
+  if (checksum !== record.checksum)
+    throw conflict(
+      `Rebuilt ${record.fileName} has SHA-256 ${checksum.slice(0, 12)}…, not the recorded ${record.checksum.slice(0, 12)}…; the file is not handed out. Export the run again for a new file.`,
+      "export_checksum_mismatch",
+    );
+  await recordAudit(ctx, {
+    actorId: user.id,
+    action: "export.downloaded-again",
+    entityType: "run",
+    entityId: run.id,
+    summary: `Downloaded ${record.fileName} again (checksum verified) from run "${run.name}".`,
+    data: { exportId: record.id, checksum },
+  });
+  return { ...file, fileName: record.fileName };
 }
 
 export async function listExports(ctx: Ctx, user: RequestUser, query: { mine?: "true" | "false"; runId?: string }): Promise<ExportRecord[]> {
