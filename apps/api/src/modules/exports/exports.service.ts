@@ -1,5 +1,5 @@
 import { createHash, randomUUID } from "node:crypto";
-import type { ExportRecord, ResultTable } from "@plumeline/contracts";
+import { MEMBER_SHEET_MAX_MEMBERS, MEMBER_TABLE, type ExportRecord, type ResultTable } from "@plumeline/contracts";
 import { Op } from "sequelize";
 import type { AppContext } from "../../context.js";
 import type { RequestUser } from "../../middleware/request-context.js";
@@ -9,6 +9,9 @@ import type { RunModel } from "../runs/run.model.js";
 import { tableToCsv } from "./csv-writer.js";
 import type { ExportRecordModel } from "./export-record.model.js";
 import { resultTable } from "./result-tables.js";
+import { AppError } from "../../errors/app-error.js";
+import { openMemberTable, type OpenMemberTable } from "./member-table-client.js";
+import type { MemberSheet } from "./member-sheet.js";
 import { buildRunWorkbook, type WorkbookManifest } from "./workbook-builder.js";
 
 type Ctx = Pick<AppContext, "models" | "sequelize">;
@@ -23,9 +26,22 @@ function baseName(run: RunModel): string {
   return `plumeline-run-${run.id.slice(0, 8)}${run.exploratory ? "-EXPLORATORY" : ""}`;
 }
 
+/** What the register keeps of a file handed out: its name, SHA-256 (hex) and size. */
+interface ExportedBytes {
+  fileName: string;
+  checksum: string;
+  byteSize: number;
+}
+
+const describeBytes = (file: ExportFile): ExportedBytes => ({
+  fileName: file.fileName,
+  checksum: createHash("sha256").update(file.bytes).digest("hex"),
+  byteSize: file.bytes.length,
+});
+
 /** Records the file in the exports table and the audit trail, in one transaction. */
-async function recordExport(ctx: Ctx, user: RequestUser, run: RunModel, format: "csv" | "xlsx", table: string, file: ExportFile) {
-  const checksum = createHash("sha256").update(file.bytes).digest("hex");
+async function recordExport(ctx: Ctx, user: RequestUser, run: RunModel, format: "csv" | "xlsx", table: string, file: ExportedBytes) {
+  const { checksum } = file;
   await ctx.sequelize.transaction(async (transaction) => {
     const row = await ctx.models.ExportRecord.create(
       {
@@ -37,7 +53,7 @@ async function recordExport(ctx: Ctx, user: RequestUser, run: RunModel, format: 
         exploratory: run.exploratory,
         resultHash: run.resultHash ?? "",
         checksum,
-        byteSize: file.bytes.length,
+        byteSize: file.byteSize,
         createdBy: user.id,
       },
       { transaction },
@@ -64,8 +80,64 @@ export async function exportTableCsv(ctx: Ctx, user: RequestUser, runId: string,
     contentType: "text/csv; charset=utf-8",
     bytes: Buffer.from(tableToCsv(resultTable(result, table)), "utf8"),
   };
-  await recordExport(ctx, user, run, "csv", table, file);
+  await recordExport(ctx, user, run, "csv", table, describeBytes(file));
   return file;
+}
+
+/** Members per CSV chunk (about 2 MB at 20 columns): the file streams out at the client's pace. */
+const CSV_CHUNK_MEMBERS = 5_000;
+
+/** A member-table CSV being produced: the caller writes the chunks, then records the export. */
+export interface MemberTableDownload {
+  fileName: string;
+  contentType: string;
+  table: OpenMemberTable;
+  /** Records the export (register + audit) once every byte went out. */
+  record(checksum: string, byteSize: number): Promise<void>;
+}
+
+/**
+ * Recomputes the run's member table from its stored spec (in a thread; refused with 409 when
+ * the engine version or result hash does not come back) and hands it out as CSV.
+ */
+export async function openMemberTableCsv(ctx: Ctx, user: RequestUser, runId: string): Promise<MemberTableDownload> {
+  const { run, result } = await getRunWithResult(ctx, runId);
+  const table = await openMemberTable({
+    spec: run.spec,
+    expected: { engineVersion: result.engineVersion, resultHash: result.resultHash },
+    columnsUpTo: 0,
+    chunkMembers: CSV_CHUNK_MEMBERS,
+  });
+  const fileName = `${baseName(run)}-${MEMBER_TABLE}.csv`;
+  return {
+    fileName,
+    contentType: "text/csv; charset=utf-8",
+    table,
+    record: (checksum, byteSize) => recordExport(ctx, user, run, "csv", MEMBER_TABLE, { fileName, checksum, byteSize }),
+  };
+}
+
+/**
+ * The workbook's Members sheet: the table when the run has at most MEMBER_SHEET_MAX_MEMBERS
+ * members and recomputes to its stored hash; otherwise why it was left out and where it is.
+ */
+async function memberSheetOf(run: RunModel, result: { engineVersion: string; resultHash: string }): Promise<MemberSheet> {
+  const csv = `the CSV export (GET /api/runs/${run.id}/tables/${MEMBER_TABLE}.csv, also on the run's Export panel)`;
+  if (run.members > MEMBER_SHEET_MAX_MEMBERS)
+    return {
+      kind: "omitted",
+      reason: `This run has ${run.members.toLocaleString("en-GB")} members, more than the ${MEMBER_SHEET_MAX_MEMBERS.toLocaleString("en-GB")} this workbook holds on a sheet: the member table is in ${csv}.`,
+    };
+  let table: OpenMemberTable | null = null;
+  try {
+    table = await openMemberTable({ spec: run.spec, expected: result, columnsUpTo: MEMBER_SHEET_MAX_MEMBERS, chunkMembers: CSV_CHUNK_MEMBERS });
+    return { kind: "table", columns: table.columns, values: table.values! };
+  } catch (error) {
+    if (error instanceof AppError) return { kind: "omitted", reason: `No member table: ${error.message}` };
+    throw error;
+  } finally {
+    await table?.close();
+  }
 }
 
 export async function exportWorkbook(ctx: Ctx, user: RequestUser, runId: string): Promise<ExportFile> {
@@ -117,9 +189,9 @@ export async function exportWorkbook(ctx: Ctx, user: RequestUser, runId: string)
   const file: ExportFile = {
     fileName: `${baseName(run)}.xlsx`,
     contentType: "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet",
-    bytes: await buildRunWorkbook(manifest, result, run.spec.model),
+    bytes: await buildRunWorkbook(manifest, result, run.spec.model, await memberSheetOf(run, result)),
   };
-  await recordExport(ctx, user, run, "xlsx", "workbook", file);
+  await recordExport(ctx, user, run, "xlsx", "workbook", describeBytes(file));
   return file;
 }
 
