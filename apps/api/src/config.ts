@@ -20,10 +20,11 @@ const envSchema = z.object({
   SMTP_URL: z.url().optional(),
   SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(0),
   MAIL_FROM: z.string().min(3).default("Plumeline <no-reply@plumeline.invalid>"),
-  WORKERS: z.coerce.number().int().min(1).max(64).optional(),
+  WORKERS: z.coerce.number().int().min(0).max(64).optional(),
   QUEUE: z.enum(["sqlite", "bullmq"]).default("sqlite"),
   REDIS_URL: z.url().optional(),
   SIGN_IN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+  RUNS_QUEUED_PER_PERSON: z.coerce.number().int().min(1).max(1000).default(10),
   WEB_DIST: z.string().min(1).optional(),
   SEED_DEMO: z.enum(["true", "false"]).default("true"),
 });
@@ -43,11 +44,14 @@ export interface Config {
   /** Port of the embedded SMTP server; 0 picks a free one. */
   smtpPort: number;
   mailFrom: string;
+  /** Engine threads in this process; 0 (QUEUE=bullmq only) = the API computes nothing itself. */
   workers: number;
   queue: "sqlite" | "bullmq";
   redisUrl: string | undefined;
   /** Sign-in attempts allowed per client address per minute. */
   signInRateLimit: number;
+  /** Runs one person may have queued or running at once; the next is refused (429). */
+  runsQueuedPerPerson: number;
   webDist: string;
   seedDemo: boolean;
 }
@@ -65,6 +69,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   }
   const e = parsed.data;
   if (e.QUEUE === "bullmq" && !e.REDIS_URL) throw new ConfigError("Invalid configuration:\n  REDIS_URL: required when QUEUE=bullmq");
+  // WORKERS=0 means "this process computes nothing": only workers elsewhere (QUEUE=bullmq) could run the jobs.
+  if (e.QUEUE === "sqlite" && e.WORKERS === 0)
+    throw new ConfigError("Invalid configuration:\n  WORKERS: 0 needs QUEUE=bullmq (with the table queue nothing else would run the jobs)");
 
   const dataDir = path.resolve(repoRoot, e.PLUMELINE_DATA_DIR ?? "data");
   const publicOrigin = (e.PUBLIC_ORIGIN ?? `http://localhost:${e.PORT}`).replace(/\/$/, "");
@@ -87,6 +94,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     queue: e.QUEUE,
     redisUrl: e.REDIS_URL,
     signInRateLimit: e.SIGN_IN_RATE_LIMIT,
+    runsQueuedPerPerson: e.RUNS_QUEUED_PER_PERSON,
     webDist: path.resolve(repoRoot, e.WEB_DIST ?? "apps/web/dist"),
     seedDemo: e.SEED_DEMO === "true",
   };

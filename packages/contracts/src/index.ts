@@ -6,6 +6,7 @@ export * from "./engine/peril.js";
 export * from "./engine/format-issues.js";
 export * from "./api/errors.js";
 export * from "./api/users.js";
+export * from "./api/permissions.js";
 export * from "./api/me.js";
 export * from "./api/audit.js";
 export * from "./api/outbox.js";

@@ -9,7 +9,16 @@ export { preparePlan } from "./ensemble/prepare-plan.js";
 export { applyDefaults } from "./spec/apply-defaults.js";
 export { validateSpec } from "./spec/validate-spec.js";
 export { SpecError, RunCancelledError } from "./spec/spec-error.js";
-export { MAX_MEMBERS, MAX_PATHWAY_YEARS } from "./spec/limits.js";
+export {
+  MAX_MEMBERS,
+  MAX_PATHWAY_YEARS,
+  MAX_THRESHOLDS,
+  MAX_HORIZONS,
+  MAX_PERCENTILES,
+  MAX_PATHWAYS_PER_RUN,
+  MIN_YEAR,
+  MAX_YEAR,
+} from "./spec/limits.js";
 export * from "./spec/types.js";
 export { inputHash, resultHash } from "./hash/run-hashes.js";
 export { canonicalHash } from "./hash/sha256-hex.js";

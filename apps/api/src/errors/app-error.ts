@@ -1,7 +1,7 @@
 import type { ErrorDetail } from "@plumeline/contracts";
 
 /** The statuses a service may raise on purpose; anything else becomes a generic 500. */
-export type AppErrorStatus = 400 | 401 | 403 | 404 | 409 | 413;
+export type AppErrorStatus = 400 | 401 | 403 | 404 | 409 | 413 | 429;
 
 /** A failure a service raises on purpose: carries its HTTP status and a stable snake_case code. */
 export class AppError extends Error {
@@ -38,4 +38,8 @@ export function conflict(message: string, code = "conflict"): AppError {
 
 export function payloadTooLarge(message: string): AppError {
   return new AppError(413, "payload_too_large", message);
+}
+
+export function tooManyRequests(message: string, code = "too_many_requests"): AppError {
+  return new AppError(429, code, message);
 }

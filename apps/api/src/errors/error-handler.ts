@@ -3,7 +3,11 @@ import type { ApiError, ErrorDetail } from "@plumeline/contracts";
 import { formatPath } from "@plumeline/contracts";
 import multer from "multer";
 import { ZodError } from "zod";
+import { DatabaseBusyError } from "../db/serialize-writes.js";
 import { AppError, type AppErrorStatus } from "./app-error.js";
+
+/** Seconds a client is asked to wait before retrying a write the database could not take. */
+export const BUSY_RETRY_AFTER_SECONDS = 5;
 
 /**
  * The status each AppError status maps to. Written out on purpose (not `err.status || 500`):
@@ -16,11 +20,13 @@ const statusByAppErrorStatus: Record<AppErrorStatus, number> = {
   404: 404,
   409: 409,
   413: 413,
+  429: 429,
 };
 
 interface Mapped {
   status: number;
   body: ApiError;
+  headers?: Record<string, string>;
 }
 
 /** Turns any thrown value into a status and the one error body shape (docs/API.md). */
@@ -30,6 +36,13 @@ export function toErrorResponse(err: unknown): Mapped {
     if (status !== undefined) {
       return { status, body: { error: { code: err.code, message: err.message, ...(err.details ? { details: err.details } : {}) } } };
     }
+  }
+  if (err instanceof DatabaseBusyError) {
+    return {
+      status: 503,
+      headers: { "Retry-After": String(BUSY_RETRY_AFTER_SECONDS) },
+      body: { error: { code: "database_busy", message: `The database is busy with other changes; nothing was saved. Try again in ${BUSY_RETRY_AFTER_SECONDS} seconds.` } },
+    };
   }
   if (err instanceof ZodError) {
     const details: ErrorDetail[] = err.issues.map((issue) => ({ path: formatPath(issue.path), message: issue.message }));
@@ -59,11 +72,13 @@ function isBodyParserError(err: unknown): err is { type: string; status: number 
 
 /** The ONE error handler, mounted last in app.ts. Logs only unexpected failures. */
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
-  const { status, body } = toErrorResponse(err);
+  const { status, body, headers } = toErrorResponse(err);
   if (status === 500) console.error(`[api] ${req.method} ${req.originalUrl} failed:`, err);
+  else if (status === 503) console.warn(`[api] ${req.method} ${req.originalUrl}: database busy (${(err as Error).message})`);
   if (res.headersSent) {
     res.end();
     return;
   }
+  if (headers) res.set(headers);
   res.status(status).json(body);
 };

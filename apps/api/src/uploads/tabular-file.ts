@@ -5,6 +5,7 @@
 import { parse } from "csv-parse/sync";
 import ExcelJS from "exceljs";
 import { AppError, badRequest } from "../errors/app-error.js";
+import { extractNeededXlsxParts, XlsxNotAZipError } from "./xlsx-parts.js";
 
 /** A cell as read from CSV (text) or XLSX (number, text, or empty). */
 export type RawCell = string | number | null;
@@ -87,13 +88,17 @@ export function readCsvRows(buffer: Buffer): RawRow[] {
   }
 }
 
+/** A formula cell: its cached result is whatever the last program to save the file wrote. */
+function isFormula(value: ExcelJS.CellValue): boolean {
+  return typeof value === "object" && value !== null && ("formula" in value || "sharedFormula" in value);
+}
+
 function xlsxCell(value: ExcelJS.CellValue): RawCell {
   if (value === null || value === undefined) return null;
   if (typeof value === "number" || typeof value === "string") return value;
   if (typeof value === "boolean") return String(value);
   if (value instanceof Date) return value.toISOString();
   if (typeof value === "object") {
-    if ("result" in value) return xlsxCell((value as ExcelJS.CellFormulaValue).result as ExcelJS.CellValue);
     if ("richText" in value) return value.richText.map((t) => t.text).join("");
     if ("text" in value) return String(value.text);
     if ("error" in value) return String(value.error);
@@ -101,21 +106,46 @@ function xlsxCell(value: ExcelJS.CellValue): RawCell {
   return String(value);
 }
 
-/** Rows of the workbook's first sheet, numbered as the spreadsheet numbers them. */
+/**
+ * Rows of the workbook's first sheet, numbered as the spreadsheet numbers them. The bytes are
+ * unpacked under size caps first (xlsx-parts.ts: a zip bomb is a 413). Formula cells are
+ * refused, each named by row and column: their cached value is not checked by anyone and
+ * need not match the formula, so an upload must carry typed values.
+ */
 export async function readXlsxRows(buffer: Buffer): Promise<RawRow[]> {
+  let parts: Buffer;
+  try {
+    parts = await extractNeededXlsxParts(buffer);
+  } catch (error) {
+    if (error instanceof XlsxNotAZipError) throw new UnreadableFileError(`the XLSX workbook could not be read: ${error.message}`);
+    throw error;
+  }
   const workbook = new ExcelJS.Workbook();
   try {
-    await workbook.xlsx.load(buffer as unknown as ArrayBuffer);
+    await workbook.xlsx.load(parts as unknown as ArrayBuffer);
   } catch (error) {
     throw new UnreadableFileError(`the XLSX workbook could not be read: ${(error as Error).message}`);
   }
   const sheet = workbook.worksheets[0];
   if (!sheet) throw new UnreadableFileError("the XLSX workbook has no sheet");
   const rows: RawRow[] = [];
+  const formulas: Array<{ path: string; message: string }> = [];
   sheet.eachRow({ includeEmpty: false }, (row, rowNumber) => {
     const cells: RawCell[] = [];
-    for (let c = 1; c <= row.cellCount; c++) cells.push(xlsxCell(row.getCell(c).value));
+    for (let c = 1; c <= row.cellCount; c++) {
+      const value = row.getCell(c).value;
+      if (isFormula(value)) {
+        const formula = (value as { formula?: string }).formula;
+        formulas.push({
+          path: `row ${rowNumber}, column ${columnLetter(c - 1)}`,
+          message: `is a formula${formula ? ` (=${formula})` : ""}; uploads take typed values only (paste the values in place of formulas)`,
+        });
+        cells.push(null);
+      } else cells.push(xlsxCell(value));
+    }
     rows.push({ rowNumber, cells });
   });
+  if (formulas.length > 0)
+    throw badRequest(formulas, `The workbook has ${formulas.length} formula cell${formulas.length === 1 ? "" : "s"}; nothing was saved.`);
   return rows;
 }

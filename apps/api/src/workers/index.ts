@@ -1,19 +1,26 @@
 import type { AppContext } from "../context.js";
 import { createSqlJobQueue } from "../queue/sql-job-queue.js";
-import { startBullmqWorkerPool } from "./bullmq-worker-pool.js";
+import { startBullmqCoordinator } from "./bullmq-coordinator.js";
+import { RUN_JOB_TYPE } from "./process-run-job.js";
+import { runJobKind } from "./run-job-kind.js";
 import { startWorkerPool, type WorkerPool } from "./worker-pool.js";
 
 /**
  * Starts the run workers for this server (called once by server.ts after migrating) and
- * registers their shutdown with the context. QUEUE=sqlite: workers poll the jobs table.
- * QUEUE=bullmq: jobs travel over Redis to whichever process takes them; the jobs table is
- * still the record every worker claims from (apps/api/QUEUE.md).
+ * registers their shutdown with the context. QUEUE=sqlite: engine threads in this process poll
+ * the jobs table. QUEUE=bullmq: jobs and their specs travel over Redis to stateless workers
+ * (`pnpm worker`, and WORKERS threads in this process unless WORKERS=0); this process records
+ * what they report (apps/api/QUEUE.md).
  */
 export async function startWorkers(ctx: AppContext): Promise<WorkerPool> {
   const queue = createSqlJobQueue(ctx.models.Job);
   const pool =
     ctx.config.queue === "bullmq"
-      ? await startBullmqWorkerPool(ctx, queue, { size: ctx.config.workers, redisUrl: requireRedisUrl(ctx.config.redisUrl) })
+      ? await startBullmqCoordinator(ctx, queue, {
+          redisUrl: requireRedisUrl(ctx.config.redisUrl),
+          workers: ctx.config.workers,
+          kinds: { [RUN_JOB_TYPE]: runJobKind(ctx, queue) },
+        })
       : await startWorkerPool(ctx, queue, { size: ctx.config.workers });
   ctx.onClose(() => pool.stop());
   return pool;

@@ -1,6 +1,7 @@
 import { runJobPayloadSchema, type RunResult } from "@plumeline/contracts";
 import type { AppContext } from "../context.js";
 import { recordAudit } from "../modules/audit/audit.service.js";
+import type { ResultDocument } from "../modules/results/result-document.js";
 import { storeRunResult } from "../modules/results/store-run-result.js";
 import type { RunModel } from "../modules/runs/run.model.js";
 import type { ClaimedJob, JobQueue } from "../queue/job-queue.js";
@@ -70,7 +71,7 @@ export async function processClaimedRunJob(
     return giveBack(ctx, queue, job, run, stopping ? "the server shut down while the run was in progress" : error.message, stopping);
   }
   await progress.flush();
-  return writeOutcome(ctx, queue, job, run, outcome);
+  return recordRunOutcome(ctx, queue, job, run, outcome);
 }
 
 /** Progress writes at most every `everyMs`, one at a time; each doubles as heartbeat and cancel check. */
@@ -97,7 +98,25 @@ function throttledProgress(ctx: WorkerContext, queue: JobQueue, job: ClaimedJob,
   };
 }
 
-async function writeOutcome(ctx: WorkerContext, queue: JobQueue, job: ClaimedJob, run: RunModel, outcome: EngineOutcome): Promise<StepOutcome> {
+/** The job was no longer held by the one reporting its outcome: nothing was written (a result is never stored twice). */
+export class OutcomeDiscarded extends Error {
+  override name = "OutcomeDiscarded";
+}
+
+/**
+ * Writes a run job's end. The result (one compressed document), the run's new state, the job's
+ * end (guarded: only while `job.lockedBy` holds it) and the audit row commit in ONE short
+ * transaction, so a run is never "succeeded" without its result and never stored twice.
+ * `compressed`: the result as it came back through the queue, stored as it is.
+ */
+export async function recordRunOutcome(
+  ctx: WorkerContext,
+  queue: JobQueue,
+  job: Pick<ClaimedJob, "id" | "lockedBy" | "attempts">,
+  run: RunModel,
+  outcome: EngineOutcome,
+  compressed?: ResultDocument,
+): Promise<"succeeded" | "failed" | "cancelled"> {
   const finishedAt = new Date();
   let status: "succeeded" | "failed" | "cancelled" = outcome.kind === "done" ? "succeeded" : outcome.kind;
   let error = outcome.kind === "failed" ? outcome.message : null;
@@ -110,8 +129,11 @@ async function writeOutcome(ctx: WorkerContext, queue: JobQueue, job: ClaimedJob
     }
   }
   await ctx.sequelize.transaction(async (transaction) => {
+    // The guard first: a holder that lost the job (or a second report of one outcome) writes nothing.
+    const finished = await queue.finish(job.id, job.lockedBy, status, transaction, error ?? undefined);
+    if (!finished) throw new OutcomeDiscarded(`job ${job.id} is no longer held by ${job.lockedBy}; outcome discarded`);
     if (status === "succeeded" && outcome.kind === "done") {
-      await storeRunResult(ctx.models, run.id, outcome.result, transaction);
+      await storeRunResult(ctx.models, run.id, outcome.result, transaction, compressed);
       await run.update(
         { status, progress: 1, finishedAt, engineVersion: outcome.result.engineVersion, resultHash: outcome.result.resultHash, error: null },
         { transaction },
@@ -119,8 +141,6 @@ async function writeOutcome(ctx: WorkerContext, queue: JobQueue, job: ClaimedJob
     } else {
       await run.update({ status, finishedAt, error }, { transaction });
     }
-    const finished = await queue.finish(job.id, job.lockedBy, status, transaction, error ?? undefined);
-    if (!finished) throw new Error(`job ${job.id} is no longer held by ${job.lockedBy}; outcome discarded`);
     await recordAudit(
       ctx,
       {

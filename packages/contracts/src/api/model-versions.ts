@@ -1,5 +1,6 @@
 import { z } from "zod";
-import { modelSpecSchema } from "../engine/run-spec.js";
+import { modelSpecSchema, percentileSchema } from "../engine/run-spec.js";
+import { boundedUniqueList, MAX_HORIZONS, MAX_PERCENTILES, MAX_THRESHOLDS } from "../engine/spec-limits.js";
 
 /**
  * Model versions: the uncertainty assumptions (the engine's `model` object) plus the run
@@ -16,12 +17,11 @@ const year = () => z.number({ error: "must be a year" }).int("must be a whole ye
 /** Defaults a run takes from its model version unless the run overrides them. */
 export const modelVersionDefaultsSchema = z
   .object({
-    percentiles: z
-      .array(finite().refine((v) => v > 0 && v < 100, "must lie strictly between 0 and 100"))
+    percentiles: boundedUniqueList(percentileSchema, MAX_PERCENTILES, "percentiles")
       .min(1, "must list at least one percentile")
       .default([5, 17, 50, 83, 95]),
-    thresholds: z.array(finite()).default([1.5, 2, 3]),
-    horizons: z.array(year()).default([2030, 2050, 2100]),
+    thresholds: boundedUniqueList(finite(), MAX_THRESHOLDS, "thresholds").default([1.5, 2, 3]),
+    horizons: boundedUniqueList(year(), MAX_HORIZONS, "horizons").default([2030, 2050, 2100]),
     baseline: z
       .tuple([year(), year()], { error: "must be [firstYear, lastYear]" })
       .refine(([a, b]) => b >= a, "must not end before it starts")

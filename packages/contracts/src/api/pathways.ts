@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { pathwayAgentsSchema } from "../engine/run-spec.js";
+import { MAX_YEAR, MIN_YEAR, plausibleYear } from "../engine/spec-limits.js";
 
 /**
  * Pathway bodies and responses (docs/API.md "pathways"). A pathway's `agents` are exactly the
@@ -20,16 +21,36 @@ export const pathwayMetadataSchema = z
   })
   .strict();
 
+/** Years a pathway's longest series reaches past its start must stay plausible too. */
+function lastYearIssue(startYear: number, agents: Record<string, Record<string, number[]> | undefined>): string | null {
+  const length = Math.max(0, ...Object.values(agents).flatMap((s) => (s ? Object.values(s).map((v) => v.length) : [])));
+  const last = startYear + length - 1;
+  // An implausible start is reported on its own (plausibleYear); only a plausible one is followed.
+  return startYear >= MIN_YEAR && startYear <= MAX_YEAR && last > MAX_YEAR ? `with ${length} yearly values runs to ${last}; years must lie from ${MIN_YEAR} to ${MAX_YEAR}` : null;
+}
+
 export const createPathwayBodySchema = pathwayMetadataSchema
   .extend({
-    startYear: z.number({ error: "must be a year" }).int("must be a whole year").min(1, "must be a year"),
+    startYear: plausibleYear(),
     agents: pathwayAgentsSchema,
   })
-  .strict();
+  .strict()
+  .superRefine((body, ctx) => {
+    const issue = lastYearIssue(body.startYear, body.agents as Record<string, Record<string, number[]> | undefined>);
+    if (issue) ctx.addIssue({ code: "custom", path: ["startYear"], message: issue });
+  });
 export type CreatePathwayBody = z.input<typeof createPathwayBodySchema>;
 
 /** Editing a pathway that is not yet locked: any of the create fields. */
-export const updatePathwayBodySchema = createPathwayBodySchema.partial().strict();
+export const updatePathwayBodySchema = pathwayMetadataSchema
+  .extend({ startYear: plausibleYear(), agents: pathwayAgentsSchema })
+  .partial()
+  .strict()
+  .superRefine((body, ctx) => {
+    if (body.startYear === undefined || body.agents === undefined) return;
+    const issue = lastYearIssue(body.startYear, body.agents as Record<string, Record<string, number[]> | undefined>);
+    if (issue) ctx.addIssue({ code: "custom", path: ["startYear"], message: issue });
+  });
 export type UpdatePathwayBody = z.input<typeof updatePathwayBodySchema>;
 
 /** Multipart text fields sent with an upload; `preview=true` parses without saving. */

@@ -1,5 +1,6 @@
 import { z } from "zod";
-import { MAX_MEMBERS } from "../engine/run-spec.js";
+import { MAX_MEMBERS, percentileSchema } from "../engine/run-spec.js";
+import { boundedUniqueList, MAX_HORIZONS, MAX_PATHWAYS_PER_RUN, MAX_PERCENTILES, MAX_THRESHOLDS } from "../engine/spec-limits.js";
 import { MODEL_VERSION_STATUSES } from "./model-versions.js";
 
 /** Runs: an ensemble of one model version over one or more pathways, executed by the queue. */
@@ -15,7 +16,7 @@ export const createRunBodySchema = z
     pathwayIds: z
       .array(z.string().min(1, "must not be empty"), { error: "must be a list of pathway ids" })
       .min(1, "must hold at least one pathway")
-      .max(12, "must hold at most 12 pathways")
+      .max(MAX_PATHWAYS_PER_RUN, `must hold at most ${MAX_PATHWAYS_PER_RUN} pathways (the limit per run)`)
       .refine((ids) => new Set(ids).size === ids.length, "must not repeat a pathway"),
     members: z
       .number({ error: "must be a number" })
@@ -24,9 +25,9 @@ export const createRunBodySchema = z
       .max(MAX_MEMBERS, `must be at most ${MAX_MEMBERS}`),
     seed: z.string({ error: "must be text" }).trim().min(1, "must not be empty").max(200),
     sampling: z.enum(["latin-hypercube", "monte-carlo"], { error: 'must be "latin-hypercube" or "monte-carlo"' }),
-    horizons: z.array(z.number().int("must be a whole year")).optional(),
-    thresholds: z.array(finite()).optional(),
-    percentiles: z.array(finite().refine((v) => v > 0 && v < 100, "must lie strictly between 0 and 100")).min(1).optional(),
+    horizons: boundedUniqueList(z.number({ error: "must be a year" }).int("must be a whole year"), MAX_HORIZONS, "horizons").optional(),
+    thresholds: boundedUniqueList(finite(), MAX_THRESHOLDS, "thresholds").optional(),
+    percentiles: boundedUniqueList(percentileSchema, MAX_PERCENTILES, "percentiles").min(1, "must list at least one percentile").optional(),
     perilProfileIds: z.array(z.string().min(1)).optional(),
     portfolioId: z.string().min(1).nullable().optional(),
   })

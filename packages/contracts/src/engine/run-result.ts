@@ -69,6 +69,9 @@ export const pathwayResultSchema = z.object({
       to: z.number().int(),
       observed: z.number(),
       sd: z.number(),
+      /** Internal variability used (1 sd, K) and the likelihood's total sd; absent before engine 0.3.0. */
+      internalVariability: z.number().optional(),
+      likelihoodSd: z.number().optional(),
       effectiveMembers: z.number(),
       windowWarmingPrior: percentileSetSchema,
       windowWarmingPosterior: percentileSetSchema,

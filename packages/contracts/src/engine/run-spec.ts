@@ -2,6 +2,9 @@ import { z } from "zod";
 import { distributionSchema } from "./distribution.js";
 import { CLIMATE_INPUTS, FORCING_AGENTS, FORCING_EXPRESSIONS, type ForcingAgent } from "./agents.js";
 import { perilProfilesSchema, perilSpecIssues, portfolioSchema } from "./peril.js";
+import { boundedUniqueList, MAX_HORIZONS, MAX_PATHWAYS_PER_RUN, MAX_PERCENTILES, MAX_THRESHOLDS, plausibleYear } from "./spec-limits.js";
+
+export * from "./spec-limits.js";
 
 /**
  * Upper limit on ensemble size. Engine memory grows linearly with members; measured peak
@@ -45,13 +48,27 @@ export const pathwayAgentsSchema = z
     volcanic: agentSeriesSchema.optional(),
     other: agentSeriesSchema.optional(),
   })
-  .strict();
+  .strict()
+  // Checked here, not on each series: inside the unions above a too-long series would only
+  // read "must be { "erf": [..] }", without naming the limit.
+  .superRefine((agents, ctx) => {
+    for (const [agent, series] of Object.entries(agents)) {
+      for (const [key, values] of Object.entries(series ?? {}) as Array<[string, number[]]>) {
+        if (values.length > MAX_PATHWAY_YEARS)
+          ctx.addIssue({
+            code: "custom",
+            path: [agent, key],
+            message: `must hold at most ${MAX_PATHWAY_YEARS} values (the pathway length limit, in years)`,
+          });
+      }
+    }
+  });
 
 export const pathwaySpecSchema = z
   .object({
     id: z.string().min(1, "must not be empty"),
     name: z.string().min(1, "must not be empty"),
-    startYear: year(),
+    startYear: plausibleYear(),
     agents: pathwayAgentsSchema,
   })
   .strict();
@@ -82,6 +99,12 @@ export const constraintSchema = z
     to: year(),
     observed: finite(),
     sd: finite().refine((v) => v > 0, "must be > 0"),
+    /**
+     * Internal variability of the window's mean warming, 1 sd (K), added in quadrature to sd in
+     * the likelihood. Default 0.21 K: IPCC AR6 WGI SPM A.1.3's −0.2 to +0.2 °C (likely) for
+     * 2010–2019, read as a 17–83 % normal range (the engine's constraint-defaults.ts).
+     */
+    internalVariability: finite().refine((v) => v >= 0, "must be ≥ 0").default(0.21),
   })
   .strict();
 
@@ -102,7 +125,7 @@ export const modelSpecSchema = z
   })
   .strict();
 
-const percentileSchema = finite().refine((v) => v > 0 && v < 100, "must lie strictly between 0 and 100");
+export const percentileSchema = finite().refine((v) => v > 0 && v < 100, "must lie strictly between 0 and 100");
 
 export const runSpecSchema = z
   .object({
@@ -116,10 +139,15 @@ export const runSpecSchema = z
       error: 'must be "latin-hypercube" or "monte-carlo"',
     }),
     baseline: z.tuple([year(), year()]).default([1850, 1900]),
-    percentiles: z.array(percentileSchema).min(1, "must list at least one percentile").default([5, 17, 50, 83, 95]),
-    thresholds: z.array(finite()).default([1.5, 2, 3]),
-    horizons: z.array(year()).default([2030, 2050, 2100]),
-    pathways: z.array(pathwaySpecSchema).min(1, "must hold at least one pathway"),
+    percentiles: boundedUniqueList(percentileSchema, MAX_PERCENTILES, "percentiles")
+      .min(1, "must list at least one percentile")
+      .default([5, 17, 50, 83, 95]),
+    thresholds: boundedUniqueList(finite(), MAX_THRESHOLDS, "thresholds").default([1.5, 2, 3]),
+    horizons: boundedUniqueList(year(), MAX_HORIZONS, "horizons").default([2030, 2050, 2100]),
+    pathways: z
+      .array(pathwaySpecSchema)
+      .min(1, "must hold at least one pathway")
+      .max(MAX_PATHWAYS_PER_RUN, `must hold at most ${MAX_PATHWAYS_PER_RUN} pathways (the limit per run)`),
     model: modelSpecSchema,
     /** Optional peril lens (peril.ts): profiles applied at the horizons, and a portfolio baseline. */
     perils: perilProfilesSchema.optional(),

@@ -5,8 +5,11 @@ import type { RangeDistribution } from "./types.js";
 /**
  * A published range fitted as a two-piece law. Each half carries probability 1/2 and has its
  * own spread, so the median and both published ends are reproduced exactly:
- * * "lognormal": ln X − mu is N(0, sigmaLow²) below the median and N(0, sigmaHigh²) above;
- * * "split-normal": X − mode is N(0, sdLow²) below and N(0, sdHigh²) above.
+ * * "lognormal" is a TWO-PIECE (split) LOGNORMAL, not a lognormal: ln X − mu is
+ *   N(0, sigmaLow²) below the median and N(0, sigmaHigh²) above (one lognormal cannot match a
+ *   median and two ends that are not log-symmetric);
+ * * "split-normal" is a two-piece (split) normal: X − mode is N(0, sdLow²) below and
+ *   N(0, sdHigh²) above.
  * Note: this median-preserving two-piece form has mode = median = p50 and a density that
  * jumps at the median when the range is asymmetric. It is not John's (1982) continuous
  * split normal, whose median differs from its mode and would miss the published p50.
@@ -39,7 +42,8 @@ export function validateRange(d: RangeDistribution, name: string): void {
 }
 
 /**
- * Fits a published range (median p50 with a 5–95 % or 17–83 % range) as a two-piece law.
+ * Fits a published range (median p50 with a 5–95 % or 17–83 % range) as a two-piece law: a
+ * two-piece (split) lognormal for shape "lognormal", a two-piece (split) normal for "split-normal".
  *
  * Method: z = Φ⁻¹(0.95) for coverage 90, Φ⁻¹(0.83) for coverage 66. Lognormal:
  * mu = ln p50, sigmaLow = ln(p50/low)/z, sigmaHigh = ln(high/p50)/z (the standard

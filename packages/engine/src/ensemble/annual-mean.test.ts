@@ -100,7 +100,7 @@ describe("annual means", () => {
 
   it("the baseline and the constraint window average annual means", () => {
     const spec = stepSpec(PARAMETERS, { baseline: [1751, 1760], thresholds: [] });
-    spec.model.constraint = { from: 1781, to: 1790, observed: 0.1, sd: 0.1 };
+    spec.model.constraint = { from: 1781, to: 1790, observed: 0.1, sd: 0.1, internalVariability: 0 };
     const result = runEnsemble(spec).pathways[0]!;
     const mean = (from: number, to: number) => {
       let s = 0;

@@ -4,6 +4,7 @@ import type { EnsemblePlan } from "./ensemble-plan.js";
 import { crossingShareByYear, crossingSummary } from "./crossing-summary.js";
 import { percentilePrecision } from "./percentile-precision.js";
 import { percentileKey, percentileSet } from "./percentile-set.js";
+import { likelihoodSd } from "./constraint-weights.js";
 import { sensitivityBudget } from "./sensitivity-budget.js";
 import { QUANTITIES, exceedanceRow, summaryRow } from "./yearly-layout.js";
 
@@ -98,6 +99,8 @@ export function finishPathway(
         to: c.to,
         observed: c.observed,
         sd: c.sd,
+        internalVariability: c.internalVariability,
+        likelihoodSd: likelihoodSd(c),
         effectiveMembers,
         windowWarmingPrior: percentileSet(selector, plan.state.windowMean, percentiles, null, 0),
         windowWarmingPosterior: percentileSet(selector, plan.state.windowMean, percentiles, weights, totalWeight),

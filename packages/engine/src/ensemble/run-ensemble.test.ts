@@ -106,7 +106,8 @@ describe("runEnsemble", () => {
     expect(windowPrior.constraint).toBeNull();
     const constrained = runEnsemble({
       ...spec,
-      model: { ...spec.model, constraint: { from: 2011, to: 2020, observed: 0.9, sd: 0.08 } },
+      // A tight likelihood (no internal variability) so the weighted window warming lands near 0.9.
+      model: { ...spec.model, constraint: { from: 2011, to: 2020, observed: 0.9, sd: 0.08, internalVariability: 0 } },
     });
     const c = constrained.pathways[0]!.constraint!;
     expect(c.ecsPosterior.p95! - c.ecsPosterior.p5!).toBeLessThan(c.ecsPrior.p95! - c.ecsPrior.p5!);

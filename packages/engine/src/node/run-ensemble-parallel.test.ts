@@ -29,7 +29,7 @@ describe("runEnsembleParallel", () => {
       model: {
         ...baseSpec().model,
         agents: { ...baseSpec().model.agents, co2: { scale: { type: "normal", mean: 1, sd: 0.1 } } },
-        constraint: { from: 2011, to: 2020, observed: 1.0, sd: 0.1 },
+        constraint: { from: 2011, to: 2020, observed: 1.0, sd: 0.1, internalVariability: 0.21 },
       },
     });
     const single = runEnsemble(spec);

@@ -60,7 +60,14 @@ export interface ObservationalConstraint {
   from: number;
   to: number;
   observed: number;
+  /** Observational uncertainty of the window's mean warming, 1 sd (K). */
   sd: number;
+  /**
+   * Internal variability of the window's mean warming, 1 sd (K): the part of the observed
+   * warming no forced response explains. The likelihood uses √(sd² + internalVariability²).
+   * Default DEFAULT_INTERNAL_VARIABILITY (spec/constraint-defaults.ts).
+   */
+  internalVariability: number;
 }
 
 export interface ModelSpec {
@@ -101,7 +108,7 @@ export type RunSpecInput = Omit<RunSpec, "baseline" | "percentiles" | "threshold
   model: Omit<ModelSpec, "agents" | "correlations" | "constraint" | "forcingExpression"> & {
     agents?: ModelSpec["agents"];
     correlations?: Correlation[];
-    constraint?: ObservationalConstraint | null;
+    constraint?: (Omit<ObservationalConstraint, "internalVariability"> & { internalVariability?: number }) | null;
     forcingExpression?: ForcingExpressionName;
   };
 };
@@ -140,6 +147,9 @@ export interface ConstraintResult {
   to: number;
   observed: number;
   sd: number;
+  /** Internal variability used (1 sd, K) and the likelihood's total sd √(sd² + internalVariability²). */
+  internalVariability: number;
+  likelihoodSd: number;
   effectiveMembers: number;
   windowWarmingPrior: PercentileSet;
   windowWarmingPosterior: PercentileSet;

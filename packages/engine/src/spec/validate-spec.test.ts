@@ -102,7 +102,11 @@ describe("bad input is refused with a message naming the field", () => {
     expect(refusal(baseSpec({ horizons: [2200] })).message).toBe(
       "horizons[0] 2200 lies outside the pathway years 1750–2100 (pathways[0])",
     );
-    const constraint = { from: 2090, to: 2120, observed: 1, sd: 0.1 };
+    const constraint = { from: 2090, to: 2120, observed: 1, sd: 0.1, internalVariability: 0.21 };
     expect(refusal(baseSpec({ model: { ...model, constraint } })).field).toBe("model.constraint");
+    const negative = { from: 2011, to: 2020, observed: 1, sd: 0.1, internalVariability: -0.1 };
+    expect(refusal(baseSpec({ model: { ...model, constraint: negative } })).message).toBe(
+      "model.constraint.internalVariability must be a finite number ≥ 0",
+    );
   });
 });

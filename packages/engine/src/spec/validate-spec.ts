@@ -1,6 +1,15 @@
 import { validateDistribution } from "../distributions/index.js";
 import { validatePerilInputs } from "../peril/validate-peril-inputs.js";
-import { MAX_MEMBERS, MAX_PATHWAY_YEARS } from "./limits.js";
+import {
+  MAX_HORIZONS,
+  MAX_MEMBERS,
+  MAX_PATHWAY_YEARS,
+  MAX_PATHWAYS_PER_RUN,
+  MAX_PERCENTILES,
+  MAX_THRESHOLDS,
+  MAX_YEAR,
+  MIN_YEAR,
+} from "./limits.js";
 import { SpecError } from "./spec-error.js";
 import {
   CLIMATE_INPUTS,
@@ -26,6 +35,9 @@ export function validateSpec(spec: RunSpec): void {
     throw new SpecError("sampling", 'must be "latin-hypercube" or "monte-carlo"');
   if (!Array.isArray(spec.percentiles) || spec.percentiles.length === 0)
     throw new SpecError("percentiles", "must list at least one percentile");
+  checkBoundedUniqueList(spec.percentiles, MAX_PERCENTILES, "percentiles");
+  checkBoundedUniqueList(spec.thresholds, MAX_THRESHOLDS, "thresholds");
+  checkBoundedUniqueList(spec.horizons, MAX_HORIZONS, "horizons");
   spec.percentiles.forEach((p, i) => {
     if (!(Number.isFinite(p) && p > 0 && p < 100)) throw new SpecError(`percentiles[${i}]`, "must lie strictly between 0 and 100");
   });
@@ -41,6 +53,8 @@ export function validateSpec(spec: RunSpec): void {
   validateModel(spec);
   if (!Array.isArray(spec.pathways) || spec.pathways.length === 0)
     throw new SpecError("pathways", "must hold at least one pathway");
+  if (spec.pathways.length > MAX_PATHWAYS_PER_RUN)
+    throw new SpecError("pathways", `must hold at most ${MAX_PATHWAYS_PER_RUN} pathways (the limit per run)`);
   const ids = new Set<string>();
   spec.pathways.forEach((pathway, i) => {
     if (typeof pathway.id !== "string" || pathway.id.length === 0) throw new SpecError(`pathways[${i}].id`, "must not be empty");
@@ -49,6 +63,17 @@ export function validateSpec(spec: RunSpec): void {
     validatePathwayYears(spec, i, validatePathwaySeries(spec, i));
   });
   validatePerilInputs(spec.perils, spec.portfolio, spec.baseline);
+}
+
+/** At most `max` values, none twice (a repeat is named with the first one's position). */
+function checkBoundedUniqueList(list: number[], max: number, field: string): void {
+  if (list.length > max) throw new SpecError(field, `must list at most ${max} values (the limit per run)`);
+  const first = new Map<number, number>();
+  list.forEach((value, i) => {
+    const earlier = first.get(value);
+    if (earlier !== undefined) throw new SpecError(`${field}[${i}]`, `repeats ${value} (already ${field}[${earlier}])`);
+    first.set(value, i);
+  });
 }
 
 export function validateMembers(members: number): void {
@@ -61,6 +86,8 @@ export function validateMembers(members: number): void {
 function validatePathwaySeries(spec: RunSpec, i: number): number {
   const pathway = spec.pathways[i]!;
   if (!Number.isInteger(pathway.startYear)) throw new SpecError(`pathways[${i}].startYear`, "must be a whole year");
+  if (pathway.startYear < MIN_YEAR || pathway.startYear > MAX_YEAR)
+    throw new SpecError(`pathways[${i}].startYear`, `must be a year from ${MIN_YEAR} to ${MAX_YEAR}`);
   const entries = Object.entries(pathway.agents ?? {}).filter(([, s]) => s !== undefined);
   if (entries.length === 0) throw new SpecError(`pathways[${i}].agents`, "must hold at least one agent");
   // The length most agents share is the expected one, so the odd series out is the one named.
@@ -96,6 +123,12 @@ function validatePathwaySeries(spec: RunSpec, i: number): number {
     });
     if (values.length !== expected) throw new SpecError(`${field}.${key}`, `has ${values.length} values, expected ${expected}`);
   }
+  const last = pathway.startYear + expected - 1;
+  if (last > MAX_YEAR)
+    throw new SpecError(
+      `pathways[${i}].startYear`,
+      `with ${expected} yearly values runs to ${last}; years must lie from ${MIN_YEAR} to ${MAX_YEAR}`,
+    );
   return expected;
 }
 
@@ -135,6 +168,9 @@ function validateModel(spec: RunSpec): void {
     const d = model.climate?.[input];
     if (!d) throw new SpecError(`model.climate.${input}`, "is missing");
     checkDistribution(d, `model.climate.${input}`);
+    // Every climate input is a positive physical quantity; a fixed one that is not would make
+    // every member fail, so it is refused with the spec rather than at sampling.
+    if (d.type === "fixed" && !(d.value > 0)) throw new SpecError(`model.climate.${input}.value`, "must be > 0 (a physical input)");
   }
   for (const [agent, entry] of Object.entries(model.agents)) {
     if (!(FORCING_AGENTS as readonly string[]).includes(agent))
@@ -149,6 +185,8 @@ function validateModel(spec: RunSpec): void {
     if (c.to < c.from) throw new SpecError("model.constraint.to", "must not be before from");
     if (!Number.isFinite(c.observed)) throw new SpecError("model.constraint.observed", "must be finite");
     if (!(Number.isFinite(c.sd) && c.sd > 0)) throw new SpecError("model.constraint.sd", "must be > 0");
+    if (!(Number.isFinite(c.internalVariability) && c.internalVariability >= 0))
+      throw new SpecError("model.constraint.internalVariability", "must be a finite number ≥ 0");
   }
   const pairs = new Set<string>();
   model.correlations.forEach((correlation, i) => {

@@ -44,12 +44,12 @@ describe("parsePathwayTable", () => {
     expect(out.errors[0]!.message).toContain("co2_erf_wm2 (W m-2) or co2_ppm");
   });
 
-  it("reads the same table from an XLSX first sheet, formulas by their cached result", async () => {
+  it("reads the same table from an XLSX first sheet", async () => {
     const wb = new ExcelJS.Workbook();
     const ws = wb.addWorksheet("Pathway");
     ws.addRow(["year", "co2_erf_wm2"]);
     ws.addRow([2000, 1.5]);
-    ws.addRow([2001, { formula: "B2+0.1", result: 1.6 }]);
+    ws.addRow([2001, 1.6]);
     ws.addRow([2002, "x"]);
     const rows = await readXlsxRows(Buffer.from(await wb.xlsx.writeBuffer()));
     const out = parsePathwayTable(rows);
@@ -58,5 +58,37 @@ describe("parsePathwayTable", () => {
     expect(out.errors).toEqual([{ path: "row 4, column B (co2_erf_wm2)", message: '"x" is not a number' }]);
     const fixed = parsePathwayTable(rows.slice(0, 3));
     expect(fixed.ok && fixed.table.agents).toEqual({ co2: { erf: [1.5, 1.6] } });
+  });
+
+  it("refuses XLSX formula cells, naming each by row and column, instead of trusting their cached value", async () => {
+    const wb = new ExcelJS.Workbook();
+    const ws = wb.addWorksheet("Pathway");
+    ws.addRow(["year", "co2_erf_wm2"]);
+    ws.addRow([2000, 1.5]);
+    // The cached result (99) need not match the formula: nothing checks it.
+    ws.addRow([{ formula: "A2+1", result: 2001 }, { formula: "B2+0.1", result: 99 }]);
+    const refused = await readXlsxRows(Buffer.from(await wb.xlsx.writeBuffer())).then(
+      () => null,
+      (error: { status: number; details: unknown }) => error,
+    );
+    expect(refused?.status).toBe(400);
+    expect(refused?.details).toEqual([
+      { path: "row 3, column A", message: "is a formula (=A2+1); uploads take typed values only (paste the values in place of formulas)" },
+      { path: "row 3, column B", message: "is a formula (=B2+0.1); uploads take typed values only (paste the values in place of formulas)" },
+    ]);
+  });
+
+  it("names a value too large for a number (1e400) by row and column, not under its agent", () => {
+    const out = parsePathwayTable(readCsvRows(Buffer.from("year,co2_ppm\n2000,370\n2001,1e400\n")));
+    expect(out.ok).toBe(false);
+    if (out.ok) return;
+    expect(out.errors).toEqual([{ path: "row 3, column B (co2_ppm)", message: '"1e400" is too large for a number' }]);
+  });
+
+  it("refuses implausible years (1000–3000), naming the cell", () => {
+    const far = parsePathwayTable(readCsvRows(Buffer.from("year,co2_ppm\n1000000000000000,370\n")));
+    expect(far.ok).toBe(false);
+    if (far.ok) return;
+    expect(far.errors).toEqual([{ path: "row 2, column A (year)", message: "1000000000000000 is not a plausible year (1000 to 3000)" }]);
   });
 });

@@ -1,4 +1,4 @@
-import { FORCING_AGENTS, MAX_PATHWAY_YEARS, type ForcingAgent } from "@plumeline/contracts";
+import { FORCING_AGENTS, MAX_PATHWAY_YEARS, MAX_YEAR, MIN_YEAR, type ForcingAgent } from "@plumeline/contracts";
 import type { ErrorDetail } from "@plumeline/contracts";
 import { columnLetter, type RawCell, type RawRow } from "../../uploads/tabular-file.js";
 import { readAgentHeader, type AgentColumn, type SeriesQuantity } from "./pathway-columns.js";
@@ -30,7 +30,9 @@ function readNumber(cell: RawCell): number | string {
   if (text === "") return "is empty";
   // Plain decimal or scientific notation only: "1,5" or "12 ppm" would be silently misread.
   if (!/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(text)) return `"${text}" is not a number`;
-  return Number(text);
+  // "1e400" matches the pattern but overflows to Infinity: named here, by its cell.
+  const value = Number(text);
+  return Number.isFinite(value) ? value : `"${text}" is too large for a number`;
 }
 
 /**
@@ -94,6 +96,9 @@ export function parsePathwayTable(rows: RawRow[]): TableParseOutcome {
       previousYear = null;
     } else if (!Number.isInteger(yearValue)) {
       errors.push({ path: where(row.rowNumber, yearColumn, "year"), message: `${yearValue} is not a whole year` });
+      previousYear = null;
+    } else if (yearValue < MIN_YEAR || yearValue > MAX_YEAR) {
+      errors.push({ path: where(row.rowNumber, yearColumn, "year"), message: `${yearValue} is not a plausible year (${MIN_YEAR} to ${MAX_YEAR})` });
       previousYear = null;
     } else {
       if (previousYear !== null && yearValue !== previousYear + 1)

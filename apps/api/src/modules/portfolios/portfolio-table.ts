@@ -23,7 +23,9 @@ function readNumber(cell: RawCell | undefined): number | string {
   if (t === "") return "is empty";
   // Plain decimal or scientific notation: "1,5" or "12 M" would be silently misread.
   if (!/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(t)) return `"${t}" is not a number (write plain digits, e.g. 18400000)`;
-  return Number(t);
+  // "1e400" matches the pattern but overflows to Infinity: named here, by its cell.
+  const value = Number(t);
+  return Number.isFinite(value) ? value : `"${t}" is too large for a number`;
 }
 
 /**

@@ -109,6 +109,12 @@ describe("POST /api/portfolios/upload", () => {
     expect(await t.ctx.models.AuditEvent.count({ where: { action: "portfolio.uploaded" } })).toBe(auditsBefore);
   });
 
+  it("names a value too large for a number (1e400) by row and column", async () => {
+    const res = await upload(actuary, csv([HEADER, "North,wind,EUR,1e400,1000,2000"]), "big.csv", { preview: "true" });
+    expect(res.status).toBe(400);
+    expect(res.body.error.details).toEqual([{ path: "row 2, column D (aal)", message: '"1e400" is too large for a number' }]);
+  });
+
   it("names header problems: unknown and missing columns", async () => {
     const res = await upload(actuary, csv(["region,peril,currency,aal,loss100,loss250", "North,wind,EUR,1,2,3"]), "h.csv", { preview: "true" });
     expect(res.status).toBe(400);

@@ -13,6 +13,7 @@ import type { ModelVersionModel } from "../model-versions/model-version.model.js
 import { lockPathways } from "../pathways/pathways.service.js";
 import { resolvePerilLens } from "../peril-profiles/resolve-peril-lens.js";
 import { buildRunSpec } from "./build-run-spec.js";
+import { assertRunQueueRoom } from "./queued-run-limit.js";
 import type { RunModel } from "./run.model.js";
 
 /**
@@ -114,6 +115,7 @@ export async function getRun(ctx: Ctx, id: string): Promise<Run> {
 export async function createRun(ctx: Ctx, user: RequestUser, body: CreateRunBody): Promise<RunSummary> {
   const { inputHash } = await loadEngine();
   const run = await ctx.sequelize.transaction(async (transaction) => {
+    await assertRunQueueRoom(ctx, user.id, transaction);
     const errors: ErrorDetail[] = [];
     const version: ModelVersionModel | null = await ctx.models.ModelVersion.findByPk(body.modelVersionId, { transaction });
     if (!version) errors.push({ path: "modelVersionId", message: `model version ${body.modelVersionId} does not exist` });
