@@ -17,3 +17,5 @@ export * from "./api/runs.js";
 export * from "./api/exports.js";
 export * from "./api/perils.js";
 export * from "./api/run-statements.js";
+export * from "./format/number-format.js";
+export * from "./format/input-labels.js";

@@ -33,7 +33,7 @@ export const MEMBER_TABLE = "members";
  */
 export const MEMBER_SHEET_MAX_MEMBERS = 10_000;
 
-export const EXPORT_FORMATS = ["csv", "xlsx"] as const;
+export const EXPORT_FORMATS = ["csv", "xlsx", "pdf", "zip"] as const;
 
 export const listExportsQuerySchema = z.object({
   mine: z.enum(["true", "false"], { error: 'must be "true" or "false"' }).optional(),
@@ -45,7 +45,7 @@ export const exportRecordSchema = z.object({
   runId: z.string(),
   runName: z.string().nullable(),
   format: z.enum(EXPORT_FORMATS),
-  /** Table name for a CSV, "workbook" for an XLSX. */
+  /** Table name for a CSV, "workbook" for an XLSX, "report" for the PDF, "tables" for the zip of every CSV. */
   table: z.string(),
   fileName: z.string(),
   exploratory: z.boolean(),

@@ -3,6 +3,9 @@ import { conflict } from "../../errors/app-error.js";
 import { threadEntry } from "../../workers/thread-entry.js";
 import type { FromMemberTableThread, MemberTableRequest } from "./member-table-protocol.js";
 
+/** Members per CSV chunk (about 2 MB at 20 columns): the file streams out at the client's pace. */
+export const MEMBER_CSV_CHUNK_MEMBERS = 5_000;
+
 /** A recomputed member table: its shape, the columns when small enough, and the CSV chunk by chunk. */
 export interface OpenMemberTable {
   members: number;

@@ -11,10 +11,12 @@ import {
   type RunResult,
 } from "@plumeline/contracts";
 import { PERIL_TABLE_SHEETS } from "../peril-profiles/peril-result-tables.js";
+import { perilWarnings } from "../peril-profiles/peril-warnings.js";
 import { columnNumberFormat } from "./column-number-format.js";
 import { PROBABILITY_FORMAT, probabilityNumberFormat } from "./probability-number-format.js";
 import { addMemberSheet, type MemberSheet } from "./member-sheet.js";
 import { neutraliseFormula } from "./neutralise-formula.js";
+import { withFixedEntryDates } from "./stable-zip.js";
 import { resultTable, type Table, type TableCell } from "./result-tables.js";
 
 /** What the manifest sheet states about the run (all of it read from the database, not the request). */
@@ -245,6 +247,12 @@ export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunRe
     cautions.addRow([]);
     cautions.addRow(["Peril lens — how the multipliers were applied"]).font = BOLD;
     for (const rule of PERIL_RULES) cautions.addRow([neutraliseFormula(rule)]);
+    const warnings = perilWarnings(result);
+    if (warnings.length > 0) {
+      cautions.addRow([]);
+      cautions.addRow(["Peril lens — warnings for this run"]).font = BOLD;
+      for (const w of warnings) cautions.addRow([neutraliseFormula(w)]);
+    }
   }
-  return Buffer.from(await workbook.xlsx.writeBuffer());
+  return withFixedEntryDates(Buffer.from(await workbook.xlsx.writeBuffer()), new Date(manifest.exportedAt));
 }
