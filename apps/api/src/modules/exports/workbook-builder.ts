@@ -11,6 +11,7 @@ import {
   type RunResult,
 } from "@plumeline/contracts";
 import { PERIL_TABLE_SHEETS } from "../peril-profiles/peril-result-tables.js";
+import { perilWarnings } from "../peril-profiles/peril-warnings.js";
 import { columnNumberFormat } from "./column-number-format.js";
 import { PROBABILITY_FORMAT, probabilityNumberFormat } from "./probability-number-format.js";
 import { neutraliseFormula } from "./neutralise-formula.js";
@@ -244,6 +245,12 @@ export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunRe
     cautions.addRow([]);
     cautions.addRow(["Peril lens — how the multipliers were applied"]).font = BOLD;
     for (const rule of PERIL_RULES) cautions.addRow([neutraliseFormula(rule)]);
+    const warnings = perilWarnings(result);
+    if (warnings.length > 0) {
+      cautions.addRow([]);
+      cautions.addRow(["Peril lens — warnings for this run"]).font = BOLD;
+      for (const w of warnings) cautions.addRow([neutraliseFormula(w)]);
+    }
   }
   return withFixedEntryDates(Buffer.from(await workbook.xlsx.writeBuffer()), new Date(manifest.exportedAt));
 }

@@ -9,6 +9,7 @@ import { PercentileNote } from "@/components/ui/percentile-note";
 import { formatMoney, formatNumber, moneyScale, moneyUnit, percentileHeading } from "@/lib/format";
 import { AalBandChart } from "./aal-band-chart";
 import { PortfolioTotals } from "./portfolio-totals";
+import { TableReach } from "./table-reach";
 
 /** The peril cautions in plain words (the peril lens's limits, as README "Cautions" states them). */
 export const PERIL_CAUTIONS = [
@@ -82,7 +83,9 @@ function ProfileSection({ profile, baselineRows }: { profile: PerilProfileResult
         <span className="num text-text">{profile.baselineWarming.toFixed(2)} K</span>
       </p>
       <section>
-        <h3 className="mb-2 text-sm font-semibold text-ink">Multiplier at each horizon</h3>
+        <h3 className="mb-2 text-sm font-semibold text-ink">
+          Multiplier at each horizon{profile.multiplierReturnPeriod ? ` (${profile.multiplierReturnPeriod}-year events; the AAL uses it)` : ""}
+        </h3>
         <SummaryTable
           caption={`Multipliers — ${profile.name}`}
           lead={["Horizon"]}
@@ -93,6 +96,20 @@ function ProfileSection({ profile, baselineRows }: { profile: PerilProfileResult
           A multiplier of 1.05 means the {frequency ? "event frequency" : "loss"} is 5 % above the baseline figure in the firm's risk view.
         </PercentileNote>
       </section>
+      {profile.multiplierReturnPeriod && profile.horizons[0]?.tailMultipliers && (
+        <section>
+          <h3 className="mb-2 text-sm font-semibold text-ink">Multipliers of today's 1-in-100 and 1-in-200 events</h3>
+          <SummaryTable
+            caption={`Tail multipliers — ${profile.name}`}
+            lead={["Horizon", "Today"]}
+            rows={profile.horizons.flatMap((h) =>
+              h.tailMultipliers ? (["100", "200"] as const).map((t) => ({ id: `${h.year}-${t}`, lead: [h.year, `1-in-${t}`], summary: h.tailMultipliers![t] })) : [],
+            )}
+            format={(v) => formatNumber(v, 3)}
+          />
+        </section>
+      )}
+      <TableReach profile={profile} />
       {frequency && (
         <section>
           <h3 className="mb-2 text-sm font-semibold text-ink">Return periods of today's 1-in-100 and 1-in-200 events (years)</h3>
