@@ -1,6 +1,6 @@
 import { useState } from "react";
 import { Link } from "react-router-dom";
-import { RESULT_TABLES } from "@plumeline/contracts";
+import { MEMBER_SHEET_MAX_MEMBERS, MEMBER_TABLE, RESULT_TABLES } from "@plumeline/contracts";
 import { paths } from "@/config/paths";
 import { buttonClass } from "@/components/ui/button";
 import { ExploratoryStamp } from "@/components/ui/badges";
@@ -57,6 +57,17 @@ export function ExportPanel({
             </a>
           ))}
         </div>
+      </div>
+      <div>
+        <p className="mb-1 text-xs font-medium uppercase tracking-wider text-muted">Member table (for validators)</p>
+        <a href={tableCsvUrl(runId, MEMBER_TABLE)} download className={buttonClass("secondary", "sm", "self-start")} onClick={() => later(`${MEMBER_TABLE}.csv`)}>
+          {MEMBER_TABLE}.csv
+        </a>
+        <p className="mt-1 text-xs text-muted">
+          One row per member: each uncertain input, the weight, and the warming at every horizon, from which every percentile above can be
+          recomputed. Recomputed from the stored spec and served only when it gives back the run's result hash. The workbook carries it on a
+          Members sheet up to {MEMBER_SHEET_MAX_MEMBERS.toLocaleString("en-GB")} members; larger runs have it in this CSV only.
+        </p>
       </div>
       {requested && (
         <p role="status" className="text-xs text-muted">
