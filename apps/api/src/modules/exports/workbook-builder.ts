@@ -14,6 +14,7 @@ import { PERIL_TABLE_SHEETS } from "../peril-profiles/peril-result-tables.js";
 import { perilWarnings } from "../peril-profiles/peril-warnings.js";
 import { columnNumberFormat } from "./column-number-format.js";
 import { PROBABILITY_FORMAT, probabilityNumberFormat } from "./probability-number-format.js";
+import { addMemberSheet, type MemberSheet } from "./member-sheet.js";
 import { neutraliseFormula } from "./neutralise-formula.js";
 import { withFixedEntryDates } from "./stable-zip.js";
 import { resultTable, type Table, type TableCell } from "./result-tables.js";
@@ -223,7 +224,7 @@ function addPortfolioTotals(workbook: ExcelJS.Workbook, result: RunResult, tag: 
 }
 
 /** The run's workbook: Manifest first, result tables, Inputs, Cautions. Returns the .xlsx bytes. */
-export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunResult, model: ModelSpec): Promise<Buffer> {
+export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunResult, model: ModelSpec, members: MemberSheet): Promise<Buffer> {
   const workbook = new ExcelJS.Workbook();
   workbook.creator = "Plumeline";
   // Fixed dates keep the bytes of two exports of the same run comparable apart from the manifest.
@@ -234,6 +235,7 @@ export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunRe
   for (const [table, name, note] of TABLE_SHEETS) addTableSheet(workbook, name, resultTable(result, table), `${tag}${note}`);
   if (result.perils) for (const [table, name, note] of PERIL_TABLE_SHEETS) addTableSheet(workbook, name, resultTable(result, table), `${tag}${note}`);
   if (result.perils?.portfolioId) addPortfolioTotals(workbook, result, tag);
+  addMemberSheet(workbook, members, tag);
   addInputs(workbook, model);
   const cautions = workbook.addWorksheet("Cautions");
   cautions.getColumn(1).width = 120;
