@@ -9,10 +9,12 @@ import { AppError } from "./errors/app-error.js";
 import { errorHandler } from "./errors/error-handler.js";
 import { serveWebBuild } from "./http/serve-web-build.js";
 import { noStore } from "./middleware/no-store.js";
+import { rejectControlCharacters } from "./middleware/reject-control-characters.js";
 import { requireTrustedOrigin } from "./middleware/require-trusted-origin.js";
 import { moduleRouters } from "./modules/index.js";
 
 const JSON_LIMIT = "1mb";
+const PERMISSIONS_POLICY = "accelerometer=(), camera=(), geolocation=(), gyroscope=(), magnetometer=(), microphone=(), payment=(), usb=(), interest-cohort=()";
 
 /** Builds the Express app around a context without listening, so tests drive it in-process. */
 export function createApp(ctx: AppContext): express.Express {
@@ -21,6 +23,11 @@ export function createApp(ctx: AppContext): express.Express {
   app.disable("x-powered-by");
   app.set("trust proxy", "loopback");
   app.use(helmet());
+  // helmet does not set this one: the app uses no camera, microphone, location, payment or USB.
+  app.use((_req, res, next) => {
+    res.setHeader("Permissions-Policy", PERMISSIONS_POLICY);
+    next();
+  });
   // gzip/deflate (or brotli, when the client asks for it) for JSON and the web build's text
   // assets; responses that already carry a Content-Encoding (a stored gzip result) pass through.
   app.use(compression());
@@ -55,6 +62,7 @@ export function createApp(ctx: AppContext): express.Express {
   app.use(express.json({ limit: JSON_LIMIT }));
   const api = express.Router();
   api.use(requireTrustedOrigin);
+  api.use(rejectControlCharacters);
   for (const [mountPath, router] of moduleRouters) api.use(mountPath, router);
   api.use((req, _res, next) => next(new AppError(404, "not_found", `No API endpoint ${req.method} ${req.baseUrl}${req.path}.`)));
   app.use("/api", api);

@@ -69,6 +69,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   }
   const e = parsed.data;
   if (e.QUEUE === "bullmq" && !e.REDIS_URL) throw new ConfigError("Invalid configuration:\n  REDIS_URL: required when QUEUE=bullmq");
+  // Mailed links (run finished, review, reset) start with the public origin; without it each
+  // process would fall back to its own port, and a worker's mail would point at the worker.
+  if (e.NODE_ENV === "production" && !e.PUBLIC_ORIGIN)
+    throw new ConfigError("Invalid configuration:\n  PUBLIC_ORIGIN: required when NODE_ENV=production (the address people open; mailed links start with it)");
   // WORKERS=0 means "this process computes nothing": only workers elsewhere (QUEUE=bullmq) could run the jobs.
   if (e.QUEUE === "sqlite" && e.WORKERS === 0)
     throw new ConfigError("Invalid configuration:\n  WORKERS: 0 needs QUEUE=bullmq (with the table queue nothing else would run the jobs)");
@@ -76,7 +80,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   const dataDir = path.resolve(repoRoot, e.PLUMELINE_DATA_DIR ?? "data");
   const publicOrigin = (e.PUBLIC_ORIGIN ?? `http://localhost:${e.PORT}`).replace(/\/$/, "");
   const extraOrigins = (e.TRUSTED_ORIGINS ?? "").split(",").map((o) => o.trim()).filter(Boolean);
-  const localOrigins = [`http://localhost:${e.PORT}`, `http://127.0.0.1:${e.PORT}`, "http://localhost:5173"];
+  // The Vite dev server and the loopback spellings of this port are trusted in development only.
+  const localOrigins = e.NODE_ENV === "development" ? [`http://localhost:${e.PORT}`, `http://127.0.0.1:${e.PORT}`, "http://localhost:5173"] : [];
 
   return {
     env: e.NODE_ENV,

@@ -5,15 +5,15 @@ const [northmere, vellan] = demoOrganisation.regions;
 
 /**
  * Warming already in the demo insurer's risk view: its catastrophe model is calibrated on
- * recent decades, taken as the AR6 observed 2011–2020 warming of 1.09 K over 1850–1900
- * (AR6 WGI SPM A.1.2), rounded to 1.1 K. Illustrative choice for the invented insurer.
+ * recent decades, taken as the observed 2011–2020 warming of 1.09 K over 1850–1900 (IPCC AR6
+ * WGI SPM A.1.2), rounded to 1.1 K. Illustrative choice for the invented insurer.
  */
 const RISK_VIEW_WARMING = 1.1;
 
 /**
- * Heavy-rainfall rate: about 7 % per K (AR6 WGI SPM B.2.4; the Clausius–Clapeyron rate of the
- * Magnus form, Bolton 1980, is 6–7.5 % per K over 0–25 °C, computed). The
- * 5–95 % range of 5–9 % per K around it is illustrative, not an assessed range.
+ * Heavy-rainfall rate: about 7 % per K (IPCC AR6 WGI SPM B.2.4; the Clausius–Clapeyron rate
+ * of the Magnus form, Alduchov & Eskridge 1996, is 6–7.5 % per K over 0–25 °C). The 5–95 %
+ * range of 5–9 % per K around it is illustrative, not an assessed range.
  */
 const heavyRainfallRate = { type: "range", p50: 0.07, low: 0.05, high: 0.09, coverage: 90, shape: "split-normal" } as const;
 
@@ -30,7 +30,7 @@ export const demoPerilProfiles: PerilProfile[] = [
     metric: "severity",
     baselineWarming: RISK_VIEW_WARMING,
     scaling: { kind: "per-kelvin", rate: heavyRainfallRate },
-    source: "About 7 % per K: AR6 WGI SPM B.2.4 and Clausius–Clapeyron (Bolton 1980); common practice. Range illustrative.",
+    source: "About 7 % per K: IPCC AR6 WGI SPM B.2.4 (extreme daily precipitation) and the Clausius–Clapeyron rate; common practice. Range 5–9 % per K illustrative.",
   },
   {
     id: "demo-flood-vellan",
@@ -40,7 +40,7 @@ export const demoPerilProfiles: PerilProfile[] = [
     metric: "severity",
     baselineWarming: RISK_VIEW_WARMING,
     scaling: { kind: "per-kelvin", rate: heavyRainfallRate },
-    source: "About 7 % per K: AR6 WGI SPM B.2.4 and Clausius–Clapeyron (Bolton 1980); common practice. Range illustrative.",
+    source: "About 7 % per K: IPCC AR6 WGI SPM B.2.4 (extreme daily precipitation) and the Clausius–Clapeyron rate; common practice. Range 5–9 % per K illustrative.",
   },
   {
     id: "demo-heat-vellan",
@@ -51,18 +51,36 @@ export const demoPerilProfiles: PerilProfile[] = [
     baselineWarming: RISK_VIEW_WARMING,
     scaling: {
       kind: "table",
-      // Times per 10 years of the 1850–1900 10-year hot extreme (AR6 SPM.6, CMIP6 medians over land).
-      points: [
-        { warming: 0, multiplier: 1 },
-        { warming: 1, multiplier: 2.8 },
-        { warming: 1.5, multiplier: 4.1 },
-        { warming: 2, multiplier: 5.6 },
-        { warming: 4, multiplier: 9.4 },
+      // How often the 1850–1900 hot extreme of each return period occurs at 1/1.5/2/4 °C of global
+      // warming: AR6 WGI SPM Figure SPM.6 (CMIP6 medians over land), 10-year events in times per
+      // 10 years, 50-year events in times per 50 years; 1 at 0 °C by definition.
+      tables: [
+        {
+          returnPeriod: 10,
+          points: [
+            { warming: 0, multiplier: 1 },
+            { warming: 1, multiplier: 2.8 },
+            { warming: 1.5, multiplier: 4.1 },
+            { warming: 2, multiplier: 5.6 },
+            { warming: 4, multiplier: 9.4 },
+          ],
+        },
+        {
+          returnPeriod: 50,
+          points: [
+            { warming: 0, multiplier: 1 },
+            { warming: 1, multiplier: 4.8 },
+            { warming: 1.5, multiplier: 8.6 },
+            { warming: 2, multiplier: 13.9 },
+            { warming: 4, multiplier: 39.2 },
+          ],
+        },
       ],
       beyondTable: "hold",
+      beyondReturnPeriods: "hold",
     },
     source:
-      "AR6 WGI SPM Figure SPM.6, 10-year hot extreme frequency at 1/1.5/2/4 °C (read in a secondary reproduction of the figure). Global land medians used for one region: illustrative.",
+      "IPCC AR6 WGI SPM Figure SPM.6: 10-year hot extremes 2.8/4.1/5.6/9.4 times per 10 years and 50-year hot extremes 4.8/8.6/13.9/39.2 times per 50 years at 1/1.5/2/4 °C (CMIP6 medians over land; values read in reproductions of the figure). Global land medians used for one region, held beyond 4 °C and beyond 50 years: illustrative.",
   },
   {
     id: "demo-wind-northmere",

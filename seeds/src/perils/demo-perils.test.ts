@@ -22,8 +22,25 @@ describe("demo peril seed", () => {
     for (const r of demoPortfolio.rows) expect(regions.has(r.region)).toBe(true);
   });
 
-  it("marks every profile's source, saying in words how sure it is or that it is illustrative", () => {
-    for (const p of demoPerilProfiles) expect(p.source).toMatch(/secondary|common practice|from memory|illustrative/i);
+  it("names every profile's published source or says it is illustrative, without notes-file tags", () => {
+    for (const p of demoPerilProfiles) {
+      expect(p.source).toMatch(/IPCC|illustrative/i);
+      // How sure, in words.
+      expect(p.source).toMatch(/secondary|reproductions|common practice|from memory|illustrative/i);
+      expect(p.source).not.toMatch(/\[read-|\[memory\]|§\d/);
+    }
+  });
+
+  it("gives the heat profile AR6 SPM.6's hot-extreme frequencies for 10-year and 50-year events", () => {
+    // IPCC AR6 WGI SPM Figure SPM.6 (read in reproductions of the figure): times per 10 years of a
+    // 10-year hot extreme and times per 50 years of a 50-year one, at 1 / 1.5 / 2 / 4 °C.
+    const heat = perilProfilesSchema.parse(demoPerilProfiles).find((p) => p.peril === "heat")!;
+    if (heat.scaling.kind !== "table") throw new Error("the demo heat profile must be a table");
+    const byPeriod = Object.fromEntries(heat.scaling.tables.map((t) => [t.returnPeriod, t.points.map((p) => [p.warming, p.multiplier])]));
+    expect(byPeriod).toEqual({
+      10: [[0, 1], [1, 2.8], [1.5, 4.1], [2, 5.6], [4, 9.4]],
+      50: [[0, 1], [1, 4.8], [1.5, 8.6], [2, 13.9], [4, 39.2]],
+    });
   });
 
   it("ships an upload file identical to the rows", () => {

@@ -1,9 +1,10 @@
 import type { ErrorRequestHandler } from "express";
 import type { ApiError, ErrorDetail } from "@plumeline/contracts";
-import { formatPath } from "@plumeline/contracts";
+import { issueDetails } from "@plumeline/contracts";
 import multer from "multer";
 import { ZodError } from "zod";
 import { DatabaseBusyError } from "../db/serialize-writes.js";
+import { MalformedMultipartError } from "../uploads/single-file-upload.js";
 import { AppError, type AppErrorStatus } from "./app-error.js";
 
 /** Seconds a client is asked to wait before retrying a write the database could not take. */
@@ -45,7 +46,7 @@ export function toErrorResponse(err: unknown): Mapped {
     };
   }
   if (err instanceof ZodError) {
-    const details: ErrorDetail[] = err.issues.map((issue) => ({ path: formatPath(issue.path), message: issue.message }));
+    const details: ErrorDetail[] = issueDetails(err);
     return { status: 400, body: { error: { code: "validation_failed", message: "The request has invalid fields.", details } } };
   }
   if (err instanceof multer.MulterError) {
@@ -62,12 +63,32 @@ export function toErrorResponse(err: unknown): Mapped {
     if (err.type === "entity.parse.failed") {
       return { status: 400, body: { error: { code: "malformed_json", message: "The request body is not valid JSON." } } };
     }
+    if (err.type === "encoding.unsupported" || err.status === 415) {
+      return {
+        status: 415,
+        body: { error: { code: "unsupported_content_encoding", message: "The request's Content-Encoding is not supported; send identity, gzip, deflate or br." } },
+      };
+    }
+    // Any other client-side body failure (a gzip header on a plain body, a stream cut short).
+    if (err.status >= 400 && err.status < 500) {
+      return { status: 400, body: { error: { code: "malformed_body", message: "The request body could not be read as sent (check its Content-Encoding and length)." } } };
+    }
+  }
+  if (err instanceof MalformedMultipartError) {
+    return {
+      status: 400,
+      body: { error: { code: "malformed_multipart", message: `The upload is not well-formed multipart: ${err.message}.`, details: [{ path: "file", message: err.message }] } },
+    };
   }
   return { status: 500, body: { error: { code: "internal_error", message: "Something went wrong on our side. It has been logged." } } };
 }
 
-function isBodyParserError(err: unknown): err is { type: string; status: number } {
-  return typeof err === "object" && err !== null && typeof (err as { type?: unknown }).type === "string" && typeof (err as { status?: unknown }).status === "number";
+function isBodyParserError(err: unknown): err is { type?: string; status: number } {
+  if (typeof err !== "object" || err === null) return false;
+  const e = err as { type?: unknown; status?: unknown; expose?: unknown };
+  // body-parser's own errors carry a `type`; a stream error it wrapped (zlib's "incorrect
+  // header check" for a gzip header on a plain body) only gets http-errors' status and expose.
+  return typeof e.status === "number" && (typeof e.type === "string" || e.expose === true);
 }
 
 /** The ONE error handler, mounted last in app.ts. Logs only unexpected failures. */

@@ -1,6 +1,6 @@
 import type { RequestHandler } from "express";
 import { fromNodeHeaders } from "better-auth/node";
-import { isRole } from "../auth/permissions.js";
+import { isRole } from "@plumeline/contracts";
 import { forbidden, unauthorized } from "../errors/app-error.js";
 import { contextOf } from "./request-context.js";
 

@@ -1,5 +1,5 @@
 import type { RequestHandler } from "express";
-import { hasPermission, type Permission } from "../auth/permissions.js";
+import { hasPermission, type Permission } from "@plumeline/contracts";
 import { forbidden } from "../errors/app-error.js";
 import { currentUser } from "./request-context.js";
 

@@ -1,32 +1,18 @@
-/** Permission names exactly as the API's role table states them (docs/API.md). */
-export type Permission =
-  | "pathways:read"
-  | "pathways:write"
-  | "model-versions:read"
-  | "model-versions:write"
-  | "model-versions:decide"
-  | "runs:read"
-  | "runs:create"
-  | "exports:create"
-  | "perils:read"
-  | "perils:write"
-  | "audit:read"
-  | "users:manage"
-  | "outbox:read";
+import { permissions, rolesWith, type Permission } from "@plumeline/contracts";
 
-/** Which role holds a permission, in words, so a refusal can say what would allow it. */
-export const PERMISSION_HOLDERS: Record<Permission, string> = {
-  "pathways:read": "any signed-in role",
-  "pathways:write": "the analyst role",
-  "model-versions:read": "any signed-in role",
-  "model-versions:write": "the analyst role",
-  "model-versions:decide": "the manager role",
-  "runs:read": "any signed-in role",
-  "runs:create": "the analyst or actuary role",
-  "exports:create": "the analyst, actuary or manager role",
-  "perils:read": "any signed-in role",
-  "perils:write": "the analyst or actuary role",
-  "audit:read": "the manager or admin role",
-  "users:manage": "the admin role",
-  "outbox:read": "the admin role",
-};
+export type { Permission };
+
+/** "the analyst or actuary role", "any signed-in role": who holds a permission, in words. */
+function holdersInWords(permission: Permission): string {
+  const holders = rolesWith(permission);
+  if (holders.length === 4) return "any signed-in role";
+  const last = holders.at(-1);
+  const rest = holders.slice(0, -1);
+  return `the ${rest.length ? `${rest.join(", ")} or ${last}` : last} role`;
+}
+
+/**
+ * Which role holds a permission, in words, so a refusal can say what would allow it. Derived
+ * from the contracts' role table, so the words cannot drift from what the API enforces.
+ */
+export const PERMISSION_HOLDERS = Object.fromEntries(permissions.map((p) => [p, holdersInWords(p)])) as Record<Permission, string>;

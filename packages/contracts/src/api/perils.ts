@@ -101,6 +101,8 @@ export const perilCurveSchema = z.object({
   percentiles: z.array(z.number()),
   baselineWarming: z.number(),
   metric: z.enum(["frequency", "severity"]),
+  /** Table profiles: each table's multiplier at each warming level, by the event return period it states (`bands` show the most frequent table). */
+  tables: z.array(z.object({ returnPeriod: z.number(), multiplier: z.array(z.number()) })).optional(),
 });
 export type PerilCurve = z.infer<typeof perilCurveSchema>;
 

@@ -1,6 +1,6 @@
 import { z } from "zod";
 
-/** The four Plumeline roles; the permission each grants is fixed in apps/api/src/auth/permissions.ts. */
+/** The four Plumeline roles; the permissions each grants are fixed in ./permissions.ts. */
 export const roles = ["analyst", "actuary", "manager", "admin"] as const;
 export const roleSchema = z.enum(roles);
 export type Role = z.infer<typeof roleSchema>;

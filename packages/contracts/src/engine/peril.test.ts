@@ -179,3 +179,28 @@ describe("run spec and result carry perils additively", () => {
     expect(runResultSchema.safeParse({ ...result, perils }).success).toBe(true);
   });
 });
+
+describe("table profiles by return period", () => {
+  const points = [{ warming: 0, multiplier: 1 }, { warming: 1, multiplier: 2.8 }];
+  const heat = (scaling: unknown) => ({ ...flood, id: "heat", peril: "heat", metric: "frequency", baselineWarming: 0, scaling });
+
+  it("reads a table saved without a return period as one 10-year table (stated default), holding beyond it", () => {
+    const parsed = perilProfileSchema.parse(heat({ kind: "table", points, beyondTable: "hold" }));
+    expect(parsed.scaling).toEqual({ kind: "table", tables: [{ returnPeriod: 10, points }], beyondTable: "hold", beyondReturnPeriods: "hold" });
+  });
+
+  it("accepts several tables with increasing return periods and refuses disorder, naming the field", () => {
+    const fifty = [{ warming: 0, multiplier: 1 }, { warming: 1, multiplier: 4.8 }];
+    const ok = heat({ kind: "table", tables: [{ returnPeriod: 10, points }, { returnPeriod: 50, points: fifty }], beyondTable: "hold", beyondReturnPeriods: "extrapolate" });
+    expect(perilProfileSchema.parse(ok).scaling).toMatchObject({ tables: [{ returnPeriod: 10 }, { returnPeriod: 50 }], beyondReturnPeriods: "extrapolate" });
+    const disorder = heat({ kind: "table", tables: [{ returnPeriod: 50, points }, { returnPeriod: 10, points: fifty }], beyondTable: "hold" });
+    expect(problems(perilProfileSchema, disorder)).toEqual([
+      "scaling.tables[1].returnPeriod must be greater than tables[0].returnPeriod (50): return periods must strictly increase",
+    ]);
+    expect(problems(perilProfileSchema, heat({ kind: "table", tables: [{ returnPeriod: 0.5, points }], beyondTable: "hold" }))[0]).toMatch(
+      /^scaling\.tables\[0\]\.returnPeriod must lie between 1 and 10000 years/,
+    );
+    expect(problems(perilProfileSchema, heat({ kind: "table", tables: [{ returnPeriod: 10, points }], points, beyondTable: "hold" }))[0]).toMatch(/^scaling\.points must not be given with tables/);
+    expect(problems(perilProfileSchema, heat({ kind: "table", beyondTable: "hold" }))).toEqual(["scaling.tables must hold at least one table"]);
+  });
+});

@@ -19,14 +19,27 @@ import { distributionSchema, type Distribution } from "./distribution.js";
  *   themselves. Inside the table: straight lines between points (linear in warming).
  *   Outside: "hold" keeps the end point's value; "extrapolate" continues the end segment
  *   at its constant per-kelvin rate (geometric), so a multiplier never reaches 0.
- * * frequency metric: an event of return period T becomes one of return period T / m.
- *   AAL scales by m (each event m times as frequent, same loss per event). The loss at
- *   return period T after scaling equals the baseline loss at return period T·m (every
- *   loss level's exceedance frequency is multiplied by m), read off the baseline loss
- *   curve drawn straight on a log-return-period axis through the 1-in-100 and 1-in-200
- *   points, extrapolated with the same slope both ways and floored at 0.
- * * severity metric: AAL and the 1-in-100 and 1-in-200 losses each scale by m; return
- *   periods are not shifted (they need a hazard-to-loss curve the lens does not have).
+ * * return periods: each table states the return period T_k of the events its multipliers
+ *   describe. The multiplier m(T) of a 1-in-T event interpolates the tables' multipliers
+ *   linearly in log multiplier against log return period (a power law between neighbouring
+ *   tables). Outside the tables' return periods: "hold" keeps the nearest table's
+ *   multiplier, "extrapolate" continues the end segment's power law; either way the result
+ *   flags the reported return periods that lie outside the tables. One table: m(T) is its
+ *   multiplier for every T.
+ * * frequency metric: an event of return period T becomes one of return period T / m(T).
+ *   AAL scales by the multiplier of the most frequent table's return period (frequent events
+ *   make most of an average annual loss). A loss level of baseline return period t is
+ *   exceeded m(t) times as often; the loss at return period T after scaling is the baseline
+ *   loss at the smallest t ≥ 1 with t / m(t) ≥ T (t = T·m when m is the same for every
+ *   return period), read off the baseline loss curve drawn straight on a log-return-period
+ *   axis through the 1-in-100 and 1-in-200 points, extrapolated with the same slope both
+ *   ways and floored at 0.
+ * * severity metric: AAL scales by the most frequent table's multiplier, the 1-in-100 and
+ *   1-in-200 losses by m(100) and m(200); return periods are not shifted (they need a
+ *   hazard-to-loss curve the lens does not have).
+ * * warming beyond a table: the result reports, per horizon, the (weighted) share of members
+ *   whose warming lies below or above the warming range every table covers, so a held or
+ *   extrapolated end value is never silent.
  * * A portfolio row is projected by every profile with the same peril and region.
  */
 
@@ -110,24 +123,86 @@ export const tablePointSchema = z
   })
   .strict();
 
+/** Event return periods (years) a multiplier table may state it belongs to. */
+export const TABLE_RETURN_PERIOD_RANGE = [1, 10000] as const;
+/**
+ * The return period read for a table saved before tables stated one (a bare `points` list):
+ * 10 years, the event frequency of most published multiplier tables (AR6 WGI SPM Figure SPM.6
+ * gives its heavy-precipitation and drought panels, and one of its hot-extreme panels, for
+ * 10-year events). With one table every return period gets its multipliers, and the lens flags
+ * the 1-in-100 and 1-in-200 figures as read beyond it.
+ */
+export const LEGACY_TABLE_RETURN_PERIOD = 10;
+
+function warmingsIncrease(points: readonly { warming: number }[], ctx: z.RefinementCtx, path: (string | number)[]): void {
+  points.forEach((p, i) => {
+    const prev = points[i - 1];
+    if (prev && !(p.warming > prev.warming))
+      ctx.addIssue({
+        code: "custom",
+        path: [...path, i, "warming"],
+        message: `must be greater than points[${i - 1}].warming (${prev.warming}): warming levels must strictly increase`,
+      });
+  });
+}
+
+const tablePointsSchema = () =>
+  z.array(tablePointSchema, { error: "must be a list of { warming, multiplier }" }).min(2, "must hold at least two points");
+
+/** One table: the multipliers by warming level for events of one return period. */
+export const returnPeriodTableSchema = z
+  .object({
+    /** Return period (years) of the events whose change the multipliers describe, e.g. 10 for a 1-in-10-year event. */
+    returnPeriod: finite().refine(
+      (v) => v >= TABLE_RETURN_PERIOD_RANGE[0] && v <= TABLE_RETURN_PERIOD_RANGE[1],
+      `must lie between ${TABLE_RETURN_PERIOD_RANGE[0]} and ${TABLE_RETURN_PERIOD_RANGE[1]} years`,
+    ),
+    points: tablePointsSchema(),
+  })
+  .strict()
+  .superRefine((t, ctx) => warmingsIncrease(t.points, ctx, ["points"]));
+
+/**
+ * Table scaling: one table per event return period (at least one, return periods strictly
+ * increasing). A stored profile from before return periods were stated (`points` instead of
+ * `tables`) is read as one table for LEGACY_TABLE_RETURN_PERIOD-year events.
+ */
 export const tableScalingSchema = z
   .object({
     kind: z.literal("table"),
-    points: z.array(tablePointSchema, { error: "must be a list of { warming, multiplier }" }).min(2, "must hold at least two points"),
+    tables: z
+      .array(returnPeriodTableSchema, { error: "must be a list of { returnPeriod, points }" })
+      .min(1, "must hold at least one table")
+      .max(6, "must hold at most 6 tables")
+      .optional(),
+    /** Superseded by `tables`: a table saved before return periods were stated. */
+    points: tablePointsSchema().optional(),
     beyondTable: z.enum(["hold", "extrapolate"], { error: 'must be "hold" or "extrapolate"' }),
+    /** Outside the tables' return periods: keep the nearest table's multiplier, or continue the end segment's power law. */
+    beyondReturnPeriods: z.enum(["hold", "extrapolate"], { error: 'must be "hold" or "extrapolate"' }).default("hold"),
   })
   .strict()
   .superRefine((s, ctx) => {
-    s.points.forEach((p, i) => {
-      const prev = s.points[i - 1];
-      if (prev && !(p.warming > prev.warming))
+    if (s.tables && s.points)
+      ctx.addIssue({ code: "custom", path: ["points"], message: "must not be given with tables (put the points in a table with its return period)" });
+    if (!s.tables && !s.points) ctx.addIssue({ code: "custom", path: ["tables"], message: "must hold at least one table" });
+    if (s.points) warmingsIncrease(s.points, ctx, ["points"]);
+    s.tables?.forEach((t, i) => {
+      const prev = s.tables![i - 1];
+      if (prev && !(t.returnPeriod > prev.returnPeriod))
         ctx.addIssue({
           code: "custom",
-          path: ["points", i, "warming"],
-          message: `must be greater than points[${i - 1}].warming (${prev.warming}): warming levels must strictly increase`,
+          path: ["tables", i, "returnPeriod"],
+          message: `must be greater than tables[${i - 1}].returnPeriod (${prev.returnPeriod}): return periods must strictly increase`,
         });
     });
-  });
+  })
+  .transform((s) => ({
+    kind: s.kind,
+    tables: s.tables ?? [{ returnPeriod: LEGACY_TABLE_RETURN_PERIOD, points: s.points! }],
+    beyondTable: s.beyondTable,
+    beyondReturnPeriods: s.beyondReturnPeriods,
+  }));
 
 export const perilScalingSchema = z.discriminatedUnion("kind", [perKelvinScalingSchema, tableScalingSchema], {
   error: 'kind must be "per-kelvin" or "table"',
@@ -261,9 +336,20 @@ export const projectedLossSchema = z.object({
   loss200: perilSummarySchema,
 });
 
+/** Share of members (weighted) whose warming lies outside a table profile's warming range, 0–1. */
+export const beyondTableShareSchema = z.object({ below: z.number(), above: z.number() });
+
+/** Above this share of members beyond a table's warming range, screens and exports warn. */
+export const BEYOND_TABLE_WARNING_SHARE = 0.05;
+
 export const perilHorizonResultSchema = z.object({
   year: z.number().int(),
+  /** The multiplier AAL uses: for a table profile, that of its most frequent table's return period. */
   multiplier: perilSummarySchema,
+  /** Multipliers of today's 1-in-100 and 1-in-200 events, m(100) and m(200). Optional: newer engines. */
+  tailMultipliers: z.object({ "100": perilSummarySchema, "200": perilSummarySchema }).optional(),
+  /** Table profiles: members beyond the table's warming range; null for per-kelvin. Optional: newer engines. */
+  beyondTable: beyondTableShareSchema.nullable().optional(),
   /** Frequency profiles: return period (years) of today's 1-in-100 and 1-in-200 events; null for severity. */
   returnPeriods: z.object({ "100": perilSummarySchema, "200": perilSummarySchema }).nullable(),
   losses: z.array(projectedLossSchema),
@@ -276,6 +362,20 @@ export const perilProfileResultSchema = z.object({
   region: z.string(),
   metric: z.enum(PERIL_METRICS),
   baselineWarming: z.number(),
+  /** Table profiles: the tables' return periods (years) and the warming range (K) every table covers; null for per-kelvin. */
+  table: z
+    .object({
+      returnPeriods: z.array(z.number()),
+      warmingRange: z.tuple([z.number(), z.number()]),
+      beyondTable: z.enum(["hold", "extrapolate"]),
+      beyondReturnPeriods: z.enum(["hold", "extrapolate"]),
+      /** Reported return periods (1-in-100, 1-in-200) outside the tables' return periods: read by holding or extrapolating. */
+      readOutside: z.array(z.number()),
+    })
+    .nullable()
+    .optional(),
+  /** Return period (years) whose multiplier `multiplier` and AAL use; null when one multiplier serves every return period. */
+  multiplierReturnPeriod: z.number().nullable().optional(),
   horizons: z.array(perilHorizonResultSchema),
 });
 
@@ -314,9 +414,10 @@ export const perilResultSchema = z.object({
 export const PERIL_RULES: readonly string[] = [
   "Warming is the global-mean anomaly against 1850–1900; multipliers apply only to warming beyond the baseline warming already in the firm's risk view.",
   "Per-kelvin scaling: multiplier = (1 + r)^(warming − baseline warming), r as a fraction per K, sampled member by member so warming and scaling uncertainty combine.",
-  "Table scaling: straight lines between the table's points, divided by the table's value at the baseline warming (multiplier 1 there); outside the table the end value is held or the end segment's per-kelvin rate is continued, as the profile states.",
-  "Frequency profiles: an event of return period T becomes one of return period T / multiplier; AAL scales by the multiplier; the loss at return period T becomes the baseline loss at return period T × multiplier, read on a straight line through the 1-in-100 and 1-in-200 losses against the logarithm of the return period (same slope beyond them, never below 0).",
-  "Severity profiles: AAL, 1-in-100 and 1-in-200 losses each scale by the multiplier; return periods are not shifted.",
+  "Table scaling: straight lines between the table's points, divided by the table's value at the baseline warming (multiplier 1 there); outside the table the end value is held or the end segment's per-kelvin rate is continued, as the profile states. The share of members whose warming lies beyond the table is reported for every horizon, with a warning above 5 %.",
+  "Return periods: each table states the return period of the events its multipliers describe; a 1-in-T event's multiplier is interpolated between the tables as a straight line of log multiplier against log return period; outside the tables' return periods the nearest table is held or the end segment continued, as the profile states, and the figures read there are flagged.",
+  "Frequency profiles: an event of return period T becomes one of return period T / m(T); AAL scales by the multiplier of the most frequent table's return period; a loss level of baseline return period t is exceeded m(t) times as often, so the loss at return period T becomes the baseline loss at the smallest t with t / m(t) ≥ T (T × m when every return period has the same multiplier), read on a straight line through the 1-in-100 and 1-in-200 losses against the logarithm of the return period (same slope beyond them, never below 0).",
+  "Severity profiles: AAL scales by the most frequent table's multiplier, the 1-in-100 and 1-in-200 losses by the multipliers of those return periods; return periods are not shifted.",
   "Not a catastrophe model: multipliers adjust the firm's own view of risk. Scaling differs by region, peril and return period (rarer events can change more in frequency); exposure growth, adaptation, compound perils and tipping points are not included.",
 ];
 
@@ -330,6 +431,8 @@ export const PORTFOLIO_TOTAL_NOTES: readonly string[] = [
 
 export type PerKelvinScaling = z.output<typeof perKelvinScalingSchema>;
 export type TableScaling = z.output<typeof tableScalingSchema>;
+export type ReturnPeriodTable = z.output<typeof returnPeriodTableSchema>;
+export type BeyondTableShare = z.infer<typeof beyondTableShareSchema>;
 export type PerilScaling = z.output<typeof perilScalingSchema>;
 export type PerilProfile = z.output<typeof perilProfileSchema>;
 export type PortfolioRow = z.output<typeof portfolioRowSchema>;

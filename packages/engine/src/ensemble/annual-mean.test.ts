@@ -56,7 +56,8 @@ function stepSpec(p: TwoLayerParameters, overrides: Partial<RunSpec> = {}): RunS
   return spec;
 }
 
-describe("annual means", () => {
+// Ensembles of thousands of members: a generous timeout for a busy shared machine.
+describe("annual means", { timeout: 60_000 }, () => {
   it("a step of 1 W m-2 gives each year's mean of the analytic step response (Geoffroy et al. 2013a)", () => {
     const result = runEnsemble(stepSpec(PARAMETERS)).pathways[0]!;
     // Integrals of the analytic solution for C = 7.3, C0 = 106, λ = 1.13, γ = 0.73, ε = 1 (the

@@ -4,7 +4,8 @@ import { constraintWeights, likelihoodSd } from "./constraint-weights.js";
 import { runEnsemble } from "./run-ensemble.js";
 import { baseSpec } from "./test-support/specs.js";
 
-describe("constraint likelihood with internal variability", () => {
+// Ensembles of thousands of members: a generous timeout for a busy shared machine.
+describe("constraint likelihood with internal variability", { timeout: 60_000 }, () => {
   it("weights members by a normal likelihood with sd √(sd_obs² + sd_iv²), largest weight 1", () => {
     // Observed 1.09 K with sd 0.076 (IPCC AR6 WGI SPM A.1.2, 0.95–1.20 read as 5–95 %) and
     // internal variability 0.21 K: total sd √(0.076² + 0.21²) = 0.22333 (computed).

@@ -58,7 +58,8 @@ function expectEquilibriumIsEcs(spec: RunSpec): void {
   }
 }
 
-describe("feedback from the forcing a member feels at doubled CO2", () => {
+// Ensembles of thousands of members: a generous timeout for a busy shared machine.
+describe("feedback from the forcing a member feels at doubled CO2", { timeout: 60_000 }, () => {
   it("a CO2 doubling given in ppm, held to equilibrium, gives back the sampled ECS percentiles (f2x sampled, unused)", () => {
     // The pathway's doubling is the expression's: 278.3 → 556.6 ppm (AR6 1750 level, AR6 WGI TS §TS.2.2).
     expectEquilibriumIsEcs(doublingSpec({ ppm: step(278.3, 556.6) }, fastClimate(ecs, { type: "normal", mean: 3.93, sd: 0.3 })));

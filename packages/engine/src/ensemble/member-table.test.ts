@@ -12,7 +12,8 @@ const spec = baseSpec({
 });
 spec.model.agents = { ...spec.model.agents, ozone: { scale: { type: "normal", mean: 1, sd: 0.3 } }, solar: { scale: { type: "normal", mean: 1, sd: 0.1 } } };
 
-describe("memberTable", () => {
+// Ensembles of thousands of members: a generous timeout for a busy shared machine.
+describe("memberTable", { timeout: 60_000 }, () => {
   it("lists member, the budget's inputs, weight and <pathway>@<year>; horizon columns give the run's percentiles exactly (d3-array quantile, R type 7)", () => {
     const table = memberTable(spec);
     const result = runEnsemble(spec);

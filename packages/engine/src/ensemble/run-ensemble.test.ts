@@ -15,7 +15,8 @@ function hasNonFinite(value: unknown): boolean {
   return false;
 }
 
-describe("runEnsemble", () => {
+// Ensembles of thousands of members: a generous timeout for a busy shared machine.
+describe("runEnsemble", { timeout: 60_000 }, () => {
   it("with only an agent scale uncertain, percentiles = deterministic response × (1 + sd·z_p)", () => {
     // Closed form: the model is linear in forcing, so a member whose only forcing agent is
     // scaled by s has anomaly s·D(t); with s ~ Normal(1, 0.2) the p-percentile is D(t)(1 + 0.2 z_p).

@@ -1,6 +1,7 @@
 import { runResultSchema } from "@plumeline/contracts";
 import { describe, expect, it } from "vitest";
 import { tableMultiplierAt } from "../peril/table-multiplier.js";
+import { tablesOf } from "../peril/table-profile.js";
 import type { PerilProfile, Portfolio, TableScaling } from "../peril/types.js";
 import { applyDefaults } from "../spec/apply-defaults.js";
 import { inputHash } from "../hash/run-hashes.js";
@@ -56,7 +57,8 @@ describe("runEnsemble with the peril lens", () => {
     // neighbouring members commutes with it except across a table point: tolerance 1e-6).
     const heat = demoPerilProfiles.findIndex((p) => p.scaling.kind === "table");
     const scaling = demoPerilProfiles[heat]!.scaling as TableScaling;
-    const table = tableMultiplierAt(scaling.points, scaling.beyondTable, demoPerilProfiles[heat]!.baselineWarming);
+    // The reported multiplier is the most frequent table's (the one AAL uses).
+    const table = tableMultiplierAt(tablesOf(scaling)[0]!.points, scaling.beyondTable, demoPerilProfiles[heat]!.baselineWarming);
     result.pathways.forEach((pathway, p) =>
       pathway.horizons.forEach((horizon, h) => {
         const lensed = perils.pathways[p]!.profiles[heat]!.horizons[h]!;

@@ -37,7 +37,8 @@ function spec(agents: Partial<typeof AGENTS>, members: number, scales: boolean):
   });
 }
 
-describe("sensitivity budget", () => {
+// Ensembles of thousands of members: a generous timeout for a busy shared machine.
+describe("sensitivity budget", { timeout: 60_000 }, () => {
   it("variance shares of forcing scales match the linear closed form at every horizon", () => {
     const result = runEnsemble(spec(AGENTS, 20_000, true)).pathways[0]!;
     const alone = Object.fromEntries(

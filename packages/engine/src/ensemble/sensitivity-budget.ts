@@ -23,7 +23,7 @@ export function sensitivityBudget(
   inputOrders: Map<number, Uint32Array>,
 ): SensitivityEntry[] {
   const entries: SensitivityEntry[] = [];
-  if (plan.members < 3) return entries;
+  if (plan.members < 3 || plan.horizons.length === 0) return entries;
   const pathway = plan.pathways[pathwayIndex]!;
   const { weights, totalWeight, effectiveMembers } = weighting;
   const relevant = plan.inputs

@@ -212,3 +212,62 @@ describe("assemblePerilResult", () => {
     expect(assemblePerilResult([flood], null, pathways).portfolioId).toBeNull();
   });
 });
+
+describe("table profiles with return periods", () => {
+  const points = (heat.scaling as { points: { warming: number; multiplier: number }[] }).points;
+  /** AR6 WGI SPM Figure SPM.6 50-year hot extreme, times per 50 years at 0/1/1.5/2/4 °C (secondary reproductions of the figure). */
+  const fifty = [
+    { warming: 0, multiplier: 1 },
+    { warming: 1, multiplier: 4.8 },
+    { warming: 1.5, multiplier: 8.6 },
+    { warming: 2, multiplier: 13.9 },
+    { warming: 4, multiplier: 39.2 },
+  ];
+  const both: PerilProfile = {
+    ...heat,
+    scaling: { kind: "table", tables: [{ returnPeriod: 10, points }, { returnPeriod: 50, points: fifty }], beyondTable: "hold" },
+  };
+  const lens = (profile: PerilProfile, warming: number[], weights: number[] | null = null) =>
+    applyPerilLens({
+      pathwayId: "p",
+      seed: "s",
+      sampling: "monte-carlo",
+      profiles: [profile],
+      portfolio,
+      horizons: [2100],
+      warmingAtHorizons: [Float64Array.from(warming)],
+      weights: weights ? Float64Array.from(weights) : null,
+      percentiles: [50],
+    }).profiles[0]!;
+
+  it("reads a table saved without a return period as one 10-year table: same numbers as before, flagged", () => {
+    const legacy = lens(heat, [1, 2, 3]);
+    const stated = lens({ ...heat, scaling: { kind: "table", tables: [{ returnPeriod: 10, points }], beyondTable: "hold" } }, [1, 2, 3]);
+    expect(legacy.horizons).toEqual(stated.horizons);
+    expect(legacy.table).toMatchObject({ returnPeriods: [10], readOutside: [100, 200] });
+    expect(legacy.multiplierReturnPeriod).toBeNull();
+  });
+
+  it("uses the 50-year table for the 1-in-100 and 1-in-200 events when held beyond it, the 10-year table for AAL", () => {
+    const result = lens(both, [2]);
+    const h = result.horizons[0]!;
+    expect(h.multiplier.p50).toBe(5.6);
+    expect(h.tailMultipliers["100"].p50).toBe(13.9);
+    expect(h.returnPeriods!["100"].p50).toBeCloseTo(100 / 13.9, 12);
+    expect(result.multiplierReturnPeriod).toBe(10);
+    expect(result.table).toMatchObject({ returnPeriods: [10, 50], warmingRange: [0, 4], readOutside: [100, 200] });
+    const row = h.losses[0]!;
+    expect(row.aal.p50).toBeCloseTo(4 * 5.6, 12);
+    // 1-in-100 after scaling = baseline loss at 100 · 13.9 years (log-linear through 80 and 110).
+    expect(row.loss100.p50).toBeCloseTo(80 + 30 * Math.log2(13.9), 9);
+  });
+
+  it("reports the weighted share of members beyond the table's warming range", () => {
+    expect(lens(both, [1, 2, 4.5, 5]).horizons[0]!.beyondTable).toEqual({ below: 0, above: 0.5 });
+    // Weights 1, 1, 2, 0: above = 2 / 4.
+    expect(lens(both, [1, 2, 4.5, 5], [1, 1, 2, 0]).horizons[0]!.beyondTable).toEqual({ below: 0, above: 0.5 });
+    expect(lens(both, [1, 2, 4.5, 5], [1, 1, 0, 2]).horizons[0]!.beyondTable).toEqual({ below: 0, above: 0.5 });
+    expect(lens(both, [1, 2, 4.5, 5], [3, 1, 0, 0]).horizons[0]!.beyondTable).toEqual({ below: 0, above: 0 });
+    expect(lens(flood, [1, 5]).horizons[0]!.beyondTable).toBeNull();
+  });
+});

@@ -1,12 +1,15 @@
 import { quantileOf, validateDistribution } from "../distributions/index.js";
 import { perKelvinMultiplier } from "./per-kelvin-multiplier.js";
 import { tableMultiplierAt } from "./table-multiplier.js";
+import { tablesOf } from "./table-profile.js";
 import type { PerilProfile } from "./types.js";
 
 export interface MultiplierCurve {
   warming: number[];
-  /** Per percentile key ("p5", …): the multiplier at each warming level. */
+  /** Per percentile key ("p5", …): the multiplier at each warming level (a table profile: its most frequent table's). */
   bands: Record<string, number[]>;
+  /** Table profiles: each table's multiplier at each warming level, by the event return period it states. */
+  tables?: { returnPeriod: number; multiplier: number[] }[];
 }
 
 /**
@@ -17,7 +20,8 @@ export interface MultiplierCurve {
  * x = warming − baselineWarming, is increasing in r when x > 0 and decreasing when x < 0,
  * so its p-th percentile is (1 + F⁻¹(p))^x for x > 0 and (1 + F⁻¹(1 − p))^x for x < 0
  * (percentiles commute with monotone maps); at x = 0 it is 1. A table has no scaling
- * uncertainty: every band is the table multiplier. Cost O(levels × percentiles).
+ * uncertainty: every band is the most frequent table's multiplier, and `tables` gives every
+ * table's curve by its return period. Cost O(levels × (percentiles + tables)).
  *
  * Example: rate fixed 0.07, baseline 1, levels [1, 2] → bands.p50 = [1, 1.07].
  */
@@ -35,10 +39,12 @@ export function perilMultiplierCurve(
   const bands: Record<string, number[]> = {};
   const scaling = profile.scaling;
   if (scaling.kind === "table") {
-    const table = tableMultiplierAt(scaling.points, scaling.beyondTable, profile.baselineWarming);
-    const values = warmingLevels.map(table);
-    for (const p of percentiles) bands[`p${p}`] = values.slice();
-    return { warming: warmingLevels.slice(), bands };
+    const tables = tablesOf(scaling).map((t) => {
+      const table = tableMultiplierAt(t.points, scaling.beyondTable, profile.baselineWarming);
+      return { returnPeriod: t.returnPeriod, multiplier: warmingLevels.map(table) };
+    });
+    for (const p of percentiles) bands[`p${p}`] = tables[0]!.multiplier.slice();
+    return { warming: warmingLevels.slice(), bands, tables };
   }
   validateDistribution(scaling.rate, "scaling.rate");
   for (const p of percentiles) {

@@ -1,7 +1,7 @@
 import type { PercentileSelector } from "../summary/percentile-selector.js";
-import { projectRow } from "./project-losses.js";
+import type { ProjectedFigures } from "./project-losses.js";
 import { summariseValues } from "./summarise-values.js";
-import type { PerilMetric, PerilProfile, Portfolio, PortfolioRow, PortfolioTotal } from "./types.js";
+import type { PerilProfile, Portfolio, PortfolioRow, PortfolioTotal } from "./types.js";
 
 /** Which profile projects each portfolio row, or why no totals can be formed. */
 export interface TotalsPlan {
@@ -40,7 +40,7 @@ type Measure = (typeof MEASURES)[number];
  * Portfolio totals of one pathway, added up member by member.
  *
  * Method: for every member, its projected AAL, 1-in-100 and 1-in-200 loss of each row
- * (projectRow with that member's own multiplier of the row's profile) are added within the
+ * (the lens's projection with that member's own multipliers of the row's profile) are added within the
  * row's currency; rows no profile projects add their baseline figures unchanged. Only then
  * are the members' totals summarised (weighted R-7 percentiles and weighted mean,
  * summariseValues), so the totals' percentiles are percentiles of a sum, never a sum of
@@ -79,13 +79,17 @@ export class PortfolioTotalsAccumulator {
       });
   }
 
-  /** Adds, member by member, the projected figures of the rows profile `profileIndex` projects at horizon h. */
-  addProfile(profileIndex: number, metric: PerilMetric, h: number, multipliers: Float64Array): void {
+  /**
+   * Adds, member by member, the projected figures of the rows profile `profileIndex` projects at
+   * horizon h; `figuresOf(row, i)` gives member i's projected figures of a row (the lens's own
+   * projection, so totals and per-row figures agree).
+   */
+  addProfile(profileIndex: number, h: number, figuresOf: (row: PortfolioRow, member: number) => ProjectedFigures): void {
     this.portfolio.rows.forEach((row, r) => {
       if (this.plan.profileOfRow[r] !== profileIndex) return;
       const [aal, loss100, loss200] = this.sums[this.plan.currencies.indexOf(row.currency)]![h]!;
       for (let i = 0; i < this.members; i++) {
-        const f = projectRow(row, metric, multipliers[i]!);
+        const f = figuresOf(row, i);
         aal![i] = aal![i]! + f.aal;
         loss100![i] = loss100![i]! + f.loss100;
         loss200![i] = loss200![i]! + f.loss200;

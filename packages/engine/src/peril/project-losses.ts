@@ -1,3 +1,4 @@
+import { allEqual, lossReturnPeriodAfterScaling, multiplierAtReturnPeriod, type BeyondReturnPeriods } from "./return-period-multiplier.js";
 import type { PerilMetric, PortfolioRow } from "./types.js";
 
 /** Baseline tail points of a portfolio row: the 1-in-100 and 1-in-200 losses. */
@@ -49,5 +50,50 @@ export function projectRow(
     aal: row.aal * multiplier,
     loss100: lossAtReturnPeriod(row, 100 * multiplier),
     loss200: lossAtReturnPeriod(row, 200 * multiplier),
+  };
+}
+
+/** Multipliers of one member at one warming level, by event return period (tables ascending). */
+export interface ReturnPeriodMultipliers {
+  returnPeriods: readonly number[];
+  multipliers: ArrayLike<number>;
+  beyond: BeyondReturnPeriods;
+}
+
+/**
+ * A portfolio row's figures when the multiplier depends on the event's return period (a table
+ * profile with tables for several return periods); m(T) is read by multiplierAtReturnPeriod.
+ * * AAL scales by the multiplier of the most frequent table (frequent events make most of an
+ *   average annual loss), for both metrics.
+ * * severity: the 1-in-100 and 1-in-200 losses scale by m(100) and m(200).
+ * * frequency: the loss at return period T afterwards is the baseline loss at the return period
+ *   lossReturnPeriodAfterScaling gives (the smallest t with t / m(t) ≥ T).
+ * With one multiplier for every return period this is projectRow, bit for bit. Cost O(tables).
+ *
+ * Example: tables [10, 50] with multipliers [2, 2] → the same figures as projectRow(row, metric, 2).
+ */
+export function projectRowAcrossReturnPeriods(
+  row: Pick<PortfolioRow, "aal" | "loss100" | "loss200">,
+  metric: PerilMetric,
+  curve: ReturnPeriodMultipliers,
+): ProjectedFigures {
+  const multipliers = curve.multipliers;
+  if (multipliers.length !== curve.returnPeriods.length || multipliers.length === 0)
+    throw new RangeError("multipliers must hold one value per return period");
+  for (let k = 0; k < multipliers.length; k++)
+    if (!(Number.isFinite(multipliers[k]) && multipliers[k]! > 0)) throw new RangeError(`multipliers[${k}] must be a finite number > 0`);
+  if (allEqual(multipliers)) return projectRow(row, metric, multipliers[0]!);
+  const aal = row.aal * multipliers[0]!;
+  if (metric === "severity")
+    return {
+      aal,
+      loss100: row.loss100 * multiplierAtReturnPeriod(curve.returnPeriods, multipliers, curve.beyond, 100),
+      loss200: row.loss200 * multiplierAtReturnPeriod(curve.returnPeriods, multipliers, curve.beyond, 200),
+    };
+  if (metric !== "frequency") throw new RangeError('metric must be "frequency" or "severity"');
+  return {
+    aal,
+    loss100: lossAtReturnPeriod(row, lossReturnPeriodAfterScaling(curve.returnPeriods, multipliers, curve.beyond, 100)),
+    loss200: lossAtReturnPeriod(row, lossReturnPeriodAfterScaling(curve.returnPeriods, multipliers, curve.beyond, 200)),
   };
 }

@@ -20,15 +20,29 @@ export interface TablePoint {
   multiplier: number;
 }
 
+/** Multipliers by warming level for events of one return period (years). */
+export interface ReturnPeriodTable {
+  returnPeriod: number;
+  points: TablePoint[];
+}
+
 /**
- * Multipliers by warming level, relative to any fixed reference; the lens divides by the
- * value at the baseline warming. "hold" keeps the end value beyond the table, "extrapolate"
- * continues the end segment's per-kelvin (geometric) rate.
+ * Multipliers by warming level, one table per event return period (return periods strictly
+ * increasing), relative to any fixed reference; the lens divides by the value at the baseline
+ * warming. "hold" keeps the end value beyond a table's warming levels, "extrapolate" continues
+ * the end segment's per-kelvin (geometric) rate. Between return periods: log multiplier linear
+ * in log return period; beyond them `beyondReturnPeriods` (default "hold") holds the nearest
+ * table or continues the end segment's power law.
+ * A spec stored before return periods were stated carries `points` instead of `tables`: it is
+ * read as one table for 10-year events (LEGACY_TABLE_RETURN_PERIOD).
  */
 export interface TableScaling {
   kind: "table";
-  points: TablePoint[];
+  tables?: ReturnPeriodTable[];
+  /** Superseded by `tables` (older specs). */
+  points?: TablePoint[];
   beyondTable: "hold" | "extrapolate";
+  beyondReturnPeriods?: "hold" | "extrapolate";
 }
 
 export type PerilScaling = PerKelvinScaling | TableScaling;
@@ -74,9 +88,20 @@ export interface ProjectedLoss {
   loss200: PerilSummary;
 }
 
+/** Share of members (weighted, 0–1) whose warming lies below / above a table's warming range. */
+export interface BeyondTableShare {
+  below: number;
+  above: number;
+}
+
 export interface PerilHorizonResult {
   year: number;
+  /** The multiplier AAL uses: for a table profile, that of its most frequent table. */
   multiplier: PerilSummary;
+  /** Multipliers of today's 1-in-100 and 1-in-200 events. */
+  tailMultipliers: { "100": PerilSummary; "200": PerilSummary };
+  /** Table profiles: members beyond the warming range every table covers; null for per-kelvin. */
+  beyondTable: BeyondTableShare | null;
   /** Frequency profiles: return period of today's 1-in-100 and 1-in-200 events; null for severity. */
   returnPeriods: { "100": PerilSummary; "200": PerilSummary } | null;
   losses: ProjectedLoss[];
@@ -89,6 +114,16 @@ export interface PerilProfileResult {
   region: string;
   metric: PerilMetric;
   baselineWarming: number;
+  /** Table profiles: their return periods, the warming range every table covers, the rules beyond them, and the reported return periods read outside the tables. */
+  table: {
+    returnPeriods: number[];
+    warmingRange: [number, number];
+    beyondTable: "hold" | "extrapolate";
+    beyondReturnPeriods: "hold" | "extrapolate";
+    readOutside: number[];
+  } | null;
+  /** Return period whose multiplier `multiplier` and AAL use; null when one multiplier serves every return period. */
+  multiplierReturnPeriod: number | null;
   horizons: PerilHorizonResult[];
 }
 

@@ -1,6 +1,7 @@
 import { validateDistribution, quantileOf } from "../distributions/index.js";
 import { SpecError } from "../spec/spec-error.js";
 import { checkTable } from "./table-multiplier.js";
+import { tablesOf } from "./table-profile.js";
 import type { PerilProfile, Portfolio } from "./types.js";
 
 /** Limits the contracts state too (packages/contracts/src/engine/peril.ts). */
@@ -60,10 +61,13 @@ function validateScaling(profile: PerilProfile, at: string): void {
   }
   if (scaling?.kind === "table") {
     try {
-      checkTable(scaling.points, scaling.beyondTable);
+      tablesOf(scaling).forEach((t) => checkTable(t.points, scaling.beyondTable));
     } catch (error) {
       throw asSpecError(new RangeError(`${at}.${(error as Error).message}`), at);
     }
+    const beyond = scaling.beyondReturnPeriods;
+    if (beyond !== undefined && beyond !== "hold" && beyond !== "extrapolate")
+      throw new SpecError(`${at}.beyondReturnPeriods`, 'must be "hold" or "extrapolate"');
     return;
   }
   throw new SpecError(`${at}.kind`, 'must be "per-kelvin" or "table"');

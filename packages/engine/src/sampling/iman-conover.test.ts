@@ -11,7 +11,7 @@ function spearmanReference(x: Float64Array, y: Float64Array): number {
   return sampleRankCorrelation(Array.from(x), Array.from(y));
 }
 
-describe("imanConover", () => {
+describe("imanConover", { timeout: 60_000 }, () => {
   const n = 5000;
   const target = [
     [1, -0.3, 0.6],

@@ -17,7 +17,8 @@ const share = (x: Float64Array, y: Float64Array, weights: Float64Array | null = 
   return firstOrderIndex(sortOrder(x), y, weights, total, effective);
 };
 
-describe("firstOrderIndex (Sobol main effect from given data)", () => {
+// Ensembles of thousands of members: a generous timeout for a busy shared machine.
+describe("firstOrderIndex (Sobol main effect from given data)", { timeout: 60_000 }, () => {
   it("a linear model of independent inputs: S_i = a_i² Var(X_i) / Σ_j a_j² Var(X_j) (closed form)", () => {
     // Y = 3·X1 + 2·X2 + 1·X3 + 0·X4 with X ~ Normal(0, sd_i): S = (9·1, 4·2.25, 1·4, 0)/22 (sd 1, 1.5, 2, 1).
     const n = 20_000;

@@ -1,44 +1,56 @@
-import { createHash, randomUUID } from "node:crypto";
-import type { ExportRecord, ResultTable } from "@plumeline/contracts";
+import { randomUUID } from "node:crypto";
+import { MEMBER_TABLE, type ExportRecord, type ResultTable } from "@plumeline/contracts";
 import { Op } from "sequelize";
 import type { AppContext } from "../../context.js";
+import { conflict, notFound } from "../../errors/app-error.js";
 import type { RequestUser } from "../../middleware/request-context.js";
 import { recordAudit } from "../audit/audit.service.js";
 import { getRunWithResult } from "../results/results.service.js";
 import type { RunModel } from "../runs/run.model.js";
-import { tableToCsv } from "./csv-writer.js";
+import type { RunResult } from "@plumeline/contracts";
+import { buildExportFile, exportBaseName, sha256, type ExportFile, type ExportKind, type ExportSource } from "./export-files.js";
+import { MEMBER_CSV_CHUNK_MEMBERS, openMemberTable, type OpenMemberTable } from "./member-table-client.js";
 import type { ExportRecordModel } from "./export-record.model.js";
-import { resultTable } from "./result-tables.js";
-import { buildRunWorkbook, type WorkbookManifest } from "./workbook-builder.js";
+import { gatherRunManifest } from "./run-manifest.js";
+import type { WorkbookManifest } from "./workbook-builder.js";
+
+export type { ExportFile } from "./export-files.js";
 
 type Ctx = Pick<AppContext, "models" | "sequelize">;
 
-export interface ExportFile {
+function sourceOf(run: RunModel, result: RunResult): ExportSource {
+  return { runId: run.id, runName: run.name, exploratory: run.exploratory, spec: run.spec, result };
+}
+
+const tableName = (kind: ExportKind) => (kind.format === "csv" ? kind.table : kind.format === "xlsx" ? "workbook" : kind.format === "pdf" ? "report" : "tables");
+
+/** What the register keeps of a file handed out: its name, SHA-256 (hex) and size. */
+interface ExportedBytes {
   fileName: string;
-  contentType: string;
-  bytes: Buffer;
+  checksum: string;
+  byteSize: number;
 }
 
-function baseName(run: RunModel): string {
-  return `plumeline-run-${run.id.slice(0, 8)}${run.exploratory ? "-EXPLORATORY" : ""}`;
-}
+const describeBytes = (file: ExportFile): ExportedBytes => ({ fileName: file.fileName, checksum: sha256(file.bytes), byteSize: file.bytes.length });
 
-/** Records the file in the exports table and the audit trail, in one transaction. */
-async function recordExport(ctx: Ctx, user: RequestUser, run: RunModel, format: "csv" | "xlsx", table: string, file: ExportFile) {
-  const checksum = createHash("sha256").update(file.bytes).digest("hex");
+/** Records the file in the exports table (with the manifest it was built from) and the audit trail, in one transaction. */
+async function recordExport(ctx: Ctx, user: RequestUser, run: RunModel, kind: ExportKind, file: ExportedBytes, manifest: WorkbookManifest) {
+  const { checksum } = file;
+  const table = tableName(kind);
   await ctx.sequelize.transaction(async (transaction) => {
     const row = await ctx.models.ExportRecord.create(
       {
         id: randomUUID(),
         runId: run.id,
-        format,
+        format: kind.format,
         resultTable: table,
         fileName: file.fileName,
         exploratory: run.exploratory,
         resultHash: run.resultHash ?? "",
         checksum,
-        byteSize: file.bytes.length,
+        byteSize: file.byteSize,
         createdBy: user.id,
+        manifest,
       },
       { transaction },
     );
@@ -49,78 +61,105 @@ async function recordExport(ctx: Ctx, user: RequestUser, run: RunModel, format: 
         action: "export.created",
         entityType: "run",
         entityId: run.id,
-        summary: `Exported ${file.fileName} (${format.toUpperCase()}${run.exploratory ? ", EXPLORATORY" : ""}) from run "${run.name}".`,
-        data: { exportId: row.id, format, table, checksum, resultHash: run.resultHash },
+        summary: `Exported ${file.fileName} (${kind.format.toUpperCase()}${run.exploratory ? ", EXPLORATORY" : ""}) from run "${run.name}".`,
+        data: { exportId: row.id, format: kind.format, table, checksum, resultHash: run.resultHash },
       },
       transaction,
     );
   });
 }
 
-export async function exportTableCsv(ctx: Ctx, user: RequestUser, runId: string, table: ResultTable): Promise<ExportFile> {
+/** Builds a new export of a run for the user, records it, and returns the file. */
+async function exportRun(ctx: Ctx, user: RequestUser, runId: string, kind: ExportKind): Promise<ExportFile> {
   const { run, result } = await getRunWithResult(ctx, runId);
-  const file: ExportFile = {
-    fileName: `${baseName(run)}-${table}.csv`,
-    contentType: "text/csv; charset=utf-8",
-    bytes: Buffer.from(tableToCsv(resultTable(result, table)), "utf8"),
-  };
-  await recordExport(ctx, user, run, "csv", table, file);
+  const now = new Date();
+  const manifest = await gatherRunManifest(ctx, run, result, user, now);
+  const file = await buildExportFile(kind, sourceOf(run, result), manifest);
+  await recordExport(ctx, user, run, kind, describeBytes(file), manifest);
   return file;
 }
 
-export async function exportWorkbook(ctx: Ctx, user: RequestUser, runId: string): Promise<ExportFile> {
+export const exportTableCsv = (ctx: Ctx, user: RequestUser, runId: string, table: ResultTable) => exportRun(ctx, user, runId, { format: "csv", table });
+export const exportTablesZip = (ctx: Ctx, user: RequestUser, runId: string) => exportRun(ctx, user, runId, { format: "zip" });
+export const exportWorkbook = (ctx: Ctx, user: RequestUser, runId: string) => exportRun(ctx, user, runId, { format: "xlsx" });
+export const exportReport = (ctx: Ctx, user: RequestUser, runId: string) => exportRun(ctx, user, runId, { format: "pdf" });
+
+/** A member-table CSV being produced: the caller writes the chunks, then records the export. */
+export interface MemberTableDownload {
+  fileName: string;
+  contentType: string;
+  table: OpenMemberTable;
+  /** Records the export (register + audit) once every byte went out. */
+  record(checksum: string, byteSize: number): Promise<void>;
+}
+
+/**
+ * Recomputes the run's member table from its stored spec (in a thread; refused with 409 when
+ * the engine version or result hash does not come back) and hands it out as CSV, chunk by chunk.
+ */
+export async function openMemberTableCsv(ctx: Ctx, user: RequestUser, runId: string): Promise<MemberTableDownload> {
   const { run, result } = await getRunWithResult(ctx, runId);
-  const version = await ctx.models.ModelVersion.findByPk(run.modelVersionId);
-  const pathways = await ctx.models.Pathway.findAll({ where: { id: { [Op.in]: run.pathwayIds } } });
-  const statements = await ctx.models.RunStatement.findAll({ where: { runId: run.id }, order: [["createdAt", "ASC"], ["id", "ASC"]] });
-  const userIds = [run.createdBy, version?.decidedBy, ...statements.map((s) => s.createdBy)].filter((x): x is string => !!x);
-  const users = await ctx.models.User.findAll({ where: { id: { [Op.in]: userIds } }, attributes: ["id", "name", "email"] });
-  const who = (id: string | null | undefined) => {
-    const u = users.find((x) => x.id === id);
-    return u ? `${u.name} <${u.email}>` : null;
+  const table = await openMemberTable({
+    spec: run.spec,
+    expected: { engineVersion: result.engineVersion, resultHash: result.resultHash },
+    columnsUpTo: 0,
+    chunkMembers: MEMBER_CSV_CHUNK_MEMBERS,
+  });
+  const fileName = `${exportBaseName(sourceOf(run, result))}-${MEMBER_TABLE}.csv`;
+  return {
+    fileName,
+    contentType: "text/csv; charset=utf-8",
+    table,
+    record: async (checksum, byteSize) =>
+      recordExport(ctx, user, run, { format: "csv", table: MEMBER_TABLE as ResultTable }, { fileName, checksum, byteSize }, await gatherRunManifest(ctx, run, result, user, new Date())),
   };
-  const byId = new Map(pathways.map((p) => [p.id, p]));
-  const manifest: WorkbookManifest = {
-    runId: run.id,
-    runName: run.name,
-    exploratory: run.exploratory,
-    createdBy: who(run.createdBy) ?? run.createdBy,
-    createdAt: run.createdAt.toISOString(),
-    finishedAt: run.finishedAt?.toISOString() ?? null,
-    modelVersion: {
-      id: run.modelVersionId,
-      name: version?.name ?? "?",
-      versionNumber: version?.versionNumber ?? 0,
-      status: version?.status ?? "?",
-      changeClass: version?.changeClass ?? null,
-      decidedBy: who(version?.decidedBy),
-      decidedAt: version?.decidedAt?.toISOString() ?? null,
-    },
-    pathways: run.pathwayIds.map((id) => {
-      const p = byId.get(id);
-      return { id, name: p?.name ?? "?", source: p?.source ?? "", vintage: p?.vintage ?? "", startYear: p?.startYear ?? 0, endYear: p?.endYear ?? 0, checksum: p?.checksum ?? "" };
-    }),
-    seed: run.seed,
-    members: run.members,
-    sampling: run.sampling,
-    baseline: run.spec.baseline,
-    percentiles: run.spec.percentiles,
-    thresholds: run.spec.thresholds,
-    horizons: run.spec.horizons,
-    engineVersion: result.engineVersion,
-    inputHash: result.inputHash,
-    resultHash: result.resultHash,
-    exportedBy: `${user.name} <${user.email}>`,
-    exportedAt: new Date().toISOString(),
-    statements: statements.map((s) => ({ kind: s.kind, text: s.text, by: who(s.createdBy) ?? s.createdBy, at: s.createdAt.toISOString() })),
-  };
-  const file: ExportFile = {
-    fileName: `${baseName(run)}.xlsx`,
-    contentType: "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet",
-    bytes: await buildRunWorkbook(manifest, result, run.spec.model),
-  };
-  await recordExport(ctx, user, run, "xlsx", "workbook", file);
-  return file;
+}
+
+function kindOf(record: ExportRecordModel): ExportKind {
+  if (record.format === "csv") return { format: "csv", table: record.resultTable as ResultTable };
+  return { format: record.format };
+}
+
+/**
+ * A past export, rebuilt from the stored result and the manifest it was first built with, and
+ * handed out only if its SHA-256 equals the recorded checksum. Anything else — the run's
+ * result changed, an export recorded before manifests were kept, a builder that now writes
+ * different bytes — is a 409 that says so; a different file is never handed out in its place.
+ * Each download again is written to the audit trail.
+ */
+export async function downloadExportAgain(ctx: Ctx, user: RequestUser, exportId: string): Promise<ExportFile> {
+  const record = await ctx.models.ExportRecord.findByPk(exportId);
+  if (!record) throw notFound("Export", exportId);
+  if (record.format === "csv" && record.resultTable === MEMBER_TABLE)
+    throw conflict(
+      `Export ${record.fileName} is a member table: it is recomputed from the stored spec on each request and checked against the run's result hash. Export it again (GET /api/runs/${record.runId}/tables/${MEMBER_TABLE}.csv) for the same rows.`,
+      "export_not_rebuildable",
+    );
+  const { run, result } = await getRunWithResult(ctx, record.runId);
+  if (result.resultHash !== record.resultHash)
+    throw conflict(
+      `Export ${record.fileName} was made from result ${record.resultHash.slice(0, 12)}…, but run "${run.name}" now holds result ${result.resultHash.slice(0, 12)}…; it cannot be rebuilt.`,
+      "export_result_changed",
+    );
+  if (!record.manifest && record.format !== "csv")
+    throw conflict(`Export ${record.fileName} was recorded before Plumeline kept the manifest of each export, so it cannot be rebuilt byte for byte.`, "export_not_rebuildable");
+  const manifest = record.manifest ?? (await gatherRunManifest(ctx, run, result, user, record.createdAt));
+  const file = await buildExportFile(kindOf(record), { runId: run.id, runName: run.name, exploratory: run.exploratory, spec: run.spec, result }, manifest);
+  const checksum = sha256(file.bytes);
+  if (checksum !== record.checksum)
+    throw conflict(
+      `Rebuilt ${record.fileName} has SHA-256 ${checksum.slice(0, 12)}…, not the recorded ${record.checksum.slice(0, 12)}…; the file is not handed out. Export the run again for a new file.`,
+      "export_checksum_mismatch",
+    );
+  await recordAudit(ctx, {
+    actorId: user.id,
+    action: "export.downloaded-again",
+    entityType: "run",
+    entityId: run.id,
+    summary: `Downloaded ${record.fileName} again (checksum verified) from run "${run.name}".`,
+    data: { exportId: record.id, checksum },
+  });
+  return { ...file, fileName: record.fileName };
 }
 
 export async function listExports(ctx: Ctx, user: RequestUser, query: { mine?: "true" | "false"; runId?: string }): Promise<ExportRecord[]> {

@@ -16,6 +16,13 @@ import { binaryBody } from "../../test-support/binary-body.js";
 import SSF from "ssf";
 import { buildRunWorkbook, type WorkbookManifest } from "./workbook-builder.js";
 import { requestUserOf } from "../../test-support/request-user.js";
+import { execFileSync } from "node:child_process";
+import { createHash } from "node:crypto";
+import { mkdtempSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import JSZip from "jszip";
+import { formatKelvin } from "@plumeline/contracts";
 
 let t: TestContext;
 let analyst: SignedInAgent;
@@ -56,7 +63,7 @@ describe("GET /api/runs/:id/workbook.xlsx", () => {
     workbook = new ExcelJS.Workbook();
     await workbook.xlsx.load(res.body as unknown as ArrayBuffer);
     expect(workbook.worksheets.map((w) => w.name)).toEqual([
-      "Manifest", "Temperature", "Horizons", "Exceedance", "Crossing years", "Sensitivity", "Forcing", "Imbalance", "Inputs", "Cautions",
+      "Manifest", "Temperature", "Horizons", "Exceedance", "Crossing years", "Sensitivity", "Forcing", "Imbalance", "Members", "Inputs", "Cautions",
     ]);
     const temperature = workbook.getWorksheet("Temperature")!;
     const header = (temperature.getRow(2).values as unknown[]).slice(1);
@@ -76,12 +83,13 @@ describe("GET /api/runs/:id/workbook.xlsx", () => {
 
   it("formats every numeric cell (years as 0, chances as %, kelvin as 0.00), freezes the header rows, sizes the columns", () => {
     let numeric = 0;
-    for (const sheet of workbook.worksheets) {
+    // The Members sheet keeps the General format on purpose: every digit a validator recomputes from.
+    for (const sheet of workbook.worksheets.filter((w) => w.name !== "Members")) {
       sheet.eachRow((row, rowNumber) =>
         row.eachCell((cell) => {
           if (typeof cell.value !== "number") return;
           numeric++;
-          expect(cell.numFmt, `${sheet.name}!${cell.address} (row ${rowNumber})`).toMatch(/^(0|0\.0+|0\.0#|#,##0(\.0+)?|0\.0%)$/);
+          expect(cell.numFmt, `${sheet.name}!${cell.address} (row ${rowNumber})`).toMatch(/^(0|0\.0+|0\.0#|#,##0(\.0+)?|0\.0%|"< 0\.1%"|"> 99\.9%")$/);
         }),
       );
     }
@@ -204,6 +212,69 @@ describe("GET /api/runs/:id/tables/:table.csv", () => {
   });
 });
 
+describe("GET /api/runs/:id/report.pdf", () => {
+  it("returns the run report; pdftotext finds the result hash and the horizon medians as the screen writes them", async () => {
+    const res = await actuary.get(`/api/runs/${runId}/report.pdf`).buffer(true).parse(binaryBody);
+    expect(res.status).toBe(200);
+    expect(res.headers["content-type"]).toBe("application/pdf");
+    expect(res.headers["content-disposition"]).toMatch(new RegExp(`engine-${result.engineVersion.replace(/\./g, "\\.")}-result-${result.resultHash.slice(0, 12)}-EXPLORATORY-report\\.pdf`));
+    const file = path.join(mkdtempSync(path.join(tmpdir(), "plumeline-report-api-")), "report.pdf");
+    writeFileSync(file, res.body as Buffer);
+    const text = execFileSync("pdftotext", ["-layout", file, "-"], { encoding: "utf8" });
+    expect(text).toContain(result.resultHash);
+    for (const h of result.pathways[0]!.horizons) expect(text).toMatch(new RegExp(`${h.year}\\s+${formatKelvin(h.temperature.p5)}\\s+${formatKelvin(h.temperature.p17)}\\s+${formatKelvin(h.temperature.p50)}`));
+    expect(text).toContain("EXPLORATORY");
+    expect((await admin.get(`/api/runs/${runId}/report.pdf`)).status).toBe(403);
+    expect((await request(t.app).get(`/api/runs/${runId}/report.pdf`)).status).toBe(401);
+    expect((await actuary.get("/api/runs/missing/report.pdf")).status).toBe(404);
+  });
+});
+
+describe("GET /api/runs/:id/tables.zip", () => {
+  it("holds every table as plain CSV named by run, engine version and result hash, with manifest.json beside them", async () => {
+    const res = await actuary.get(`/api/runs/${runId}/tables.zip`).buffer(true).parse(binaryBody);
+    expect(res.status).toBe(200);
+    const zip = await JSZip.loadAsync(res.body as Buffer);
+    const names = Object.keys(zip.files);
+    const stem = `-engine-${result.engineVersion}-result-${result.resultHash.slice(0, 12)}-EXPLORATORY-`;
+    expect(names.filter((n) => n.endsWith(".csv")).every((n) => n.includes(stem))).toBe(true);
+    expect(names.filter((n) => n.endsWith(".csv"))).toHaveLength(7);
+    const manifest = JSON.parse(await zip.file("manifest.json")!.async("string"));
+    expect(manifest).toMatchObject({ runId, resultHash: result.resultHash, engineVersion: result.engineVersion, exploratory: true });
+    const horizons = manifest.tables.find((x: { table: string }) => x.table === "horizons");
+    const csv = await zip.file(horizons.file)!.async("nodebuffer");
+    expect(createHash("sha256").update(csv).digest("hex")).toBe(horizons.sha256);
+    expect(csv.toString("utf8").split("\r\n")[0]).toMatch(/^pathway_id,pathway_name,year,temperature_p5_K/);
+  });
+});
+
+describe("GET /api/exports/:exportId/file", () => {
+  it("downloads any past export again, rebuilt and checked against its recorded checksum", async () => {
+    const list = (await actuary.get(`/api/exports?runId=${runId}&mine=true`)).body as Array<{ id: string; format: string; checksum: string; fileName: string }>;
+    for (const format of ["csv", "xlsx", "pdf", "zip"]) {
+      const record = list.find((r) => r.format === format)!;
+      expect(record, format).toBeDefined();
+      const again = await actuary.get(`/api/exports/${record.id}/file`).buffer(true).parse(binaryBody);
+      expect(again.status, format).toBe(200);
+      expect(createHash("sha256").update(again.body as Buffer).digest("hex")).toBe(record.checksum);
+      expect(again.headers["content-disposition"]).toContain(record.fileName);
+    }
+    expect(await t.ctx.models.AuditEvent.count({ where: { action: "export.downloaded-again", entityId: runId } })).toBe(4);
+  });
+
+  it("refuses with 409 when the rebuilt file differs from the record, and answers 401, 403, 404", async () => {
+    const record = (await t.ctx.models.ExportRecord.findOne({ where: { runId, format: "xlsx" } }))!;
+    await t.ctx.models.ExportRecord.update({ checksum: "0".repeat(64) }, { where: { id: record.id } });
+    const res = await actuary.get(`/api/exports/${record.id}/file`);
+    expect(res.status).toBe(409);
+    expect(res.body.error.code).toBe("export_checksum_mismatch");
+    expect(res.body.error.message).toContain("not handed out");
+    expect((await request(t.app).get(`/api/exports/${record.id}/file`)).status).toBe(401);
+    expect((await admin.get(`/api/exports/${record.id}/file`)).status).toBe(403);
+    expect((await actuary.get("/api/exports/missing/file")).status).toBe(404);
+  });
+});
+
 describe("probabilities on the workbook", () => {
   it("show as percentages that never round a possibility away, never in scientific notation; the cell keeps the value", async () => {
     // A weighted ensemble can give a chance such as 5e-109. SheetJS SSF (an independent
@@ -230,7 +301,7 @@ describe("probabilities on the workbook", () => {
       resultHash: result.resultHash, exportedBy: "b", exportedAt: new Date(0).toISOString(), statements: [],
     } as WorkbookManifest;
     const book = new ExcelJS.Workbook();
-    await book.xlsx.load((await buildRunWorkbook(manifest, tweaked, run.spec.model)) as unknown as ArrayBuffer);
+    await book.xlsx.load((await buildRunWorkbook(manifest, tweaked, run.spec.model, { kind: "omitted", reason: "not part of this test" })) as unknown as ArrayBuffer);
     const sheet = book.getWorksheet("Exceedance")!;
     const column = (sheet.getRow(2).values as unknown[]).indexOf("p_exceed_2K");
     shown.forEach(([v, text], k) => {

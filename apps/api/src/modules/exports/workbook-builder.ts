@@ -11,9 +11,12 @@ import {
   type RunResult,
 } from "@plumeline/contracts";
 import { PERIL_TABLE_SHEETS } from "../peril-profiles/peril-result-tables.js";
+import { perilWarnings } from "../peril-profiles/peril-warnings.js";
 import { columnNumberFormat } from "./column-number-format.js";
 import { PROBABILITY_FORMAT, probabilityNumberFormat } from "./probability-number-format.js";
+import { addMemberSheet, type MemberSheet } from "./member-sheet.js";
 import { neutraliseFormula } from "./neutralise-formula.js";
+import { withFixedEntryDates } from "./stable-zip.js";
 import { resultTable, type Table, type TableCell } from "./result-tables.js";
 
 /** What the manifest sheet states about the run (all of it read from the database, not the request). */
@@ -221,7 +224,7 @@ function addPortfolioTotals(workbook: ExcelJS.Workbook, result: RunResult, tag: 
 }
 
 /** The run's workbook: Manifest first, result tables, Inputs, Cautions. Returns the .xlsx bytes. */
-export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunResult, model: ModelSpec): Promise<Buffer> {
+export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunResult, model: ModelSpec, members: MemberSheet): Promise<Buffer> {
   const workbook = new ExcelJS.Workbook();
   workbook.creator = "Plumeline";
   // Fixed dates keep the bytes of two exports of the same run comparable apart from the manifest.
@@ -232,6 +235,7 @@ export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunRe
   for (const [table, name, note] of TABLE_SHEETS) addTableSheet(workbook, name, resultTable(result, table), `${tag}${note}`);
   if (result.perils) for (const [table, name, note] of PERIL_TABLE_SHEETS) addTableSheet(workbook, name, resultTable(result, table), `${tag}${note}`);
   if (result.perils?.portfolioId) addPortfolioTotals(workbook, result, tag);
+  addMemberSheet(workbook, members, tag);
   addInputs(workbook, model);
   const cautions = workbook.addWorksheet("Cautions");
   cautions.getColumn(1).width = 120;
@@ -243,6 +247,12 @@ export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunRe
     cautions.addRow([]);
     cautions.addRow(["Peril lens — how the multipliers were applied"]).font = BOLD;
     for (const rule of PERIL_RULES) cautions.addRow([neutraliseFormula(rule)]);
+    const warnings = perilWarnings(result);
+    if (warnings.length > 0) {
+      cautions.addRow([]);
+      cautions.addRow(["Peril lens — warnings for this run"]).font = BOLD;
+      for (const w of warnings) cautions.addRow([neutraliseFormula(w)]);
+    }
   }
-  return Buffer.from(await workbook.xlsx.writeBuffer());
+  return withFixedEntryDates(Buffer.from(await workbook.xlsx.writeBuffer()), new Date(manifest.exportedAt));
 }

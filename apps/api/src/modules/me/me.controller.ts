@@ -1,6 +1,6 @@
 import type { Request, Response } from "express";
 import type { Me } from "@plumeline/contracts";
-import { permissionsOf } from "../../auth/permissions.js";
+import { permissionsOf } from "@plumeline/contracts";
 import { currentUser } from "../../middleware/request-context.js";
 
 export const meController = {

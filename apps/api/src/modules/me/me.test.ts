@@ -1,6 +1,6 @@
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { permissionsByRole } from "../../auth/permissions.js";
+import { permissionsByRole } from "@plumeline/contracts";
 import { signIn } from "../../test-support/sign-in.js";
 import { createTestContext, type TestContext } from "../../test-support/test-context.js";
 

@@ -8,6 +8,7 @@ import { resultTable } from "../exports/result-tables.js";
 import { buildRunWorkbook, type WorkbookManifest } from "../exports/workbook-builder.js";
 import { testModelVersionBody, testPathwayBody } from "../runs/runs.fixtures.js";
 import { PERIL_TABLE_SHEETS, perilTable } from "./peril-result-tables.js";
+import { perilWarnings } from "./peril-warnings.js";
 import { portfolioTotalsTable } from "./portfolio-totals-table.js";
 
 /**
@@ -32,7 +33,12 @@ const profiles: PerilProfile[] = [
     region: "North",
     metric: "frequency",
     baselineWarming: 1,
-    scaling: { kind: "table", points: [{ warming: 1, multiplier: 2.8 }, { warming: 2, multiplier: 5.6 }, { warming: 4, multiplier: 9.4 }], beyondTable: "hold" },
+    scaling: {
+      kind: "table",
+      tables: [{ returnPeriod: 10, points: [{ warming: 1, multiplier: 2.8 }, { warming: 2, multiplier: 5.6 }, { warming: 4, multiplier: 9.4 }] }],
+      beyondTable: "hold",
+      beyondReturnPeriods: "hold",
+    },
   },
 ];
 const portfolio: Portfolio = {
@@ -46,6 +52,8 @@ const portfolio: Portfolio = {
 };
 
 let result: RunResult;
+/** The member warmings the lens was given, per horizon. */
+let stated: number[][];
 const manifest = (r: RunResult): WorkbookManifest => ({
   runId: "run-1",
   runName: "Peril export test",
@@ -84,6 +92,7 @@ beforeAll(() => {
   const horizons = [2030, 2050, 2100];
   // Stated member warmings (K above 1850–1900): a spread of 0.8 K around 1.4 / 1.9 / 2.9 K.
   const warmingAtHorizons = [1.4, 1.9, 2.9].map((centre) => Float64Array.from({ length: members }, (_, i) => centre - 0.4 + (0.8 * i) / (members - 1)));
+  stated = warmingAtHorizons.map((w) => Array.from(w));
   const lens = applyPerilLens({
     pathwayId: "p1",
     seed: "peril-export",
@@ -101,11 +110,47 @@ beforeAll(() => {
 describe("peril result tables", () => {
   it("multipliers: one row per profile and horizon, each cell the JSON's value", () => {
     const table = perilTable(result, "peril-multipliers");
-    expect(table.columns.slice(-6)).toEqual(["multiplier_p5", "multiplier_p17", "multiplier_p50", "multiplier_p83", "multiplier_p95", "multiplier_mean"]);
+    expect(table.columns.slice(9, 16)).toEqual([
+      "multiplier_return_period_years",
+      "multiplier_p5",
+      "multiplier_p17",
+      "multiplier_p50",
+      "multiplier_p83",
+      "multiplier_p95",
+      "multiplier_mean",
+    ]);
+    expect(table.columns.slice(-5)).toEqual(["table_return_periods_years", "read_outside_tables", "share_below_table", "share_above_table", "beyond_table_warning"]);
     expect(table.rows).toHaveLength(2 * 3);
     const flood2050 = table.rows.find((r) => r[2] === "flood" && r[8] === 2050)!;
-    const json = result.perils!.pathways[0]!.profiles[0]!.horizons[1]!.multiplier;
-    expect(flood2050.slice(9)).toEqual([json.p5, json.p17, json.p50, json.p83, json.p95, json.mean]);
+    const json = result.perils!.pathways[0]!.profiles[0]!.horizons[1]!;
+    expect(flood2050.slice(10, 16)).toEqual([json.multiplier.p5, json.multiplier.p17, json.multiplier.p50, json.multiplier.p83, json.multiplier.p95, json.multiplier.mean]);
+    expect(flood2050.slice(16, 22)).toEqual(Object.values(json.tailMultipliers!["100"]));
+    // Per-kelvin: no table, so no return periods, shares or warning.
+    expect(flood2050.slice(-5)).toEqual([null, null, null, null, null]);
+  });
+
+  it("multipliers: a table profile states its return periods and the share of members beyond its warming range", () => {
+    const table = perilTable(result, "peril-multipliers");
+    // The heat table covers 1–4 K. Count the stated member warmings outside it, horizon by horizon.
+    stated.forEach((warming, h) => {
+      const below = warming.filter((w) => w < 1).length / warming.length;
+      const above = warming.filter((w) => w > 4).length / warming.length;
+      const row = table.rows.find((r) => r[2] === "heat" && r[8] === [2030, 2050, 2100][h])!;
+      expect(row.slice(-5)).toEqual(["10", "100 200", below, above, null]);
+    });
+  });
+
+  it("multipliers: more than 5 % of members past the table's end is a warning in the row", () => {
+    const heat = result.perils!.pathways[0]!.profiles[1]!;
+    // Move the 2100 horizon's table end below the members: a 2.5 K end leaves the members above 2.5 K (of 2.5–3.3 K) beyond it.
+    const shifted = structuredClone(result);
+    const profile = shifted.perils!.pathways[0]!.profiles[1]!;
+    profile.table = { ...heat.table!, warmingRange: [1, 2.5] };
+    profile.horizons[2]!.beyondTable = { below: 0, above: 0.95 };
+    const row = perilTable(shifted, "peril-multipliers").rows.find((r) => r[2] === "heat" && r[8] === 2100)!;
+    expect(row.at(-1)).toBe("95.0 % of members lie outside the table's 1–2.5 K: their multipliers are held at the end value");
+    profile.horizons[2]!.beyondTable = { below: 0.02, above: 0.03 };
+    expect(perilTable(shifted, "peril-multipliers").rows.find((r) => r[2] === "heat" && r[8] === 2100)!.at(-1)).toBeNull();
   });
 
   it("return periods: frequency profiles only, 100 and 200 rows; 1-in-100 becomes 100 / multiplier", () => {
@@ -115,7 +160,9 @@ describe("peril result tables", () => {
     const heat = result.perils!.pathways[0]!.profiles[1]!.horizons[2]!;
     const row = table.rows.find((r) => r[8] === 2100 && r[9] === 100)!;
     const json = heat.returnPeriods!["100"];
-    expect(row.slice(10)).toEqual([json.p5, json.p17, json.p50, json.p83, json.p95, json.mean]);
+    expect(row.slice(10, 16)).toEqual([json.p5, json.p17, json.p50, json.p83, json.p95, json.mean]);
+    // One 10-year table: the 1-in-100 figures are read beyond it.
+    expect(row[16]).toBe("yes");
     // Return-period identity T' = T / m (return period = 1 / annual frequency): the 5th percentile of 100/m sits next to 100 / (95th percentile of m).
     // Not equal: R-7 interpolates between order statistics, and 100/m is convex, so the interpolated value is the larger.
     const identity = 100 / heat.multiplier.p95!;
@@ -138,7 +185,7 @@ describe("peril result tables", () => {
     const table = resultTable(result, "peril-multipliers");
     const back = parse(tableToCsv(table), { columns: true }) as Array<Record<string, string>>;
     expect(back).toHaveLength(table.rows.length);
-    expect(Number(back[0]!.multiplier_p95)).toBe(table.rows[0]![13]);
+    expect(Number(back[0]!.multiplier_p95)).toBe(table.rows[0]![14]);
   });
 
   it("a result without a perils block gives headers only", () => {
@@ -176,7 +223,7 @@ describe("portfolio totals table", () => {
 
 describe("peril workbook sheets", () => {
   async function readBack(r: RunResult) {
-    const bytes = await buildRunWorkbook(manifest(r), r, modelSpecSchema.parse(testModelVersionBody().model));
+    const bytes = await buildRunWorkbook(manifest(r), r, modelSpecSchema.parse(testModelVersionBody().model), { kind: "omitted", reason: "not part of this test" });
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.load(bytes as unknown as ArrayBuffer);
     return wb;
@@ -192,7 +239,8 @@ describe("peril workbook sheets", () => {
       expect(header).toEqual(expected.columns);
       expected.rows.forEach((row, i) => {
         const cells = (sheet.getRow(i + 3).values as unknown[]).slice(1);
-        expect(cells).toEqual(row);
+        // An empty cell reads back as missing: compare it as null.
+        expect(Array.from({ length: row.length }, (_, j) => cells[j] ?? null)).toEqual(row);
       });
       expect(sheet.rowCount).toBe(expected.rows.length + 2);
       expect(String(sheet.getCell("A1").value)).toMatch(/^EXPLORATORY/);
@@ -200,6 +248,9 @@ describe("peril workbook sheets", () => {
     const cautions = wb.getWorksheet("Cautions")!;
     const texts = (cautions.getColumn(1).values as unknown[]).filter((v): v is string => typeof v === "string");
     for (const c of [...RESULT_CAUTIONS, ...PERIL_RULES]) expect(texts).toContain(c);
+    // The run's own warnings: the one 10-year heat table is read beyond itself for 1-in-100 and 1-in-200.
+    expect(perilWarnings(result)).toEqual(["Heat, North: the tables are for 10-year events, so the 1-in-100 and 1-in-200 figures are read beyond them (the nearest table held)."]);
+    for (const w of perilWarnings(result)) expect(texts).toContain(w);
   });
 
   it("has a Portfolio totals sheet in money format with the notes on what the totals are", async () => {

@@ -1,7 +1,8 @@
 import { randomUUID } from "node:crypto";
 import {
-  formatPath,
+  issueDetails,
   perilProfileSchema,
+  perilScalingSchema,
   type CurveRange,
   type PerilCurve,
   type PerilProfile,
@@ -20,7 +21,11 @@ import type { PerilProfileModel } from "./peril-profile.model.js";
 
 type Ctx = Pick<AppContext, "models" | "sequelize">;
 
-/** The engine's view of a stored profile (what a run spec carries). */
+/**
+ * The engine's view of a stored profile (what a run spec carries). The stored scaling is read
+ * through the shared schema, so a table saved before tables stated their return period (a bare
+ * `points` list) comes back as one table for 10-year events, the stated default.
+ */
 export function toEngineProfile(row: PerilProfileModel): PerilProfile {
   return {
     id: row.id,
@@ -29,7 +34,7 @@ export function toEngineProfile(row: PerilProfileModel): PerilProfile {
     region: row.region,
     metric: row.metric,
     baselineWarming: row.baselineWarming,
-    scaling: row.scaling,
+    scaling: perilScalingSchema.parse(row.scaling),
     ...(row.source ? { source: row.source } : {}),
   };
 }
@@ -210,7 +215,7 @@ async function refuseIfLocked(ctx: Ctx, row: PerilProfileModel, verb: string, tr
 /** Validates a full profile with the shared schema; issues become 400 details on the body's fields. */
 function parseProfile(candidate: unknown): PerilProfile {
   const parsed = perilProfileSchema.safeParse(candidate);
-  if (!parsed.success) throw badRequest(parsed.error.issues.map((i) => ({ path: formatPath(i.path), message: i.message })));
+  if (!parsed.success) throw badRequest(issueDetails(parsed.error));
   return parsed.data;
 }
 

@@ -27,7 +27,7 @@ const rainfall = {
   source: "test",
 } as const;
 
-/** AR6 WGI SPM Figure SPM.6 10-year hot extreme frequencies at 1 / 1.5 / 2 / 4 °C (read in a secondary reproduction of the figure). */
+/** IPCC AR6 WGI SPM Figure SPM.6: 10-year hot extreme frequencies at 1 / 1.5 / 2 / 4 °C (read in reproductions of the figure), saved the old way (no return period). */
 const spm6Table = {
   kind: "table",
   points: [
@@ -191,6 +191,28 @@ describe("preview curves", () => {
     expect(at(3)).toBeCloseTo((5.6 + 9.4) / 2 / 2.8, 12); // straight line between the 2 and 4 °C points
     expect(res.body.bands.p5).toEqual(res.body.bands.p95); // a table carries no scaling uncertainty
     expect(await t.ctx.models.PerilProfile.count({ where: { name: rainfall.name, metric: "frequency" } })).toBe(0);
+  });
+
+  it("POST /preview of tables for two return periods gives each table's curve by its return period", async () => {
+    // IPCC AR6 WGI SPM Figure SPM.6: 50-year hot extremes 4.8 / 8.6 / 13.9 / 39.2 times per 50 years at 1 / 1.5 / 2 / 4 °C.
+    const fifty = [{ warming: 0, multiplier: 1 }, { warming: 1, multiplier: 4.8 }, { warming: 1.5, multiplier: 8.6 }, { warming: 2, multiplier: 13.9 }, { warming: 4, multiplier: 39.2 }];
+    const scaling = { kind: "table", tables: [{ returnPeriod: 10, points: spm6Table.points }, { returnPeriod: 50, points: fifty }], beyondTable: "hold", beyondReturnPeriods: "hold" };
+    const res = await actuary.post("/api/peril-profiles/preview").send({ profile: { ...rainfall, metric: "frequency", baselineWarming: 0, scaling }, range: { from: 0, to: 4, step: 1 } });
+    expect(res.status).toBe(200);
+    expect(res.body.tables.map((t: { returnPeriod: number }) => t.returnPeriod)).toEqual([10, 50]);
+    expect(res.body.tables[1].multiplier[4]).toBe(39.2);
+    expect(res.body.tables[0].multiplier[2]).toBe(5.6);
+    expect(res.body.bands.p50).toEqual(res.body.tables[0].multiplier);
+  });
+
+  it("reads a profile stored before tables stated a return period as one 10-year table and previews it", async () => {
+    const created = await createProfile(analyst, { ...rainfall, peril: "heat", metric: "frequency", baselineWarming: 1, scaling: spm6Table });
+    // Store the old shape directly, as a database from before the change holds it.
+    await t.ctx.models.PerilProfile.update({ scaling: spm6Table }, { where: { id: created.id } });
+    const read = await actuary.get(`/api/peril-profiles/${created.id}`);
+    expect(read.body.scaling).toEqual({ kind: "table", tables: [{ returnPeriod: 10, points: spm6Table.points }], beyondTable: "hold", beyondReturnPeriods: "hold" });
+    const curve = await actuary.get(`/api/peril-profiles/${created.id}/curve?from=1&to=2&step=1`);
+    expect(curve.body.bands.p50).toEqual([1, 2]);
   });
 
   it("POST /preview answers 400 naming the draft's field", async () => {

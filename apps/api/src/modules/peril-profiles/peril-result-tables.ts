@@ -1,4 +1,4 @@
-import type { PerilResult, PerilSummary, RunResult } from "@plumeline/contracts";
+import { BEYOND_TABLE_WARNING_SHARE, type PerilProfileResult, type PerilResult, type PerilSummary, type RunResult } from "@plumeline/contracts";
 import type { Table, TableCell } from "../exports/result-tables.js";
 
 /** The peril lens export tables (CSV names; also the workbook sheets below). */
@@ -10,12 +10,12 @@ export const PERIL_TABLE_SHEETS: ReadonlyArray<readonly [PerilTable, string, str
   [
     "peril-multipliers",
     "Peril multipliers",
-    "Multiplier of each peril profile's hazard or loss metric at each horizon (1 = the firm's baseline view of risk), percentiles over members and scaling uncertainty",
+    "Multiplier of each peril profile's hazard or loss metric at each horizon (1 = the firm's baseline view of risk), percentiles over members and scaling uncertainty; multiplier_* belong to the return period in multiplier_return_period_years (blank: one multiplier for every return period), multiplier_100yr_* and multiplier_200yr_* to today's 1-in-100 and 1-in-200 events; read_outside_tables lists those read beyond the tables' return periods; share_below_table / share_above_table are the shares of members (0–1) whose warming lies outside the table's warming range, where the end value is held or extrapolated (warning above 5 %)",
   ],
   [
     "peril-return-periods",
     "Return periods",
-    "Frequency profiles: return period (years) that today's 1-in-100 and 1-in-200 events would have at each horizon (T / multiplier), percentiles",
+    "Frequency profiles: return period (years) that today's 1-in-100 and 1-in-200 events would have at each horizon (T / m(T)), percentiles; read_outside_tables = yes when the tables stop at a shorter return period (held or extrapolated beyond them)",
   ],
   [
     "peril-losses",
@@ -30,6 +30,19 @@ export function summaryKeys(summary: PerilSummary | undefined): string[] {
   const keys = Object.keys(summary).filter((k) => k.startsWith("p"));
   keys.sort((a, b) => Number(a.slice(1)) - Number(b.slice(1)));
   return "mean" in summary ? [...keys, "mean"] : keys;
+}
+
+/** "10 50": the tables' return periods, or blank for a per-kelvin profile (or an older result). */
+const returnPeriodList = (values: readonly number[] | undefined) => (values && values.length ? values.join(" ") : null);
+
+/** The warning text of a horizon whose share of members beyond the table passes 5 %, else blank. */
+export function beyondTableWarning(share: { below: number; above: number } | null | undefined, profile: Pick<PerilProfileResult, "table">): string | null {
+  if (!share || !profile.table) return null;
+  const beyond = share.below + share.above;
+  if (!(beyond > BEYOND_TABLE_WARNING_SHARE)) return null;
+  const [low, high] = profile.table.warmingRange;
+  const rule = profile.table.beyondTable === "hold" ? "held at the end value" : "extrapolated from the end segment";
+  return `${(beyond * 100).toFixed(1)} % of members lie outside the table's ${low}–${high} K: their multipliers are ${rule}`;
 }
 
 const PROFILE_COLUMNS = ["pathway_id", "pathway_name", "profile_id", "profile_name", "peril", "region", "metric", "baseline_warming_K"];
@@ -67,8 +80,36 @@ export function perilTable(result: RunResult, table: PerilTable): Table {
     case "peril-multipliers": {
       const keys = summaryKeys(firstSummary(perils, (h) => h.multiplier));
       for (const { profile, lead } of profileRows(result, perils))
-        for (const h of profile.horizons) rows.push([...lead, h.year, ...keys.map((k) => h.multiplier[k] ?? null)]);
-      return { columns: [...PROFILE_COLUMNS, "year", ...keys.map((k) => `multiplier_${k}`)], rows };
+        for (const h of profile.horizons)
+          rows.push([
+            ...lead,
+            h.year,
+            profile.multiplierReturnPeriod ?? null,
+            ...keys.map((k) => h.multiplier[k] ?? null),
+            ...keys.map((k) => h.tailMultipliers?.["100"][k] ?? null),
+            ...keys.map((k) => h.tailMultipliers?.["200"][k] ?? null),
+            returnPeriodList(profile.table?.returnPeriods),
+            returnPeriodList(profile.table?.readOutside),
+            h.beyondTable?.below ?? null,
+            h.beyondTable?.above ?? null,
+            beyondTableWarning(h.beyondTable, profile),
+          ]);
+      return {
+        columns: [
+          ...PROFILE_COLUMNS,
+          "year",
+          "multiplier_return_period_years",
+          ...keys.map((k) => `multiplier_${k}`),
+          ...keys.map((k) => `multiplier_100yr_${k}`),
+          ...keys.map((k) => `multiplier_200yr_${k}`),
+          "table_return_periods_years",
+          "read_outside_tables",
+          "share_below_table",
+          "share_above_table",
+          "beyond_table_warning",
+        ],
+        rows,
+      };
     }
     case "peril-return-periods": {
       const keys = summaryKeys(firstSummary(perils, (h) => h.returnPeriods?.["100"]));
@@ -76,9 +117,18 @@ export function perilTable(result: RunResult, table: PerilTable): Table {
         for (const h of profile.horizons) {
           if (!h.returnPeriods) continue;
           for (const base of ["100", "200"] as const)
-            rows.push([...lead, h.year, Number(base), ...keys.map((k) => h.returnPeriods![base][k] ?? null)]);
+            rows.push([
+              ...lead,
+              h.year,
+              Number(base),
+              ...keys.map((k) => h.returnPeriods![base][k] ?? null),
+              profile.table ? (profile.table.readOutside.includes(Number(base)) ? "yes" : "no") : null,
+            ]);
         }
-      return { columns: [...PROFILE_COLUMNS, "year", "baseline_return_period_years", ...keys.map((k) => `return_period_${k}_years`)], rows };
+      return {
+        columns: [...PROFILE_COLUMNS, "year", "baseline_return_period_years", ...keys.map((k) => `return_period_${k}_years`), "read_outside_tables"],
+        rows,
+      };
     }
     case "peril-losses": {
       const keys = summaryKeys(firstSummary(perils, (h) => h.losses[0]?.aal));

@@ -1,19 +1,19 @@
 import { Router } from "express";
-import multer from "multer";
 import { z } from "zod";
 import { authenticate } from "../../middleware/authenticate.js";
 import { requirePermission } from "../../middleware/require-permission.js";
 import { validate } from "../../middleware/validate.js";
 import { portfoliosController as c } from "./portfolios.controller.js";
+import { singleFileUpload } from "../../uploads/single-file-upload.js";
 
 /** Largest portfolio file accepted (5000 rows of six columns fit in well under this; 413 above). */
 export const MAX_PORTFOLIO_UPLOAD_BYTES = 1024 * 1024;
 
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_PORTFOLIO_UPLOAD_BYTES, files: 1, fields: 10 } });
+const upload = singleFileUpload("file", MAX_PORTFOLIO_UPLOAD_BYTES);
 const params = z.object({ id: z.string().min(1) });
 
 export const portfoliosRouter: Router = Router();
 
 portfoliosRouter.get("/", authenticate, requirePermission("perils:read"), c.list);
-portfoliosRouter.post("/upload", authenticate, requirePermission("perils:write"), upload.single("file"), c.upload);
+portfoliosRouter.post("/upload", authenticate, requirePermission("perils:write"), upload, c.upload);
 portfoliosRouter.get("/:id", authenticate, requirePermission("perils:read"), validate({ params }), c.get);

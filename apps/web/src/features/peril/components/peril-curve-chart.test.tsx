@@ -33,4 +33,22 @@ describe("PerilCurveChart", () => {
     expect(pts[3]![1]).toBeCloseTo(y(curve.bands.p95[3]!), 2);
     expect(pts[4]![1]).toBeCloseTo(y(curve.bands.p5[3]!), 2);
   });
+
+  it("draws one line per table, at the SPM.6 figures, labelled by return period", () => {
+    // IPCC AR6 WGI SPM Figure SPM.6: hot extremes at 0 / 1 / 2 / 4 °C, 10-year events 1 / 2.8 / 5.6 / 9.4 times per 10 years, 50-year events 1 / 4.8 / 13.9 / 39.2 times per 50 years.
+    const levels = [0, 1, 2, 4];
+    const tables = [
+      { returnPeriod: 10, multiplier: [1, 2.8, 5.6, 9.4] },
+      { returnPeriod: 50, multiplier: [1, 4.8, 13.9, 39.2] },
+    ];
+    const byTable = { warming: levels, baselineWarming: 0, bands: { p50: tables[0]!.multiplier }, tables };
+    const { container } = render(<PerilCurveChart curve={byTable} />);
+    const y = tickMap(container, "y");
+    for (const t of tables) {
+      const pts = pathPoints(container.querySelector(`[data-return-period="${t.returnPeriod}"] path`)!.getAttribute("d")!);
+      expect(pts.map((p) => p[1])).toEqual(t.multiplier.map((v) => expect.closeTo(y(v), 2)));
+      expect(container.querySelector(`[data-return-period="${t.returnPeriod}"] text`)!.textContent).toBe(`1-in-${t.returnPeriod}`);
+    }
+    expect(container.querySelector('[data-band="p50"]')).toBeNull();
+  });
 });

@@ -20,23 +20,29 @@ function Harness({ onDraft, errors }: { onDraft: (d: ProfileDraft) => void; erro
 }
 
 describe("PerilProfileForm", () => {
-  it("builds a table profile from the points typed in", async () => {
+  it("builds a table profile from the points typed in, with a second table for rarer events", async () => {
     let last = emptyDraft();
     render(<Harness onDraft={(d) => (last = d)} />);
-    await userEvent.click(screen.getByRole("radio", { name: "Table by warming level" }));
-    await userEvent.click(screen.getByRole("button", { name: "Add point" }));
-    await userEvent.type(screen.getByLabelText("Point 3 warming"), "4");
-    await userEvent.type(screen.getByLabelText("Point 3 value"), "9.4");
+    await userEvent.click(screen.getByRole("radio", { name: "Tables by warming level and return period" }));
+    await userEvent.click(screen.getByRole("button", { name: "Add point to table 1" }));
+    await userEvent.type(screen.getByLabelText("Table 1 point 3 warming"), "4");
+    await userEvent.type(screen.getByLabelText("Table 1 point 3 value"), "9.4");
+    await userEvent.click(screen.getByRole("button", { name: "Add a table for another return period" }));
+    // The new table starts at five times the return period, on the same warming levels.
+    expect(screen.getByLabelText("Table 2: events of return period (years)")).toHaveValue("50");
+    for (const [i, v] of ["1", "3", "39.2"].entries()) await userEvent.type(screen.getByLabelText(`Table 2 point ${i + 1} value`), v);
+    await userEvent.selectOptions(screen.getByLabelText("Beyond the tables' return periods"), "extrapolate");
     expect(toProfileBody(last).body?.scaling).toEqual({
       kind: "table",
-      points: [
-        { warming: 1, multiplier: 1 },
-        { warming: 2, multiplier: 2 },
-        { warming: 4, multiplier: 9.4 },
+      tables: [
+        { returnPeriod: 10, points: [{ warming: 1, multiplier: 1 }, { warming: 2, multiplier: 2 }, { warming: 4, multiplier: 9.4 }] },
+        { returnPeriod: 50, points: [{ warming: 1, multiplier: 1 }, { warming: 2, multiplier: 3 }, { warming: 4, multiplier: 39.2 }] },
       ],
       beyondTable: "hold",
+      beyondReturnPeriods: "extrapolate",
     });
-  });
+    // Many keystrokes: more time than the default on a shared, busy machine.
+  }, 30_000);
 
   it("shows the server's message beside the field it names", () => {
     render(<Harness onDraft={() => undefined} errors={{ "scaling.rate.low": "lets the rate reach -100 % per K", baselineWarming: "must lie between 0 and 3 K" }} />);

@@ -3,6 +3,7 @@ import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import { Segmented } from "@/components/ui/segmented";
 import { RATE_PARAMS, RATE_TYPE_LABELS, type ProfileDraft, type RateType } from "../lib/profile-draft";
+import { ReturnPeriodTablesEditor } from "./return-period-tables-editor";
 
 /**
  * The profile editor's fields. Controlled: the draft lives in the route so the preview curve
@@ -30,8 +31,6 @@ export function PerilProfileForm({
     const keep = Object.fromEntries(RATE_PARAMS[type].map((d) => [d.key, draft.rate[d.key] ?? ""]));
     onChange({ ...draft, rateType: type, rate: keep });
   };
-  const setPoint = (i: number, key: "warming" | "multiplier", value: string) =>
-    set("points", draft.points.map((p, j) => (j === i ? { ...p, [key]: value } : p)));
 
   return (
     <div className="flex flex-col gap-4">
@@ -89,7 +88,7 @@ export function PerilProfileForm({
             onChange={(v) => set("kind", v)}
             options={[
               { value: "per-kelvin", label: "Rate per kelvin" },
-              { value: "table", label: "Table by warming level" },
+              { value: "table", label: "Tables by warming level and return period" },
             ]}
           />
         )}
@@ -148,64 +147,7 @@ export function PerilProfileForm({
           {errors["scaling.rate"] && <p className="mt-2 text-xs font-medium text-danger" role="alert">{errors["scaling.rate"]}</p>}
         </fieldset>
       ) : (
-        <fieldset className="rounded-md border border-line p-3">
-          <legend className="px-1 text-xs text-muted">Metric at each warming level (any fixed reference); divided by its value at the risk view's warming</legend>
-          <table className="w-full text-sm">
-            <thead>
-              <tr className="text-left text-xs text-muted">
-                <th className="pb-1 font-medium">Warming (K above 1850–1900)</th>
-                <th className="pb-1 font-medium">Value</th>
-                <th />
-              </tr>
-            </thead>
-            <tbody>
-              {draft.points.map((p, i) => (
-                <tr key={i}>
-                  {(["warming", "multiplier"] as const).map((key) => (
-                    <td key={key} className="pb-2 pr-2 align-top">
-                      <Input
-                        aria-label={`Point ${i + 1} ${key === "warming" ? "warming" : "value"}`}
-                        aria-invalid={errors[`scaling.points[${i}].${key}`] ? true : undefined}
-                        inputMode="decimal"
-                        value={p[key]}
-                        disabled={readOnly}
-                        onChange={(e) => setPoint(i, key, e.target.value)}
-                      />
-                      {errors[`scaling.points[${i}].${key}`] && (
-                        <p role="alert" className="mt-0.5 text-xs font-medium text-danger">
-                          {errors[`scaling.points[${i}].${key}`]}
-                        </p>
-                      )}
-                    </td>
-                  ))}
-                  <td className="pb-2 align-top">
-                    {!readOnly && draft.points.length > 2 && (
-                      <Button size="sm" variant="ghost" onClick={() => set("points", draft.points.filter((_, j) => j !== i))} aria-label={`Remove point ${i + 1}`}>
-                        Remove
-                      </Button>
-                    )}
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-          {errors["scaling.points"] && <p className="text-xs font-medium text-danger" role="alert">{errors["scaling.points"]}</p>}
-          <div className="mt-2 flex flex-wrap items-end gap-3">
-            {!readOnly && (
-              <Button size="sm" variant="secondary" onClick={() => set("points", [...draft.points, { warming: "", multiplier: "" }])}>
-                Add point
-              </Button>
-            )}
-            <Field label="Beyond the table">
-              {(a) => (
-                <Select {...a} value={draft.beyondTable} disabled={readOnly} onChange={(e) => set("beyondTable", e.target.value as "hold" | "extrapolate")}>
-                  <option value="hold">hold the end value</option>
-                  <option value="extrapolate">continue the end segment's rate</option>
-                </Select>
-              )}
-            </Field>
-          </div>
-        </fieldset>
+        <ReturnPeriodTablesEditor value={draft} onChange={(part) => onChange({ ...draft, ...part })} errors={errors} readOnly={readOnly} />
       )}
       <Field label="Source" hint="Where the scaling comes from (publication, table or figure) and how sure it is, or “illustrative”." error={errors.source}>
         {(a) => <Textarea {...a} {...text("source")} />}

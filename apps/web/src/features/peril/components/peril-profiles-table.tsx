@@ -7,7 +7,11 @@ const pct = (v: unknown) => `${Number(((v as number) * 100).toPrecision(12))} %`
 
 /** The scaling in a few words: "7 %/K (5–95 %: 5 %–9 %)", "table of 5 warming levels". */
 export function describeScaling(s: PerilProfileRecord["scaling"]): string {
-  if (s.kind === "table") return `table of ${s.points.length} warming levels, ${s.beyondTable === "hold" ? "held" : "extrapolated"} beyond`;
+  if (s.kind === "table") {
+    const periods = s.tables.map((t) => t.returnPeriod).join(" and ");
+    const levels = s.tables.map((t) => t.points.length).join("/");
+    return `table${s.tables.length > 1 ? "s" : ""} for ${periods}-year events, ${levels} warming levels, ${s.beyondTable === "hold" ? "held" : "extrapolated"} beyond`;
+  }
   const r = s.rate as Record<string, unknown> & { type: string };
   switch (r.type) {
     case "fixed":

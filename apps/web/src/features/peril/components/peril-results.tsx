@@ -6,8 +6,10 @@ import { Segmented } from "@/components/ui/segmented";
 import { EmptyState } from "@/components/ui/states";
 import { Table, Td, Th } from "@/components/ui/table";
 import { PercentileNote } from "@/components/ui/percentile-note";
-import { formatInteger, formatNumber, percentileHeading } from "@/lib/format";
+import { formatMoney, formatNumber, moneyScale, moneyUnit, percentileHeading } from "@/lib/format";
 import { AalBandChart } from "./aal-band-chart";
+import { PortfolioTotals } from "./portfolio-totals";
+import { TableReach } from "./table-reach";
 
 /** The peril cautions in plain words (the peril lens's limits, as README "Cautions" states them). */
 export const PERIL_CAUTIONS = [
@@ -81,7 +83,9 @@ function ProfileSection({ profile, baselineRows }: { profile: PerilProfileResult
         <span className="num text-text">{profile.baselineWarming.toFixed(2)} K</span>
       </p>
       <section>
-        <h3 className="mb-2 text-sm font-semibold text-ink">Multiplier at each horizon</h3>
+        <h3 className="mb-2 text-sm font-semibold text-ink">
+          Multiplier at each horizon{profile.multiplierReturnPeriod ? ` (${profile.multiplierReturnPeriod}-year events; the AAL uses it)` : ""}
+        </h3>
         <SummaryTable
           caption={`Multipliers — ${profile.name}`}
           lead={["Horizon"]}
@@ -92,6 +96,20 @@ function ProfileSection({ profile, baselineRows }: { profile: PerilProfileResult
           A multiplier of 1.05 means the {frequency ? "event frequency" : "loss"} is 5 % above the baseline figure in the firm's risk view.
         </PercentileNote>
       </section>
+      {profile.multiplierReturnPeriod && profile.horizons[0]?.tailMultipliers && (
+        <section>
+          <h3 className="mb-2 text-sm font-semibold text-ink">Multipliers of today's 1-in-100 and 1-in-200 events</h3>
+          <SummaryTable
+            caption={`Tail multipliers — ${profile.name}`}
+            lead={["Horizon", "Today"]}
+            rows={profile.horizons.flatMap((h) =>
+              h.tailMultipliers ? (["100", "200"] as const).map((t) => ({ id: `${h.year}-${t}`, lead: [h.year, `1-in-${t}`], summary: h.tailMultipliers![t] })) : [],
+            )}
+            format={(v) => formatNumber(v, 3)}
+          />
+        </section>
+      )}
+      <TableReach profile={profile} />
       {frequency && (
         <section>
           <h3 className="mb-2 text-sm font-semibold text-ink">Return periods of today's 1-in-100 and 1-in-200 events (years)</h3>
@@ -110,10 +128,12 @@ function ProfileSection({ profile, baselineRows }: { profile: PerilProfileResult
       ) : (
         losses.map((loss, li) => {
           const baseline = baselineRows.find((r) => r.region === loss.region && r.peril === loss.peril);
+          // One scale per table, from its largest figure, so every amount reads in the same unit.
+          const scale = moneyScale(profile.horizons.flatMap((h) => (h.losses[li] ? Object.values(h.losses[li]!.loss200) : [])));
           return (
             <section key={`${loss.region}-${loss.peril}`} className="flex flex-col gap-3">
               <h3 className="text-sm font-semibold text-ink">
-                Projected losses — {loss.region}, {loss.peril} ({loss.currency})
+                Projected losses — {loss.region}, {loss.peril} ({moneyUnit(loss.currency, scale)})
               </h3>
               <SummaryTable
                 caption={`Projected losses — ${loss.region} ${loss.peril}`}
@@ -127,10 +147,10 @@ function ProfileSection({ profile, baselineRows }: { profile: PerilProfileResult
                     { id: `${h.year}-200`, lead: [h.year, "1-in-200 loss"], summary: l.loss200 },
                   ];
                 })}
-                format={formatInteger}
+                format={(v) => formatMoney(v, scale)}
               />
               <p className="-mt-1 text-xs text-muted">
-                Amounts in {loss.currency}: the portfolio's baseline figures times each member's multiplier, summarised by the same percentiles; exposure growth not included.
+                Amounts in {moneyUnit(loss.currency, scale)} at three significant figures (the CSV and workbook keep full precision): the portfolio's baseline figures times each member's multiplier, summarised by the same percentiles; exposure growth not included.
               </p>
               <PanelErrorBoundary resetKey={`${profile.profileId}-${li}`}>
                 <AalBandChart
@@ -208,6 +228,7 @@ export function PerilResults({
                 />
               </div>
             )}
+            <PortfolioTotals totals={pathway.totals} refused={result.totalsRefused} />
             <div className="flex flex-wrap items-center gap-3">
               <span className="text-sm font-medium text-ink">Profile</span>
               <Segmented label="Peril profile" value={profile.profileId} onChange={setProfileId} options={pathway.profiles.map((p) => ({ value: p.profileId, label: p.name }))} />

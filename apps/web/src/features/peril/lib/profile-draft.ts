@@ -21,8 +21,15 @@ export interface ProfileDraft {
   rate: Record<string, string>;
   coverage: "90" | "66";
   shape: "lognormal" | "split-normal";
-  points: Array<{ warming: string; multiplier: string }>;
+  /** One table per event return period (years), each with its points as typed. */
+  tables: DraftTable[];
   beyondTable: "hold" | "extrapolate";
+  beyondReturnPeriods: "hold" | "extrapolate";
+}
+
+export interface DraftTable {
+  returnPeriod: string;
+  points: Array<{ warming: string; multiplier: string }>;
 }
 
 interface ParamDef {
@@ -92,11 +99,17 @@ export function emptyDraft(): ProfileDraft {
     rate: { p50: "7", low: "5", high: "9" },
     coverage: "90",
     shape: "split-normal",
-    points: [
-      { warming: "1", multiplier: "1" },
-      { warming: "2", multiplier: "2" },
+    tables: [
+      {
+        returnPeriod: "10",
+        points: [
+          { warming: "1", multiplier: "1" },
+          { warming: "2", multiplier: "2" },
+        ],
+      },
     ],
     beyondTable: "hold",
+    beyondReturnPeriods: "hold",
   };
 }
 
@@ -104,8 +117,12 @@ export function draftFromRecord(p: Pick<PerilProfileRecord, "name" | "peril" | "
   const draft: ProfileDraft = { ...emptyDraft(), name: p.name, peril: p.peril, region: p.region, metric: p.metric, baselineWarming: String(p.baselineWarming), source: p.source ?? "" };
   if (p.scaling.kind === "table") {
     draft.kind = "table";
-    draft.points = p.scaling.points.map((pt) => ({ warming: String(pt.warming), multiplier: String(pt.multiplier) }));
+    draft.tables = p.scaling.tables.map((t) => ({
+      returnPeriod: String(t.returnPeriod),
+      points: t.points.map((pt) => ({ warming: String(pt.warming), multiplier: String(pt.multiplier) })),
+    }));
     draft.beyondTable = p.scaling.beyondTable;
+    draft.beyondReturnPeriods = p.scaling.beyondReturnPeriods;
     return draft;
   }
   const rate = p.scaling.rate as Distribution & Record<string, unknown>;
@@ -138,8 +155,15 @@ export function toProfileBody(d: ProfileDraft): { body: PerilProfileBody; errors
   if (d.kind === "table") {
     scaling = {
       kind: "table",
-      points: d.points.map((p, i) => ({ warming: num(p.warming, `scaling.points[${i}].warming`), multiplier: num(p.multiplier, `scaling.points[${i}].multiplier`) })),
+      tables: d.tables.map((t, k) => ({
+        returnPeriod: num(t.returnPeriod, `scaling.tables[${k}].returnPeriod`),
+        points: t.points.map((p, i) => ({
+          warming: num(p.warming, `scaling.tables[${k}].points[${i}].warming`),
+          multiplier: num(p.multiplier, `scaling.tables[${k}].points[${i}].multiplier`),
+        })),
+      })),
       beyondTable: d.beyondTable,
+      beyondReturnPeriods: d.beyondReturnPeriods,
     };
   } else {
     const params = Object.fromEntries(

@@ -1,7 +1,12 @@
-import type { Role } from "@plumeline/contracts";
-import { roles } from "@plumeline/contracts";
+import { roles, type Role } from "./users.js";
 
-/** Every named permission a route can require (docs/API.md). */
+/**
+ * THE one role -> permission table, shared by the API (which enforces it on every route) and the
+ * web app (which shows who may do what). Ownership rules (no self-approval) live in the API's
+ * services, not here. docs/API.md lists the routes each permission opens.
+ */
+
+/** Every named permission a route can require. */
 export const permissions = [
   "pathways:read",
   "pathways:write",
@@ -19,7 +24,6 @@ export const permissions = [
 ] as const;
 export type Permission = (typeof permissions)[number];
 
-/** THE one role -> permission table. Ownership rules (no self-approval) live in the services. */
 export const permissionsByRole: Record<Role, readonly Permission[]> = {
   analyst: [
     "pathways:read",
@@ -71,4 +75,9 @@ export function hasPermission(role: Role, permission: Permission): boolean {
 
 export function permissionsOf(role: Role): Permission[] {
   return [...permissionsByRole[role]];
+}
+
+/** The roles that hold a permission, in the order of `roles`. */
+export function rolesWith(permission: Permission): Role[] {
+  return roles.filter((role) => hasPermission(role, permission));
 }
