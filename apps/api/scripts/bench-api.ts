@@ -27,7 +27,6 @@ import { existsSync, mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
-import { gunzipSync } from "node:zlib";
 
 const args = process.argv.slice(2);
 const arg = (name: string, fallback: string) => {
@@ -153,10 +152,11 @@ async function main() {
   await poller;
   if (status !== "succeeded") throw new Error(`run ended ${status}`);
 
-  // The result as the browser gets it: the stored gzip bytes.
+  // The result as the browser gets it: the stored gzip bytes (Content-Length); fetch inflates
+  // the body, so its length is the JSON's.
   const raw = await fetch(`${base}/api/runs/${runId}/result`, { headers: { cookie, "accept-encoding": "gzip" } });
   const gzipBytes = Number(raw.headers.get("content-length") ?? NaN);
-  const jsonBytes = gunzipSync(Buffer.from(await raw.arrayBuffer())).length;
+  const jsonBytes = Buffer.from(await raw.arrayBuffer()).length;
 
   const run = await api<RunView>("GET", `/api/runs/${runId}`);
   let cliSeconds: number | null = null;
