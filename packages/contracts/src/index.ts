@@ -3,6 +3,7 @@ export * from "./engine/distribution.js";
 export * from "./engine/run-spec.js";
 export * from "./engine/run-result.js";
 export * from "./engine/peril.js";
+export * from "./engine/default-assumptions.js";
 export * from "./engine/format-issues.js";
 export * from "./api/errors.js";
 export * from "./api/users.js";

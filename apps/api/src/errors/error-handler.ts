@@ -1,6 +1,6 @@
 import type { ErrorRequestHandler } from "express";
 import type { ApiError, ErrorDetail } from "@plumeline/contracts";
-import { formatPath } from "@plumeline/contracts";
+import { issueDetails } from "@plumeline/contracts";
 import multer from "multer";
 import { ZodError } from "zod";
 import { DatabaseBusyError } from "../db/serialize-writes.js";
@@ -48,7 +48,7 @@ export function toErrorResponse(err: unknown): Mapped {
     };
   }
   if (err instanceof ZodError) {
-    const details: ErrorDetail[] = err.issues.map((issue) => ({ path: formatPath(issue.path), message: issue.message }));
+    const details: ErrorDetail[] = issueDetails(err);
     return { status: 400, body: { error: { code: "validation_failed", message: "The request has invalid fields.", details } } };
   }
   if (err instanceof multer.MulterError) {

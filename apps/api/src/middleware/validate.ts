@@ -1,6 +1,6 @@
 import type { RequestHandler } from "express";
 import type { ErrorDetail } from "@plumeline/contracts";
-import { formatPath } from "@plumeline/contracts";
+import { issueDetails } from "@plumeline/contracts";
 import type { z } from "zod";
 import { badRequest } from "../errors/app-error.js";
 
@@ -24,7 +24,7 @@ export function validate(schemas: ValidationSchemas): RequestHandler {
       if (!schema) continue;
       const result = schema.safeParse(req[part] ?? (part === "body" ? undefined : {}));
       if (result.success) parsed[part] = result.data;
-      else for (const issue of result.error.issues) details.push({ path: formatPath(issue.path) || part, message: issue.message });
+      else details.push(...issueDetails(result.error, { fallback: part }));
     }
     if (details.length > 0) throw badRequest(details);
     if ("body" in parsed) req.body = parsed.body;

@@ -1,35 +1,13 @@
-import { createRequire } from "node:module";
-import path from "node:path";
-import { pathToFileURL } from "node:url";
 import { Worker } from "node:worker_threads";
 import type { RunResult, RunSpec } from "@plumeline/contracts";
 import type { FromEngineThread } from "./engine-thread-protocol.js";
+import { threadEntry } from "./thread-entry.js";
 
 export type EngineOutcome = { kind: "done"; result: RunResult; contractWarning?: string } | { kind: "cancelled" } | { kind: "failed"; message: string };
 
 /** Thrown when the thread itself dies (crash, out of memory, terminated): the job may be retried. */
 export class EngineThreadCrashed extends Error {
   override name = "EngineThreadCrashed";
-}
-
-/**
- * How to start the thread's code. From a compiled build (.js next to this file) it is a plain
- * worker file. From TypeScript sources (`node --import tsx`, vitest) Node 20 does not pass
- * module loaders on to worker threads, so a two-line bootstrap registers tsx's ESM hooks
- * inside the thread (tsx's public `tsx/esm/api`) and then imports engine-thread.ts.
- */
-function threadEntry(): { entry: URL | string; eval: boolean } {
-  if (!import.meta.url.endsWith(".ts")) return { entry: new URL("./engine-thread.js", import.meta.url), eval: false };
-  const require = createRequire(import.meta.url);
-  const tsxPackage = require.resolve("tsx/package.json");
-  const exportsMap = (require("tsx/package.json") as { exports: Record<string, { import?: { default?: string } }> }).exports;
-  const esmApi = pathToFileURL(path.join(path.dirname(tsxPackage), exportsMap["./esm/api"]?.import?.default ?? "dist/esm/api/index.mjs")).href;
-  const target = new URL("./engine-thread.ts", import.meta.url).href;
-  // A bootstrap that fails has no logger yet (it could not load one); its stderr reaches the parent.
-  const code =
-    `import(${JSON.stringify(esmApi)}).then((tsx) => { tsx.register(); return import(${JSON.stringify(target)}); })` +
-    `.catch((error) => { console.error("[engine-thread] could not start:", error); process.exit(1); });`;
-  return { entry: code, eval: true };
 }
 
 /** One long-lived engine thread; `run` sends it one ensemble at a time. */
@@ -40,7 +18,7 @@ export class EngineThread {
   private exited = false;
 
   constructor(readonly name: string) {
-    const { entry, eval: isCode } = threadEntry();
+    const { entry, eval: isCode } = threadEntry(import.meta.url, "engine-thread");
     this.worker = new Worker(entry, { eval: isCode, name });
     this.worker.on("message", (message: FromEngineThread) => this.onMessage(message));
     this.worker.on("error", (error) => this.crash(`engine thread ${name} crashed: ${error.message}`));

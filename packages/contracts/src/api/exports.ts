@@ -17,6 +17,22 @@ export const RESULT_TABLES = [
 ] as const;
 export type ResultTable = (typeof RESULT_TABLES)[number];
 
+/**
+ * The member-level table of a run, for a validator to recompute any number: one row per member
+ * (member, each uncertain input by name, weight, then <pathwayId>@<year> warming in K), as CSV at
+ * GET /api/runs/:id/tables/members.csv, recomputed from the stored spec and checked against the
+ * stored engine version and result hash before it is served.
+ */
+export const MEMBER_TABLE = "members";
+
+/**
+ * The workbook carries the member table on its own sheet up to this many members; above it,
+ * the sheet says it was left out and points to the CSV (no size limit). Why this size: the
+ * spreadsheet library builds a sheet in memory, about 70 µs per cell on the shared 2-core machine under load
+ * (25,000 members × 20 columns took 34 s and 490 MB; 100,000 took 138 s and 1.5 GB).
+ */
+export const MEMBER_SHEET_MAX_MEMBERS = 10_000;
+
 export const EXPORT_FORMATS = ["csv", "xlsx", "pdf", "zip"] as const;
 
 export const listExportsQuerySchema = z.object({

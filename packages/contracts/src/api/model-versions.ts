@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { modelSpecSchema, percentileSchema } from "../engine/run-spec.js";
 import { boundedUniqueList, MAX_HORIZONS, MAX_PERCENTILES, MAX_THRESHOLDS } from "../engine/spec-limits.js";
+import { defaultRunSettings } from "../engine/default-assumptions.js";
 
 /**
  * Model versions: the uncertainty assumptions (the engine's `model` object) plus the run
@@ -19,13 +20,13 @@ export const modelVersionDefaultsSchema = z
   .object({
     percentiles: boundedUniqueList(percentileSchema, MAX_PERCENTILES, "percentiles")
       .min(1, "must list at least one percentile")
-      .default([5, 17, 50, 83, 95]),
-    thresholds: boundedUniqueList(finite(), MAX_THRESHOLDS, "thresholds").default([1.5, 2, 3]),
-    horizons: boundedUniqueList(year(), MAX_HORIZONS, "horizons").default([2030, 2050, 2100]),
+      .default(() => defaultRunSettings().percentiles),
+    thresholds: boundedUniqueList(finite(), MAX_THRESHOLDS, "thresholds").default(() => defaultRunSettings().thresholds),
+    horizons: boundedUniqueList(year(), MAX_HORIZONS, "horizons").default(() => defaultRunSettings().horizons),
     baseline: z
       .tuple([year(), year()], { error: "must be [firstYear, lastYear]" })
       .refine(([a, b]) => b >= a, "must not end before it starts")
-      .default([1850, 1900]),
+      .default(() => defaultRunSettings().baseline),
   })
   .strict();
 export type ModelVersionDefaults = z.output<typeof modelVersionDefaultsSchema>;
@@ -38,12 +39,7 @@ export const createModelVersionBodySchema = z
     name: name(),
     parentId: z.string().min(1).nullable().optional(),
     model: modelSpecSchema,
-    defaults: modelVersionDefaultsSchema.default({
-      percentiles: [5, 17, 50, 83, 95],
-      thresholds: [1.5, 2, 3],
-      horizons: [2030, 2050, 2100],
-      baseline: [1850, 1900],
-    }),
+    defaults: modelVersionDefaultsSchema.default(defaultRunSettings),
     notes: notes().default(""),
     /** Pathways this version is meant to be run with (optional; pinned pathways lock on approval). */
     pathwayIds: z.array(z.string().min(1)).default([]),

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { distributionSchema } from "./distribution.js";
+import { defaultRunSettings } from "./default-assumptions.js";
 import { CLIMATE_INPUTS, FORCING_AGENTS, FORCING_EXPRESSIONS, type ForcingAgent } from "./agents.js";
 import { perilProfilesSchema, perilSpecIssues, portfolioSchema } from "./peril.js";
 import { boundedUniqueList, MAX_HORIZONS, MAX_PATHWAYS_PER_RUN, MAX_PERCENTILES, MAX_THRESHOLDS, plausibleYear } from "./spec-limits.js";
@@ -138,12 +139,12 @@ export const runSpecSchema = z
     sampling: z.enum(["latin-hypercube", "monte-carlo"], {
       error: 'must be "latin-hypercube" or "monte-carlo"',
     }),
-    baseline: z.tuple([year(), year()]).default([1850, 1900]),
+    baseline: z.tuple([year(), year()]).default(() => defaultRunSettings().baseline),
     percentiles: boundedUniqueList(percentileSchema, MAX_PERCENTILES, "percentiles")
       .min(1, "must list at least one percentile")
-      .default([5, 17, 50, 83, 95]),
-    thresholds: boundedUniqueList(finite(), MAX_THRESHOLDS, "thresholds").default([1.5, 2, 3]),
-    horizons: boundedUniqueList(year(), MAX_HORIZONS, "horizons").default([2030, 2050, 2100]),
+      .default(() => defaultRunSettings().percentiles),
+    thresholds: boundedUniqueList(finite(), MAX_THRESHOLDS, "thresholds").default(() => defaultRunSettings().thresholds),
+    horizons: boundedUniqueList(year(), MAX_HORIZONS, "horizons").default(() => defaultRunSettings().horizons),
     pathways: z
       .array(pathwaySpecSchema)
       .min(1, "must hold at least one pathway")

@@ -1,14 +1,11 @@
 import { RunCancelledError } from "../spec/spec-error.js";
-import type { PathwayPerilResult } from "../peril/types.js";
-import type { PathwayResult, PercentileSet, RunResult, RunSpec, RunSpecInput } from "../spec/types.js";
+import type { RunResult, RunSpec, RunSpecInput } from "../spec/types.js";
 import { advanceReportedYears } from "./advance-year.js";
-import { assembleResult } from "./assemble-result.js";
-import { finishPathway } from "./finish-pathway.js";
-import { impliedSensitivities } from "./implied-sensitivity.js";
 import { firstPassYears, horizonsByYear, resetForReporting, runBaselinePass } from "./pathway-passes.js";
-import { pathwayPerils, runPerils } from "./pathway-perils.js";
-import { weighPathway } from "./pathway-weights.js";
 import type { SummaryChoice } from "./ensemble-plan.js";
+import { runPipeline, type PathwayMembers } from "./run-pipeline.js";
+
+export type { PathwayMembers };
 import { preparePlan } from "./prepare-plan.js";
 import { YearSummariser } from "./summarise-year.js";
 
@@ -30,19 +27,6 @@ export interface RunOptions {
    * sampled inputs: what memberTable (member-table.ts) lists.
    */
   onPathwayMembers?(members: PathwayMembers): void;
-}
-
-/** One pathway's per-member values, as onPathwayMembers hands them out. */
-export interface PathwayMembers {
-  pathwayIndex: number;
-  /** Per horizon (spec order), each member's warming (annual-mean anomaly, K). */
-  horizonWarming: Float64Array[];
-  /** Constraint weights (largest 1), or null when the run has no constraint. */
-  weights: Float64Array | null;
-  /** Every model input with its sampled column, in the sampler's order. */
-  inputs: { name: string; kind: "climate" | "agent"; fixed: boolean; values: Float64Array }[];
-  /** Agents this pathway carries. */
-  agents: string[];
 }
 
 /** Wall-clock seconds per stage; parallel stages count thread-seconds divided by threads. */
@@ -80,43 +64,39 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
     if (options.shouldCancel?.()) throw new RunCancelledError();
     options.onProgress?.(done / totalYears);
   };
-  const pathways: PathwayResult[] = [];
-  const perils: (PathwayPerilResult | null)[] = [];
-  let implied: { ecs: PercentileSet; tcr: PercentileSet } | null = null;
-  const inputOrders = new Map<number, Uint32Array>();
   const summariser = new YearSummariser(plan);
   const slots = plan.state.slots;
   const span = plan.spanYears;
-  plan.pathways.forEach((pathway, p) => {
-    runBaselinePass(plan, p, 0, n, tick);
-    const weighting = weighPathway(plan);
+  const pipeline = runPipeline(spec, plan, options.onPathwayMembers);
+  for (let step = pipeline.next(); ; ) {
+    if (step.done) {
+      lap("finish");
+      options.onProgress?.(1);
+      return step.value;
+    }
+    const request = step.value;
+    const p = request.pathway;
+    if (request.kind === "baseline") {
+      runBaselinePass(plan, p, 0, n, tick);
+      lap("simulate");
+      step = pipeline.next();
+      continue;
+    }
+    const pathway = plan.pathways[p]!;
+    const { weights, totalWeight } = request.weighting;
     resetForReporting(plan, 0, n);
     const byYear = horizonsByYear(plan, p);
-    lap("simulate");
     for (let t0 = 0; t0 < pathway.years; t0 += span) {
       const t1 = Math.min(pathway.years, t0 + span);
       advanceReportedYears(plan, p, t0, t1, 0, n);
       if (times) lap("simulate");
       for (let t = t0; t < t1; t++) {
-        summariser.summarise(p, t, pathway.years, slots[t % slots.length]!, weighting.weights, weighting.totalWeight, byYear[t]!);
+        summariser.summarise(p, t, pathway.years, slots[t % slots.length]!, weights, totalWeight, byYear[t]!);
         tick();
       }
       if (times) lap("summarise");
     }
-    pathways.push(finishPathway(spec, plan, p, weighting, inputOrders));
-    options.onPathwayMembers?.({
-      pathwayIndex: p,
-      horizonWarming: plan.state.horizonTemperature,
-      weights: weighting.weights,
-      inputs: plan.inputs.map((x, i) => ({ name: x.name, kind: x.kind, fixed: x.distribution.type === "fixed", values: plan.columns[i]! })),
-      agents: pathway.agents,
-    });
-    perils.push(pathwayPerils(spec, plan, p, weighting));
-    if (p === 0) implied = impliedSensitivities(plan, spec.percentiles, weighting);
-    lap("finish");
-  });
-  options.onProgress?.(1);
-  const result = assembleResult(spec, pathways, implied!, runPerils(spec, perils));
-  lap("finish");
-  return result;
+    step = pipeline.next();
+    if (!step.done) lap("finish");
+  }
 }

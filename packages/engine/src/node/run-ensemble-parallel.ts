@@ -1,19 +1,14 @@
 import { availableParallelism } from "node:os";
 import { Worker } from "node:worker_threads";
-import { assembleResult } from "../ensemble/assemble-result.js";
 import type { EnsemblePlan } from "../ensemble/ensemble-plan.js";
-import { finishPathway } from "../ensemble/finish-pathway.js";
-import { impliedSensitivities } from "../ensemble/implied-sensitivity.js";
 import { impliedTcr } from "../ensemble/implied-tcr.js";
 import { firstPassYears, horizonsByYear } from "../ensemble/pathway-passes.js";
-import { pathwayPerils, runPerils } from "../ensemble/pathway-perils.js";
-import { weighPathway } from "../ensemble/pathway-weights.js";
 import { preparePlan } from "../ensemble/prepare-plan.js";
+import { runPipeline } from "../ensemble/run-pipeline.js";
 import { WARM_MEMBERS } from "../ensemble/warm-kernels.js";
 import { runEnsemble, type RunOptions, type StageTimes } from "../ensemble/run-ensemble.js";
-import type { PathwayPerilResult } from "../peril/types.js";
 import { RunCancelledError } from "../spec/spec-error.js";
-import type { PathwayResult, PercentileSet, RunResult, RunSpec, RunSpecInput } from "../spec/types.js";
+import type { RunResult, RunSpec, RunSpecInput } from "../spec/types.js";
 import { PassParticipant, type PassPause, type ReportOrder } from "./pass-participant.js";
 import { CANCEL_FLAG, createPipelineControl, resetPipelineControl, type PipelineControl } from "./pipeline-control.js";
 import type { FromWorker, ToWorker } from "./worker-messages.js";
@@ -33,6 +28,8 @@ export interface ParallelRunOptions {
   stageTimes?: StageTimes;
   /** As RunOptions.summaries: per-year forcing and imbalance series on (default) or off. */
   summaries?: RunOptions["summaries"];
+  /** As RunOptions.onPathwayMembers: each pathway's members' horizon warming and weights. */
+  onPathwayMembers?: RunOptions["onPathwayMembers"];
 }
 
 /**
@@ -60,6 +57,7 @@ export async function runEnsembleParallel(input: RunSpecInput | RunSpec, options
       ...(options.onProgress ? { onProgress: options.onProgress } : {}),
       ...(options.stageTimes ? { stageTimes: options.stageTimes } : {}),
       ...(options.summaries ? { summaries: options.summaries } : {}),
+      ...(options.onPathwayMembers ? { onPathwayMembers: options.onPathwayMembers } : {}),
       shouldCancel: () => signal?.aborted === true,
     });
   }
@@ -113,10 +111,6 @@ async function runWithPool(
   try {
     await (early.ready ?? pool.all((worker) => ({ kind: "plan", plan, control, worker })));
     const participant = new PassParticipant(plan, control);
-    const pathways: PathwayResult[] = [];
-    const perils: (PathwayPerilResult | null)[] = [];
-    let implied: { ecs: PercentileSet; tcr: PercentileSet } | null = null;
-    const inputOrders = new Map<number, Uint32Array>();
     const times = options.stageTimes;
     // Runs one pass on every thread; stage times are thread-seconds over threads.
     const everyThread = async (order: ToWorker, pass: Generator<PassPause, boolean>, meanwhile?: () => void) => {
@@ -134,38 +128,39 @@ async function runWithPool(
         times.summarise += reply.summariseSeconds / all.length;
       }
     };
-    let tcr: ReturnType<typeof impliedTcr> | undefined;
-    for (let p = 0; p < plan.pathways.length; p++) {
-      if (options.signal?.aborted) throw new RunCancelledError();
+    // The pipeline both runners share (ensemble/run-pipeline.ts); here its passes run on every thread.
+    const pipeline = runPipeline(spec, plan, options.onPathwayMembers);
+    let step = pipeline.next();
+    while (!step.done) {
+      const request = step.value;
+      const p = request.pathway;
       resetPipelineControl(control);
-      await everyThread({ kind: "baseline", pathway: p }, participant.baseline(p));
-      finishedYears += firstPassYears(plan, p);
-      const weighting = weighPathway(plan);
-      resetPipelineControl(control);
-      const order: ReportOrder = {
-        pathway: p,
-        weighted: weighting.weights !== null,
-        totalWeight: weighting.totalWeight,
-        horizonsByYear: horizonsByYear(plan, p),
-      };
-      // The members' TCR is worked out here once the workers have started reporting; this
-      // thread then joins them.
-      await everyThread({ kind: "report", ...order }, participant.report(order), () => {
-        if (p === 0) tcr = impliedTcr(plan.climate);
-      });
+      let tcr: Float64Array | undefined;
+      if (request.kind === "baseline") {
+        if (options.signal?.aborted) throw new RunCancelledError();
+        await everyThread({ kind: "baseline", pathway: p }, participant.baseline(p));
+        finishedYears += firstPassYears(plan, p);
+      } else {
+        const order: ReportOrder = {
+          pathway: p,
+          weighted: request.weighting.weights !== null,
+          totalWeight: request.weighting.totalWeight,
+          horizonsByYear: horizonsByYear(plan, p),
+        };
+        // The members' TCR is worked out here once the workers have started reporting; this
+        // thread then joins them.
+        await everyThread({ kind: "report", ...order }, participant.report(order), () => {
+          if (p === 0) tcr = impliedTcr(plan.climate);
+        });
+        finishedYears += plan.pathways[p]!.years;
+        control.summarised.fill(0);
+      }
       const finishStart = performance.now();
-      finishedYears += plan.pathways[p]!.years;
-      control.summarised.fill(0);
-      pathways.push(finishPathway(spec, plan, p, weighting, inputOrders));
-      perils.push(pathwayPerils(spec, plan, p, weighting));
-      if (p === 0) implied = impliedSensitivities(plan, spec.percentiles, weighting, tcr);
-      if (times) times.finish += (performance.now() - finishStart) / 1000;
+      step = pipeline.next(tcr);
+      if (times && request.kind === "report") times.finish += (performance.now() - finishStart) / 1000;
     }
     options.onProgress?.(1);
-    const finishStart = performance.now();
-    const result = assembleResult(spec, pathways, implied!, runPerils(spec, perils));
-    if (times) times.finish += (performance.now() - finishStart) / 1000;
-    return result;
+    return step.value;
   } finally {
     if (progress) clearInterval(progress);
     options.signal?.removeEventListener("abort", onAbort);

@@ -1,9 +1,10 @@
 import { createHash } from "node:crypto";
-import { RESULT_TABLES, type ModelSpec, type ResultTable, type RunResult } from "@plumeline/contracts";
+import { RESULT_TABLES, type ResultTable, type RunResult, type RunSpec } from "@plumeline/contracts";
 import JSZip from "jszip";
 import { buildRunReport } from "../reports/run-report.js";
 import { tableToCsv } from "./csv-writer.js";
 import { resultTable } from "./result-tables.js";
+import { memberSheetOf } from "./member-sheet-source.js";
 import { buildRunWorkbook, type WorkbookManifest } from "./workbook-builder.js";
 
 export interface ExportFile {
@@ -20,7 +21,7 @@ export interface ExportSource {
   runId: string;
   runName: string;
   exploratory: boolean;
-  spec: { model: ModelSpec; perils?: unknown };
+  spec: RunSpec;
   result: RunResult;
 }
 
@@ -90,7 +91,7 @@ export async function buildExportFile(kind: ExportKind, source: ExportSource, ma
       return {
         fileName: `${base}.xlsx`,
         contentType: "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet",
-        bytes: await buildRunWorkbook(manifest, source.result, source.spec.model),
+        bytes: await buildRunWorkbook(manifest, source.result, source.spec.model, await memberSheetOf(source.runId, source.spec, source.result)),
       };
     case "pdf":
       return { fileName: `${base}-report.pdf`, contentType: "application/pdf", bytes: await buildRunReport(manifest, source.result, source.spec) };

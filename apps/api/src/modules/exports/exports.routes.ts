@@ -13,6 +13,8 @@ const tableParams = z.object({
 
 /** File downloads of a run, mounted under /runs (each one is recorded as an export). */
 export const runExportsRouter: Router = Router();
+// Registered before the result tables: "members" is not a result table but the recomputed member table.
+runExportsRouter.get("/:id/tables/members.csv", authenticate, requirePermission("runs:read"), validate({ params: z.object({ id: z.string().min(1) }) }), c.membersCsv);
 runExportsRouter.get("/:id/tables/:table.csv", authenticate, requirePermission("runs:read"), validate({ params: tableParams }), c.csv);
 runExportsRouter.get("/:id/tables.zip", authenticate, requirePermission("runs:read"), validate({ params: z.object({ id: z.string().min(1) }) }), c.tablesZip);
 runExportsRouter.get("/:id/report.pdf", authenticate, requirePermission("exports:create"), validate({ params: z.object({ id: z.string().min(1) }) }), c.report);

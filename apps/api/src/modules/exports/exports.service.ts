@@ -1,5 +1,5 @@
 import { randomUUID } from "node:crypto";
-import type { ExportRecord, ResultTable } from "@plumeline/contracts";
+import { MEMBER_TABLE, type ExportRecord, type ResultTable } from "@plumeline/contracts";
 import { Op } from "sequelize";
 import type { AppContext } from "../../context.js";
 import { conflict, notFound } from "../../errors/app-error.js";
@@ -8,7 +8,8 @@ import { recordAudit } from "../audit/audit.service.js";
 import { getRunWithResult } from "../results/results.service.js";
 import type { RunModel } from "../runs/run.model.js";
 import type { RunResult } from "@plumeline/contracts";
-import { buildExportFile, sha256, type ExportFile, type ExportKind, type ExportSource } from "./export-files.js";
+import { buildExportFile, exportBaseName, sha256, type ExportFile, type ExportKind, type ExportSource } from "./export-files.js";
+import { MEMBER_CSV_CHUNK_MEMBERS, openMemberTable, type OpenMemberTable } from "./member-table-client.js";
 import type { ExportRecordModel } from "./export-record.model.js";
 import { gatherRunManifest } from "./run-manifest.js";
 import type { WorkbookManifest } from "./workbook-builder.js";
@@ -23,9 +24,18 @@ function sourceOf(run: RunModel, result: RunResult): ExportSource {
 
 const tableName = (kind: ExportKind) => (kind.format === "csv" ? kind.table : kind.format === "xlsx" ? "workbook" : kind.format === "pdf" ? "report" : "tables");
 
+/** What the register keeps of a file handed out: its name, SHA-256 (hex) and size. */
+interface ExportedBytes {
+  fileName: string;
+  checksum: string;
+  byteSize: number;
+}
+
+const describeBytes = (file: ExportFile): ExportedBytes => ({ fileName: file.fileName, checksum: sha256(file.bytes), byteSize: file.bytes.length });
+
 /** Records the file in the exports table (with the manifest it was built from) and the audit trail, in one transaction. */
-async function recordExport(ctx: Ctx, user: RequestUser, run: RunModel, kind: ExportKind, file: ExportFile, manifest: WorkbookManifest) {
-  const checksum = sha256(file.bytes);
+async function recordExport(ctx: Ctx, user: RequestUser, run: RunModel, kind: ExportKind, file: ExportedBytes, manifest: WorkbookManifest) {
+  const { checksum } = file;
   const table = tableName(kind);
   await ctx.sequelize.transaction(async (transaction) => {
     const row = await ctx.models.ExportRecord.create(
@@ -38,7 +48,7 @@ async function recordExport(ctx: Ctx, user: RequestUser, run: RunModel, kind: Ex
         exploratory: run.exploratory,
         resultHash: run.resultHash ?? "",
         checksum,
-        byteSize: file.bytes.length,
+        byteSize: file.byteSize,
         createdBy: user.id,
         manifest,
       },
@@ -65,7 +75,7 @@ async function exportRun(ctx: Ctx, user: RequestUser, runId: string, kind: Expor
   const now = new Date();
   const manifest = await gatherRunManifest(ctx, run, result, user, now);
   const file = await buildExportFile(kind, sourceOf(run, result), manifest);
-  await recordExport(ctx, user, run, kind, file, manifest);
+  await recordExport(ctx, user, run, kind, describeBytes(file), manifest);
   return file;
 }
 
@@ -73,6 +83,37 @@ export const exportTableCsv = (ctx: Ctx, user: RequestUser, runId: string, table
 export const exportTablesZip = (ctx: Ctx, user: RequestUser, runId: string) => exportRun(ctx, user, runId, { format: "zip" });
 export const exportWorkbook = (ctx: Ctx, user: RequestUser, runId: string) => exportRun(ctx, user, runId, { format: "xlsx" });
 export const exportReport = (ctx: Ctx, user: RequestUser, runId: string) => exportRun(ctx, user, runId, { format: "pdf" });
+
+/** A member-table CSV being produced: the caller writes the chunks, then records the export. */
+export interface MemberTableDownload {
+  fileName: string;
+  contentType: string;
+  table: OpenMemberTable;
+  /** Records the export (register + audit) once every byte went out. */
+  record(checksum: string, byteSize: number): Promise<void>;
+}
+
+/**
+ * Recomputes the run's member table from its stored spec (in a thread; refused with 409 when
+ * the engine version or result hash does not come back) and hands it out as CSV, chunk by chunk.
+ */
+export async function openMemberTableCsv(ctx: Ctx, user: RequestUser, runId: string): Promise<MemberTableDownload> {
+  const { run, result } = await getRunWithResult(ctx, runId);
+  const table = await openMemberTable({
+    spec: run.spec,
+    expected: { engineVersion: result.engineVersion, resultHash: result.resultHash },
+    columnsUpTo: 0,
+    chunkMembers: MEMBER_CSV_CHUNK_MEMBERS,
+  });
+  const fileName = `${exportBaseName(sourceOf(run, result))}-${MEMBER_TABLE}.csv`;
+  return {
+    fileName,
+    contentType: "text/csv; charset=utf-8",
+    table,
+    record: async (checksum, byteSize) =>
+      recordExport(ctx, user, run, { format: "csv", table: MEMBER_TABLE as ResultTable }, { fileName, checksum, byteSize }, await gatherRunManifest(ctx, run, result, user, new Date())),
+  };
+}
 
 function kindOf(record: ExportRecordModel): ExportKind {
   if (record.format === "csv") return { format: "csv", table: record.resultTable as ResultTable };
@@ -89,6 +130,11 @@ function kindOf(record: ExportRecordModel): ExportKind {
 export async function downloadExportAgain(ctx: Ctx, user: RequestUser, exportId: string): Promise<ExportFile> {
   const record = await ctx.models.ExportRecord.findByPk(exportId);
   if (!record) throw notFound("Export", exportId);
+  if (record.format === "csv" && record.resultTable === MEMBER_TABLE)
+    throw conflict(
+      `Export ${record.fileName} is a member table: it is recomputed from the stored spec on each request and checked against the run's result hash. Export it again (GET /api/runs/${record.runId}/tables/${MEMBER_TABLE}.csv) for the same rows.`,
+      "export_not_rebuildable",
+    );
   const { run, result } = await getRunWithResult(ctx, record.runId);
   if (result.resultHash !== record.resultHash)
     throw conflict(

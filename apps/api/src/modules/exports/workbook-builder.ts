@@ -14,6 +14,7 @@ import { PERIL_TABLE_SHEETS } from "../peril-profiles/peril-result-tables.js";
 import { perilWarnings } from "../peril-profiles/peril-warnings.js";
 import { columnNumberFormat } from "./column-number-format.js";
 import { PROBABILITY_FORMAT, probabilityNumberFormat } from "./probability-number-format.js";
+import { addMemberSheet, type MemberSheet } from "./member-sheet.js";
 import { neutraliseFormula } from "./neutralise-formula.js";
 import { withFixedEntryDates } from "./stable-zip.js";
 import { resultTable, type Table, type TableCell } from "./result-tables.js";
@@ -196,7 +197,7 @@ function addInputs(workbook: ExcelJS.Workbook, model: ModelSpec): void {
 
 const TABLE_SHEETS: Array<[ResultTable, string, string]> = [
   ["temperature", "Temperature", "Temperature anomaly (K) vs the baseline period, percentiles by year (linear interpolation, R type 7)"],
-  ["horizons", "Horizons", "At each horizon: temperature percentiles (K), probability of exceeding each threshold, committed warming (K), total forcing (W m-2)"],
+  ["horizons", "Horizons", "At each horizon: temperature percentiles (K), probability of exceeding each threshold, committed warming (K: the equilibrium warming F/λ minus the warming since the pathway start, if forcing stayed at that year's level), total forcing (W m-2)"],
   ["exceedance", "Exceedance", "Probability (0–1) that the year's temperature anomaly exceeds each threshold"],
   ["crossing", "Crossing years", "Percentiles of the first year each threshold is crossed; share_never = members that never cross within the pathway"],
   ["sensitivity", "Sensitivity", "What drives the spread at each horizon: variance_share = the input's first-order share of the variance of warming (the shares of one horizon add up to at most 100 %; the rest is interactions between inputs); rank_correlation = Spearman rank correlation with warming (sign = direction). Both weighted under an observational constraint"],
@@ -223,7 +224,7 @@ function addPortfolioTotals(workbook: ExcelJS.Workbook, result: RunResult, tag: 
 }
 
 /** The run's workbook: Manifest first, result tables, Inputs, Cautions. Returns the .xlsx bytes. */
-export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunResult, model: ModelSpec): Promise<Buffer> {
+export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunResult, model: ModelSpec, members: MemberSheet): Promise<Buffer> {
   const workbook = new ExcelJS.Workbook();
   workbook.creator = "Plumeline";
   // Fixed dates keep the bytes of two exports of the same run comparable apart from the manifest.
@@ -234,6 +235,7 @@ export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunRe
   for (const [table, name, note] of TABLE_SHEETS) addTableSheet(workbook, name, resultTable(result, table), `${tag}${note}`);
   if (result.perils) for (const [table, name, note] of PERIL_TABLE_SHEETS) addTableSheet(workbook, name, resultTable(result, table), `${tag}${note}`);
   if (result.perils?.portfolioId) addPortfolioTotals(workbook, result, tag);
+  addMemberSheet(workbook, members, tag);
   addInputs(workbook, model);
   const cautions = workbook.addWorksheet("Cautions");
   cautions.getColumn(1).width = 120;

@@ -1,4 +1,4 @@
-import { uploadPathwayFieldsSchema, type CreatePathwayBody, type UpdatePathwayBody } from "@plumeline/contracts";
+import { issueDetails, uploadPathwayFieldsSchema, type CreatePathwayBody, type UpdatePathwayBody } from "@plumeline/contracts";
 import type { Request, Response } from "express";
 import { badRequest } from "../../errors/app-error.js";
 import { contextOf, currentUser } from "../../middleware/request-context.js";
@@ -19,7 +19,7 @@ export const pathwaysController = {
   },
   async upload(req: Request, res: Response) {
     const fields = uploadPathwayFieldsSchema.safeParse(req.body ?? {});
-    if (!fields.success) throw badRequest(fields.error.issues.map((i) => ({ path: String(i.path[0] ?? "body"), message: i.message })));
+    if (!fields.success) throw badRequest(issueDetails(fields.error, { fallback: "body" }));
     const out = await uploadPathway(contextOf(req), currentUser(req), req.file, fields.data);
     if ("preview" in out) res.json(out.preview);
     else res.status(201).json(out.pathway);

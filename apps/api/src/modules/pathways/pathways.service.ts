@@ -1,7 +1,7 @@
 import { randomUUID } from "node:crypto";
 import {
   createPathwayBodySchema,
-  formatPath,
+  issueDetails,
   pathwayMetadataSchema,
   type CreatePathwayBody,
   type ErrorDetail,
@@ -179,7 +179,7 @@ export async function uploadPathway(
       vintage: fields.vintage ?? "",
     });
     if (parsed.success) metadata = parsed.data;
-    else errors.push(...parsed.error.issues.map((i) => ({ path: formatPath(i.path), message: i.message })));
+    else errors.push(...issueDetails(parsed.error));
   }
   if (!table.ok || errors.length > 0)
     throw badRequest(errors, `The upload has ${errors.length} problem${errors.length === 1 ? "" : "s"}; nothing was saved.`);

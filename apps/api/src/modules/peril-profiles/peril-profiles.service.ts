@@ -1,6 +1,6 @@
 import { randomUUID } from "node:crypto";
 import {
-  formatPath,
+  issueDetails,
   perilProfileSchema,
   perilScalingSchema,
   type CurveRange,
@@ -215,7 +215,7 @@ async function refuseIfLocked(ctx: Ctx, row: PerilProfileModel, verb: string, tr
 /** Validates a full profile with the shared schema; issues become 400 details on the body's fields. */
 function parseProfile(candidate: unknown): PerilProfile {
   const parsed = perilProfileSchema.safeParse(candidate);
-  if (!parsed.success) throw badRequest(parsed.error.issues.map((i) => ({ path: formatPath(i.path), message: i.message })));
+  if (!parsed.success) throw badRequest(issueDetails(parsed.error));
   return parsed.data;
 }
 

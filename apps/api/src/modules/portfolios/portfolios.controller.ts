@@ -1,4 +1,4 @@
-import { uploadPortfolioFieldsSchema } from "@plumeline/contracts";
+import { issueDetails, uploadPortfolioFieldsSchema } from "@plumeline/contracts";
 import type { Request, Response } from "express";
 import { badRequest } from "../../errors/app-error.js";
 import { contextOf, currentUser } from "../../middleware/request-context.js";
@@ -13,7 +13,7 @@ export const portfoliosController = {
   },
   async upload(req: Request, res: Response) {
     const fields = uploadPortfolioFieldsSchema.safeParse(req.body ?? {});
-    if (!fields.success) throw badRequest(fields.error.issues.map((i) => ({ path: String(i.path[0] ?? "body"), message: i.message })));
+    if (!fields.success) throw badRequest(issueDetails(fields.error, { fallback: "body" }));
     const out = await uploadPortfolio(contextOf(req), currentUser(req), req.file, fields.data);
     if ("preview" in out) res.json(out.preview);
     else res.status(201).json(out.portfolio);

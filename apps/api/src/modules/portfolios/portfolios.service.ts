@@ -1,6 +1,6 @@
 import { randomUUID } from "node:crypto";
 import {
-  formatPath,
+  issueDetails,
   portfolioMetadataSchema,
   type ErrorDetail,
   type Portfolio,
@@ -117,7 +117,7 @@ export async function uploadPortfolio(
   if (!fields.preview) {
     const parsed = portfolioMetadataSchema.safeParse({ name: fields.name ?? "", description: fields.description ?? "" });
     if (parsed.success) metadata = parsed.data;
-    else errors.push(...parsed.error.issues.map((i) => ({ path: formatPath(i.path), message: i.message })));
+    else errors.push(...issueDetails(parsed.error));
   }
   if (!table.ok || errors.length > 0)
     throw badRequest(errors, `The upload has ${errors.length} problem${errors.length === 1 ? "" : "s"}; nothing was saved.`);

@@ -1,4 +1,4 @@
-import { formatPath, runSpecSchema, type CreateRunBody, type ErrorDetail, type RunSpec } from "@plumeline/contracts";
+import { issueDetails, runSpecSchema, type CreateRunBody, type ErrorDetail, type RunSpec } from "@plumeline/contracts";
 import type { ModelVersionModel } from "../model-versions/model-version.model.js";
 import type { PathwayModel } from "../pathways/pathway.model.js";
 import type { PerilSpecPart } from "../peril-profiles/resolve-peril-lens.js";
@@ -32,6 +32,6 @@ export function buildRunSpec(
   if (parsed.success) return { ok: true, spec: parsed.data };
   return {
     ok: false,
-    errors: parsed.error.issues.map((issue) => ({ path: `spec.${formatPath(issue.path)}`, message: issue.message })),
+    errors: issueDetails(parsed.error, { prefix: "spec.", fallback: "spec" }),
   };
 }

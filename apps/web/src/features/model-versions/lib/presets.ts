@@ -1,4 +1,4 @@
-import type { Distribution } from "@plumeline/contracts";
+import { AR6_ECS_LIKELY, AR6_ECS_VERY_LIKELY, AR6_F2X, type Distribution } from "@plumeline/contracts";
 
 /**
  * Assessed ranges offered as one-click presets, each with its source. Labels name a range by
@@ -12,19 +12,19 @@ export const PRESETS: Record<string, Array<{ label: string; source: string; valu
     {
       label: "AR6: 3 K, 5th–95th pct 2–5 K",
       source: 'IPCC AR6 WG1 SPM A.4.4 (IPCC 2021): best estimate 3 K, “very likely range” 2–5 K, read as 5th–95th percentiles; split (two-piece) lognormal fit',
-      value: { type: "range", p50: 3, low: 2, high: 5, coverage: 90, shape: "lognormal" },
+      value: AR6_ECS_VERY_LIKELY,
     },
     {
       label: "AR6: 3 K, 17th–83rd pct 2.5–4 K",
       source: 'IPCC AR6 WG1 SPM A.4.4 (IPCC 2021): best estimate 3 K, “likely range” 2.5–4 K, read as 17th–83rd percentiles; split (two-piece) lognormal fit',
-      value: { type: "range", p50: 3, low: 2.5, high: 4, coverage: 66, shape: "lognormal" },
+      value: AR6_ECS_LIKELY,
     },
   ],
   f2x: [
     {
       label: "AR6: 3.93 ± 0.47 W m-2",
       source: "IPCC AR6 WGI Ch. 7 Section 7.3.2.1 (Forster et al. 2021): 3.93 ± 0.47 W m-2, read as 5th–95th percentiles; split (two-piece) normal fit",
-      value: { type: "range", p50: 3.93, low: 3.46, high: 4.4, coverage: 90, shape: "split-normal" },
+      value: AR6_F2X,
     },
     { label: "5.35 ln 2 = 3.71 W m-2 (fixed)", source: "Myhre et al. 1998 logarithmic CO2 expression", value: { type: "fixed", value: 3.7083 } },
   ],

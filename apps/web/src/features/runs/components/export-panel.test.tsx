@@ -21,6 +21,12 @@ describe("ExportPanel", () => {
     expect(screen.getByRole("status")).toHaveTextContent(/^Workbook \(\.xlsx\) requested/);
   });
 
+  it("offers the member table as a CSV and states how large a run the workbook holds it for", () => {
+    render(<ExportPanel runId="run 1" exploratory={false} canWorkbook hasPerils={false} />, { wrapper: MemoryRouter });
+    expect(screen.getByRole("link", { name: "members.csv" }).getAttribute("href")).toMatch(/\/api\/runs\/run%201\/tables\/members\.csv$/);
+    expect(screen.getByText(/Members sheet up to 10,000 members/)).toBeInTheDocument();
+  });
+
   it("offers the peril tables only when the run applied the peril lens", () => {
     render(<ExportPanel runId="run-1" exploratory={false} canWorkbook hasPerils={false} />, { wrapper: MemoryRouter });
     expect(screen.queryByRole("link", { name: /^peril-/ })).toBeNull();
