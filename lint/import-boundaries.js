@@ -168,4 +168,16 @@ export const importBoundaries = [
       ],
     },
   },
+
+  {
+    // A seed's test may run the seeded data through the engine (a dev dependency of seeds) to
+    // check it against published values; the seed data itself still imports only contracts.
+    files: ["seeds/**/*.test.ts"],
+    rules: {
+      "no-restricted-imports": [
+        "error",
+        { patterns: [intoAnotherPackage, ourPackagesExcept(["contracts", "engine"], "Seed tests import only @plumeline/contracts and @plumeline/engine.")] },
+      ],
+    },
+  },
 ];

@@ -11,7 +11,7 @@ describe("demo pathways", () => {
       expect(pathwaySpecSchema.safeParse({ id: p.key, name: p.name, startYear: p.startYear, agents: p.agents }).success).toBe(true);
       const { key: _key, ...body } = p;
       expect(createPathwayBodySchema.safeParse(body).error?.issues ?? []).toEqual([]);
-      for (const s of Object.values(p.agents)) expect(Object.values(s!)[0]!.length).toBe(351);
+      for (const s of Object.values(p.agents)) expect(Object.values(s)[0]!.length).toBe(351);
       expect(p.description).toContain("ILLUSTRATIVE");
       expect(p.source).toContain("AR6");
     }

@@ -127,15 +127,18 @@ export function createAuth({ config, models, onSignIn, onSignInFailure, onSignIn
     hooks: {
       // A slowed-down address is refused before its password is even checked, with the same
       // answer whether or not an account has it.
-      before: createAuthMiddleware(async (ctx) => {
-        if (ctx.path !== "/sign-in/email") return;
+      before: createAuthMiddleware((ctx) => {
+        if (ctx.path !== "/sign-in/email") return Promise.resolve();
         const email = typedEmail(ctx.body);
         const wait = email ? slowdown.waitSeconds(email) : 0;
         if (wait > 0)
-          throw new APIError("TOO_MANY_REQUESTS", {
-            code: "SIGN_IN_SLOWED",
-            message: `Too many failed sign-ins for this address. Try again in ${wait} seconds.`,
-          });
+          return Promise.reject(
+            new APIError("TOO_MANY_REQUESTS", {
+              code: "SIGN_IN_SLOWED",
+              message: `Too many failed sign-ins for this address. Try again in ${wait} seconds.`,
+            }),
+          );
+        return Promise.resolve();
       }),
       // Runs after every auth endpoint, also when it failed: `returned` then holds the error.
       after: createAuthMiddleware(async (ctx) => {

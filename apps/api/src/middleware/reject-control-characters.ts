@@ -2,7 +2,9 @@ import type { RequestHandler } from "express";
 import { AppError } from "../errors/app-error.js";
 
 /** NUL and the other C0 controls (tab, CR and LF allowed in body text) and DEL. */
+// eslint-disable-next-line no-control-regex -- matching NUL and the other C0 controls is the point
 const CONTROL_IN_PATH = /[\u0000-\u001f\u007f]/;
+// eslint-disable-next-line no-control-regex -- matching NUL and the other C0 controls is the point
 const CONTROL_IN_TEXT = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/;
 
 function describe(text: string): string {

@@ -15,15 +15,15 @@ const OWN_FETCH_SITES = new Set(["same-origin", "none"]);
  * Origin stripped. Requests with no cookie cannot act for anyone and pass to authentication.
  */
 export const requireTrustedOrigin: RequestHandler = (req, _res, next) => {
-  if (SAFE_METHODS.has(req.method)) return next();
+  if (SAFE_METHODS.has(req.method)) { next(); return; }
   const origin = req.get("origin");
   if (origin !== undefined) {
     if (!contextOf(req).config.trustedOrigins.includes(origin)) {
       throw forbidden(`Requests from ${origin} are not accepted.`, "untrusted_origin");
     }
-    return next();
+    next(); return;
   }
-  if (!req.get("cookie")) return next();
+  if (!req.get("cookie")) { next(); return; }
   const fetchSite = req.get("sec-fetch-site");
   if (fetchSite === undefined)
     throw forbidden("A signed-in change must say where it comes from: send an Origin (or Sec-Fetch-Site) header.", "origin_required");

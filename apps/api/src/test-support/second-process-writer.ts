@@ -28,7 +28,7 @@ if (mode === "hold") {
     ),
   );
   const failed = outcomes.filter((o) => o.status === "rejected");
-  for (const f of failed) process.stderr.write(`${String((f as PromiseRejectedResult).reason)}\n`);
+  for (const f of failed) process.stderr.write(`${String((f).reason)}\n`);
   process.stdout.write(`done ${outcomes.length - failed.length} ${failed.length}\n`);
 }
 await sequelize.close();

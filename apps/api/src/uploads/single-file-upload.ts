@@ -16,7 +16,7 @@ export function singleFileUpload(field: string, maxBytes: number): RequestHandle
   const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: maxBytes, files: 1, fields: 10 } }).single(field);
   return (req, res, next) => {
     upload(req, res, (error?: unknown) => {
-      if (!error || error instanceof multer.MulterError) return next(error);
+      if (!error || error instanceof multer.MulterError) { next(error); return; }
       next(new MalformedMultipartError((error as Error).message.replace(/^Multipart: /, "").replace(/\.$/, "").toLowerCase()));
     });
   };

@@ -45,7 +45,7 @@ const TERMINAL = new Set(["succeeded", "failed", "cancelled"]);
  * BullMQ job once that is written. Events are handled one at a time in arrival order; a
  * periodic sweep settles anything an event did not (the API was down, Redis lost a job).
  */
-export async function startBullmqCoordinator(ctx: WorkerContext, queue: JobQueue, options: BullmqCoordinatorOptions): Promise<BullmqCoordinator> {
+export function startBullmqCoordinator(ctx: WorkerContext, queue: JobQueue, options: BullmqCoordinatorOptions): Promise<BullmqCoordinator> {
   const kindOf = (row: JobModel) => options.kinds[row.type];
   const transport = createBullmqTransport(ctx.models.Job, {
     redisUrl: options.redisUrl,
@@ -65,7 +65,7 @@ export async function startBullmqCoordinator(ctx: WorkerContext, queue: JobQueue
   // Events are recorded one after another, in the order BullMQ published them.
   let chain: Promise<void> = Promise.resolve();
   const inTurn = (label: string, step: () => Promise<void>) => {
-    chain = chain.then(step).catch((error) => {
+    chain = chain.then(step).catch((error: unknown) => {
       if (!stopping) logger.error({ err: error, event: label }, "recording a BullMQ event failed");
     });
     return chain;
@@ -187,7 +187,7 @@ export async function startBullmqCoordinator(ctx: WorkerContext, queue: JobQueue
         })
       : null;
 
-  return {
+  return Promise.resolve({
     size: options.workers,
     transport,
     localWorker,
@@ -202,7 +202,7 @@ export async function startBullmqCoordinator(ctx: WorkerContext, queue: JobQueue
       await chain;
       await transport.close();
     },
-  };
+  });
 }
 
 /** What a finished BullMQ job means for its row: the returned (compressed) result, a confirmed cancel, or the failure's reason. */

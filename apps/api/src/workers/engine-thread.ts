@@ -7,7 +7,7 @@
  * engine as an AbortSignal, which it checks between simulated years.
  */
 import { parentPort } from "node:worker_threads";
-import { runResultSchema, type RunResult } from "@plumeline/contracts";
+import { runResultSchema } from "@plumeline/contracts";
 import { runEnsembleParallel } from "@plumeline/engine/node";
 import type { FromEngineThread, ToEngineThread } from "./engine-thread-protocol.js";
 
@@ -48,7 +48,7 @@ async function run(message: ToEngineThread): Promise<void> {
     const issue = checked.success ? null : checked.error.issues[0];
     post({
       type: "done",
-      result: result as unknown as RunResult,
+      result: result,
       ...(issue ? { contractWarning: `${issue.path.join(".")}: ${issue.message}` } : {}),
     });
   } catch (error) {

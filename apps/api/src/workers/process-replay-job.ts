@@ -8,6 +8,7 @@ import type { JobModel } from "../queue/job.model.js";
 import { BULLMQ_HOLDER, type EngineJobKindHandler } from "./engine-job-kind.js";
 import { EngineThreadCrashed, type EngineOutcome, type EngineThread } from "./engine-thread-client.js";
 import { OutcomeDiscarded, type StepOptions, type StepOutcome, type WorkerContext } from "./process-run-job.js";
+import { logger } from "../logging/logger.js";
 
 export { REPLAY_JOB_TYPE };
 
@@ -86,7 +87,7 @@ export async function processClaimedReplayJob(ctx: WorkerContext, queue: JobQueu
     chain = chain
       .then(() => queue.heartbeat(job.id, job.lockedBy, fraction))
       .then(() => ctx.models.RunReplay.update({ progress: fraction }, { where: { id: replay.id, status: "running" } }))
-      .catch((error) => console.error(`[worker] progress of replay ${replay.id}:`, error));
+      .catch((error: unknown) => logger.error({ err: error, replayId: replay.id }, "writing replay progress failed"));
   };
   let outcome: EngineOutcome;
   try {

@@ -103,7 +103,7 @@ export function startRemoteEngineWorker(options: RemoteEngineWorkerOptions): Rem
         ...(outcome.contractWarning ? { contractWarning: outcome.contractWarning } : {}),
       };
     } catch (error) {
-      if (error instanceof EngineThreadCrashed && closing) throw new Error(`the worker ${options.name ?? ""} shut down while the job ran`);
+      if (error instanceof EngineThreadCrashed && closing) throw new Error(`the worker ${options.name ?? ""} shut down while the job ran`, { cause: error });
       throw error;
     } finally {
       clearInterval(watch);

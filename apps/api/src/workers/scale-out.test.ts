@@ -26,6 +26,7 @@ const workers: StartedProcess[] = [];
 let base: string;
 let cookie = "";
 
+// eslint-disable-next-line @typescript-eslint/no-unnecessary-type-parameters -- the caller names the JSON body's type (a cast at this HTTP boundary)
 async function call<T>(method: string, url: string, body?: unknown): Promise<{ status: number; body: T }> {
   const res = await fetch(`${base}${url}`, {
     method,

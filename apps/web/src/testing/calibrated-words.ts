@@ -19,10 +19,10 @@ export interface UncitedTerm {
 export function uncitedLikelihoodTerms(text: string): UncitedTerm[] {
   const found: UncitedTerm[] = [];
   for (const line of text.split("\n")) {
-    const quoted = [...line.matchAll(QUOTATION)].map((m) => [m.index!, m.index! + m[0].length] as const);
+    const quoted = [...line.matchAll(QUOTATION)].map((m) => [m.index, m.index + m[0].length] as const);
     const cited = CITATION.test(line);
     for (const m of line.matchAll(LIKELIHOOD_TERM)) {
-      const inQuote = quoted.some(([from, to]) => m.index! > from && m.index! < to);
+      const inQuote = quoted.some(([from, to]) => m.index > from && m.index < to);
       if (!(inQuote && cited)) found.push({ term: m[0], line: line.trim() });
     }
   }

@@ -44,7 +44,7 @@ function pathway(id: string, name: string, offset: number): PathwayResult {
     sensitivity,
     effectiveMembers: 1000,
     constraint: null,
-  } as unknown as PathwayResult;
+  };
 }
 
 export function runResultFixture(): RunResult {

@@ -36,7 +36,7 @@ export const createPathwayBodySchema = pathwayMetadataSchema
   })
   .strict()
   .superRefine((body, ctx) => {
-    const issue = lastYearIssue(body.startYear, body.agents as Record<string, Record<string, number[]> | undefined>);
+    const issue = lastYearIssue(body.startYear, body.agents);
     if (issue) ctx.addIssue({ code: "custom", path: ["startYear"], message: issue });
   });
 export type CreatePathwayBody = z.input<typeof createPathwayBodySchema>;
@@ -48,7 +48,7 @@ export const updatePathwayBodySchema = pathwayMetadataSchema
   .strict()
   .superRefine((body, ctx) => {
     if (body.startYear === undefined || body.agents === undefined) return;
-    const issue = lastYearIssue(body.startYear, body.agents as Record<string, Record<string, number[]> | undefined>);
+    const issue = lastYearIssue(body.startYear, body.agents);
     if (issue) ctx.addIssue({ code: "custom", path: ["startYear"], message: issue });
   });
 export type UpdatePathwayBody = z.input<typeof updatePathwayBodySchema>;

@@ -54,7 +54,7 @@ export const pathwayAgentsSchema = z
   // read "must be { "erf": [..] }", without naming the limit.
   .superRefine((agents, ctx) => {
     for (const [agent, series] of Object.entries(agents)) {
-      for (const [key, values] of Object.entries(series ?? {}) as Array<[string, number[]]>) {
+      for (const [key, values] of Object.entries<number[]>(series ?? {})) {
         if (values.length > MAX_PATHWAY_YEARS)
           ctx.addIssue({
             code: "custom",

@@ -32,8 +32,8 @@ export function boundedUniqueList<T extends z.ZodType<number>>(item: T, max: num
     .superRefine((list, ctx) => {
       const first = new Map<number, number>();
       list.forEach((value, i) => {
-        const earlier = first.get(value as number);
-        if (earlier === undefined) first.set(value as number, i);
+        const earlier = first.get(value);
+        if (earlier === undefined) first.set(value, i);
         else ctx.addIssue({ code: "custom", path: [i], message: `repeats ${value} (already ${field}[${earlier}])` });
       });
     });

@@ -40,11 +40,11 @@ export function preparePlan(
   // A pathway's forcing error is given after the samples' own refusals (their order before
   // `early` existed); the forcing is built first so the plan can be handed out early.
   let pathways: PathwayForcing[] | null = null;
-  let pathwayError: unknown = null;
+  let pathwayError: Error | null = null;
   try {
     pathways = spec.pathways.map((_, i) => buildPathwayForcing(spec, i, names));
   } catch (error) {
-    pathwayError = error;
+    pathwayError = error instanceof Error ? error : new Error(String(error));
   }
   let plan: EnsemblePlan | null = null;
   const sources = spec.pathways.map(doublingSourceOf);
@@ -80,7 +80,7 @@ export function preparePlan(
         ? {
             members: early.members,
             filled: () => {
-              plan = assemblePlan(spec, inputs, columns, climates, pathwayClimate, pathways!, spansInRing, memory, summaries);
+              plan = assemblePlan(spec, inputs, columns, climates, pathwayClimate, pathways, spansInRing, memory, summaries);
               early.ready(plan);
             },
           }

@@ -26,7 +26,7 @@ export interface RunOptions {
    * constraint weights (views into the run's arrays, valid only during the call) and the
    * sampled inputs: what memberTable (member-table.ts) lists.
    */
-  onPathwayMembers?(members: PathwayMembers): void;
+  onPathwayMembers?: (members: PathwayMembers) => void;
 }
 
 /** Wall-clock seconds per stage; parallel stages count thread-seconds divided by threads. */

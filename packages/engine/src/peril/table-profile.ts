@@ -21,7 +21,7 @@ export function tablesOf(scaling: Pick<TableScaling, "tables" | "points">): Retu
     try {
       checkTable(t.points, "hold");
     } catch (error) {
-      throw new RangeError(`tables[${i}].${(error as Error).message}`);
+      throw new RangeError(`tables[${i}].${(error as Error).message}`, { cause: error });
     }
   });
   return scaling.tables;

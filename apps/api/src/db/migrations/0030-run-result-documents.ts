@@ -38,6 +38,5 @@ export const up: MigrationModule["up"] = async ({ queryInterface, sequelize }) =
   await queryInterface.dropTable("run_results");
 };
 
-export const down: MigrationModule["down"] = async () => {
-  throw new Error("0030-run-result-documents cannot be undone: the per-year rows it dropped were never read; restore a backup instead.");
-};
+export const down: MigrationModule["down"] = () =>
+  Promise.reject(new Error("0030-run-result-documents cannot be undone: the per-year rows it dropped were never read; restore a backup instead."));

@@ -184,7 +184,7 @@ describe("GET /api/runs/:id/tables/:table.csv", () => {
   });
 
   it("writes the sensitivity budget with each input's variance share beside its rank correlation", async () => {
-    const rows = parse((await actuary.get(`/api/runs/${runId}/tables/sensitivity.csv`)).text, { columns: true }) as Array<Record<string, string>>;
+    const rows = parse<Record<string, string>>((await actuary.get(`/api/runs/${runId}/tables/sensitivity.csv`)).text, { columns: true });
     const entries = result.pathways[0]!.sensitivity;
     expect(entries.length).toBeGreaterThan(0);
     expect(rows).toHaveLength(entries.length);

@@ -27,8 +27,7 @@ export function addMemberSheet(workbook: ExcelJS.Workbook, sheet: MemberSheet, t
   ws.addRow([`${tag}${NOTE}`]).font = { italic: true };
   ws.addRow(sheet.columns).font = { bold: true };
   const members = sheet.values[0]?.length ?? 0;
-  const rows: number[][] = new Array(members);
-  for (let m = 0; m < members; m++) rows[m] = sheet.values.map((column) => column[m]!);
+  const rows = Array.from({ length: members }, (_, m) => sheet.values.map((column) => column[m]!));
   ws.addRows(rows);
   ws.getColumn(1).numFmt = "0";
   sheet.columns.forEach((name, i) => (ws.getColumn(i + 1).width = Math.max(10, Math.min(40, name.length + 2))));

@@ -52,7 +52,7 @@ describe("GET /api/runs/:id/tables/members.csv", () => {
     expect(res.status).toBe(200);
     expect(res.headers["content-type"]).toContain("text/csv");
     expect(res.headers["content-disposition"]).toContain("-members.csv");
-    rows = parse(res.text, { columns: true }) as Array<Record<string, string>>;
+    rows = parse<Record<string, string>>(res.text, { columns: true });
     header = Object.keys(rows[0]!);
     const p = small.result.pathways[0]!;
     const inputs = [...new Set(p.sensitivity.map((s) => s.input))];
@@ -110,10 +110,10 @@ describe("the workbook's Members sheet", () => {
     const res = await actuary.get(`/api/runs/${small.runId}/workbook.xlsx`).buffer(true).parse(binaryBody);
     expect(res.status).toBe(200);
     const book = new ExcelJS.Workbook();
-    await book.xlsx.load(res.body as unknown as ArrayBuffer);
+    await book.xlsx.load(res.body);
     const sheet = book.getWorksheet("Members")!;
-    expect(String(sheet.getRow(1).getCell(1).value)).toContain("One row per member");
-    const csv = parse((await actuary.get(`/api/runs/${small.runId}/tables/members.csv`)).text, { columns: true }) as Array<Record<string, string>>;
+    expect(sheet.getRow(1).getCell(1).text).toContain("One row per member");
+    const csv = parse<Record<string, string>>((await actuary.get(`/api/runs/${small.runId}/tables/members.csv`)).text, { columns: true });
     const header = (sheet.getRow(2).values as unknown[]).slice(1);
     expect(header).toEqual(Object.keys(csv[0]!));
     expect(sheet.rowCount).toBe(2 + 500);
@@ -125,7 +125,7 @@ describe("the workbook's Members sheet", () => {
     const res = await actuary.get(`/api/runs/${big.runId}/workbook.xlsx`).buffer(true).parse(binaryBody);
     expect(res.status).toBe(200);
     const book = new ExcelJS.Workbook();
-    await book.xlsx.load(res.body as unknown as ArrayBuffer);
+    await book.xlsx.load(res.body);
     const text = book.getWorksheet("Members")!.getSheetValues().flat().map(String).join("\n");
     expect(text).toContain("Member table left out of this workbook");
     expect(text).toContain(`/api/runs/${big.runId}/tables/members.csv`);

@@ -28,7 +28,7 @@ export async function assertEngineAcceptsModel(model: ModelSpec, defaults: Model
     model,
   };
   try {
-    validateSpec(applyDefaults(probe as never));
+    validateSpec(applyDefaults(probe));
   } catch (error) {
     if (!(error instanceof SpecError) || !error.field.startsWith("model")) return;
     const problem = error.message.startsWith(`${error.field} `) ? error.message.slice(error.field.length + 1) : error.message;

@@ -69,7 +69,7 @@ describe("parsePathwayTable", () => {
     ws.addRow([{ formula: "A2+1", result: 2001 }, { formula: "B2+0.1", result: 99 }]);
     const refused = await readXlsxRows(Buffer.from(await wb.xlsx.writeBuffer())).then(
       () => null,
-      (error: { status: number; details: unknown }) => error,
+      (error: unknown) => error as { status: number; details: unknown },
     );
     expect(refused?.status).toBe(400);
     expect(refused?.details).toEqual([

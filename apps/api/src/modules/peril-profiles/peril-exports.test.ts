@@ -87,7 +87,7 @@ beforeAll(() => {
     pathways: [{ id: "p1", name: pathway.name, startYear: pathway.startYear, agents: pathway.agents }],
     model: testModelVersionBody().model,
   };
-  const base = runEnsemble(spec) as unknown as RunResult;
+  const base = runEnsemble(spec);
   const members = 40;
   const horizons = [2030, 2050, 2100];
   // Stated member warmings (K above 1850–1900): a spread of 0.8 K around 1.4 / 1.9 / 2.9 K.
@@ -211,7 +211,7 @@ describe("portfolio totals table", () => {
     expect(row.slice(4, 14)).toEqual(["EUR", 3, 2, 33000, json.p5, json.p17, json.p50, json.p83, json.p95, json.mean]);
     expect(row[16]).toBeCloseTo(json.p50! - 33000, 9);
     // CSV keeps full precision: reading it back gives the same doubles.
-    const back = parse(tableToCsv(resultTable(result, "portfolio-totals")), { columns: true }) as Array<Record<string, string>>;
+    const back = parse<Record<string, string>>(tableToCsv(resultTable(result, "portfolio-totals")), { columns: true });
     expect(Number(back.find((r) => r.horizon === "2100" && r.metric === "loss_1_in_200")!.p50)).toBe(json.p50);
   });
 

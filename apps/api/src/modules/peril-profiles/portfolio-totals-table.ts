@@ -36,7 +36,7 @@ export function portfolioTotalsTable(result: RunResult): Table {
           total.projectedRows,
           baseline,
           ...keys.map((k) => summary[k] ?? null),
-          ...percentileKeys.map((k) => (summary[k] === undefined ? null : summary[k]! - baseline)),
+          ...percentileKeys.map((k) => (summary[k] === undefined ? null : summary[k] - baseline)),
         ]);
       }
   return {

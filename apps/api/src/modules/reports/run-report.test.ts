@@ -54,7 +54,7 @@ beforeAll(async () => {
     perils: profiles,
     portfolio,
   };
-  result = runEnsemble(spec as Parameters<typeof runEnsemble>[0]) as unknown as RunResult;
+  result = runEnsemble(spec);
   manifest = {
     runId: "9f1c2d3e-0000-4000-8000-000000000001",
     runName: "Board pack Q3",

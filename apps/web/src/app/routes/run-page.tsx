@@ -14,7 +14,7 @@ import { RunManifest } from "@/features/runs/components/run-manifest";
 import { RunProgress } from "@/features/runs/components/run-progress";
 import { RunPerilSection } from "@/features/peril/components/run-peril-section";
 import { ApprovedSeal, ExploratoryStamp, StatusBadge } from "@/components/ui/badges";
-import { Button, ButtonLink } from "@/components/ui/button";
+import { ButtonLink } from "@/components/ui/button";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
 import { ErrorState, LoadingState } from "@/components/ui/states";

@@ -46,7 +46,7 @@ export function VarianceShareBars({ title, horizon, rows }: { title: string; hor
   const innerWidth = Math.max(10, width - m.left - m.right);
   const x = useMemo(() => scaleLinear().domain([0, 1]).range([0, innerWidth]), [innerWidth]);
   const labelKey = labels.join("\n");
-  const yb = useMemo(() => scaleBand<string>().domain(labelKey.split("\n")).range([0, innerHeight]).padding(0.25), [labelKey, innerHeight]);
+  const yb = useMemo(() => scaleBand().domain(labelKey.split("\n")).range([0, innerHeight]).padding(0.25), [labelKey, innerHeight]);
   const overshoot = sum > 1;
 
   return (
@@ -74,7 +74,7 @@ export function VarianceShareBars({ title, horizon, rows }: { title: string; hor
             <AxisBottom scale={x} height={innerHeight} width={innerWidth} label="Share of the variance of warming (%)" ticks={5} format={(v) => `${Math.round(v * 100)}`} />
             {sorted.map((r) => (
               <g key={r.input} data-input={r.input}>
-                <rect data-role="share" x={x(0)} width={x(r.share) - x(0)} y={yb(r.label)!} height={yb.bandwidth()} fill="var(--pl-ember-400)" />
+                <rect data-role="share" x={x(0)} width={x(r.share) - x(0)} y={yb(r.label)} height={yb.bandwidth()} fill="var(--pl-ember-400)" />
                 <text x={x(r.share) + 4} y={yb(r.label)! + yb.bandwidth() / 2} dy="0.32em" className="fill-muted text-[11px] num">
                   {pct(r.share)}
                 </text>
@@ -88,7 +88,7 @@ export function VarianceShareBars({ title, horizon, rows }: { title: string; hor
                 data-role="share"
                 x={x(0)}
                 width={x(remainder) - x(0)}
-                y={yb(INTERACTIONS_LABEL)!}
+                y={yb(INTERACTIONS_LABEL)}
                 height={yb.bandwidth()}
                 fill="none"
                 stroke="var(--pl-line-strong)"

@@ -15,7 +15,7 @@ export async function downloadExportAgain(exportId: string, fileName: string): P
   }
   if (!res.ok) {
     const text = await res.text();
-    let body: unknown = null;
+    let body: unknown;
     try {
       body = JSON.parse(text);
     } catch {

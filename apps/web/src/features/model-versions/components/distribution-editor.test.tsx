@@ -36,7 +36,7 @@ describe("DistributionEditor", () => {
     expect(screen.getByLabelText("Range covers")).toHaveValue("90");
   });
 
-  it("names a range's fit for what it is: a split (two-piece) law, not a fitted lognormal", async () => {
+  it("names a range's fit for what it is: a split (two-piece) law, not a fitted lognormal", () => {
     render(<DistributionEditor id="ecs" label="ECS" unit="K" value={{ type: "range", p50: 3, low: 2, high: 5, coverage: 90, shape: "lognormal" }} onChange={() => {}} />);
     const shape = screen.getByLabelText("Fitted as");
     expect(within(shape).getAllByRole("option").map((o) => o.textContent)).toEqual(["split (two-piece) lognormal", "split (two-piece) normal"]);

@@ -1,5 +1,4 @@
 import { SUGGESTED_PERILS } from "@plumeline/contracts";
-import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import { Segmented } from "@/components/ui/segmented";
 import { RATE_PARAMS, RATE_TYPE_LABELS, type ProfileDraft, type RateType } from "../lib/profile-draft";

@@ -129,7 +129,7 @@ function ProfileSection({ profile, baselineRows }: { profile: PerilProfileResult
         losses.map((loss, li) => {
           const baseline = baselineRows.find((r) => r.region === loss.region && r.peril === loss.peril);
           // One scale per table, from its largest figure, so every amount reads in the same unit.
-          const scale = moneyScale(profile.horizons.flatMap((h) => (h.losses[li] ? Object.values(h.losses[li]!.loss200) : [])));
+          const scale = moneyScale(profile.horizons.flatMap((h) => (h.losses[li] ? Object.values(h.losses[li].loss200) : [])));
           return (
             <section key={`${loss.region}-${loss.peril}`} className="flex flex-col gap-3">
               <h3 className="text-sm font-semibold text-ink">
