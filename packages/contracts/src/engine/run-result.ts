@@ -29,7 +29,7 @@ export const horizonSchema = z.object({
   year: z.number().int(),
   temperature: percentileSetSchema,
   exceedance: z.record(z.string(), z.number()),
-  /** Committed warming if forcing stayed at this year's level: F/lambda minus the anomaly. */
+  /** Committed warming if forcing stayed at this year's level: the equilibrium warming F/λ minus the warming since the pathway start. */
   committed: percentileSetSchema,
   precision: precisionSchema,
   forcing: percentileSetSchema,

@@ -197,7 +197,7 @@ function addInputs(workbook: ExcelJS.Workbook, model: ModelSpec): void {
 
 const TABLE_SHEETS: Array<[ResultTable, string, string]> = [
   ["temperature", "Temperature", "Temperature anomaly (K) vs the baseline period, percentiles by year (linear interpolation, R type 7)"],
-  ["horizons", "Horizons", "At each horizon: temperature percentiles (K), probability of exceeding each threshold, committed warming (K), total forcing (W m-2)"],
+  ["horizons", "Horizons", "At each horizon: temperature percentiles (K), probability of exceeding each threshold, committed warming (K: the equilibrium warming F/λ minus the warming since the pathway start, if forcing stayed at that year's level), total forcing (W m-2)"],
   ["exceedance", "Exceedance", "Probability (0–1) that the year's temperature anomaly exceeds each threshold"],
   ["crossing", "Crossing years", "Percentiles of the first year each threshold is crossed; share_never = members that never cross within the pathway"],
   ["sensitivity", "Sensitivity", "What drives the spread at each horizon: variance_share = the input's first-order share of the variance of warming (the shares of one horizon add up to at most 100 %; the rest is interactions between inputs); rank_correlation = Spearman rank correlation with warming (sign = direction). Both weighted under an observational constraint"],

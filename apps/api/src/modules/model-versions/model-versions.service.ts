@@ -5,6 +5,8 @@ import {
   type CreateModelVersionBody,
   type ErrorDetail,
   type ModelVersion,
+  type ModelSpec,
+  type ModelVersionDefaults,
   type ModelVersionDiff,
   type ModelVersionStatus,
   type ModelVersionSummary,
@@ -19,6 +21,8 @@ import { lockPathways } from "../pathways/pathways.service.js";
 import { diffModelVersions } from "./model-version-diff.js";
 import { mailDecided, mailSubmitted } from "./model-version-mail.js";
 import type { ModelVersionModel } from "./model-version.model.js";
+import { releasePathwayLocks } from "../pathways/release-pathway-locks.js";
+import { assertEngineAcceptsModel } from "./engine-model-check.js";
 
 type Ctx = Pick<AppContext, "models" | "sequelize" | "mailer" | "config">;
 
@@ -133,6 +137,7 @@ async function checkReferences(
 
 export async function createModelVersion(ctx: Ctx, user: RequestUser, body: CreateModelVersionBody): Promise<ModelVersion> {
   const input = createModelVersionBodySchema.parse(body);
+  await assertEngineAcceptsModel(input.model, input.defaults);
   const row = await ctx.sequelize.transaction(async (transaction) => {
     const parent = await checkReferences(ctx, input.parentId, input.pathwayIds, input.perilProfileIds, transaction);
     const id = randomUUID();
@@ -185,6 +190,9 @@ export async function updateModelVersion(ctx: Ctx, user: RequestUser, id: string
     const row = await findModelVersion(ctx, id, transaction);
     refuseUnlessEditableDraft(row, user, "edited");
     if (body.parentId === id) throw badRequest([{ path: "parentId", message: "cannot be the version itself" }]);
+    if (body.model !== undefined || body.defaults !== undefined)
+      // The route validated the body with the contracts schema, so these are parsed (defaults applied).
+      await assertEngineAcceptsModel((body.model ?? row.model) as ModelSpec, (body.defaults ?? row.defaults) as ModelVersionDefaults);
     await checkReferences(ctx, body.parentId, body.pathwayIds, body.perilProfileIds, transaction);
     const changes = Object.fromEntries(Object.entries(body).filter(([, v]) => v !== undefined));
     await row.update(changes, { transaction });
@@ -225,6 +233,8 @@ export async function submitModelVersion(ctx: Ctx, user: RequestUser, id: string
     const row = await findModelVersion(ctx, id, transaction);
     refuseUnlessEditableDraft(row, user, "submitted");
     await row.update({ status: "in-review", changeClass, submissionNote: note ?? null, submittedAt: new Date() }, { transaction });
+    // The reviewer signs off on these numbers: they stop changing from now on, not at approval.
+    await lockPathways(ctx, row.pathwayIds ?? [], transaction);
     await recordAudit(
       ctx,
       {
@@ -255,6 +265,7 @@ export async function decideModelVersion(ctx: Ctx, user: RequestUser, id: string
       throw conflict(`Model version "${row.name}" v${row.versionNumber} is ${row.status}; only a version in review can be ${decision}.`, "model_version_not_in_review");
     await row.update({ status: decision, decidedBy: user.id, decidedAt: new Date(), decisionComment: comment }, { transaction });
     if (decision === "approved") await lockPathways(ctx, row.pathwayIds ?? [], transaction);
+    else await releasePathwayLocks(ctx.sequelize, row.pathwayIds ?? [], row.id, transaction);
     await recordAudit(
       ctx,
       {

@@ -3,16 +3,18 @@ import { QueryTypes, type Sequelize, type Transaction } from "sequelize";
 
 /**
  * Which records depend on each peril profile, read from the `peril_profile_ids` JSON lists of
- * model versions and runs (SQLite json_each). A profile is locked when an approved or retired
- * model version pins it or any run used it: both are records that must stay reproducible.
- * `drafts` lists the draft / in-review versions that name it (they block deletion, not edits).
+ * model versions and runs (SQLite json_each). A profile is locked when a model version in
+ * review, approved or retired pins it, or any run used it: a reviewer must see the numbers they
+ * sign off on, and records must stay reproducible. A rejected version locks nothing, so its
+ * profiles unlock unless something else holds them. `drafts` lists the draft versions that
+ * name it (they block deletion, not edits).
  */
 export interface ProfileDependants {
   lock: PerilProfileLock;
   drafts: Array<{ id: string; name: string; versionNumber: number; status: string }>;
 }
 
-const LOCKING_STATUSES = new Set(["approved", "retired"]);
+const LOCKING_STATUSES = new Set(["in-review", "approved", "retired"]);
 
 export function isLocked(lock: PerilProfileLock): boolean {
   return lock.modelVersions.length > 0 || lock.runIds.length > 0;

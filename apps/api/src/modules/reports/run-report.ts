@@ -163,7 +163,7 @@ function horizonTable(w: ReportWriter, p: PathwayResult): void {
     ]),
     { caption: `Warming at the horizons — ${p.name}`, boldColumn: 1 + keys.indexOf("p50") },
   );
-  w.paragraph("Chance > T: share of members warmer than T in that year. Committed: further warming (median) if forcing stayed at that year's level.", {
+  w.paragraph("Chance > T: share of members warmer than T in that year. Committed: further warming (median) if forcing stayed at that year's level — the equilibrium warming F/λ minus the warming since the pathway start.", {
     muted: true,
     size: 8,
   });

@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { useMe } from "@/features/auth/api/get-me";
 import { useExports } from "@/features/exports/api/get-exports";
 import { ExportsTable } from "@/features/exports/components/exports-table";
 import { Card } from "@/components/ui/card";
@@ -9,9 +10,11 @@ import { EmptyState, ErrorState, LoadingState } from "@/components/ui/states";
 export default function ExportsPage() {
   const [mine, setMine] = useState(true);
   const exports = useExports(mine);
+  const me = useMe();
+  const canDownload = me.data?.permissions.includes("exports:create") ?? false;
   return (
     <>
-      <PageHeader kicker="Exports" title="Exports" description="Every workbook and CSV handed out, with its checksum, so a figure in a report can be traced to its run." />
+      <PageHeader kicker="Exports" title="Exports" description="Every report, workbook and CSV handed out, with its checksum, so a figure in a report can be traced to its run. Any past file downloads again, rebuilt from the stored result and checked against its checksum." />
       <div className="mb-3">
         <Segmented
           label="Whose exports"
@@ -35,7 +38,7 @@ export default function ExportsPage() {
             <EmptyState title="No exports yet">Open a finished run and download its workbook or a CSV table.</EmptyState>
           </div>
         ) : (
-          <ExportsTable exports={exports.data} />
+          <ExportsTable exports={exports.data} canDownload={canDownload} />
         )}
       </Card>
     </>

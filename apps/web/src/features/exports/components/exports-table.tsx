@@ -4,11 +4,12 @@ import { paths } from "@/config/paths";
 import { ApprovedSeal, ExploratoryStamp } from "@/components/ui/badges";
 import { Table, Td, Th } from "@/components/ui/table";
 import { formatDateTime } from "@/lib/format";
+import { ExportActions } from "./export-actions";
 
 const kb = (bytes: number) => (bytes < 1024 ? `${bytes} B` : `${(bytes / 1024).toFixed(1)} kB`);
 
 /** Every file handed out: which run, which table, exploratory or not, and the checksum of the bytes. */
-export function ExportsTable({ exports, compact = false }: { exports: ExportRecord[]; compact?: boolean }) {
+export function ExportsTable({ exports, compact = false, canDownload = false }: { exports: ExportRecord[]; compact?: boolean; canDownload?: boolean }) {
   return (
     <Table>
       <thead>
@@ -19,6 +20,7 @@ export function ExportsTable({ exports, compact = false }: { exports: ExportReco
           <Th>When</Th>
           {!compact && <Th numeric>Size</Th>}
           {!compact && <Th>Checksum (SHA-256)</Th>}
+          {!compact && <Th>Actions</Th>}
         </tr>
       </thead>
       <tbody>
@@ -41,6 +43,11 @@ export function ExportsTable({ exports, compact = false }: { exports: ExportReco
                 <code className="num block max-w-48 truncate text-[11px] text-muted" title={e.checksum}>
                   {e.checksum}
                 </code>
+              </Td>
+            )}
+            {!compact && (
+              <Td>
+                <ExportActions record={e} canDownload={canDownload} />
               </Td>
             )}
           </tr>

@@ -87,24 +87,25 @@ describe("AalBandChart", () => {
     const [head, , row2100] = within(table).getAllByRole("row");
     expect(within(head!).getAllByRole("columnheader").map((c) => c.textContent)).toEqual([
       "Horizon",
-      "Today (EUR)",
-      "5th pct (EUR)",
-      "17th pct (EUR)",
-      "50th pct (EUR)",
-      "83rd pct (EUR)",
-      "95th pct (EUR)",
-      "Mean (EUR)",
+      "Today (EUR m)",
+      "5th pct (EUR m)",
+      "17th pct (EUR m)",
+      "50th pct (EUR m)",
+      "83rd pct (EUR m)",
+      "95th pct (EUR m)",
+      "Mean (EUR m)",
       "Median vs today",
     ]);
     expect(within(row2100!).getAllByRole("cell").map((c) => c.textContent)).toEqual([
+      // Money in one scale (EUR m) at three significant figures.
       "2100",
-      "17,500,000",
-      "18,800,000",
-      "19,600,000",
-      "20,400,000",
-      "21,300,000",
-      "22,000,000",
-      "20,400,000",
+      "17.5",
+      "18.8",
+      "19.6",
+      "20.4",
+      "21.3",
+      "22.0",
+      "20.4",
       "+17 %",
     ]);
   });

@@ -5,7 +5,7 @@ import { ChartFrame, DataTable } from "@/components/charts/chart-frame";
 import { DEFAULT_MARGINS, innerSize } from "@/components/charts/margins";
 import { seriesColor } from "@/components/charts/palette";
 import { useChartWidth } from "@/components/charts/use-chart-width";
-import { formatInteger, percentileHeading } from "@/lib/format";
+import { formatMoney, moneyScale, moneyUnit, percentileHeading } from "@/lib/format";
 import { lossAxisDomain } from "../lib/loss-axis-domain";
 import { medianChange } from "../lib/median-change";
 import { AalChartLegend } from "./aal-chart-legend";
@@ -68,19 +68,21 @@ export function AalBandChart({
   }, [horizons, today, innerHeight]);
   const color = seriesColor(0);
   const keys = ["p5", "p17", "p50", "p83", "p95", "mean"];
+  const money = moneyScale([today, ...horizons.flatMap((h) => keys.map((k) => h.summary[k]))]);
+  const unit = moneyUnit(currency, money);
   const table = (
     <DataTable
       caption={title}
       columns={[
         "Horizon",
-        ...(today !== null ? [`Today (${currency})`] : []),
-        ...keys.map((k) => (k === "mean" ? `Mean (${currency})` : `${percentileHeading(k)} (${currency})`)),
+        ...(today !== null ? [`Today (${unit})`] : []),
+        ...keys.map((k) => (k === "mean" ? `Mean (${unit})` : `${percentileHeading(k)} (${unit})`)),
         ...(today !== null ? ["Median vs today"] : []),
       ]}
       rows={horizons.map((h) => [
         h.year,
-        ...(today !== null ? [formatInteger(today)] : []),
-        ...keys.map((k) => formatInteger(h.summary[k])),
+        ...(today !== null ? [formatMoney(today, money)] : []),
+        ...keys.map((k) => formatMoney(h.summary[k], money)),
         ...(today !== null ? [medianChange(h.summary.p50, today) ?? "–"] : []),
       ])}
     />

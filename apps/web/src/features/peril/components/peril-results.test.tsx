@@ -21,7 +21,9 @@ describe("PerilResults", () => {
     render(<PerilResults result={perilResultFixture()} />);
     const table = screen.getByRole("table", { name: "Projected losses — Northmere Coast flood-heavy-rainfall" });
     const cells = within(table).getAllByRole("row").slice(1).map((r) => within(r).getAllByRole("cell").map((c) => c.textContent));
-    expect(cells[4]).toEqual(["2100", "1-in-100 loss", "21,000", "22,000", "23,000", "24,400", "26,000", "23,200"]);
+    // Money at three significant figures in one scale per table (the fixture's largest loss is in thousands: EUR k).
+    expect(cells[4]).toEqual(["2100", "1-in-100 loss", "21.0", "22.0", "23.0", "24.4", "26.0", "23.2"]);
+    expect(screen.getByRole("heading", { name: /Projected losses — Northmere Coast, flood-heavy-rainfall \(EUR k\)/ })).toBeTruthy();
     expect(screen.queryByRole("table", { name: /Return periods/ })).toBeNull(); // severity: no return periods
   });
 

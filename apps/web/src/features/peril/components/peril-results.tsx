@@ -6,8 +6,9 @@ import { Segmented } from "@/components/ui/segmented";
 import { EmptyState } from "@/components/ui/states";
 import { Table, Td, Th } from "@/components/ui/table";
 import { PercentileNote } from "@/components/ui/percentile-note";
-import { formatInteger, formatNumber, percentileHeading } from "@/lib/format";
+import { formatMoney, formatNumber, moneyScale, moneyUnit, percentileHeading } from "@/lib/format";
 import { AalBandChart } from "./aal-band-chart";
+import { PortfolioTotals } from "./portfolio-totals";
 import { TableReach } from "./table-reach";
 
 /** The peril cautions in plain words (the peril lens's limits, as README "Cautions" states them). */
@@ -127,10 +128,12 @@ function ProfileSection({ profile, baselineRows }: { profile: PerilProfileResult
       ) : (
         losses.map((loss, li) => {
           const baseline = baselineRows.find((r) => r.region === loss.region && r.peril === loss.peril);
+          // One scale per table, from its largest figure, so every amount reads in the same unit.
+          const scale = moneyScale(profile.horizons.flatMap((h) => (h.losses[li] ? Object.values(h.losses[li]!.loss200) : [])));
           return (
             <section key={`${loss.region}-${loss.peril}`} className="flex flex-col gap-3">
               <h3 className="text-sm font-semibold text-ink">
-                Projected losses — {loss.region}, {loss.peril} ({loss.currency})
+                Projected losses — {loss.region}, {loss.peril} ({moneyUnit(loss.currency, scale)})
               </h3>
               <SummaryTable
                 caption={`Projected losses — ${loss.region} ${loss.peril}`}
@@ -144,10 +147,10 @@ function ProfileSection({ profile, baselineRows }: { profile: PerilProfileResult
                     { id: `${h.year}-200`, lead: [h.year, "1-in-200 loss"], summary: l.loss200 },
                   ];
                 })}
-                format={formatInteger}
+                format={(v) => formatMoney(v, scale)}
               />
               <p className="-mt-1 text-xs text-muted">
-                Amounts in {loss.currency}: the portfolio's baseline figures times each member's multiplier, summarised by the same percentiles; exposure growth not included.
+                Amounts in {moneyUnit(loss.currency, scale)} at three significant figures (the CSV and workbook keep full precision): the portfolio's baseline figures times each member's multiplier, summarised by the same percentiles; exposure growth not included.
               </p>
               <PanelErrorBoundary resetKey={`${profile.profileId}-${li}`}>
                 <AalBandChart
@@ -225,6 +228,7 @@ export function PerilResults({
                 />
               </div>
             )}
+            <PortfolioTotals totals={pathway.totals} refused={result.totalsRefused} />
             <div className="flex flex-wrap items-center gap-3">
               <span className="text-sm font-medium text-ink">Profile</span>
               <Segmented label="Peril profile" value={profile.profileId} onChange={setProfileId} options={pathway.profiles.map((p) => ({ value: p.profileId, label: p.name }))} />

@@ -6,3 +6,7 @@ export const tableCsvUrl = (runId: string, table: ResultTable | string) =>
   buildUrl(`/api/runs/${encodeURIComponent(runId)}/tables/${encodeURIComponent(table)}.csv`);
 
 export const workbookUrl = (runId: string) => buildUrl(`/api/runs/${encodeURIComponent(runId)}/workbook.xlsx`);
+
+export const reportUrl = (runId: string) => buildUrl(`/api/runs/${encodeURIComponent(runId)}/report.pdf`);
+
+export const tablesZipUrl = (runId: string) => buildUrl(`/api/runs/${encodeURIComponent(runId)}/tables.zip`);

@@ -4,7 +4,7 @@ import { MEMBER_SHEET_MAX_MEMBERS, MEMBER_TABLE, RESULT_TABLES } from "@plumelin
 import { paths } from "@/config/paths";
 import { buttonClass } from "@/components/ui/button";
 import { ExploratoryStamp } from "@/components/ui/badges";
-import { tableCsvUrl, workbookUrl } from "../api/export-urls";
+import { reportUrl, tableCsvUrl, tablesZipUrl, workbookUrl } from "../api/export-urls";
 
 /**
  * One-click workbook (manifest sheet first) and a CSV per table. Each download is recorded
@@ -35,22 +35,30 @@ export function ExportPanel({
     <div className="flex flex-col gap-3 text-sm">
       {exploratory && (
         <p className="flex items-center gap-2 text-ember-800">
-          <ExploratoryStamp size="sm" /> Exports of this run are marked exploratory on every sheet.
+          <ExploratoryStamp size="sm" /> Exports of this run are marked exploratory on every sheet and report page.
         </p>
       )}
       {canWorkbook ? (
-        <a href={workbookUrl(runId)} download className={buttonClass("primary", "md", "self-start")} onClick={() => later("Workbook (.xlsx)")}>
-          <svg aria-hidden viewBox="0 0 16 16" className="h-4 w-4" fill="none" stroke="currentColor" strokeWidth="1.6">
-            <path d="M8 2v8M4.5 6.5 8 10l3.5-3.5M3 13h10" />
-          </svg>
-          Workbook (.xlsx)
-        </a>
+        <div className="flex flex-wrap gap-2">
+          <a href={reportUrl(runId)} download className={buttonClass("primary", "md")} onClick={() => later("Report (PDF)")}>
+            <DownloadIcon />
+            Report (PDF)
+          </a>
+          <a href={workbookUrl(runId)} download className={buttonClass("secondary", "md")} onClick={() => later("Workbook (.xlsx)")}>
+            <DownloadIcon />
+            Workbook (.xlsx)
+          </a>
+        </div>
       ) : (
         <p className="text-xs text-faint">Workbooks need the analyst, actuary or manager role.</p>
       )}
       <div>
         <p className="mb-1 text-xs font-medium uppercase tracking-wider text-muted">CSV tables</p>
+        <p className="mb-1.5 text-xs text-muted">Each file is named by run, engine version and result hash; the zip adds a manifest beside the tables.</p>
         <div className="flex flex-wrap gap-1.5">
+          <a href={tablesZipUrl(runId)} download className={buttonClass("secondary", "sm")} onClick={() => later("All tables (.zip)")}>
+            All tables + manifest (.zip)
+          </a>
           {RESULT_TABLES.filter((t) => hasPerils || !(t.startsWith("peril") || t === "portfolio-totals")).map((t) => (
             <a key={t} href={tableCsvUrl(runId, t)} download className={buttonClass("secondary", "sm")} onClick={() => later(`${t}.csv`)}>
               {t}.csv
@@ -79,5 +87,13 @@ export function ExportPanel({
         </p>
       )}
     </div>
+  );
+}
+
+function DownloadIcon() {
+  return (
+    <svg aria-hidden viewBox="0 0 16 16" className="h-4 w-4" fill="none" stroke="currentColor" strokeWidth="1.6">
+      <path d="M8 2v8M4.5 6.5 8 10l3.5-3.5M3 13h10" />
+    </svg>
   );
 }

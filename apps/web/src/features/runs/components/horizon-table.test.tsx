@@ -22,4 +22,10 @@ describe("HorizonTable", () => {
     const cells = within(row).getAllByRole("cell").map((c) => c.textContent);
     expect(cells.slice(5, 7)).toEqual(["64 %", "< 1 %"]);
   });
+
+  it("says what committed warming is: the equilibrium warming F/λ minus the warming since the pathway start (what the engine computes)", () => {
+    render(<HorizonTable pathway={pathway} />);
+    expect(screen.getByText(/the equilibrium warming F\/λ minus the warming since the pathway start/)).toBeInTheDocument();
+    expect(screen.queryByText(/minus the anomaly/)).toBeNull();
+  });
 });

@@ -65,7 +65,7 @@ export function HorizonTable({ pathway, unit = "K" }: { pathway: PathwayResult; 
       </Table>
       <PercentileNote>
         Chance &gt; T: share of members warmer than T in that year. Committed: further warming (median) if forcing stayed at that
-        year's level.
+        year's level — the equilibrium warming F/λ minus the warming since the pathway start (both measured from the pathway's first year).
       </PercentileNote>
     </>
   );
