@@ -1,21 +1,29 @@
 /**
- * API benchmark (issue 3, "Performance"): against a RUNNING server, create a 100,000-member
- * run over three pathways and report
- *   - time from the POST /api/runs request to the result being stored (status "succeeded",
- *     which the worker sets in the same transaction as the result rows),
- *   - the engine CLI's time for the very same spec (GET /api/runs/:id manifest.spec) in the
- *     same session, and the ratio (target <= 1.5),
- *   - p50/p95/max latency of GET /api/runs polled while the run executes (target p95 < 100 ms:
- *     the engine runs in worker threads and never blocks the event loop).
+ * API benchmark, against a RUNNING server (loopback or your own port; nothing else is touched).
  *
- *   node --import tsx apps/api/scripts/bench-api.ts [--base http://localhost:4102] [--members 100000]
+ * One run (default): create a run of --members over --pathways pathways and report
+ *   - time from the POST /api/runs request to the result being stored (status "succeeded",
+ *     set in the same transaction as the result), and the engine CLI's time for the very same
+ *     spec in the same session, with their ratio (target <= 1.5; --skip-cli leaves it out);
+ *   - how soon progress moves: the first poll (every 50 ms) that shows progress > 0, counted
+ *     from the POST's answer (target: within 1 s);
+ *   - p50/p95/max latency of GET /api/runs and GET /api/runs/:id polled while the run executes
+ *     (target p95 < 100 ms);
+ *   - with --api-pid: the API process's peak resident memory (VmHWM from /proc; target < 1 GiB
+ *     for 1,000,000 members x 4 pathways; start the server fresh so the peak is this run's);
+ *   - the result's size as stored/sent (gzip) and as JSON.
+ * Throughput (--runs N, N > 1): N runs created at once; wall time until all are stored and
+ *   runs per minute (issue: 8 runs x 100,000 members with one and with two `pnpm worker`s).
+ *
+ *   node --import tsx apps/api/scripts/bench-api.ts [--base http://127.0.0.1:4250] [--members 100000]
+ *       [--pathways 3] [--runs 1] [--api-pid <pid>] [--skip-cli]
  *       [--email analyst@harbourline.example --password plume-demo-analyst]
  *
- * Uses the demo seed's approved model version and the Harbourline Low/Middle/High pathways.
- * Prints a human summary and one JSON line.
+ * Uses the demo seed's approved model version and its first --pathways pathways. Prints a human
+ * summary and one JSON line.
  */
 import { spawnSync } from "node:child_process";
-import { mkdtempSync, writeFileSync } from "node:fs";
+import { existsSync, mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
@@ -25,8 +33,12 @@ const arg = (name: string, fallback: string) => {
   const i = args.indexOf(`--${name}`);
   return i >= 0 && args[i + 1] ? args[i + 1]! : fallback;
 };
-const base = arg("base", "http://localhost:4102").replace(/\/$/, "");
+const base = arg("base", "http://127.0.0.1:4250").replace(/\/$/, "");
 const members = Number(arg("members", "100000"));
+const pathwayCount = Number(arg("pathways", "3"));
+const runCount = Number(arg("runs", "1"));
+const apiPid = arg("api-pid", "");
+const skipCli = args.includes("--skip-cli");
 const email = arg("email", "analyst@harbourline.example");
 const password = arg("password", "plume-demo-analyst");
 const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../../..");
@@ -45,6 +57,8 @@ async function api<T>(method: string, url: string, body?: unknown): Promise<{ st
   if (setCookies.length > 0) cookie = setCookies.map((c) => c.split(";")[0]).join("; ");
   return { status: res.status, body: (text ? JSON.parse(text) : null) as T, ms };
 }
+const items = <T>(body: T[] | { items: T[] }): T[] => (Array.isArray(body) ? body : body.items);
+const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
 function percentile(sorted: number[], p: number): number {
   // Linear interpolation between order statistics (R type 7).
@@ -53,84 +67,140 @@ function percentile(sorted: number[], p: number): number {
   const lo = Math.floor(h);
   return sorted[lo]! + (h - lo) * ((sorted[Math.min(lo + 1, sorted.length - 1)] ?? sorted[lo]!) - sorted[lo]!);
 }
+const round = (n: number, digits = 1) => Number(n.toFixed(digits));
+const latencySummary = (samples: number[]) => {
+  const sorted = [...samples].sort((a, b) => a - b);
+  return { n: sorted.length, p50: round(percentile(sorted, 0.5)), p95: round(percentile(sorted, 0.95)), max: round(sorted[sorted.length - 1] ?? NaN) };
+};
+
+/** Peak and current resident memory of a process, from Linux's /proc (MiB). */
+function memoryOf(pid: string): { peakMiB: number; nowMiB: number } | null {
+  const file = `/proc/${pid}/status`;
+  if (!pid || !existsSync(file)) return null;
+  const status = readFileSync(file, "utf8");
+  const kib = (key: string) => Number(new RegExp(`${key}:\\s+(\\d+) kB`).exec(status)?.[1] ?? NaN);
+  return { peakMiB: round(kib("VmHWM") / 1024), nowMiB: round(kib("VmRSS") / 1024) };
+}
+
+type RunView = { id: string; status: string; progress: number; error: string | null; manifest: { spec: unknown; resultHash: string | null } };
+
+async function createRun(version: { id: string }, pathways: Array<{ id: string }>, seed: string) {
+  const created = await api<{ id: string }>("POST", "/api/runs", {
+    name: `bench ${members} members x ${pathways.length}`,
+    modelVersionId: version.id,
+    pathwayIds: pathways.map((p) => p.id),
+    members,
+    seed,
+    sampling: "latin-hypercube",
+  });
+  if (created.status !== 201) throw new Error(`run not created: ${created.status} ${JSON.stringify(created.body)}`);
+  return created.body.id;
+}
 
 async function main() {
   const signIn = await api("POST", "/api/auth/sign-in/email", { email, password });
   if (signIn.status !== 200) throw new Error(`sign-in failed (${signIn.status}); is the demo seed loaded?`);
-  const versions = await api<Array<{ id: string; name: string; versionNumber: number }>>("GET", "/api/model-versions?status=approved");
-  const version = versions.body[0];
+  const version = items((await api<Array<{ id: string }>>("GET", "/api/model-versions?status=approved")).body)[0];
   if (!version) throw new Error("no approved model version on the server");
-  const pathways = await api<Array<{ id: string; name: string }>>("GET", "/api/pathways");
-  const wanted = ["Harbourline Low", "Harbourline Middle", "Harbourline High"];
-  const chosen = wanted.map((n) => pathways.body.find((p) => p.name === n)).filter((p): p is { id: string; name: string } => !!p);
-  const three = chosen.length === 3 ? chosen : pathways.body.slice(0, 3);
+  const pathways = items((await api<Array<{ id: string; name: string }>>("GET", "/api/pathways")).body).slice(0, pathwayCount);
+  if (pathways.length < pathwayCount) throw new Error(`the server has only ${pathways.length} pathways`);
+  const common = { members, pathways: pathways.map((p) => p.name), loadAverage: round(os.loadavg()[0]!, 2), cores: os.availableParallelism() };
+
+  if (runCount > 1) {
+    const t0 = performance.now();
+    const ids = await Promise.all(Array.from({ length: runCount }, (_, i) => createRun(version, pathways, `throughput-${Date.now()}-${i}`)));
+    for (;;) {
+      const runs = await Promise.all(ids.map(async (id) => (await api<RunView>("GET", `/api/runs/${id}`)).body));
+      const failed = runs.find((r) => r.status === "failed" || r.status === "cancelled");
+      if (failed) throw new Error(`run ${failed.id} ended ${failed.status}: ${failed.error}`);
+      if (runs.every((r) => r.status === "succeeded")) break;
+      await sleep(200);
+    }
+    const seconds = (performance.now() - t0) / 1000;
+    const report = { ...common, runs: runCount, wallSeconds: round(seconds, 2), runsPerMinute: round((runCount * 60) / seconds, 2), loadAverageAfter: round(os.loadavg()[0]!, 2) };
+    console.log(`${runCount} runs of ${members} members x ${pathways.length} pathways: all stored after ${report.wallSeconds} s (${report.runsPerMinute} runs/min); load average ${report.loadAverage} -> ${report.loadAverageAfter}`);
+    console.log(JSON.stringify(report));
+    return;
+  }
 
   const listLatencies: number[] = [];
+  const getLatencies: number[] = [];
   const t0 = performance.now();
-  const created = await api<{ id: string; status: string }>("POST", "/api/runs", {
-    name: `bench ${members} members`,
-    modelVersionId: version.id,
-    pathwayIds: three.map((p) => p.id),
-    members,
-    seed: `bench-${Date.now()}`,
-    sampling: "latin-hypercube",
-  });
-  if (created.status !== 201) throw new Error(`run not created: ${created.status} ${JSON.stringify(created.body)}`);
-  const runId = created.body.id;
-
+  const runId = await createRun(version, pathways, `bench-${Date.now()}`);
+  const created = performance.now();
+  let firstProgressMs: number | null = null;
+  let status = "queued";
   let done = false;
   const poller = (async () => {
     while (!done) {
       listLatencies.push((await api("GET", "/api/runs")).ms);
-      await new Promise((r) => setTimeout(r, 50));
+      await sleep(50);
     }
   })();
-  let status = "queued";
+  let peak = memoryOf(apiPid);
   while (status === "queued" || status === "running") {
-    await new Promise((r) => setTimeout(r, 50));
-    status = (await api<{ status: string }>("GET", `/api/runs/${runId}`)).body.status;
+    await sleep(50);
+    const got = await api<RunView>("GET", `/api/runs/${runId}`);
+    getLatencies.push(got.ms);
+    status = got.body.status;
+    if (firstProgressMs === null && (got.body.progress > 0 || status === "succeeded")) firstProgressMs = performance.now() - created;
+    const mem = memoryOf(apiPid);
+    if (mem && (!peak || mem.peakMiB > peak.peakMiB)) peak = mem;
   }
   const apiSeconds = (performance.now() - t0) / 1000;
   done = true;
   await poller;
   if (status !== "succeeded") throw new Error(`run ended ${status}`);
 
-  const run = await api<{ manifest: { spec: unknown; resultHash: string } }>("GET", `/api/runs/${runId}`);
-  const dir = mkdtempSync(path.join(os.tmpdir(), "plumeline-bench-"));
-  const specFile = path.join(dir, "spec.json");
-  writeFileSync(specFile, JSON.stringify(run.body.manifest.spec));
-  const c0 = performance.now();
-  const cli = spawnSync(process.execPath, [path.join(repoRoot, "packages/engine/bin/plumeline-engine.mjs"), "run", specFile], {
-    encoding: "utf8",
-    maxBuffer: 1 << 28,
-  });
-  const cliSeconds = (performance.now() - c0) / 1000;
-  if (cli.status !== 0) throw new Error(`engine CLI failed: ${cli.stderr}`);
-  const cliHash = (JSON.parse(cli.stdout) as { resultHash: string }).resultHash;
+  // The result as the browser gets it: the stored gzip bytes (Content-Length); fetch inflates
+  // the body, so its length is the JSON's.
+  const raw = await fetch(`${base}/api/runs/${runId}/result`, { headers: { cookie, "accept-encoding": "gzip" } });
+  const gzipBytes = Number(raw.headers.get("content-length") ?? NaN);
+  const jsonBytes = Buffer.from(await raw.arrayBuffer()).length;
 
-  const sorted = [...listLatencies].sort((a, b) => a - b);
+  const run = await api<RunView>("GET", `/api/runs/${runId}`);
+  let cliSeconds: number | null = null;
+  let sameResultHash: boolean | null = null;
+  if (!skipCli) {
+    const dir = mkdtempSync(path.join(os.tmpdir(), "plumeline-bench-"));
+    const specFile = path.join(dir, "spec.json");
+    writeFileSync(specFile, JSON.stringify(run.body.manifest.spec));
+    const c0 = performance.now();
+    const cli = spawnSync(process.execPath, [path.join(repoRoot, "packages/engine/bin/plumeline-engine.mjs"), "run", specFile], { encoding: "utf8", maxBuffer: 1 << 28 });
+    cliSeconds = (performance.now() - c0) / 1000;
+    if (cli.status !== 0) throw new Error(`engine CLI failed: ${cli.stderr}`);
+    sameResultHash = (JSON.parse(cli.stdout) as { resultHash: string }).resultHash === run.body.manifest.resultHash;
+  }
+
   const report = {
-    members,
-    pathways: three.map((p) => p.name),
-    apiSeconds: Number(apiSeconds.toFixed(2)),
-    cliSeconds: Number(cliSeconds.toFixed(2)),
-    ratio: Number((apiSeconds / cliSeconds).toFixed(2)),
+    ...common,
+    runId,
+    apiSeconds: round(apiSeconds, 2),
+    cliSeconds: cliSeconds === null ? null : round(cliSeconds, 2),
+    ratio: cliSeconds === null ? null : round(apiSeconds / cliSeconds, 2),
     ratioTarget: 1.5,
-    listSamples: sorted.length,
-    listP50Ms: Number(percentile(sorted, 0.5).toFixed(1)),
-    listP95Ms: Number(percentile(sorted, 0.95).toFixed(1)),
-    listMaxMs: Number((sorted[sorted.length - 1] ?? NaN).toFixed(1)),
-    listP95TargetMs: 100,
-    sameResultHash: cliHash === run.body.manifest.resultHash,
-    // The machine may be shared: the 1-minute load average says how busy it was.
-    loadAverage: Number(os.loadavg()[0]!.toFixed(2)),
-    cores: os.availableParallelism(),
+    firstProgressMs: firstProgressMs === null ? null : Math.round(firstProgressMs),
+    firstProgressTargetMs: 1000,
+    listRuns: latencySummary(listLatencies),
+    getRun: latencySummary(getLatencies),
+    getP95TargetMs: 100,
+    apiMemory: peak,
+    apiPeakTargetMiB: 1024,
+    resultGzipBytes: gzipBytes,
+    resultJsonBytes: jsonBytes,
+    sameResultHash,
+    loadAverageAfter: round(os.loadavg()[0]!, 2),
   };
   console.log(
-    `API: ${members} members x ${three.length} pathways, request -> result stored ${report.apiSeconds} s; ` +
-      `engine CLI same spec ${report.cliSeconds} s; ratio ${report.ratio} (target <= 1.5)\n` +
-      `GET /api/runs while running: ${report.listSamples} requests, p50 ${report.listP50Ms} ms, p95 ${report.listP95Ms} ms, max ${report.listMaxMs} ms (target p95 < 100 ms)\n` +
-      `result hash API == CLI: ${report.sameResultHash}; load average ${report.loadAverage} on ${report.cores} cores`,
+    `API: ${members} members x ${pathways.length} pathways, request -> result stored ${report.apiSeconds} s` +
+      (cliSeconds === null ? "" : `; engine CLI same spec ${report.cliSeconds} s; ratio ${report.ratio} (target <= 1.5)`) +
+      `\nfirst progress ${report.firstProgressMs} ms after the run was created (target < 1000 ms)` +
+      `\nGET /api/runs while running: ${report.listRuns.n} requests, p50 ${report.listRuns.p50} ms, p95 ${report.listRuns.p95} ms, max ${report.listRuns.max} ms` +
+      `\nGET /api/runs/:id while running: ${report.getRun.n} requests, p50 ${report.getRun.p50} ms, p95 ${report.getRun.p95} ms, max ${report.getRun.max} ms (target p95 < 100 ms)` +
+      (peak ? `\nAPI process memory: peak ${peak.peakMiB} MiB, now ${peak.nowMiB} MiB (target peak < 1024 MiB)` : "") +
+      `\nresult: ${gzipBytes} bytes gzip as sent, ${jsonBytes} bytes as JSON` +
+      (sameResultHash === null ? "" : `\nresult hash API == CLI: ${sameResultHash}`) +
+      `\nload average ${report.loadAverage} -> ${report.loadAverageAfter} on ${report.cores} cores`,
   );
   console.log(JSON.stringify(report));
 }

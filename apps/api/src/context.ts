@@ -71,6 +71,17 @@ export async function createContext(config: Config): Promise<AppContext> {
         data: failure,
       });
     },
+    onSignInSlowed: async ({ email, ipAddress, waitSeconds }) => {
+      await recordAudit({ models }, {
+        actorId: null,
+        actorEmail: email,
+        action: "auth.sign-in-slowed",
+        entityType: "user",
+        entityId: null,
+        summary: `Sign-ins for ${email} paused ${waitSeconds} s after repeated failures.`,
+        data: { ipAddress, waitSeconds },
+      });
+    },
     onPasswordChanged: async (userId) => {
       await sequelize.transaction(async (transaction) => {
         await models.User.update({ mustChangePassword: false }, { where: { id: userId }, transaction });

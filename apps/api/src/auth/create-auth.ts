@@ -1,10 +1,11 @@
 import { betterAuth } from "better-auth";
-import { createAuthMiddleware, isAPIError } from "better-auth/api";
+import { APIError, createAuthMiddleware, isAPIError } from "better-auth/api";
 import { admin } from "better-auth/plugins";
 import { ACCOUNT_DEACTIVATED_MESSAGE } from "@plumeline/contracts";
 import type { Config } from "../config.js";
 import type { Models } from "../db/models.js";
 import { accessControl, authRoles } from "./access-control.js";
+import { createSignInSlowdown } from "./account-sign-in-slowdown.js";
 import { sequelizeAdapter } from "./sequelize-adapter.js";
 
 /** Set by app.ts on every /api/auth request from Express's view of the client address. */
@@ -28,6 +29,8 @@ export interface CreateAuthOptions {
   models: Models;
   onSignIn: (success: SignInSuccess) => Promise<void>;
   onSignInFailure: (failure: SignInFailure) => Promise<void>;
+  /** Repeated failures for one address started (or lengthened) its slow-down. */
+  onSignInSlowed: (slowed: { email: string; ipAddress: string | null; waitSeconds: number }) => Promise<void>;
   onPasswordChanged: (userId: string) => Promise<void>;
   /** better-auth made a one-time reset token for a known address; mail it (or not: deactivated users get nothing). */
   onPasswordResetRequested: (request: PasswordResetRequest) => Promise<void>;
@@ -55,7 +58,12 @@ export const RESET_TOKEN_SECONDS = 60 * 60;
  * admin plugin, forgotten passwords through better-auth's own mailed one-time reset token.
  * Mounted by app.ts at /api/auth/*splat.
  */
-export function createAuth({ config, models, onSignIn, onSignInFailure, onPasswordChanged, onPasswordResetRequested, onPasswordReset }: CreateAuthOptions) {
+export function createAuth({ config, models, onSignIn, onSignInFailure, onSignInSlowed, onPasswordChanged, onPasswordResetRequested, onPasswordReset }: CreateAuthOptions) {
+  const slowdown = createSignInSlowdown();
+  const typedEmail = (body: unknown) => {
+    const email = (body as { email?: unknown } | undefined)?.email;
+    return typeof email === "string" ? email.toLowerCase().slice(0, 254) : null;
+  };
   const secureCookies = config.publicOrigin.startsWith("https://");
   return betterAuth({
     appName: "Plumeline",
@@ -128,6 +136,18 @@ export function createAuth({ config, models, onSignIn, onSignInFailure, onPasswo
       }),
     ],
     hooks: {
+      // A slowed-down address is refused before its password is even checked, with the same
+      // answer whether or not an account has it.
+      before: createAuthMiddleware(async (ctx) => {
+        if (ctx.path !== "/sign-in/email") return;
+        const email = typedEmail(ctx.body);
+        const wait = email ? slowdown.waitSeconds(email) : 0;
+        if (wait > 0)
+          throw new APIError("TOO_MANY_REQUESTS", {
+            code: "SIGN_IN_SLOWED",
+            message: `Too many failed sign-ins for this address. Try again in ${wait} seconds.`,
+          });
+      }),
       // Runs after every auth endpoint, also when it failed: `returned` then holds the error.
       after: createAuthMiddleware(async (ctx) => {
         const returned = ctx.context.returned;
@@ -142,15 +162,21 @@ export function createAuth({ config, models, onSignIn, onSignInFailure, onPasswo
           // signing in (impersonation and password changes also create sessions).
           // `newSession` is what better-auth just set the cookie for.
           const signedIn = ctx.context.newSession;
-          if (signedIn) await onSignIn({ userId: signedIn.user.id, email: signedIn.user.email, ipAddress });
+          if (signedIn) {
+            slowdown.recordSuccess(signedIn.user.email);
+            await onSignIn({ userId: signedIn.user.id, email: signedIn.user.email, ipAddress });
+          }
           return;
         }
-        const body = (ctx.body ?? {}) as { email?: unknown };
+        const email = typedEmail(ctx.body);
         await onSignInFailure({
-          email: typeof body.email === "string" ? body.email.toLowerCase().slice(0, 254) : null,
+          email,
           reason: returned.body?.code ?? returned.message ?? String(returned.status),
           ipAddress,
         });
+        // Wrong credentials count towards the address's slow-down (not a deactivated account's refusal).
+        if (email && returned.status === "UNAUTHORIZED" && slowdown.recordFailure(email))
+          await onSignInSlowed({ email, ipAddress, waitSeconds: slowdown.waitSeconds(email) });
       }),
     },
   });

@@ -9,6 +9,7 @@ import { initPathwayModel } from "../modules/pathways/pathway.model.js";
 import { initModelVersionModel } from "../modules/model-versions/model-version.model.js";
 import { initRunModel } from "../modules/runs/run.model.js";
 import { initJobModel } from "../queue/job.model.js";
+import { initRunReplayModel } from "../modules/runs/run-replay.model.js";
 import { initRunResultModel } from "../modules/results/run-result.model.js";
 import { initExportRecordModel } from "../modules/exports/export-record.model.js";
 import { initRunStatementModel } from "../modules/run-statements/run-statement.model.js";
@@ -33,6 +34,7 @@ export function initModels(sequelize: Sequelize) {
     Pathway: initPathwayModel(sequelize),
     ModelVersion: initModelVersionModel(sequelize),
     Run: initRunModel(sequelize),
+    RunReplay: initRunReplayModel(sequelize),
     Job: initJobModel(sequelize),
     RunResult: initRunResultModel(sequelize),
     ExportRecord: initExportRecordModel(sequelize),

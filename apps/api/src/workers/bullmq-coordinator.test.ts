@@ -9,6 +9,7 @@ import { requestUserOf } from "../test-support/request-user.js";
 import { signIn, type SignedInAgent } from "../test-support/sign-in.js";
 import { createTestContext, type TestContext } from "../test-support/test-context.js";
 import { startBullmqCoordinator, type BullmqCoordinator } from "./bullmq-coordinator.js";
+import { replayJobKind, REPLAY_JOB_TYPE } from "./process-replay-job.js";
 import { RUN_JOB_TYPE } from "./process-run-job.js";
 import { startRemoteEngineWorker, type RemoteEngineWorker } from "./remote-engine-worker.js";
 import { runJobKind } from "./run-job-kind.js";
@@ -42,7 +43,7 @@ async function coordinator(queueName = `plumeline-test-${++queueNumber}`): Promi
     redisUrl: redis.url,
     queueName,
     workers: 0,
-    kinds: { [RUN_JOB_TYPE]: runJobKind(t.ctx, queue()) },
+    kinds: { [RUN_JOB_TYPE]: runJobKind(t.ctx, queue()), [REPLAY_JOB_TYPE]: replayJobKind(t.ctx, queue()) },
     reconcileMs: 500,
     progressWriteMs: 20,
   });
@@ -96,6 +97,23 @@ describe("QUEUE=bullmq with stateless workers", { timeout: 180_000 }, () => {
       expect(result.body.resultHash).toBe(run.resultHash);
       // Recorded, so Redis need not keep it.
       await waitFor(async () => (await c.transport.getJob(run.jobId!)) === undefined);
+    } finally {
+      await w.close();
+      await c.stop();
+    }
+  });
+
+  it("runs a replay through the same workers and reports its progress and verdict", async () => {
+    const c = await coordinator();
+    const w = worker(c);
+    try {
+      const res = await analyst.post("/api/runs").send(runBody({ seed: "to-replay" }));
+      await waitFor(async () => (await runOf(res.body.id)).status === "succeeded");
+      const replay = await analyst.post(`/api/runs/${res.body.id}/replay`);
+      expect(replay.status).toBe(202);
+      await waitFor(async () => (await analyst.get(`/api/runs/${res.body.id}/replays/${replay.body.id}`)).body.status === "succeeded");
+      const done = await analyst.get(`/api/runs/${res.body.id}/replays/${replay.body.id}`);
+      expect(done.body).toMatchObject({ matched: true, progress: 1, replayHash: (await runOf(res.body.id)).resultHash });
     } finally {
       await w.close();
       await c.stop();

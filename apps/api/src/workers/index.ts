@@ -1,6 +1,7 @@
 import type { AppContext } from "../context.js";
 import { createSqlJobQueue } from "../queue/sql-job-queue.js";
 import { startBullmqCoordinator } from "./bullmq-coordinator.js";
+import { replayJobKind, REPLAY_JOB_TYPE } from "./process-replay-job.js";
 import { RUN_JOB_TYPE } from "./process-run-job.js";
 import { runJobKind } from "./run-job-kind.js";
 import { startWorkerPool, type WorkerPool } from "./worker-pool.js";
@@ -19,7 +20,7 @@ export async function startWorkers(ctx: AppContext): Promise<WorkerPool> {
       ? await startBullmqCoordinator(ctx, queue, {
           redisUrl: requireRedisUrl(ctx.config.redisUrl),
           workers: ctx.config.workers,
-          kinds: { [RUN_JOB_TYPE]: runJobKind(ctx, queue) },
+          kinds: { [RUN_JOB_TYPE]: runJobKind(ctx, queue), [REPLAY_JOB_TYPE]: replayJobKind(ctx, queue) },
         })
       : await startWorkerPool(ctx, queue, { size: ctx.config.workers });
   ctx.onClose(() => pool.stop());

@@ -6,6 +6,7 @@ import { storeRunResult } from "../modules/results/store-run-result.js";
 import type { RunModel } from "../modules/runs/run.model.js";
 import type { ClaimedJob, JobQueue } from "../queue/job-queue.js";
 import { EngineThreadCrashed, type EngineOutcome, type EngineThread } from "./engine-thread-client.js";
+import { processClaimedReplayJob, REPLAY_JOB_TYPE } from "./process-replay-job.js";
 import { mailRunOutcome } from "./run-notifications.js";
 
 export const RUN_JOB_TYPE = "ensemble-run";
@@ -32,8 +33,10 @@ export async function processNextRunJob(
   thread: EngineThread,
   options: StepOptions = {},
 ): Promise<StepOutcome> {
-  const job = await queue.claimNext(workerId, [RUN_JOB_TYPE]);
+  // Runs and replays share the queue, the order and the WORKERS limit.
+  const job = await queue.claimNext(workerId, [RUN_JOB_TYPE, REPLAY_JOB_TYPE]);
   if (!job) return "idle";
+  if (job.type === REPLAY_JOB_TYPE) return processClaimedReplayJob(ctx, queue, job, thread, options);
   return processClaimedRunJob(ctx, queue, job, thread, options);
 }
 
@@ -204,6 +207,14 @@ async function giveBack(ctx: WorkerContext, queue: JobQueue, job: ClaimedJob, ru
 export async function syncRunsWithRequeuedJobs(ctx: WorkerContext, jobs: Array<{ id: string; status: "queued" | "failed" }>): Promise<void> {
   for (const { id, status } of jobs) {
     const job = await ctx.models.Job.findByPk(id);
+    if (job?.type === REPLAY_JOB_TYPE) {
+      const replayId = (job.payload as { replayId?: string }).replayId ?? "";
+      await ctx.models.RunReplay.update(
+        { status, progress: 0, error: status === "failed" ? job.lastError : null, finishedAt: status === "failed" ? new Date() : null },
+        { where: { id: replayId } },
+      );
+      continue;
+    }
     const payload = runJobPayloadSchema.safeParse(job?.payload);
     if (!job || !payload.success) continue;
     const run = await ctx.models.Run.findByPk(payload.data.runId);

@@ -85,13 +85,32 @@ export const runSchema = runSummarySchema.extend({
 });
 export type Run = z.infer<typeof runSchema>;
 
-export const replayResponseSchema = z.object({
-  matched: z.boolean(),
+/**
+ * A replay: the run's stored spec computed again through the same queue and worker limit as
+ * runs, and its result hash compared with the stored one. `matched` is null until it finished.
+ */
+export const replaySchema = z.object({
+  id: z.string(),
+  runId: z.string(),
+  status: z.enum(RUN_STATUSES),
+  /** 0–1, as a run's. */
+  progress: z.number(),
+  matched: z.boolean().nullable(),
   resultHash: z.string().nullable(),
-  replayHash: z.string(),
-  engineVersion: z.string(),
+  replayHash: z.string().nullable(),
+  engineVersion: z.string().nullable(),
+  error: z.string().nullable(),
+  requestedBy: z.string(),
+  createdAt: z.string(),
+  finishedAt: z.string().nullable(),
 });
-export type ReplayResponse = z.infer<typeof replayResponseSchema>;
+export type Replay = z.infer<typeof replaySchema>;
+/** @deprecated name kept for callers of the old synchronous replay; same shape as Replay. */
+export const replayResponseSchema = replaySchema;
+export type ReplayResponse = Replay;
+
+/** Payload of an "ensemble-replay" queue job. */
+export const replayJobPayloadSchema = z.object({ replayId: z.string().min(1) }).strict();
 
 /** Payload of an "ensemble-run" queue job (the queue validates it before running). */
 export const runJobPayloadSchema = z.object({ runId: z.string().min(1) }).strict();

@@ -48,7 +48,7 @@ export function finishPathway(
   const { weights, totalWeight, effectiveMembers } = weighting;
   const selector = new PercentileSelector();
   const crossing: PathwayResult["crossing"] = {};
-  const crossingShare: PathwayResult["crossingShare"] = {};
+  const crossingShare: Record<string, number[]> = {};
   spec.thresholds.forEach((th) => {
     const ascendingIndex = plan.thresholdsAscending.indexOf(th);
     crossingShare[String(th)] = crossingShareByYear(plan.state.crossing[ascendingIndex]!, years, weights, totalWeight);

@@ -21,7 +21,7 @@ describe("runEnsemble", { timeout: 60_000 }, () => {
     // Closed form: the model is linear in forcing, so a member whose only forcing agent is
     // scaled by s has anomaly s·D(t); with s ~ Normal(1, 0.2) the p-percentile is D(t)(1 + 0.2 z_p).
     // Not the CO2 scale: it also sets each member's feedback (λ = scale_co2 · F2x / ECS).
-    const pathway = { ...rampPathway(), agents: { ozone: rampPathway().agents.co2! } };
+    const pathway = { ...rampPathway(), agents: { ozone: { erf: (rampPathway().agents.co2 as { erf: number[] }).erf } } };
     const common = baseSpec({ pathways: [pathway], horizons: [], thresholds: [] });
     const deterministic = runEnsemble({
       ...common,
@@ -94,7 +94,7 @@ describe("runEnsemble", { timeout: 60_000 }, () => {
       if (t < 0) never++;
       else firstYearCounts[t]!++;
     }
-    const share = result.crossingShare["1"]!;
+    const share = result.crossingShare!["1"]!;
     expect(share).toHaveLength(years);
     share.forEach((s, t) => expect(s).toBeCloseTo(firstYearCounts[t]! / spec.members, 12));
     expect(result.crossing["1"]!.never).toBeCloseTo(never / spec.members, 12);

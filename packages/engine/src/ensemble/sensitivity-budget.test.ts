@@ -9,7 +9,7 @@ import { baseSpec, fixedClimate } from "./test-support/specs.js";
  * its scale also sets the member's feedback). For independent scales s_k ~ Normal(1, sd_k)
  * the first-order variance shares are D_k² sd_k² / Σ_j D_j² sd_j² and they add up to 1
  * (closed form of a linear model; Saltelli et al. 2008, Global Sensitivity Analysis: The
- * Primer, §1.2 — from memory).
+ * Primer, Section 1.2 — from memory).
  */
 const YEARS = 351;
 const series = (amplitude: number, power: number) => Array.from({ length: YEARS }, (_, t) => amplitude * (t / (YEARS - 1)) ** power);

@@ -252,7 +252,7 @@ describe("table profiles with return periods", () => {
     const result = lens(both, [2]);
     const h = result.horizons[0]!;
     expect(h.multiplier.p50).toBe(5.6);
-    expect(h.tailMultipliers["100"].p50).toBe(13.9);
+    expect(h.tailMultipliers!["100"].p50).toBe(13.9);
     expect(h.returnPeriods!["100"].p50).toBeCloseTo(100 / 13.9, 12);
     expect(result.multiplierReturnPeriod).toBe(10);
     expect(result.table).toMatchObject({ returnPeriods: [10, 50], warmingRange: [0, 4], readOutside: [100, 200] });

@@ -98,10 +98,11 @@ export interface PerilHorizonResult {
   year: number;
   /** The multiplier AAL uses: for a table profile, that of its most frequent table. */
   multiplier: PerilSummary;
-  /** Multipliers of today's 1-in-100 and 1-in-200 events. */
-  tailMultipliers: { "100": PerilSummary; "200": PerilSummary };
+  /** Multipliers of today's 1-in-100 and 1-in-200 events (always written; optional, like beyondTable and
+   *  multiplierReturnPeriod, because stored results of earlier engines lack them). */
+  tailMultipliers?: { "100": PerilSummary; "200": PerilSummary };
   /** Table profiles: members beyond the warming range every table covers; null for per-kelvin. */
-  beyondTable: BeyondTableShare | null;
+  beyondTable?: BeyondTableShare | null;
   /** Frequency profiles: return period of today's 1-in-100 and 1-in-200 events; null for severity. */
   returnPeriods: { "100": PerilSummary; "200": PerilSummary } | null;
   losses: ProjectedLoss[];
@@ -114,8 +115,11 @@ export interface PerilProfileResult {
   region: string;
   metric: PerilMetric;
   baselineWarming: number;
-  /** Table profiles: their return periods, the warming range every table covers, the rules beyond them, and the reported return periods read outside the tables. */
-  table: {
+  /**
+   * Table profiles: their return periods, the warming range every table covers, the rules beyond them, and the reported return periods read outside the tables.
+   * This engine always writes it (null for per-kelvin profiles); optional because stored results of earlier engines lack it.
+   */
+  table?: {
     returnPeriods: number[];
     warmingRange: [number, number];
     beyondTable: "hold" | "extrapolate";
@@ -123,7 +127,7 @@ export interface PerilProfileResult {
     readOutside: number[];
   } | null;
   /** Return period whose multiplier `multiplier` and AAL use; null when one multiplier serves every return period. */
-  multiplierReturnPeriod: number | null;
+  multiplierReturnPeriod?: number | null;
   horizons: PerilHorizonResult[];
 }
 

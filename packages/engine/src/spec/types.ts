@@ -44,11 +44,16 @@ export type ForcingExpressionName = (typeof FORCING_EXPRESSIONS)[number];
 /** Per agent: an ERF series (W m-2) or, for CO2/CH4/N2O, concentrations (ppm / ppb). */
 export type AgentSeries = { erf: number[] } | { ppm: number[] } | { ppb: number[] };
 
+/** What each agent may be given as: ERF for all, CO2 also in ppm, CH4 and N2O also in ppb. */
+export type PathwayAgents = { co2?: { erf: number[] } | { ppm: number[] } } & {
+  [G in "ch4" | "n2o"]?: { erf: number[] } | { ppb: number[] };
+} & { [A in Exclude<ForcingAgent, ConcentrationGas>]?: { erf: number[] } };
+
 export interface PathwaySpec {
   id: string;
   name: string;
   startYear: number;
-  agents: Partial<Record<ForcingAgent, AgentSeries>>;
+  agents: PathwayAgents;
 }
 
 export interface Correlation {
@@ -147,9 +152,12 @@ export interface ConstraintResult {
   to: number;
   observed: number;
   sd: number;
-  /** Internal variability used (1 sd, K) and the likelihood's total sd √(sd² + internalVariability²). */
-  internalVariability: number;
-  likelihoodSd: number;
+  /**
+   * Internal variability used (1 sd, K) and the likelihood's total sd √(sd² + internalVariability²).
+   * This engine always writes both; optional because results stored by engines before them lack them.
+   */
+  internalVariability?: number;
+  likelihoodSd?: number;
   effectiveMembers: number;
   windowWarmingPrior: PercentileSet;
   windowWarmingPosterior: PercentileSet;
@@ -166,8 +174,12 @@ export interface PathwayResult {
   imbalance: PercentileSeries;
   exceedance: Record<string, number[]>;
   crossing: Record<string, Record<string, number | null>>;
-  /** Per threshold, per year: share of members whose first crossing falls in that year. */
-  crossingShare: Record<string, number[]>;
+  /**
+   * Per threshold, per year: share of members whose first crossing falls in that year. This
+   * engine always writes it; optional because results stored by engines before it have none
+   * (the contracts' result schema reads those too).
+   */
+  crossingShare?: Record<string, number[]>;
   horizons: HorizonResult[];
   sensitivity: SensitivityEntry[];
   effectiveMembers: number;

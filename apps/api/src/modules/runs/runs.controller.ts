@@ -1,7 +1,8 @@
 import type { CreateRunBody, RunStatus } from "@plumeline/contracts";
 import type { Request, Response } from "express";
 import { contextOf, currentUser } from "../../middleware/request-context.js";
-import { cancelRun, createRun, getRun, listRuns, replayRun } from "./runs.service.js";
+import { getReplay, listReplays, requestReplay } from "./replays.service.js";
+import { cancelRun, createRun, getRun, listRuns } from "./runs.service.js";
 
 const idOf = (req: Request) => (req.params as { id: string }).id;
 
@@ -18,7 +19,14 @@ export const runsController = {
   async cancel(req: Request, res: Response) {
     res.json(await cancelRun(contextOf(req), currentUser(req), idOf(req)));
   },
+  /** 202: the replay is queued; its progress and verdict are read from GET …/replays/:replayId. */
   async replay(req: Request, res: Response) {
-    res.json(await replayRun(contextOf(req), currentUser(req), idOf(req)));
+    res.status(202).json(await requestReplay(contextOf(req), currentUser(req), idOf(req)));
+  },
+  async replays(req: Request, res: Response) {
+    res.json(await listReplays(contextOf(req), idOf(req)));
+  },
+  async replayOne(req: Request, res: Response) {
+    res.json(await getReplay(contextOf(req), idOf(req), (req.params as { replayId: string }).replayId));
   },
 };

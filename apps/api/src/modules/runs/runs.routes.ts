@@ -15,3 +15,5 @@ runsRouter.post("/", authenticate, requirePermission("runs:create"), validate({ 
 runsRouter.get("/:id", authenticate, requirePermission("runs:read"), validate({ params }), c.get);
 runsRouter.post("/:id/cancel", authenticate, requirePermission("runs:create"), validate({ params }), c.cancel);
 runsRouter.post("/:id/replay", authenticate, requirePermission("runs:create"), validate({ params }), c.replay);
+runsRouter.get("/:id/replays", authenticate, requirePermission("runs:read"), validate({ params }), c.replays);
+runsRouter.get("/:id/replays/:replayId", authenticate, requirePermission("runs:read"), validate({ params: params.extend({ replayId: z.string().min(1) }) }), c.replayOne);

@@ -1,12 +1,11 @@
 import { randomUUID } from "node:crypto";
-import type { CreateRunBody, ErrorDetail, ReplayResponse, Run, RunStatus, RunSummary } from "@plumeline/contracts";
+import type { CreateRunBody, ErrorDetail, Run, RunStatus, RunSummary } from "@plumeline/contracts";
 import { Op } from "sequelize";
 import type { AppContext } from "../../context.js";
-import { AppError, badRequest, conflict, forbidden, notFound } from "../../errors/app-error.js";
+import { badRequest, conflict, forbidden, notFound } from "../../errors/app-error.js";
 import type { RequestUser } from "../../middleware/request-context.js";
 import { jobSignal } from "../../queue/job-signal.js";
 import { createSqlJobQueue } from "../../queue/sql-job-queue.js";
-import { EngineThread } from "../../workers/engine-thread-client.js";
 import { RUN_JOB_TYPE } from "../../workers/process-run-job.js";
 import { recordAudit } from "../audit/audit.service.js";
 import type { ModelVersionModel } from "../model-versions/model-version.model.js";
@@ -215,32 +214,4 @@ export async function cancelRun(ctx: Ctx, user: RequestUser, id: string): Promis
   await run.reload({ attributes: SUMMARY_ATTRIBUTES });
   const [summary] = await present(ctx, [run]);
   return summary!;
-}
-
-/**
- * Re-runs the stored spec in a fresh engine thread and compares result hashes: same inputs,
- * seed and engine version must give the same hash. Waits for the engine (synchronous API).
- */
-export async function replayRun(ctx: Ctx, user: RequestUser, id: string): Promise<ReplayResponse> {
-  const run = await findRun(ctx, id);
-  if (run.status !== "succeeded" || !run.resultHash)
-    throw conflict(`Run "${run.name}" is ${run.status}; only a finished run can be replayed.`, "run_not_finished");
-  const thread = new EngineThread(`replay-${id.slice(0, 8)}`);
-  let outcome;
-  try {
-    outcome = await thread.run(run.spec);
-  } finally {
-    await thread.terminate();
-  }
-  if (outcome.kind !== "done") throw new AppError(409, "replay_failed", `The replay did not finish: ${outcome.kind === "failed" ? outcome.message : "cancelled"}.`);
-  const matched = outcome.result.resultHash === run.resultHash;
-  await recordAudit(ctx, {
-    actorId: user.id,
-    action: "run.replayed",
-    entityType: "run",
-    entityId: id,
-    summary: `Run "${run.name}" replayed: result hash ${matched ? "matches" : "DIFFERS"} (engine ${outcome.result.engineVersion}${run.engineVersion !== outcome.result.engineVersion ? `, run made with ${run.engineVersion}` : ""}).`,
-    data: { matched, resultHash: run.resultHash, replayHash: outcome.result.resultHash, engineVersion: outcome.result.engineVersion },
-  });
-  return { matched, resultHash: run.resultHash, replayHash: outcome.result.resultHash, engineVersion: outcome.result.engineVersion };
 }

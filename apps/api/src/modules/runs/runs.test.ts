@@ -131,10 +131,22 @@ describe("running a job", () => {
     expect(mine.status).toBe(200);
     expect(mine.body.map((r: { id: string }) => r.id)).toEqual([runId]);
     expect((await actuary.get("/api/runs?status=bogus")).status).toBe(400);
+    // A replay is queued like a run (same queue, same WORKERS limit) ...
     const replay = await actuary.post(`/api/runs/${runId}/replay`);
-    expect(replay.status).toBe(200);
-    expect(replay.body).toMatchObject({ matched: true });
-    expect(replay.body.replayHash).toBe(replay.body.resultHash);
+    expect(replay.status).toBe(202);
+    expect(replay.body).toMatchObject({ status: "queued", progress: 0, matched: null });
+    // ... one at a time per person: a second one waits for the first to finish.
+    const second = await actuary.post(`/api/runs/${runId}/replay`);
+    expect(second.status).toBe(409);
+    expect(second.body.error.code).toBe("replay_in_progress");
+    expect(await step()).toBe("succeeded");
+    const done = await actuary.get(`/api/runs/${runId}/replays/${replay.body.id}`);
+    expect(done.body).toMatchObject({ status: "succeeded", progress: 1, matched: true });
+    expect(done.body.replayHash).toBe(done.body.resultHash);
+    expect((await actuary.get(`/api/runs/${runId}/replays`)).body.map((r: { id: string }) => r.id)).toEqual([replay.body.id]);
+    expect(await t.ctx.models.AuditEvent.count({ where: { action: "run.replayed", entityId: runId } })).toBe(1);
+    expect((await actuary.post(`/api/runs/${runId}/replay`)).status).toBe(202); // free again
+    expect(await step()).toBe("succeeded");
   });
 
   it("answers 409 for the result of a run that has not finished", async () => {

@@ -3,9 +3,9 @@ import { useQueryClient } from "@tanstack/react-query";
 import { paths } from "@/config/paths";
 import { useMe } from "@/features/auth/api/get-me";
 import { exportsRootKey } from "@/features/exports/api/get-exports";
-import { useCancelRun } from "@/features/runs/api/cancel-run";
 import { useRun } from "@/features/runs/api/get-run";
 import { useRunResult } from "@/features/runs/api/get-run-result";
+import { CancelRunAction } from "@/features/runs/components/cancel-run-action";
 import { ExportPanel } from "@/features/runs/components/export-panel";
 import { ReplayPanel } from "@/features/runs/components/replay-panel";
 import { RunStatementsPanel } from "@/features/runs/components/run-statements-panel";
@@ -13,7 +13,7 @@ import { ResultView } from "@/features/runs/components/result-view";
 import { RunManifest } from "@/features/runs/components/run-manifest";
 import { RunProgress } from "@/features/runs/components/run-progress";
 import { RunPerilSection } from "@/features/peril/components/run-peril-section";
-import { ApprovedSeal, ExploratoryStamp } from "@/components/ui/badges";
+import { ApprovedSeal, ExploratoryStamp, StatusBadge } from "@/components/ui/badges";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
@@ -25,7 +25,6 @@ export default function RunPage() {
   const run = useRun(runId);
   const succeeded = run.data?.status === "succeeded";
   const result = useRunResult(runId, succeeded);
-  const cancel = useCancelRun();
   const queryClient = useQueryClient();
   const can = (p: string) => me.data?.permissions.includes(p) ?? false;
 
@@ -39,25 +38,25 @@ export default function RunPage() {
       <PageHeader
         kicker={
           <span className="flex items-center gap-2">
-            Run {r.exploratory ? <ExploratoryStamp size="sm" /> : <ApprovedSeal size="sm" />}
+            Run{" "}
+            {/* The seal belongs to an approved run's result: a run that did not finish has none, only its state. */}
+            {r.exploratory ? <ExploratoryStamp size="sm" /> : succeeded ? <ApprovedSeal size="sm" /> : <StatusBadge status={r.cancelRequested && active ? "cancelling…" : r.status} />}
           </span>
         }
         title={r.name || `Run ${r.id.slice(0, 8)}`}
         description={
           r.exploratory
             ? "Made with a model version that was not approved when the run was made: exploratory, not for filing."
-            : "Made with an approved model version."
+            : succeeded
+              ? "Made with an approved model version."
+              : `Uses an approved model version; this run is ${r.status === "cancelled" ? "cancelled and has no result" : r.status === "failed" ? "failed and has no result" : "not finished"}.`
         }
         actions={
           <>
             <ButtonLink to={paths.runCompare.build(r.id)} variant="secondary">
               Compare…
             </ButtonLink>
-            {active && can("runs:create") && r.createdBy === me.data?.user.id && (
-              <Button variant="danger" onClick={() => cancel.mutate(r.id)} disabled={cancel.isPending}>
-                Cancel run
-              </Button>
-            )}
+            {active && can("runs:create") && r.createdBy === me.data?.user.id && <CancelRunAction run={r} />}
           </>
         }
       />

@@ -6,7 +6,7 @@ import { BAND_LABELS } from "./band-labels";
 import { ChartFrame, DataTable } from "./chart-frame";
 import { DEFAULT_MARGINS, innerSize } from "./margins";
 import { FanReadout } from "./fan-readout";
-import { seriesColor } from "./palette";
+import { seriesColor, thresholdStyle } from "./palette";
 import { useChartWidth } from "./use-chart-width";
 
 /** One pathway (or run) as plain arrays: the year axis and five percentile series of equal length. */
@@ -25,7 +25,7 @@ export interface FanSeries {
    * (band edges only, dashed median), so two series on one chart neither blend their colours
    * nor hide each other's median.
    */
-  treatment?: "filled" | "outline";
+  treatment?: "filled" | "outline" | "median";
 }
 
 export interface ObservedWindow {
@@ -167,7 +167,7 @@ export function FanChart({
       return k < 0 ? [] : [{ series: s, color, values: KEYS.map((key) => s[key][k]!) }];
     });
   // Outlined series go on top of filled ones, so their edges and dashed median stay visible.
-  const drawOrder = [...shapes].sort((a, b) => Number(a.s.treatment === "outline") - Number(b.s.treatment === "outline"));
+  const drawOrder = [...shapes].sort((a, b) => Number(a.s.treatment === "outline" || a.s.treatment === "median") - Number(b.s.treatment === "outline" || b.s.treatment === "median"));
 
   const table = (
     <DataTable
@@ -205,7 +205,7 @@ export function FanChart({
               }
               className="flex items-center gap-1.5 rounded-full border border-line px-2.5 py-0.5 text-xs aria-pressed:bg-surface-2 aria-[pressed=false]:opacity-50"
             >
-              <LegendSwatch color={color} outline={s.treatment === "outline"} />
+              <LegendSwatch color={color} outline={s.treatment === "outline"} lineOnly={s.treatment === "median"} />
               {s.name}
             </button>
           ))}
@@ -243,11 +243,11 @@ export function FanChart({
             )}
             <AxisLeft scale={y} width={innerWidth} label={yLabel} />
             <AxisBottom scale={x} height={innerHeight} width={innerWidth} label="Year" format={(v) => String(v)} ticks={Math.max(2, Math.floor(innerWidth / 80))} />
-            {thresholds.map((t) =>
+            {thresholds.map((t, k) =>
               t >= y.domain()[0]! && t <= y.domain()[1]! ? (
-                <g key={t}>
-                  <line x2={innerWidth} y1={y(t)} y2={y(t)} stroke="var(--pl-danger)" strokeDasharray="5 4" opacity={0.55} />
-                  <text x={4} y={y(t) - 4} className="fill-danger text-[10px] num">
+                <g key={t} data-threshold={t}>
+                  <line x2={innerWidth} y1={y(t)} y2={y(t)} stroke={thresholdStyle(k).color} strokeDasharray={thresholdStyle(k).dash} strokeWidth={1.2} />
+                  <text x={4} y={y(t) - 4} fill={thresholdStyle(k).color} className="text-[10px] num">
                     {t} {unit}
                   </text>
                 </g>
@@ -256,7 +256,11 @@ export function FanChart({
             {drawOrder
               .filter(({ s }) => !hidden.has(s.id))
               .map(({ s, color, outer, inner, median }) =>
-                s.treatment === "outline" ? (
+                s.treatment === "median" ? (
+                  <g key={s.id} data-series={s.id} data-treatment="median">
+                    <path data-band="p50" d={median} fill="none" stroke={color} strokeWidth={2} />
+                  </g>
+                ) : s.treatment === "outline" ? (
                   <g key={s.id} data-series={s.id} data-treatment="outline">
                     <path data-band="p5-p95" d={outer} fill="none" stroke={color} strokeWidth={1} strokeDasharray="2 3" />
                     <path data-band="p17-p83" d={inner} fill="none" stroke={color} strokeWidth={1.5} />
@@ -292,7 +296,13 @@ export function FanChart({
 }
 
 /** Legend key: a tinted square with a solid line (filled), or an outlined square with a dashed line (outline). */
-function LegendSwatch({ color, outline }: { color: string; outline: boolean }) {
+function LegendSwatch({ color, outline, lineOnly = false }: { color: string; outline: boolean; lineOnly?: boolean }) {
+  if (lineOnly)
+    return (
+      <svg aria-hidden width={22} height={12} className="shrink-0">
+        <line x1={2} x2={20} y1={6} y2={6} stroke={color} strokeWidth={2} />
+      </svg>
+    );
   return (
     <svg aria-hidden width={22} height={12} className="shrink-0">
       <rect x={1} y={1} width={20} height={10} rx={2} fill={outline ? "none" : color} fillOpacity={0.3} stroke={outline ? color : "none"} strokeWidth={1.2} />

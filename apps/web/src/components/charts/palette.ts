@@ -23,3 +23,15 @@ export const AGENT_COLORS: Record<ForcingAgent, string> = {
 };
 
 export const agentColor = (agent: string) => AGENT_COLORS[agent as ForcingAgent] ?? "#9aa3b2";
+
+/**
+ * Warming thresholds: Plumeline's blues from light to ink, each with its own dash, lightest
+ * for the lowest threshold — not a yellow-to-red warming ramp, and never the ember of the data.
+ */
+export const THRESHOLD_STYLES = [
+  { color: "var(--pl-threshold-1)", dash: "2 3" },
+  { color: "var(--pl-accent)", dash: "6 4" },
+  { color: "var(--pl-ink)", dash: "10 4" },
+  { color: "var(--pl-muted)", dash: "1 4" },
+];
+export const thresholdStyle = (i: number) => THRESHOLD_STYLES[Math.min(i, THRESHOLD_STYLES.length - 1)]!;

@@ -51,6 +51,7 @@ const statusTone: Record<string, string> = {
   done: "border-ok/60 text-ok bg-ok-soft",
   failed: "border-danger/60 text-danger bg-danger-soft",
   cancelled: "border-line text-faint bg-surface-2",
+  "cancelling…": "border-danger/40 text-danger bg-surface-2",
   canceled: "border-line text-faint bg-surface-2",
 };
 

@@ -52,6 +52,7 @@ export function ResultView({ run, result }: { run: Run; result: RunResult }) {
   const baseline = spec.baseline ?? [1850, 1900];
   const constraint = spec.model?.constraint ?? null;
   const [pathwayId, setPathwayId] = useState(result.pathways[0]?.id ?? "");
+  const [otherBands, setOtherBands] = useState(false);
   const pathway = result.pathways.find((p) => p.id === pathwayId) ?? result.pathways[0];
   const horizons = pathway?.horizons.map((h) => h.year) ?? [];
   const [horizon, setHorizon] = useState<number>(horizons.at(-1) ?? 0);
@@ -76,6 +77,10 @@ export function ResultView({ run, result }: { run: Run; result: RunResult }) {
           <span className="text-sm font-medium text-ink">Pathway in focus</span>
           <Segmented label="Pathway" value={pathway.id} onChange={setPathwayId} options={result.pathways.map((p) => ({ value: p.id, label: p.name }))} />
           <span className="text-xs text-muted">filled in the chart; the tables and panels below show it</span>
+          <label className="flex items-center gap-1.5 text-xs text-muted">
+            <input type="checkbox" checked={otherBands} onChange={(e) => setOtherBands(e.target.checked)} />
+            Show the other pathways' bands
+          </label>
         </div>
       )}
       <Card>

@@ -53,13 +53,14 @@ describe("toFocusedFanSeries", () => {
   const band = { p5: [1, 1, 1, 1], p17: [2, 2, 2, 2], p50: [3, 3, 3, 3], p83: [4, 4, 4, 4], p95: [5, 5, 5, 5] };
   const three = ["low", "middle", "high"].map((id) => pathway({ id, name: id, temperature: band }));
 
-  it("fills only the pathway in focus and outlines the others, so overlapping bands never blend", () => {
+  it("fills only the pathway in focus and shows the others' medians; their bands as outlines on request", () => {
     const series = toFocusedFanSeries(three, "middle");
     expect(series.map((s) => [s.id, s.treatment])).toEqual([
-      ["low", "outline"],
+      ["low", "median"],
       ["middle", "filled"],
-      ["high", "outline"],
+      ["high", "median"],
     ]);
+    expect(toFocusedFanSeries(three, "middle", true).map((s) => s.treatment)).toEqual(["outline", "filled", "outline"]);
     // The percentiles pass through untouched.
     expect(series[1]!.p83).toEqual(band.p83);
   });

@@ -23,12 +23,12 @@ export function toFanSeries(p: PathwayResult, quantity: "temperature" | "forcing
 }
 
 /**
- * The result page's fan series: the pathway in focus keeps filled bands, every other one is
- * drawn as outlines (band edges, dashed median), so where pathways overlap their colours
- * never blend into a muddy mix and each median stays visible.
+ * The result page's fan series: the pathway in focus keeps filled bands; every other one shows
+ * only its median by default (with many pathways, outlined bands became a tangle of lines),
+ * or its bands as outlines (edges, dashed median) when `otherBands` is asked for.
  */
-export function toFocusedFanSeries(pathways: PathwayResult[], focusId: string): FanSeries[] {
-  return pathways.map((p) => ({ ...toFanSeries(p), treatment: p.id === focusId ? "filled" : "outline" }));
+export function toFocusedFanSeries(pathways: PathwayResult[], focusId: string, otherBands = false): FanSeries[] {
+  return pathways.map((p) => ({ ...toFanSeries(p), treatment: p.id === focusId ? "filled" : otherBands ? "outline" : "median" }));
 }
 
 export function toExceedanceCurves(p: PathwayResult): ExceedanceCurve[] {
