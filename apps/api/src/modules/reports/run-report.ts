@@ -16,6 +16,7 @@ import {
   type PathwayResult,
   type RunResult,
 } from "@plumeline/contracts";
+import { perilWarnings } from "../peril-profiles/peril-warnings.js";
 import type { WorkbookManifest } from "../exports/workbook-builder.js";
 import { drawBarChart } from "./pdf-bar-chart.js";
 import { drawExceedanceChart } from "./pdf-exceedance-chart.js";
@@ -256,21 +257,28 @@ function perilSection(w: ReportWriter, result: RunResult): void {
         formatFixed(h.multiplier.p50 ?? Number.NaN, 3),
         formatFixed(h.multiplier.p95 ?? Number.NaN, 3),
         h.returnPeriods ? formatFixed(h.returnPeriods["100"].p50 ?? Number.NaN, 1) : "–",
+        h.beyondTable ? `${formatFixed((h.beyondTable.below + h.beyondTable.above) * 100, 1)} %` : "–",
       ]),
     );
     w.table(
       [
-        { label: "Profile", width: 190 },
+        { label: "Profile", width: 150 },
         { label: "Horizon", width: 46 },
         { label: "5th pct", width: 50, align: "right" },
         { label: "50th pct", width: 50, align: "right" },
         { label: "95th pct", width: 50, align: "right" },
         { label: "Today's 1-in-100 becomes 1-in- (median, years)", width: 90, align: "right" },
+        { label: "Members beyond the table", width: 54, align: "right" },
       ],
       rows,
       { boldColumn: 3 },
     );
     if (pw.totals && pw.totals.length > 0) totalsTable(w, pw.totals, names.get(pw.pathwayId) ?? pw.pathwayId);
+  }
+  const warnings = perilWarnings(result);
+  if (warnings.length > 0) {
+    w.h3("Peril lens warnings");
+    w.bullets(warnings, { size: 8 });
   }
   if (perils.totalsRefused) w.paragraph(`No portfolio totals: ${perils.totalsRefused}.`);
   if (perils.unmatchedRows.length > 0)
