@@ -26,7 +26,7 @@ test.beforeAll(async ({ baseURL }) => {
   const admin = await apiAs("admin", baseURL!);
   const users = await getJson<User[]>(admin, "/api/users");
   const marit = users.find((u) => u.email === demoUsers.manager.email)!;
-  const setRole = async (role: string) => expect((await admin.patch(`/api/users/${marit.id}`, { data: { role } })).status()).toBe(200);
+  const setRole = async (role: string) => expect((await admin.patch(`/api/users/${marit.id}`, { data: { role, reason: "Review flow: the author may not approve their own draft." } })).status()).toBe(200);
 
   await setRole("analyst");
   let asMarit: APIRequestContext | undefined;

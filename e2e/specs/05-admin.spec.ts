@@ -6,7 +6,7 @@ import { snap } from "../support/screenshots";
 import { signIn } from "../support/sign-in";
 
 /**
- * Admin: invites a colleague, changes their role, then reads the audit log (the role change,
+ * Admin: invites a colleague, changes their role with a reason, then reads the audit log (the role change,
  * the earlier flows' decisions) and the mails the app sent (invitation, review request,
  * decision, finished runs) in the outbox.
  */
@@ -23,13 +23,22 @@ test("admin changes a role, reads the audit log and the outbox", async ({ page }
   const role = page.getByRole("combobox", { name: `Role of ${newcomer.name}` });
   await expect(role).toHaveValue("analyst");
 
-  // The role change is saved at once and survives a reload.
+  // The role change asks for confirmation and a reason; without one nothing is sent.
+  const reason = "Joins the pricing desk; applies approved versions.";
   await role.selectOption("actuary");
-  await expect(role).toBeEnabled();
+  const confirm = page.getByRole("group", { name: `Confirm: change the role of ${newcomer.name}` });
+  await expect(confirm).toContainText("from analyst to actuary");
+  await confirm.getByRole("button", { name: "Yes, change role" }).click();
+  await expect(confirm.getByRole("alert")).toContainText("reason");
+  await confirm.getByLabel("Reason (kept in the audit log)").fill(reason);
+  await confirm.getByRole("button", { name: "Yes, change role" }).click();
+  await expect(confirm).toBeHidden();
   await page.reload();
   await expect(page.getByRole("combobox", { name: `Role of ${newcomer.name}` })).toHaveValue("actuary");
-  // An admin cannot change their own role (no one removes the last admin by accident).
-  await expect(page.getByRole("combobox", { name: `Role of ${demoUsers.admin.name}` })).toBeDisabled();
+  // An admin is not offered a change of their own role (no one grants or removes their own rights).
+  const ownRow = page.getByRole("row").filter({ hasText: demoUsers.admin.email });
+  await expect(ownRow).toContainText("admin (you)");
+  await expect(page.getByRole("combobox", { name: `Role of ${demoUsers.admin.name}` })).toHaveCount(0);
   await snap(page, testInfo, "admin-users", "admin-users.png");
 
   // Audit log: the role change, filtered by its action.
@@ -42,12 +51,16 @@ test("admin changes a role, reads the audit log and the outbox", async ({ page }
   await page.getByRole("button", { name: "Filter" }).click();
   const roleChange = page.getByRole("row").filter({ hasText: "user.role-changed" }).filter({ hasText: newcomer.email });
   await expect(roleChange).toContainText("from analyst to actuary");
+  await expect(roleChange).toContainText(reason);
   await expect(page.getByRole("row").filter({ hasText: "model-version.approved" })).toHaveCount(0);
 
   // Outbox: the invitation, the review request to the managers, the decision to the author.
   await adminNav.getByRole("link", { name: "Outbox" }).click();
   await expect(page.getByRole("heading", { level: 1, name: "Outbox" })).toBeVisible();
-  await expect(page.getByRole("button", { name: new RegExp(`to ${newcomer.email}`) })).toBeVisible();
+  // The invitation carries a link to set a password, never a password.
+  await page.getByRole("button", { name: new RegExp(`^You are invited to Plumeline.*to ${newcomer.email}`) }).click();
+  await expect(page.getByText(/\/reset-password\?token=/).first()).toBeVisible();
+  await expect(page.getByText(/password:/)).toHaveCount(0);
   await expect(page.getByRole("button", { name: new RegExp(`^Review requested: ${names.widerDraft}.*to ${demoUsers.manager.email}`) })).toBeVisible();
   await expect(page.getByRole("button", { name: new RegExp(`^Run finished: ${names.runOnWider}`) })).toBeVisible();
   const decision = page.getByRole("button", { name: new RegExp(`^Model version approved: ${names.widerDraft}.*to ${demoUsers.analyst.email}`) });

@@ -14,7 +14,7 @@ MEMBERS="${1:-100000}"
 RUNS="${2:-3}"
 HERE="$(cd "$(dirname "$0")/.." && pwd)"
 BENCH_DIR="${BENCH_DIR:-$HERE/bench-reference}"
-REFERENCE_ARGS="${REFERENCE_ARGS-"--feedback co2-scaled"}"
+REFERENCE_ARGS="${REFERENCE_ARGS-"--feedback co2-scaled --temperature annual-mean"}"
 for tool in gcc python3; do
   command -v "$tool" >/dev/null || { echo "compare-bench: $tool is needed for the reference programs" >&2; exit 2; }
 done

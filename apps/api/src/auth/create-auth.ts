@@ -43,6 +43,9 @@ export interface PasswordResetRequest {
   email: string;
   name: string;
   banned: boolean;
+  /** Invited and has not set a password yet: the mail is worded as the invitation. */
+  pendingInvitation: boolean;
+  role: string;
   token: string;
 }
 
@@ -89,8 +92,16 @@ export function createAuth({ config, models, onSignIn, onSignInFailure, onSignIn
       // Whoever knew the old password may hold a session; a reset ends them all.
       revokeSessionsOnPasswordReset: true,
       sendResetPassword: async ({ user, token }) => {
-        const { banned } = user as { banned?: boolean | null };
-        await onPasswordResetRequested({ userId: user.id, email: user.email, name: user.name, banned: Boolean(banned), token });
+        const { banned, mustChangePassword, role } = user as { banned?: boolean | null; mustChangePassword?: boolean | null; role?: string | null };
+        await onPasswordResetRequested({
+          userId: user.id,
+          email: user.email,
+          name: user.name,
+          banned: Boolean(banned),
+          pendingInvitation: Boolean(mustChangePassword),
+          role: role ?? "analyst",
+          token,
+        });
       },
       onPasswordReset: async ({ user }) => {
         await onPasswordReset(user.id);

@@ -75,7 +75,7 @@ describe("a NUL byte in an id", () => {
     ["GET /api/runs/:id/workbook.xlsx", () => analyst.get(`/api/runs/${id}/workbook.xlsx`)],
     ["GET /api/peril-profiles/:id", () => analyst.get(`/api/peril-profiles/${id}`)],
     ["GET /api/portfolios/:id", () => analyst.get(`/api/portfolios/${id}`)],
-    ["PATCH /api/users/:id", () => admin.patch(`/api/users/${id}`).send({ role: "analyst" })],
+    ["PATCH /api/users/:id", () => admin.patch(`/api/users/${id}`).send({ role: "analyst", reason: "NUL id check" })],
     ["GET /api/outbox/:id", () => admin.get(`/api/outbox/${id}`)],
   ];
   it.each(cases)("answers 400 on %s", async (_name, send) => {

@@ -16,7 +16,7 @@ export const userSchema = z.object({
 });
 export type User = z.infer<typeof userSchema>;
 
-/** POST /api/users — invite: the server creates the user and mails a one-time password. */
+/** POST /api/users — invite: the server creates the user and mails a one-time link to set a password. */
 export const inviteUserBodySchema = z.object({
   email: z.email().max(254),
   name: z.string().trim().min(1).max(120),
@@ -24,8 +24,14 @@ export const inviteUserBodySchema = z.object({
 });
 export type InviteUserBody = z.infer<typeof inviteUserBodySchema>;
 
-/** PATCH /api/users/:id — change the role. */
-export const updateUserBodySchema = z.object({ role: roleSchema });
+/**
+ * PATCH /api/users/:id — change the role. The reason is required and kept in the audit row,
+ * so every change of who may do what can be traced to why it was made.
+ */
+export const updateUserBodySchema = z.object({
+  role: roleSchema,
+  reason: z.string({ error: "A reason for the role change is required." }).trim().min(3, "Give a reason of at least 3 characters.").max(500),
+});
 export type UpdateUserBody = z.infer<typeof updateUserBodySchema>;
 
 export const userIdParamsSchema = z.object({ id: z.string().min(1) });

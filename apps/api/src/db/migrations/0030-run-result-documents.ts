@@ -1,6 +1,7 @@
-import { gzipSync } from "node:zlib";
+import { gunzipSync, gzipSync } from "node:zlib";
 import { DataTypes, QueryTypes } from "sequelize";
 import type { MigrationModule } from "../migrate.js";
+import { up as createResultTables } from "./0014-run-results.js";
 
 /**
  * A run's result becomes ONE compressed document (gzip of the engine's RunResult JSON) instead
@@ -38,5 +39,22 @@ export const up: MigrationModule["up"] = async ({ queryInterface, sequelize }) =
   await queryInterface.dropTable("run_results");
 };
 
-export const down: MigrationModule["down"] = () =>
-  Promise.reject(new Error("0030-run-result-documents cannot be undone: the per-year rows it dropped were never read; restore a backup instead."));
+/**
+ * Back to JSON text per run: every document is unpacked into run_results. The per-year rows
+ * come back as an empty table — nothing ever read them, and the JSON holds every number.
+ */
+export const down: MigrationModule["down"] = async (context) => {
+  const { queryInterface, sequelize } = context;
+  await createResultTables(context);
+  const documents = await sequelize.query<{ run_id: string; engine_version: string; input_hash: string; result_hash: string; document: Buffer; created_at: string }>(
+    "SELECT run_id, engine_version, input_hash, result_hash, document, created_at FROM run_result_documents",
+    { type: QueryTypes.SELECT },
+  );
+  for (const row of documents) {
+    await sequelize.query(
+      "INSERT INTO run_results (run_id, engine_version, input_hash, result_hash, result, created_at) VALUES (?, ?, ?, ?, ?, ?)",
+      { replacements: [row.run_id, row.engine_version, row.input_hash, row.result_hash, gunzipSync(row.document).toString("utf8"), row.created_at] },
+    );
+  }
+  await queryInterface.dropTable("run_result_documents");
+};

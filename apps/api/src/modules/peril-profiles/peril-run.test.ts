@@ -119,8 +119,16 @@ describe("a finished run with the peril lens (worker step, result, CSV, workbook
     expect(wb.getWorksheet("Projected losses")).toBeDefined();
     expect(wb.getWorksheet("Return periods")).toBeDefined();
 
+    // A replay goes through the run queue like a run: queued (202), then a worker step runs it.
     const replay = await actuary.post(`/api/runs/${created.body.id}/replay`);
-    expect(replay.status).toBe(200);
-    expect(replay.body.matched).toBe(true);
+    expect(replay.status).toBe(202);
+    const replayThread = new EngineThread("peril-replay");
+    try {
+      expect(await processNextRunJob(t.ctx, createSqlJobQueue(t.ctx.models.Job), "peril-test", replayThread, { progressWriteMs: 20 })).toBe("succeeded");
+    } finally {
+      await replayThread.terminate();
+    }
+    const replayed = await actuary.get(`/api/runs/${created.body.id}/replays/${replay.body.id}`);
+    expect(replayed.body).toMatchObject({ status: "succeeded", matched: true });
   });
 });

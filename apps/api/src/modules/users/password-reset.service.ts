@@ -5,6 +5,9 @@ import { recordAudit } from "../audit/audit.service.js";
 
 type ResetContext = Pick<AppContext, "models" | "mailer" | "sequelize"> & { config: Pick<AppContext["config"], "publicOrigin"> };
 
+export const INVITATION_SUBJECT = "You are invited to Plumeline";
+export const RESET_SUBJECT = "Reset your Plumeline password";
+
 /** The web page that asks for the new password (apps/web config/paths.ts `resetPassword`). */
 export function resetPasswordLink(publicOrigin: string, token: string): string {
   return `${publicOrigin}/reset-password?token=${encodeURIComponent(token)}`;
@@ -15,21 +18,39 @@ export function resetPasswordLink(publicOrigin: string, token: string): string {
  * answer must take as long for a known address as for an unknown one, so nothing here may
  * wait on SMTP (the mailer never rejects and tracks the send for shutdown and tests).
  * A deactivated account gets no mail: a reset must not become a way back in.
+ * A pending invitation (users.service.ts inviteUser) gets the same link worded as the invitation.
  */
 export function mailPasswordReset(ctx: ResetContext, request: PasswordResetRequest): void {
   if (request.banned) return;
-  void ctx.mailer.send({
-    to: [request.email],
-    subject: "Reset your Plumeline password",
-    text: [
-      `Hello ${request.name},`,
-      "",
-      "Someone asked to reset the password of your Plumeline account. To choose a new one, open:",
-      `  ${resetPasswordLink(ctx.config.publicOrigin, request.token)}`,
-      "",
-      `The link works once, within ${RESET_TOKEN_SECONDS / 60} minutes. If you did not ask, ignore this mail: your password stays as it is.`,
-    ].join("\n"),
-  });
+  const link = resetPasswordLink(ctx.config.publicOrigin, request.token);
+  const minutes = RESET_TOKEN_SECONDS / 60;
+  void ctx.mailer.send(
+    request.pendingInvitation
+      ? {
+          to: [request.email],
+          subject: INVITATION_SUBJECT,
+          text: [
+            `Hello ${request.name},`,
+            "",
+            `You have been invited to Plumeline as ${request.role}. To choose your password, open:`,
+            `  ${link}`,
+            "",
+            `The link works once, within ${minutes} minutes. If it has expired, use "Forgot password?" on the sign-in page with this address for a new one.`,
+          ].join("\n"),
+        }
+      : {
+          to: [request.email],
+          subject: RESET_SUBJECT,
+          text: [
+            `Hello ${request.name},`,
+            "",
+            "Someone asked to reset the password of your Plumeline account. To choose a new one, open:",
+            `  ${link}`,
+            "",
+            `The link works once, within ${minutes} minutes. If you did not ask, ignore this mail: your password stays as it is.`,
+          ].join("\n"),
+        },
+  );
 }
 
 /**

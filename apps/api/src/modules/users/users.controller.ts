@@ -14,7 +14,7 @@ export const usersController = {
   },
   async update(req: Request, res: Response) {
     const { id } = req.params as { id: string };
-    res.json(await changeRole(contextOf(req), currentUser(req), id, (req.body as UpdateUserBody).role));
+    res.json(await changeRole(contextOf(req), currentUser(req), id, req.body as UpdateUserBody));
   },
   async deactivate(req: Request, res: Response) {
     const { id } = req.params as { id: string };

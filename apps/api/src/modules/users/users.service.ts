@@ -1,5 +1,4 @@
-import { randomBytes } from "node:crypto";
-import type { InviteUserBody, Role, User } from "@plumeline/contracts";
+import type { InviteUserBody, Role, UpdateUserBody, User } from "@plumeline/contracts";
 import type { AppContext } from "../../context.js";
 import { conflict, forbidden, notFound } from "../../errors/app-error.js";
 import type { RequestUser } from "../../middleware/request-context.js";
@@ -25,20 +24,18 @@ export async function emailsOfRole(ctx: Pick<AppContext, "models">, role: Role):
   return rows.map((r) => r.email);
 }
 
-/** A temporary password: 18 random bytes, base64url (24 characters, 144 bits). */
-export function generateTemporaryPassword(): string {
-  return randomBytes(18).toString("base64url");
-}
-
 /**
- * Invites a colleague: creates the user with a generated password through better-auth (which
- * hashes it and creates the credential), audits the invitation and mails the password.
+ * Invites a colleague: creates the user through better-auth without any password (so nothing
+ * can sign them in yet), audits the invitation, then asks better-auth for its one-time reset
+ * token, the same one "Forgot password?" uses. The mail hook (password-reset.service.ts) sees
+ * the pending invitation and words the mail as an invitation with the link; no password is
+ * ever made up, mailed or stored in the outbox.
  */
 export async function inviteUser(ctx: UsersContext, actor: RequestUser, body: InviteUserBody): Promise<User> {
   const email = body.email.toLowerCase();
   if (await ctx.models.User.findOne({ where: { email } })) throw conflict(`A user with the email ${email} already exists.`, "email_taken");
-  const password = generateTemporaryPassword();
-  const { user } = await ctx.auth.api.createUser({ body: { email, name: body.name, password, role: body.role } });
+  const { user } = await ctx.auth.api.createUser({ body: { email, name: body.name, role: body.role } });
+  // Marks the invitation as pending until the person sets their password through the link.
   await ctx.models.User.update({ mustChangePassword: true }, { where: { id: user.id } });
   await recordAudit(ctx, {
     actorId: actor.id,
@@ -46,34 +43,23 @@ export async function inviteUser(ctx: UsersContext, actor: RequestUser, body: In
     action: "user.invited",
     entityType: "user",
     entityId: user.id,
-    summary: `${actor.email} invited ${email} as ${body.role}.`,
+    summary: `${actor.email} invited ${email} as ${body.role}; a one-time link to set a password was mailed.`,
     data: { email, name: body.name, role: body.role },
   });
-  await ctx.mailer.send({
-    to: [email],
-    subject: "Your Plumeline account",
-    text: [
-      `Hello ${body.name},`,
-      "",
-      `${actor.name} has invited you to Plumeline as ${body.role}.`,
-      `Sign in at ${ctx.config.publicOrigin} with`,
-      `  email:    ${email}`,
-      `  password: ${password}`,
-      "",
-      "This password works once: after signing in you will be asked to choose your own before anything else.",
-    ].join("\n"),
-  });
+  await ctx.auth.api.requestPasswordReset({ body: { email } });
   return getUser(ctx, user.id);
 }
 
-/** Changes a user's role, audited in the same transaction. An admin cannot demote themselves. */
-export async function changeRole(ctx: UsersContext, actor: RequestUser, id: string, role: Role): Promise<User> {
+/**
+ * Changes a user's role with the reason, audited in the same transaction. No admin changes
+ * their own role: granting or removing one's own rights needs a second admin.
+ */
+export async function changeRole(ctx: UsersContext, actor: RequestUser, id: string, change: UpdateUserBody): Promise<User> {
+  const { role, reason } = change;
   return ctx.sequelize.transaction(async (transaction) => {
     const row = await ctx.models.User.findByPk(id, { transaction });
     if (!row) throw notFound("User", id);
-    if (row.id === actor.id && row.role === "admin" && role !== "admin") {
-      throw forbidden("An admin cannot remove their own admin role; ask another admin.", "self_demotion");
-    }
+    if (row.id === actor.id) throw forbidden("An admin cannot change their own role; ask another admin.", "self_role_change");
     const previous = row.role;
     if (previous === role) return toUser(row);
     await row.update({ role, updatedAt: new Date() }, { transaction });
@@ -85,8 +71,8 @@ export async function changeRole(ctx: UsersContext, actor: RequestUser, id: stri
         action: "user.role-changed",
         entityType: "user",
         entityId: row.id,
-        summary: `${actor.email} changed the role of ${row.email} from ${previous} to ${role}.`,
-        data: { from: previous, to: role },
+        summary: `${actor.email} changed the role of ${row.email} from ${previous} to ${role}. Reason: ${reason}`,
+        data: { from: previous, to: role, reason },
       },
       transaction,
     );

@@ -15,7 +15,7 @@ export default function AdminUsersPage() {
       <PageHeader kicker="Admin" title="Users and roles" description="Analysts build, actuaries apply, managers approve, admins administer. One role per person." />
       <AdminTabs permissions={me.data?.permissions ?? []} />
       <Card className="mb-6">
-        <CardHeader title="Invite someone" subtitle="They receive a one-time password by mail and choose their own on first sign-in." />
+        <CardHeader title="Invite someone" subtitle="They receive a mail with a one-time link to choose their password. No password is ever mailed." />
         <CardBody>
           <InviteUserForm />
         </CardBody>

@@ -4,8 +4,8 @@ import { api } from "@/lib/api-client";
 import { getUsersQueryOptions } from "./get-users";
 
 export const inviteUser = (body: InviteUserBody) => api.post<User>("/api/users", body, { schema: userSchema });
-export const changeUserRole = ({ id, role }: { id: string; role: Role }) =>
-  api.patch<User>(`/api/users/${encodeURIComponent(id)}`, { role }, { schema: userSchema });
+export const changeUserRole = ({ id, role, reason }: { id: string; role: Role; reason: string }) =>
+  api.patch<User>(`/api/users/${encodeURIComponent(id)}`, { role, reason }, { schema: userSchema });
 
 export function useInviteUser() {
   const queryClient = useQueryClient();

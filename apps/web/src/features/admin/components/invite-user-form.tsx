@@ -9,7 +9,7 @@ import { fieldErrors } from "@/lib/field-errors";
 
 type Name = "email" | "name" | "role";
 
-/** Invites a user: the server creates the account and mails a one-time password. */
+/** Invites a user: the server creates the account and mails a one-time link to set a password. */
 export function InviteUserForm() {
   const invite = useInviteUser();
   const [errors, setErrors] = useState<Partial<Record<Name, string>>>({});
@@ -28,7 +28,7 @@ export function InviteUserForm() {
     setErrors({});
     invite.mutate(parsed.data, {
       onSuccess: (u) => {
-        setDone(`Invitation sent to ${u.email}. The mail is in the outbox.`);
+        setDone(`Invitation sent to ${u.email}: a link to choose their password. The mail is in the outbox.`);
         form.reset();
       },
       onError: (err) => {

@@ -1,10 +1,10 @@
-import { roles, type Role, type User } from "@plumeline/contracts";
-import { Select } from "@/components/ui/field";
+import type { User } from "@plumeline/contracts";
 import { InlineError } from "@/components/ui/states";
 import { Table, Td, Th } from "@/components/ui/table";
 import { formatDate } from "@/lib/format";
 import { useChangeUserRole } from "../api/save-user";
 import { useSetUserStatus } from "../api/set-user-status";
+import { RoleChange } from "./role-change";
 import { UserStatusAction, UserStatusBadge } from "./user-status";
 
 export function UsersTable({ users, currentUserId }: { users: User[]; currentUserId: string }) {
@@ -31,18 +31,13 @@ export function UsersTable({ users, currentUserId }: { users: User[]; currentUse
               <Td className="font-medium">{u.name}</Td>
               <Td className="text-muted">{u.email}</Td>
               <Td>
-                <Select
-                  aria-label={`Role of ${u.name}`}
-                  value={u.role}
-                  className="w-36 py-1"
-                  disabled={u.id === currentUserId || (change.isPending && change.variables?.id === u.id)}
-                  title={u.id === currentUserId ? "You cannot change your own role" : undefined}
-                  onChange={(e) => change.mutate({ id: u.id, role: e.target.value as Role })}
-                >
-                  {roles.map((r) => (
-                    <option key={r}>{r}</option>
-                  ))}
-                </Select>
+                <RoleChange
+                  user={u}
+                  isSelf={u.id === currentUserId}
+                  saving={change.isPending && change.variables?.id === u.id}
+                  error={change.variables?.id === u.id ? change.error : null}
+                  onConfirm={({ role, reason }) => change.mutateAsync({ id: u.id, role, reason })}
+                />
               </Td>
               <Td className="text-muted">{formatDate(u.createdAt)}</Td>
               <Td>
@@ -60,7 +55,6 @@ export function UsersTable({ users, currentUserId }: { users: User[]; currentUse
           ))}
         </tbody>
       </Table>
-      <InlineError error={change.error} />
       <InlineError error={status.error} />
     </>
   );

@@ -18,7 +18,10 @@ export const changePasswordSchema = z
 
 type Name = "currentPassword" | "newPassword" | "repeat";
 
-/** An invited user must replace the mailed one-time password before anything else. */
+/**
+ * An account invited before invitations mailed a link (it still holds a mailed one-time
+ * password) must replace that password before anything else.
+ */
 export function ChangePasswordForm() {
   const change = useChangePassword();
   const [errors, setErrors] = useState<Partial<Record<Name, string>>>({});
