@@ -96,6 +96,8 @@ beforeAll(async () => {
     env: {
       PATH: process.env.PATH ?? "/usr/bin:/bin",
       NODE_ENV: "test",
+      // Tests log nothing by default; this test reads the start-up line.
+      LOG_LEVEL: "info",
       HOST: "127.0.0.1",
       PORT: String(port),
       PUBLIC_ORIGIN: base,
