@@ -23,3 +23,4 @@ export * from "./api/run-statements.js";
 export * from "./format/number-format.js";
 export * from "./format/input-labels.js";
 export * from "./compose/index.js";
+export * from "./format/palette.js";
