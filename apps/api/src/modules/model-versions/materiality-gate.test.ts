@@ -15,7 +15,7 @@ let parentId: string;
 
 const base = testModelVersionBody();
 /** ECS median 3 K -> 4 K: warms every horizon by far more than 0.1 K (higher sensitivity, rising forcing). */
-const hotterModel = { ...base.model, climate: { ...base.model.climate, ecs: { type: "range" as const, p50: 4, low: 2.5, high: 6.5, coverage: 90, shape: "lognormal" as const } } };
+const hotterModel = { ...base.model, climate: { ...base.model.climate, ecs: { type: "range" as const, p50: 4, low: 2.5, high: 6.5, coverage: 90 as const, shape: "lognormal" as const } } };
 
 async function draft(name: string, model = base.model): Promise<string> {
   const res = await analyst.post("/api/model-versions").send({ ...base, name, model, parentId, pathwayIds: [steep, gentle] });
