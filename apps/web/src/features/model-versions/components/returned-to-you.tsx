@@ -15,8 +15,8 @@ import { useModelVersion } from "../api/get-model-version";
 export function ReturnedToYou({ versions }: { versions: ModelVersionSummary[] }) {
   if (versions.length === 0) return null;
   return (
-    <Card className="border-l-4 border-l-danger">
-      <CardHeader title="Returned to you" subtitle="Rejected by a reviewer, with their reason. Draft a corrected version from it." />
+    <Card className="border-l-4 border-l-danger" aria-labelledby="returned-to-you">
+      <CardHeader id="returned-to-you" title="Returned to you" subtitle="Rejected by a reviewer, with their reason. Draft a corrected version from it." />
       <CardBody>
         <ul className="flex flex-col gap-4">
           {versions.slice(0, 5).map((v) => (
