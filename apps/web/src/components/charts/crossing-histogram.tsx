@@ -85,6 +85,12 @@ export function CrossingHistogram({ title, crossing, unit = "K", height = 240 }:
   return (
     <ChartFrame
       title={title}
+      units="members (% per year); first-crossing year"
+      legend={[
+        { label: `First-crossing years (members in % per year)`, color: "var(--pl-ember-400)", kind: "swatch" },
+        ...(p50 !== null && p50 !== undefined ? [{ label: `Median first-crossing year: ${p50}`, color: "var(--pl-ink)", dash: "3 3" }] : []),
+        { label: `Never cross${by}: ${percent(crossing.never)} of all members`, color: "var(--pl-accent)", kind: "swatch" as const },
+      ]}
       description={`First year the member's warming is above ${crossing.threshold} ${unit}. ${spread}`}
       table={
         <DataTable

@@ -47,6 +47,8 @@ export function ExceedanceChart({
   return (
     <ChartFrame
       title={title}
+      units={`% of members (chance of warming above each threshold, in ${unit})`}
+      legend={sorted.map((c, i) => ({ label: `above ${c.threshold} ${unit}`, color: THRESHOLD_COLORS[i % THRESHOLD_COLORS.length]! }))}
       description={`Share of members whose warming is above each threshold in that year.`}
       table={
         <DataTable

@@ -185,6 +185,20 @@ export function FanChart({
   return (
     <ChartFrame
       title={title}
+      units={unit}
+      legend={[
+        ...shapes
+          .filter(({ s }) => !hidden.has(s.id))
+          .map(({ s, color }) =>
+            s.treatment === "outline"
+              ? { label: `${s.name} (outlined bands, dashed median)`, color, dash: "7 4" }
+              : s.treatment === "median"
+                ? { label: `${s.name} (median only)`, color }
+                : { label: series.length > 1 ? `${s.name} (filled bands)` : s.name, color, kind: "swatch" as const },
+          ),
+        { label: `bands: ${BAND_LABELS.outer} (light), ${BAND_LABELS.inner} (strong); line: ${BAND_LABELS.median}`, color: "var(--pl-ink)" },
+        ...thresholds.map((t, k) => ({ label: `${t} ${unit} threshold`, color: thresholdStyle(k).color, dash: thresholdStyle(k).dash })),
+      ]}
       description={description ?? `Median line, ${BAND_LABELS.inner} and ${BAND_LABELS.outer} bands. Hover or use arrow keys to read a year.`}
       table={table}
     >

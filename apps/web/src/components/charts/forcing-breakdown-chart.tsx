@@ -34,6 +34,11 @@ export function ForcingBreakdownChart({ title, year, agents, total }: { title: s
   return (
     <ChartFrame
       title={title}
+      units="W m-2 (effective radiative forcing)"
+      legend={[
+        ...rows.map((r) => ({ label: r.label, color: total && r === total ? "var(--pl-ink)" : agentColor(r.agent), kind: "swatch" as const })),
+        { label: "5th–95th percentile bracket (bars are medians)", color: "var(--pl-ink)" },
+      ]}
       description={`Effective radiative forcing in ${year}: median bar with its 5–95 % bracket.`}
       table={
         <DataTable

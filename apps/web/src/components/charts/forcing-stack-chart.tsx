@@ -36,6 +36,8 @@ export function ForcingStackChart({ title, years, agents, height = 340 }: { titl
   return (
     <ChartFrame
       title={title}
+      units="W m-2 (effective radiative forcing)"
+      legend={[...agents.map((a) => ({ label: a.label, color: agentColor(a.agent), kind: "swatch" as const })), { label: "Total", color: "var(--pl-ink)" }]}
       description="Stacked effective radiative forcing by agent (warming above zero, cooling below); the line is the net total."
       table={
         <DataTable

@@ -13,6 +13,11 @@ export interface LineSeries {
   color?: string;
 }
 
+/** The unit in an axis label's last brackets ("CO₂ (ppm)" -> "ppm"), else the whole label. */
+export function unitOf(label: string): string {
+  return /\(([^()]+)\)\s*$/.exec(label)?.[1] ?? label;
+}
+
 /** Plain multi-line chart over years (e.g. concentrations given in ppm or ppb). */
 export function LineChart({ title, years, series, yLabel, height = 240 }: { title: string; years: number[]; series: LineSeries[]; yLabel: string; height?: number }) {
   const [ref, width] = useChartWidth<HTMLDivElement>();
@@ -24,6 +29,8 @@ export function LineChart({ title, years, series, yLabel, height = 240 }: { titl
   return (
     <ChartFrame
       title={title}
+      units={unitOf(yLabel)}
+      legend={series.map((s, i) => ({ label: s.label, color: s.color ?? seriesColor(i) }))}
       table={
         <DataTable
           caption={title}

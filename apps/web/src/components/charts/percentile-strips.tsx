@@ -3,6 +3,9 @@ import { scaleBand, scaleLinear } from "d3";
 import { AxisBottom, AxisLeftBand } from "./axes";
 import { ChartFrame, DataTable } from "./chart-frame";
 import { useChartWidth } from "./use-chart-width";
+import { BAND_LABELS } from "./band-labels";
+import type { LegendEntry } from "./chart-export";
+import { unitOf } from "./line-chart";
 
 export interface PercentileStrip {
   id: string;
@@ -20,7 +23,20 @@ export interface PercentileStrip {
  * median tick per row. Used to set distributions side by side (prior vs weighted ECS,
  * two runs at one horizon).
  */
-export function PercentileStrips({ title, description, strips, axisLabel }: { title: string; description?: string; strips: PercentileStrip[]; axisLabel: string }) {
+export function PercentileStrips({
+  title,
+  description,
+  strips,
+  axisLabel,
+  series = [],
+}: {
+  title: string;
+  description?: string;
+  strips: PercentileStrip[];
+  axisLabel: string;
+  /** What the strip colours stand for (runs, priors), for the downloaded chart's legend. */
+  series?: LegendEntry[];
+}) {
   const [ref, width] = useChartWidth<HTMLDivElement>();
   const labelWidth = 150;
   const m = { top: 6, right: 20, bottom: 44, left: labelWidth };
@@ -35,6 +51,13 @@ export function PercentileStrips({ title, description, strips, axisLabel }: { ti
   return (
     <ChartFrame
       title={title}
+      units={unitOf(axisLabel)}
+      legend={[
+        ...series,
+        { label: `${BAND_LABELS.outer} (thin line)`, color: "var(--pl-ink)" },
+        { label: `${BAND_LABELS.inner} (bar)`, color: "var(--pl-ink)", kind: "swatch" },
+        { label: `${BAND_LABELS.median} (tick)`, color: "var(--pl-ink)" },
+      ]}
       description={description}
       table={
         <DataTable

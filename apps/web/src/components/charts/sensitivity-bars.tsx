@@ -32,6 +32,11 @@ export function SensitivityBars({ title, horizon, bars, indexLabel = "Rank corre
   return (
     <ChartFrame
       title={title}
+      units={indexLabel}
+      legend={[
+        { label: "pushes warming up (positive)", color: "var(--pl-ember-400)", kind: "swatch" },
+        { label: "pushes warming down (negative)", color: "var(--pl-series-2)", kind: "swatch" },
+      ]}
       description={`What drives the spread of warming in ${horizon}.`}
       table={<DataTable caption={title} columns={["Input", indexLabel]} rows={sorted.map((b) => [b.label, b.index.toFixed(3)])} />}
     >

@@ -52,6 +52,11 @@ export function VarianceShareBars({ title, horizon, rows }: { title: string; hor
   return (
     <ChartFrame
       title={title}
+      units="% of the variance of warming (first-order share); rank correlation from –1 to 1"
+      legend={[
+        { label: "share explained by the input on its own", color: "var(--pl-ember-400)", kind: "swatch" },
+        { label: `${INTERACTIONS_LABEL} (what the shares leave)`, color: "var(--pl-line-strong)", dash: "3 2" },
+      ]}
       description={`Share of the variance of warming in ${horizon} that each input explains on its own; what the shares leave is interactions between inputs. Rank correlation beside each: its sign says which way the input pushes warming.`}
       table={
         <DataTable

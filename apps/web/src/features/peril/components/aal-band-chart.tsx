@@ -90,6 +90,13 @@ export function AalBandChart({
   return (
     <ChartFrame
       title={title}
+      units={`${unit} (average annual loss)`}
+      legend={[
+        { label: "median (50th percentile)", color },
+        { label: "17th–83rd percentile (bar)", color, kind: "swatch" },
+        { label: "5th–95th percentile (whisker)", color },
+        ...(today !== null ? [{ label: "today's AAL (portfolio baseline)", color: "var(--pl-ink)", dash: "3 2" }] : []),
+      ]}
       description={`Projected AAL across members at each horizon, in ${currency}.${today !== null ? " The square is today's AAL from the portfolio baseline." : ""}${fromZero ? "" : " The loss axis spans the projections and today's AAL: it does not start at zero."}`}
       table={table}
     >

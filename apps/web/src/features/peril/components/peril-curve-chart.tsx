@@ -71,6 +71,17 @@ export function PerilCurveChart({ curve, title = "Multiplier against warming", h
   return (
     <ChartFrame
       title={title}
+      units="multiplier (× the firm's baseline view) against warming above 1850–1900 (K)"
+      legend={[
+        ...(byTable
+          ? tables.map((t, k) => ({ label: `1-in-${t.returnPeriod}-year events`, color: seriesColor(k) }))
+          : [
+              { label: "5th–95th percentile (light) and 17th–83rd percentile (strong) bands", color, kind: "swatch" as const },
+              { label: "median (50th percentile)", color },
+            ]),
+        { label: "multiplier 1 (the baseline view)", color: "var(--pl-ink)", dash: "4 3" },
+        ...(baselineVisible ? [{ label: "warming already in the risk view", color: "var(--pl-accent)", dash: "2 3" }] : []),
+      ]}
       description={
         byTable
           ? "One line per table, for the events of the return period it states; a table carries no scaling uncertainty. Between return periods the lens reads along a straight line in log return period."
