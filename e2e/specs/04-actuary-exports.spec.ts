@@ -1,6 +1,8 @@
 import { expect, test } from "@playwright/test";
 import { members, names } from "../support/names";
 import { openFromNav } from "../support/navigation";
+import { downloadChart } from "../support/chart-download";
+import { lineCells, pdfPages } from "../support/pdf-text";
 import { chooseVersion, runIdFromUrl, type RunResult } from "../support/runs";
 import { snap } from "../support/screenshots";
 import { signIn } from "../support/sign-in";
@@ -89,6 +91,47 @@ test("actuary applies the peril profiles and portfolio, exports the workbook, wh
   )!;
   expect(lossRow.loss_p50).toBe(aal2050.p50);
   expect(workbook.getWorksheet("Cautions")!.getRow(1).getCell(1).text).toMatch(/^Cautions/);
+
+  // A chart leaves the product with its title, units, legend and a footnote naming the run,
+  // the model version and the result hash; its file name names the run and the chart.
+  await page.getByRole("radiogroup", { name: "Pathway" }).getByRole("radio", { name: "Harbourline Middle" }).click();
+  const fan = page.getByRole("figure", { name: /^Warming above 1850–1900 \(K\)$/ });
+  const chart = await downloadChart(page, fan, testInfo);
+  expect(chart.svgName).toBe("plumeline-q3-orsa-flood-and-heat-lens-warming-above-1850-1900-k.svg");
+  expect(chart.pngName).toBe("plumeline-q3-orsa-flood-and-heat-lens-warming-above-1850-1900-k.png");
+  expect(chart.svg).toContain("Units: K");
+  expect(chart.svg).toContain("Harbourline Middle (filled bands)");
+  expect(chart.svg).toContain(`Run “${names.actuaryRun}”`);
+  expect(chart.svg).toContain(`model version ${names.widerDraft}`);
+  expect(chart.svg).toContain(`result hash ${result.resultHash}`);
+
+  // The report: its text, as pdftotext extracts it, holds the result hash and the horizon
+  // figures exactly as the run page's horizon table writes them.
+  const reportStarted = page.waitForEvent("download");
+  await page.getByRole("link", { name: "Report (PDF)" }).click();
+  const report = await reportStarted;
+  expect(report.suggestedFilename()).toMatch(/\.pdf$/);
+  const reportFile = testInfo.outputPath(report.suggestedFilename());
+  await report.saveAs(reportFile);
+  const pages = pdfPages(reportFile);
+  const reportText = pages.join("\n");
+  expect(reportText).toContain(result.resultHash);
+  expect(reportText).toContain(run.manifest.engineVersion);
+  const onScreen = page.getByRole("table", { name: "Warming percentiles at the horizons for Harbourline Middle" });
+  await expect(onScreen).toBeVisible();
+  const section = pages.filter((text) => text.includes("Warming at the horizons — Harbourline Middle")).join("\n");
+  expect(section).not.toBe("");
+  for (const h of middle.horizons) {
+    // The screen's cells: the percentile figure, with the ± of its Monte Carlo interval below it.
+    const cells = await onScreen.getByRole("row").filter({ has: page.getByRole("rowheader", { name: String(h.year), exact: true }) }).getByRole("cell").allInnerTexts();
+    const shown = cells.map((c) => c.split("\n")[0]!.trim());
+    // The screen writes the API's numbers to two decimals…
+    expect(shown[2]).toBe(h.temperature.p50!.toFixed(2));
+    // …and the report's row for that year holds the same figures in the same order.
+    const row = section.split("\n").find((l) => lineCells(l)[0] === String(h.year) && lineCells(l).includes(shown[2]!));
+    expect(row, `report row for ${h.year}`).toBeDefined();
+    expect(lineCells(row!).slice(1)).toEqual(shown);
+  }
 
   // The export is on record.
   await openFromNav(page, "Exports");

@@ -3,6 +3,7 @@ import { line, scaleLinear } from "d3";
 import { formatProbabilityTenths } from "@/lib/format";
 import { AxisBottom, AxisLeft } from "./axes";
 import { ChartFrame, DataTable } from "./chart-frame";
+import { firstActiveIndex } from "./chart-domains";
 import { DEFAULT_MARGINS, innerSize } from "./margins";
 import { useChartWidth } from "./use-chart-width";
 
@@ -38,7 +39,9 @@ export function ExceedanceChart({
   const [ref, width] = useChartWidth<HTMLDivElement>();
   const m = DEFAULT_MARGINS;
   const { innerWidth, innerHeight } = innerSize(width, height, m);
-  const start = Math.max(0, fromYear === undefined ? 0 : years.findIndex((y) => y >= fromYear));
+  const from = Math.max(0, fromYear === undefined ? 0 : years.findIndex((y) => y >= fromYear));
+  // The year axis starts a decade before any chance leaves zero, not at the run's first year.
+  const start = firstActiveIndex(years, curves.map((c) => c.probability), from);
   const x = useMemo(() => scaleLinear().domain([years[start]!, years[years.length - 1]!]).range([0, innerWidth]), [years, start, innerWidth]);
   const y = useMemo(() => scaleLinear().domain([0, 100]).range([innerHeight, 0]), [innerHeight]);
   const sorted = [...curves].sort((a, b) => a.threshold - b.threshold);
@@ -49,7 +52,9 @@ export function ExceedanceChart({
       title={title}
       units={`% of members (chance of warming above each threshold, in ${unit})`}
       legend={sorted.map((c, i) => ({ label: `above ${c.threshold} ${unit}`, color: THRESHOLD_COLORS[i % THRESHOLD_COLORS.length]! }))}
-      description={`Share of members whose warming is above each threshold in that year.`}
+      description={`Share of members whose warming is above each threshold in that year.${
+        start > from ? ` Drawn from ${years[start]}: before then no threshold is exceeded by more than 0.05 % of members.` : ""
+      }`}
       table={
         <DataTable
           caption={title}

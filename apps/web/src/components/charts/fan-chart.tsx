@@ -4,6 +4,7 @@ import { AxisBottom, AxisLeft } from "./axes";
 import { BandKey } from "./band-key";
 import { BAND_LABELS } from "./band-labels";
 import { ChartFrame, DataTable } from "./chart-frame";
+import { paddedDomain } from "./chart-domains";
 import { DEFAULT_MARGINS, innerSize } from "./margins";
 import { FanReadout } from "./fan-readout";
 import { seriesColor, thresholdStyle } from "./palette";
@@ -64,7 +65,10 @@ function yearWindow(years: number[], from: number, to: number): [number, number]
   return [a, b + 1];
 }
 
-/** Y domain covering every visible band, padded a little and always including 0. */
+/**
+ * Y domain covering every visible band from 0 (warming read from the baseline), padded a
+ * little; below zero it stops just under the lowest band rather than at a rounded-out tick.
+ */
 export function fanYDomain(series: FanSeries[], from = -Infinity, to = Infinity): [number, number] {
   let lo = 0;
   let hi = 0;
@@ -73,8 +77,7 @@ export function fanYDomain(series: FanSeries[], from = -Infinity, to = Infinity)
     lo = Math.min(lo, min(s.p5.slice(a, b)) ?? 0);
     hi = Math.max(hi, max(s.p95.slice(a, b)) ?? 0);
   }
-  const pad = (hi - lo) * 0.04 || 0.5;
-  return [lo < 0 ? lo - pad : 0, hi + pad];
+  return paddedDomain(lo, hi, { includeZero: true });
 }
 
 /**
@@ -110,7 +113,8 @@ export function FanChart({
 
   const x = useMemo(() => scaleLinear().domain([x0, x1]).range([0, innerWidth]), [x0, x1, innerWidth]);
   const y = useMemo(
-    () => scaleLinear().domain(yDomain ?? fanYDomain(visible.length ? visible : series, x0, x1)).range([innerHeight, 0]).nice(),
+    // No nice(): rounding the domain out to whole ticks ran the axis a kelvin below the data.
+    () => scaleLinear().domain(yDomain ?? fanYDomain(visible.length ? visible : series, x0, x1)).range([innerHeight, 0]),
     [yDomain, visible, series, x0, x1, innerHeight],
   );
 
