@@ -86,7 +86,7 @@ test("analyst runs the approved version, reads the fan chart and horizons, compa
 
   // The horizon table shows what the API computed (2 decimals, K).
   const api = page.request;
-  const result = await (await api.get(`/api/runs/${runId}/result`)).json() as RunResult;
+  const result = (await (await api.get(`/api/runs/${runId}/result`)).json()) as RunResult;
   const highTab = page.getByRole("radiogroup", { name: "Pathway" }).getByRole("radio", { name: "Harbourline High" });
   await highTab.click();
   await expect(highTab).toHaveAttribute("aria-checked", "true");
@@ -108,7 +108,7 @@ test("analyst runs the approved version, reads the fan chart and horizons, compa
   // The address carries the run ids; this run is the reference.
   await expect(page).toHaveURL(/\/runs\/compare\?runs=[0-9a-f-]{36}$/);
   const second = page.getByLabel("Run 2", { exact: true });
-  await second.selectOption((await second.locator("option").filter({ hasText: names.runOnPrevious }).first().getAttribute("value")));
+  await second.selectOption(await second.locator("option").filter({ hasText: names.runOnPrevious }).first().getAttribute("value"));
   await page.getByLabel("Reference run: pathway").selectOption({ label: "Harbourline High" });
   await page.getByLabel("Run 2: pathway").selectOption({ label: "Harbourline High" });
   await expect(page.getByRole("figure", { name: `${names.runOnWider}: Harbourline High` })).toBeVisible();
@@ -121,12 +121,16 @@ test("analyst runs the approved version, reads the fan chart and horizons, compa
   // A third run: rows are labelled by run name, with differences from the reference.
   await page.getByRole("button", { name: "Add a run" }).click();
   const third = page.getByLabel("Run 3", { exact: true });
-  await third.selectOption((await third.locator("option").filter({ hasText: names.runOnPreviousOtherSeed }).getAttribute("value")));
+  await third.selectOption(await third.locator("option").filter({ hasText: names.runOnPreviousOtherSeed }).getAttribute("value"));
   await page.getByLabel("Run 3: pathway").selectOption({ label: "Harbourline High" });
   await expect(page).toHaveURL(/\?runs=[0-9a-f-]{36},[0-9a-f-]{36},[0-9a-f-]{36}&pathways=/);
   await expect(page.getByTestId("differing-settings")).toHaveText("Differ: model version, seed.");
   const table2100 = page.getByRole("table", { name: "Warming in 2100" });
-  await expect(table2100.getByRole("rowheader")).toHaveText([`${names.runOnWider} (reference)`, names.runOnPrevious, names.runOnPreviousOtherSeed]);
+  await expect(table2100.getByRole("rowheader")).toHaveText([
+    `${names.runOnWider} (reference)`,
+    names.runOnPrevious,
+    names.runOnPreviousOtherSeed,
+  ]);
   // Δ median of the third run: a signed difference in K.
   await expect(table2100.getByRole("row").nth(3).getByRole("cell").nth(2)).toHaveText(/^[+−]\d\.\d\d$|^0\.00$/);
   await page.getByRole("heading", { name: "Settings that differ" }).scrollIntoViewIfNeeded();

@@ -29,7 +29,8 @@ test("actuary applies the peril profiles and portfolio, exports the workbook, wh
   await page.getByRole("link", { name: "New run" }).click();
   await page.getByLabel("Name (optional)").fill(names.actuaryRun);
   await chooseVersion(page, names.widerDraft);
-  for (const p of ["Harbourline Middle", "Harbourline Low"]) await page.getByRole("checkbox", { name: new RegExp(`^${p} \\d{4}–`) }).check();
+  for (const p of ["Harbourline Middle", "Harbourline Low"])
+    await page.getByRole("checkbox", { name: new RegExp(`^${p} \\d{4}–`) }).check();
   await page.getByLabel("Members").fill(String(members));
   await page.getByLabel("Seed").fill(seed);
   const profiles = page.getByRole("group", { name: "Peril profiles" });
@@ -38,7 +39,7 @@ test("actuary applies the peril profiles and portfolio, exports the workbook, wh
   const portfolio = page.getByLabel("Portfolio baseline");
   await expect(portfolio).toBeEnabled();
   const option = portfolio.locator("option").filter({ hasText: "Harbourline Mutual property baseline" });
-  await portfolio.selectOption((await option.getAttribute("value")));
+  await portfolio.selectOption(await option.getAttribute("value"));
   await page.getByRole("button", { name: "Queue run" }).click();
 
   await expect(page).toHaveURL(/\/runs\/[0-9a-f-]{36}$/);
@@ -52,8 +53,12 @@ test("actuary applies the peril profiles and portfolio, exports the workbook, wh
   await snap(page, testInfo, "run-peril-lens", "run-peril-lens.png");
 
   // What the API serves for this run, to hold the workbook against.
-  const run = await (await page.request.get(`/api/runs/${runId}`)).json() as { seed: string; members: number; manifest: { resultHash: string; engineVersion: string } };
-  const result = await (await page.request.get(`/api/runs/${runId}/result`)).json() as RunResult;
+  const run = (await (await page.request.get(`/api/runs/${runId}`)).json()) as {
+    seed: string;
+    members: number;
+    manifest: { resultHash: string; engineVersion: string };
+  };
+  const result = (await (await page.request.get(`/api/runs/${runId}/result`)).json()) as RunResult;
 
   const downloadStarted = page.waitForEvent("download");
   await page.getByRole("link", { name: "Workbook (.xlsx)" }).click();
@@ -123,7 +128,11 @@ test("actuary applies the peril profiles and portfolio, exports the workbook, wh
   expect(section).not.toBe("");
   for (const h of middle.horizons) {
     // The screen's cells: the percentile figure, with the ± of its Monte Carlo interval below it.
-    const cells = await onScreen.getByRole("row").filter({ has: page.getByRole("rowheader", { name: String(h.year), exact: true }) }).getByRole("cell").allInnerTexts();
+    const cells = await onScreen
+      .getByRole("row")
+      .filter({ has: page.getByRole("rowheader", { name: String(h.year), exact: true }) })
+      .getByRole("cell")
+      .allInnerTexts();
     const shown = cells.map((c) => c.split("\n")[0]!.trim());
     // The screen writes the API's numbers to two decimals…
     expect(shown[2]).toBe(h.temperature.p50!.toFixed(2));

@@ -41,7 +41,11 @@ export default function RunComparePage() {
 
   return (
     <>
-      <PageHeader kicker="Runs" title="Compare" description="Two to four runs, or pathways of one run, side by side on the same warming axis; the first is the reference the differences are taken from." />
+      <PageHeader
+        kicker="Runs"
+        title="Compare"
+        description="Two to four runs, or pathways of one run, side by side on the same warming axis; the first is the reference the differences are taken from."
+      />
       {runs.isPending ? (
         <LoadingState />
       ) : runs.isError ? (
@@ -72,7 +76,11 @@ export default function RunComparePage() {
                     {result.data && (
                       <Field label={`${slotName(i)}: pathway`}>
                         {(p) => (
-                          <Select {...p} value={slot.pathwayId || result.data.pathways[0]?.id} onChange={(e) => setSlot(i, { pathwayId: e.target.value })}>
+                          <Select
+                            {...p}
+                            value={slot.pathwayId || result.data.pathways[0]?.id}
+                            onChange={(e) => setSlot(i, { pathwayId: e.target.value })}
+                          >
                             {result.data.pathways.map((pw) => (
                               <option key={pw.id} value={pw.id}>
                                 {pw.name}
@@ -84,7 +92,8 @@ export default function RunComparePage() {
                     )}
                     <div className="flex items-center gap-2">
                       {/* Every run says how it was made, so "approved versions only" reads at a glance. */}
-                      {run.data && (run.data.exploratory ? <ExploratoryStamp size="sm" /> : <ApprovedSeal size="sm" className="self-start" />)}
+                      {run.data &&
+                        (run.data.exploratory ? <ExploratoryStamp size="sm" /> : <ApprovedSeal size="sm" className="self-start" />)}
                       {slots.length > 2 && (
                         <Button variant="secondary" size="sm" onClick={() => save(slots.filter((_, k) => k !== i))}>
                           Remove
@@ -125,14 +134,24 @@ function Compared({ chosen }: { chosen: Array<{ slot: CompareSlot; run: Run; res
   return (
     <ChartSourceProvider source={source}>
       <Card>
-        <CardHeader title="Settings that differ" subtitle="What was changed between the runs, so a difference in the figures can be traced to its cause." />
+        <CardHeader
+          title="Settings that differ"
+          subtitle="What was changed between the runs, so a difference in the figures can be traced to its cause."
+        />
         <CardBody>
           <CompareSettings runs={chosen.map((x) => x.run)} />
         </CardBody>
       </Card>
       <Card className="mt-6">
         <CardBody>
-          <CompareView sides={chosen.map((x) => ({ label: x.run.name || x.run.id.slice(0, 8), result: x.result, pathwayId: x.slot.pathwayId || x.result.pathways[0]!.id, baseline: runBaseline(x.run) }))} />
+          <CompareView
+            sides={chosen.map((x) => ({
+              label: x.run.name || x.run.id.slice(0, 8),
+              result: x.result,
+              pathwayId: x.slot.pathwayId || x.result.pathways[0]!.id,
+              baseline: runBaseline(x.run),
+            }))}
+          />
         </CardBody>
       </Card>
     </ChartSourceProvider>

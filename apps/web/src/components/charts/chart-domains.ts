@@ -9,7 +9,11 @@
  * `includeZero` a positive range starts at 0 (warming read from the baseline), but a range
  * that dips below zero stops just under its lowest value, never at a rounded-out tick.
  */
-export function paddedDomain(lo: number, hi: number, { includeZero = false, pad = 0.04 }: { includeZero?: boolean; pad?: number } = {}): [number, number] {
+export function paddedDomain(
+  lo: number,
+  hi: number,
+  { includeZero = false, pad = 0.04 }: { includeZero?: boolean; pad?: number } = {},
+): [number, number] {
   if (!Number.isFinite(lo) || !Number.isFinite(hi)) throw new RangeError(`paddedDomain needs finite bounds, got [${lo}, ${hi}]`);
   const a = includeZero ? Math.min(lo, 0) : lo;
   const b = includeZero ? Math.max(hi, 0) : hi;
@@ -22,7 +26,12 @@ export function paddedDomain(lo: number, hi: number, { includeZero = false, pad 
  * above `floor` (a 0.05 % chance reads as 0.0 %), rounded down to a decade, and never before
  * `fromIndex`. A chart whose series never leave zero keeps its whole span.
  */
-export function firstActiveIndex(years: number[], series: number[][], fromIndex = 0, { floor = 0.0005, margin = 10 }: { floor?: number; margin?: number } = {}): number {
+export function firstActiveIndex(
+  years: number[],
+  series: number[][],
+  fromIndex = 0,
+  { floor = 0.0005, margin = 10 }: { floor?: number; margin?: number } = {},
+): number {
   let first = -1;
   for (let k = Math.max(0, fromIndex); k < years.length && first < 0; k++) if (series.some((s) => (s[k] ?? 0) > floor)) first = k;
   if (first < 0) return Math.max(0, fromIndex);

@@ -86,7 +86,14 @@ describe("chart downloads", () => {
     const years = [2000, 2010, 2020, 2030];
     render(
       <ChartSourceProvider source={{ lines: [runSourceLine(run, hash, true)] }}>
-        <ExceedanceChart title="Chance of exceeding" years={years} curves={[{ threshold: 1.5, probability: [0, 0.1, 0.4, 0.8] }, { threshold: 2, probability: [0, 0, 0.1, 0.3] }]} />
+        <ExceedanceChart
+          title="Chance of exceeding"
+          years={years}
+          curves={[
+            { threshold: 1.5, probability: [0, 0.1, 0.4, 0.8] },
+            { threshold: 2, probability: [0, 0, 0.1, 0.3] },
+          ]}
+        />
       </ChartSourceProvider>,
     );
     const { doc, name } = await downloadedSvg();

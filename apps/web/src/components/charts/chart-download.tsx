@@ -6,14 +6,27 @@ import { useChartSource } from "./chart-source";
  * "Download SVG / PNG" for the chart inside `frame`: the chart as a file with its title, units,
  * legend and a footnote naming the run(s), model version and result hash the page provides.
  */
-export function ChartDownload({ frame, title, units, legend }: { frame: RefObject<HTMLElement | null>; title: string; units: string; legend: LegendEntry[] }) {
+export function ChartDownload({
+  frame,
+  title,
+  units,
+  legend,
+}: {
+  frame: RefObject<HTMLElement | null>;
+  title: string;
+  units: string;
+  legend: LegendEntry[];
+}) {
   const source = useChartSource();
   const [error, setError] = useState<string | null>(null);
 
   function build() {
     const chart = frame.current?.querySelector<SVGSVGElement>("svg[role='img']");
     if (!chart) throw new Error("The chart is not drawn yet; show the chart, then download it");
-    const footnote = [...(source?.lines.length ? source.lines : ["Source not stated on this page."]), `Made with Plumeline on ${new Date().toISOString().slice(0, 10)}.`];
+    const footnote = [
+      ...(source?.lines.length ? source.lines : ["Source not stated on this page."]),
+      `Made with Plumeline on ${new Date().toISOString().slice(0, 10)}.`,
+    ];
     return buildChartSvg(chart, { title, units, legend, footnote });
   }
 

@@ -46,7 +46,12 @@ const TEXT_SIZE = 11;
 // Average glyph width of IBM Plex Sans at 11 px: enough to wrap legend rows and footnotes.
 const CHAR_WIDTH = 6.1;
 
-function el<K extends keyof SVGElementTagNameMap>(doc: Document, tag: K, attrs: Record<string, string | number>, text?: string): SVGElementTagNameMap[K] {
+function el<K extends keyof SVGElementTagNameMap>(
+  doc: Document,
+  tag: K,
+  attrs: Record<string, string | number>,
+  text?: string,
+): SVGElementTagNameMap[K] {
   const node = doc.createElementNS(SVG_NS, tag);
   for (const [k, v] of Object.entries(attrs)) node.setAttribute(k, String(v));
   if (text !== undefined) node.textContent = text;
@@ -87,7 +92,8 @@ function inlineStyles(source: SVGSVGElement, copy: SVGSVGElement) {
     if (style.length) target.setAttribute("style", style.join(";"));
     target.removeAttribute("class");
     target.removeAttribute("tabindex");
-    for (const a of Array.from(target.attributes)) if (a.name.startsWith("aria-") || a.name.startsWith("data-") || a.name === "role") target.removeAttribute(a.name);
+    for (const a of Array.from(target.attributes))
+      if (a.name.startsWith("aria-") || a.name.startsWith("data-") || a.name === "role") target.removeAttribute(a.name);
   });
   // Attributes that still name a CSS variable (the page's palette) get its value.
   for (const node of to)
@@ -159,7 +165,15 @@ export function buildChartSvg(chart: SVGSVGElement, meta: ChartExportMeta): { sv
         legend.appendChild(el(doc, "rect", { x, y: y - 9, width: 18, height: 10, rx: 2, fill: color, "fill-opacity": 0.6 }));
       else
         legend.appendChild(
-          el(doc, "line", { x1: x, x2: x + 18, y1: y - 4, y2: y - 4, stroke: color, "stroke-width": 2.5, ...(entry.dash ? { "stroke-dasharray": entry.dash } : {}) }),
+          el(doc, "line", {
+            x1: x,
+            x2: x + 18,
+            y1: y - 4,
+            y2: y - 4,
+            stroke: color,
+            "stroke-width": 2.5,
+            ...(entry.dash ? { "stroke-dasharray": entry.dash } : {}),
+          }),
         );
       legend.appendChild(el(doc, "text", { x: x + 24, y, "font-size": TEXT_SIZE, fill: "#1f2937" }, entry.label));
       x += itemWidth;

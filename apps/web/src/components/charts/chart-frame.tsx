@@ -68,7 +68,11 @@ export function DataTable({ columns, rows, caption }: { columns: string[]; rows:
       <thead className="sticky top-0 bg-surface">
         <tr>
           {columns.map((c, i) => (
-            <th key={c} scope="col" className={cx("border-b border-line-strong px-2 py-1 font-semibold text-muted", i === 0 ? "text-left" : "text-right")}>
+            <th
+              key={c}
+              scope="col"
+              className={cx("border-b border-line-strong px-2 py-1 font-semibold text-muted", i === 0 ? "text-left" : "text-right")}
+            >
               {c}
             </th>
           ))}

@@ -23,6 +23,10 @@ export function useChartSource(): ChartSource | null {
 }
 
 /** The footnote line for one run: name, model version name and number, result hash. */
-export function runSourceLine(run: { name: string; modelVersion: { name: string; versionNumber: number } }, resultHash: string, exploratory = false): string {
+export function runSourceLine(
+  run: { name: string; modelVersion: { name: string; versionNumber: number } },
+  resultHash: string,
+  exploratory = false,
+): string {
   return `Run “${run.name}” · model version ${run.modelVersion.name} v${run.modelVersion.versionNumber}${exploratory ? " (exploratory)" : ""} · result hash ${resultHash}`;
 }

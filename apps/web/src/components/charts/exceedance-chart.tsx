@@ -41,8 +41,18 @@ export function ExceedanceChart({
   const { innerWidth, innerHeight } = innerSize(width, height, m);
   const from = Math.max(0, fromYear === undefined ? 0 : years.findIndex((y) => y >= fromYear));
   // The year axis starts a decade before any chance leaves zero, not at the run's first year.
-  const start = firstActiveIndex(years, curves.map((c) => c.probability), from);
-  const x = useMemo(() => scaleLinear().domain([years[start]!, years[years.length - 1]!]).range([0, innerWidth]), [years, start, innerWidth]);
+  const start = firstActiveIndex(
+    years,
+    curves.map((c) => c.probability),
+    from,
+  );
+  const x = useMemo(
+    () =>
+      scaleLinear()
+        .domain([years[start]!, years[years.length - 1]!])
+        .range([0, innerWidth]),
+    [years, start, innerWidth],
+  );
   const y = useMemo(() => scaleLinear().domain([0, 100]).range([innerHeight, 0]), [innerHeight]);
   const sorted = [...curves].sort((a, b) => a.threshold - b.threshold);
   const idx = Array.from({ length: years.length - start }, (_, k) => start + k);
@@ -59,7 +69,9 @@ export function ExceedanceChart({
         <DataTable
           caption={title}
           columns={["Year", ...sorted.map((c) => `Chance > ${c.threshold} ${unit}`)]}
-          rows={idx.filter((k) => years[k]! % 10 === 0).map((k) => [years[k]!, ...sorted.map((c) => formatProbabilityTenths(c.probability[k]))])}
+          rows={idx
+            .filter((k) => years[k]! % 10 === 0)
+            .map((k) => [years[k]!, ...sorted.map((c) => formatProbabilityTenths(c.probability[k]))])}
         />
       }
     >
@@ -80,7 +92,11 @@ export function ExceedanceChart({
               <path
                 key={c.threshold}
                 data-threshold={c.threshold}
-                d={line<number>().x((k) => x(years[k]!)).y((k) => y(c.probability[k]! * 100))(idx) ?? ""}
+                d={
+                  line<number>()
+                    .x((k) => x(years[k]!))
+                    .y((k) => y(c.probability[k]! * 100))(idx) ?? ""
+                }
                 fill="none"
                 stroke={THRESHOLD_COLORS[i % THRESHOLD_COLORS.length]}
                 strokeWidth={2}

@@ -19,13 +19,38 @@ export function unitOf(label: string): string {
 }
 
 /** Plain multi-line chart over years (e.g. concentrations given in ppm or ppb). */
-export function LineChart({ title, years, series, yLabel, height = 240 }: { title: string; years: number[]; series: LineSeries[]; yLabel: string; height?: number }) {
+export function LineChart({
+  title,
+  years,
+  series,
+  yLabel,
+  height = 240,
+}: {
+  title: string;
+  years: number[];
+  series: LineSeries[];
+  yLabel: string;
+  height?: number;
+}) {
   const [ref, width] = useChartWidth<HTMLDivElement>();
   const m = DEFAULT_MARGINS;
   const { innerWidth, innerHeight } = innerSize(width, height, m);
   const [lo, hi] = extent(series.flatMap((s) => s.values)) as [number, number];
-  const x = useMemo(() => scaleLinear().domain([years[0]!, years.at(-1)!]).range([0, innerWidth]), [years, innerWidth]);
-  const y = useMemo(() => scaleLinear().domain([Math.min(0, lo ?? 0), hi ?? 1]).range([innerHeight, 0]).nice(), [lo, hi, innerHeight]);
+  const x = useMemo(
+    () =>
+      scaleLinear()
+        .domain([years[0]!, years.at(-1)!])
+        .range([0, innerWidth]),
+    [years, innerWidth],
+  );
+  const y = useMemo(
+    () =>
+      scaleLinear()
+        .domain([Math.min(0, lo ?? 0), hi ?? 1])
+        .range([innerHeight, 0])
+        .nice(),
+    [lo, hi, innerHeight],
+  );
   return (
     <ChartFrame
       title={title}
@@ -35,7 +60,10 @@ export function LineChart({ title, years, series, yLabel, height = 240 }: { titl
         <DataTable
           caption={title}
           columns={["Year", ...series.map((s) => s.label)]}
-          rows={years.map((yr, k) => ({ yr, k })).filter(({ yr }) => yr % 10 === 0).map(({ yr, k }) => [yr, ...series.map((s) => s.values[k]?.toFixed(2) ?? "–")])}
+          rows={years
+            .map((yr, k) => ({ yr, k }))
+            .filter(({ yr }) => yr % 10 === 0)
+            .map(({ yr, k }) => [yr, ...series.map((s) => s.values[k]?.toFixed(2) ?? "–")])}
         />
       }
     >
@@ -53,7 +81,17 @@ export function LineChart({ title, years, series, yLabel, height = 240 }: { titl
             <AxisLeft scale={y} width={innerWidth} label={yLabel} />
             <AxisBottom scale={x} height={innerHeight} width={innerWidth} label="Year" ticks={Math.max(2, Math.floor(innerWidth / 80))} />
             {series.map((s, i) => (
-              <path key={s.id} d={line<number>().x((_, k) => x(years[k]!)).y((v) => y(v))(s.values) ?? ""} fill="none" stroke={s.color ?? seriesColor(i)} strokeWidth={2} />
+              <path
+                key={s.id}
+                d={
+                  line<number>()
+                    .x((_, k) => x(years[k]!))
+                    .y((v) => y(v))(s.values) ?? ""
+                }
+                fill="none"
+                stroke={s.color ?? seriesColor(i)}
+                strokeWidth={2}
+              />
             ))}
           </g>
         </svg>

@@ -46,8 +46,22 @@ export function PercentileStrips({
   const lo = Math.min(...strips.map((s) => s.p5));
   const hi = Math.max(...strips.map((s) => s.p95));
   const pad = (hi - lo) * 0.05 || 0.5;
-  const x = useMemo(() => scaleLinear().domain([lo - pad, hi + pad]).range([0, innerWidth]).nice(), [lo, hi, pad, innerWidth]);
-  const yb = useMemo(() => scaleBand().domain(strips.map((s) => s.label)).range([0, innerHeight]).padding(0.35), [strips, innerHeight]);
+  const x = useMemo(
+    () =>
+      scaleLinear()
+        .domain([lo - pad, hi + pad])
+        .range([0, innerWidth])
+        .nice(),
+    [lo, hi, pad, innerWidth],
+  );
+  const yb = useMemo(
+    () =>
+      scaleBand()
+        .domain(strips.map((s) => s.label))
+        .range([0, innerHeight])
+        .padding(0.35),
+    [strips, innerHeight],
+  );
   return (
     <ChartFrame
       title={title}
@@ -81,7 +95,15 @@ export function PercentileStrips({
               return (
                 <g key={s.id} data-strip={s.id}>
                   <line x1={x(s.p5)} x2={x(s.p95)} y1={cy} y2={cy} stroke={color} strokeWidth={2} strokeOpacity={0.5} />
-                  <rect x={x(s.p17)} width={Math.max(1, x(s.p83) - x(s.p17))} y={cy - 6} height={12} rx={2} fill={color} fillOpacity={0.45} />
+                  <rect
+                    x={x(s.p17)}
+                    width={Math.max(1, x(s.p83) - x(s.p17))}
+                    y={cy - 6}
+                    height={12}
+                    rx={2}
+                    fill={color}
+                    fillOpacity={0.45}
+                  />
                   <line x1={x(s.p50)} x2={x(s.p50)} y1={cy - 9} y2={cy + 9} stroke={color} strokeWidth={3} />
                 </g>
               );

@@ -10,12 +10,13 @@ import { compareHorizons, formatSigned } from "../lib/compare-table";
  */
 export function CompareHorizonTables({ runs }: { runs: Array<{ label: string; pathway: PathwayResult }> }) {
   const horizons = compareHorizons(runs);
-  if (horizons.length === 0) return <p className="text-sm text-muted">The runs share no horizon year, so there is no table to set side by side.</p>;
+  if (horizons.length === 0)
+    return <p className="text-sm text-muted">The runs share no horizon year, so there is no table to set side by side.</p>;
   return (
     <section aria-label="Horizons compared" className="flex flex-col gap-4">
       <p className="text-xs text-muted">
-        Differences are against the reference run, {runs[0]!.label} (first row): median and 5–95 width in K, chances in percentage points (pp). Differences smaller than
-        the Monte Carlo precision of each run (see each run's horizon table) are noise.
+        Differences are against the reference run, {runs[0]!.label} (first row): median and 5–95 width in K, chances in percentage points
+        (pp). Differences smaller than the Monte Carlo precision of each run (see each run's horizon table) are noise.
       </p>
       {horizons.map((h) => (
         <Table key={h.year}>

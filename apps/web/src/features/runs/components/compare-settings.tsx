@@ -9,7 +9,9 @@ export function CompareSettings({ runs }: { runs: Run[] }) {
   return (
     <div className="flex flex-col gap-3">
       <p className="text-sm text-ink" data-testid="differing-settings">
-        {differing.length === 0 ? "The runs share every setting listed below." : `Differ: ${differing.map((r) => r.name.toLowerCase()).join(", ")}.`}
+        {differing.length === 0
+          ? "The runs share every setting listed below."
+          : `Differ: ${differing.map((r) => r.name.toLowerCase()).join(", ")}.`}
       </p>
       <Table>
         <caption className="sr-only">Settings of the compared runs</caption>

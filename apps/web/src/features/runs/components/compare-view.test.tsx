@@ -13,30 +13,40 @@ function result(offset = 0): RunResult {
     name: f.name,
     years: f.years,
     temperature: { p5: f.p5, p17: f.p17, p50: f.p50, p83: f.p83, p95: f.p95 },
-    horizons: [{ year: f.years.at(-1)!, temperature: { p5: at(f.p5), p17: at(f.p17), p50: at(f.p50), p83: at(f.p83), p95: at(f.p95) }, exceedance: { "2": 0.6 + offset / 10 } }],
+    horizons: [
+      {
+        year: f.years.at(-1)!,
+        temperature: { p5: at(f.p5), p17: at(f.p17), p50: at(f.p50), p83: at(f.p83), p95: at(f.p95) },
+        exceedance: { "2": 0.6 + offset / 10 },
+      },
+    ],
   } as unknown as PathwayResult;
   return { pathways: [pathway] } as unknown as RunResult;
 }
 
 describe("CompareView", () => {
   it("names the shared baseline on every warming axis and raises no warning", () => {
-    render(<CompareView
+    render(
+      <CompareView
         sides={[
           { label: "A", result: result(), pathwayId: "p1", baseline: [1850, 1900] },
           { label: "B", result: result(), pathwayId: "p1", baseline: [1850, 1900] },
         ]}
-      />);
+      />,
+    );
     expect(screen.getAllByText("Warming above 1850–1900 (K)").length).toBeGreaterThanOrEqual(3);
     expect(screen.queryByRole("note")).toBeNull();
   });
 
   it("warns when the two runs measure warming from different baselines", () => {
-    render(<CompareView
+    render(
+      <CompareView
         sides={[
           { label: "A", result: result(), pathwayId: "p1", baseline: [1850, 1900] },
           { label: "B", result: result(), pathwayId: "p1", baseline: [1995, 2014] },
         ]}
-      />);
+      />,
+    );
     expect(screen.getByRole("note")).toHaveTextContent("different baselines (1850–1900 and 1995–2014)");
     expect(screen.getAllByText("Warming above each run's baseline (K)").length).toBeGreaterThanOrEqual(3);
   });

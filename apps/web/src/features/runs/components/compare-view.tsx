@@ -24,33 +24,62 @@ export function CompareView({ sides }: { sides: CompareSide[] }) {
   const chosen = sides.map((s) => ({ ...s, pathway: s.result.pathways.find((p) => p.id === s.pathwayId) ?? s.result.pathways[0] }));
   if (chosen.some((s) => !s.pathway)) return <p className="text-sm text-muted">A chosen result holds no pathways.</p>;
   const ready = chosen as Array<(typeof chosen)[number] & { pathway: NonNullable<(typeof chosen)[number]["pathway"]> }>;
-  if (!ready.every((s) => hasFanPercentiles(s.pathway.temperature))) return <p className="text-sm text-muted">Comparison needs the 5/17/50/83/95 percentiles in every result.</p>;
+  if (!ready.every((s) => hasFanPercentiles(s.pathway.temperature)))
+    return <p className="text-sm text-muted">Comparison needs the 5/17/50/83/95 percentiles in every result.</p>;
   const axis = compareAxis(...ready.map((s) => s.baseline));
   const [fromYear, toYear] = compareYears(ready.map((s) => ({ years: s.pathway.years, baseline: s.baseline })));
-  const series: FanSeries[] = ready.map((s, i) => ({ ...toFanSeries(s.pathway), id: `run-${i}`, name: `${s.label}: ${s.pathway.name}`, color: seriesColor(i) }));
+  const series: FanSeries[] = ready.map((s, i) => ({
+    ...toFanSeries(s.pathway),
+    id: `run-${i}`,
+    name: `${s.label}: ${s.pathway.name}`,
+    color: seriesColor(i),
+  }));
   // On one chart the reference keeps filled bands; with one other run it is outlined (edges,
   // dashed median), with more only their medians are drawn, so the chart never becomes a tangle.
-  const together = series.map((s, i) => (i === 0 ? s : { ...s, treatment: series.length === 2 ? ("outline" as const) : ("median" as const) }));
+  const together = series.map((s, i) =>
+    i === 0 ? s : { ...s, treatment: series.length === 2 ? ("outline" as const) : ("median" as const) },
+  );
   const shared = fanYDomain(series, fromYear, toYear);
-  const common = ready[0]!.pathway.horizons.map((h) => h.year).filter((y) => ready.every((s) => s.pathway.horizons.some((h) => h.year === y)));
+  const common = ready[0]!.pathway.horizons
+    .map((h) => h.year)
+    .filter((y) => ready.every((s) => s.pathway.horizons.some((h) => h.year === y)));
   const strips: PercentileStrip[] = common.flatMap((year) =>
     ready.map((s, i) => {
       const t = s.pathway.horizons.find((h) => h.year === year)!.temperature;
-      return { id: `${year}-${i}`, label: `${year} · ${s.label}`, p5: t.p5!, p17: t.p17!, p50: t.p50!, p83: t.p83!, p95: t.p95!, color: seriesColor(i) };
+      return {
+        id: `${year}-${i}`,
+        label: `${year} · ${s.label}`,
+        p5: t.p5!,
+        p17: t.p17!,
+        p50: t.p50!,
+        p83: t.p83!,
+        p95: t.p95!,
+        color: seriesColor(i),
+      };
     }),
   );
   return (
     <div className="flex flex-col gap-6">
       {axis.mismatch && (
         <p role="note" className="rounded-md border border-ember-400 bg-ember-50 px-3 py-2 text-sm text-ember-800">
-          The runs measure warming from different baselines ({[...new Set(ready.map((s) => s.baseline!.join("–")))].join(" and ")}): equal heights on these charts are not
-          equal warming. Compare runs made with the same baseline for figures to quote.
+          The runs measure warming from different baselines ({[...new Set(ready.map((s) => s.baseline!.join("–")))].join(" and ")}): equal
+          heights on these charts are not equal warming. Compare runs made with the same baseline for figures to quote.
         </p>
       )}
       <CompareHorizonTables runs={ready.map((s) => ({ label: s.label, pathway: s.pathway }))} />
       <div className="grid gap-6 xl:grid-cols-2">
         {series.map((s) => (
-          <FanChart key={s.id} title={s.name} series={[s]} yLabel={axis.label} unit="K" fromYear={fromYear} toYear={toYear} yDomain={shared} height={320} />
+          <FanChart
+            key={s.id}
+            title={s.name}
+            series={[s]}
+            yLabel={axis.label}
+            unit="K"
+            fromYear={fromYear}
+            toYear={toYear}
+            yDomain={shared}
+            height={320}
+          />
         ))}
       </div>
       <FanChart

@@ -26,11 +26,21 @@ describe("compareYears", () => {
   const span = (a: number, b: number) => Array.from({ length: b - a + 1 }, (_, i) => a + i);
 
   it("starts at the earliest baseline start and ends at the last year all runs have", () => {
-    expect(compareYears([{ years: span(1750, 2100), baseline: [1850, 1900] }, { years: span(1750, 2150), baseline: [1850, 1900] }])).toEqual([1850, 2100]);
+    expect(
+      compareYears([
+        { years: span(1750, 2100), baseline: [1850, 1900] },
+        { years: span(1750, 2150), baseline: [1850, 1900] },
+      ]),
+    ).toEqual([1850, 2100]);
   });
 
   it("never starts before a run's first year", () => {
-    expect(compareYears([{ years: span(1900, 2100), baseline: [1850, 1900] }, { years: span(1750, 2100), baseline: [1850, 1900] }])).toEqual([1900, 2100]);
+    expect(
+      compareYears([
+        { years: span(1900, 2100), baseline: [1850, 1900] },
+        { years: span(1750, 2100), baseline: [1850, 1900] },
+      ]),
+    ).toEqual([1900, 2100]);
   });
 
   it("refuses an empty comparison", () => {

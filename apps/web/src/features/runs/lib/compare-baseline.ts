@@ -17,7 +17,8 @@ export function runBaseline(run: Run | undefined): [number, number] | undefined 
 export function compareAxis(...baselines: Array<[number, number] | undefined>): { label: string; mismatch: boolean } {
   if (baselines.length === 0 || baselines.some((b) => !b)) return { label: "Warming above baseline (K)", mismatch: false };
   const [first] = baselines as Array<[number, number]>;
-  if (baselines.every((b) => b![0] === first![0] && b![1] === first![1])) return { label: `Warming above ${first![0]}–${first![1]} (K)`, mismatch: false };
+  if (baselines.every((b) => b![0] === first![0] && b![1] === first![1]))
+    return { label: `Warming above ${first![0]}–${first![1]} (K)`, mismatch: false };
   return { label: "Warming above each run's baseline (K)", mismatch: true };
 }
 

@@ -23,6 +23,11 @@ describe("compare selection in the address", () => {
     const slots = readCompareSelection(new URLSearchParams("runs=a,b,c&pathways=,p2,"));
     expect(writeCompareSelection(slots)).toBe("runs=a,b,c&pathways=,p2,");
     expect(readCompareSelection(new URLSearchParams(writeCompareSelection(slots)))).toEqual(slots);
-    expect(writeCompareSelection([{ runId: "a", pathwayId: "" }, { runId: "", pathwayId: "" }])).toBe("runs=a,");
+    expect(
+      writeCompareSelection([
+        { runId: "a", pathwayId: "" },
+        { runId: "", pathwayId: "" },
+      ]),
+    ).toBe("runs=a,");
   });
 });

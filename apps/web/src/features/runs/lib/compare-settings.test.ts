@@ -24,7 +24,11 @@ function run(over: Partial<Run> & { constraint?: unknown; versionNumber?: number
 
 describe("compareSettings", () => {
   it("marks exactly the settings that differ", () => {
-    const rows = compareSettings([run({}), run({ versionNumber: 2, seed: "s2" }), run({ constraint: { from: 2001, to: 2020, observed: 1, sd: 0.1 } })]);
+    const rows = compareSettings([
+      run({}),
+      run({ versionNumber: 2, seed: "s2" }),
+      run({ constraint: { from: 2001, to: 2020, observed: 1, sd: 0.1 } }),
+    ]);
     const differing = rows.filter((r) => r.differs).map((r) => r.name);
     expect(differing).toEqual(["Model version", "Seed", "Constraint"]);
     expect(rows.find((r) => r.name === "Model version")!.values).toEqual(["Core v1", "Core v2", "Core v1"]);

@@ -3,11 +3,18 @@ import { describe, expect, it } from "vitest";
 import { compareHorizons, formatSigned } from "./compare-table";
 
 /** Invented horizon figures; the expected differences are plain subtraction, done by hand. */
-function pathway(name: string, horizons: Array<{ year: number; p5: number; p50: number; p95: number; ex: Record<string, number> }>): PathwayResult {
+function pathway(
+  name: string,
+  horizons: Array<{ year: number; p5: number; p50: number; p95: number; ex: Record<string, number> }>,
+): PathwayResult {
   return {
     id: name,
     name,
-    horizons: horizons.map((h) => ({ year: h.year, temperature: { p5: h.p5, p17: h.p50 - 0.1, p50: h.p50, p83: h.p50 + 0.1, p95: h.p95 }, exceedance: h.ex })),
+    horizons: horizons.map((h) => ({
+      year: h.year,
+      temperature: { p5: h.p5, p17: h.p50 - 0.1, p50: h.p50, p83: h.p50 + 0.1, p95: h.p95 },
+      exceedance: h.ex,
+    })),
   } as unknown as PathwayResult;
 }
 
@@ -53,7 +60,12 @@ describe("compareHorizons", () => {
 
   it("names a horizon that lacks a percentile the comparison needs", () => {
     const broken = { ...ref, horizons: [{ year: 2050, temperature: { p50: 2 }, exceedance: {} }] } as unknown as PathwayResult;
-    expect(() => compareHorizons([{ label: "a", pathway: broken }, { label: "b", pathway: broken }])).toThrow(/horizon 2050 lacks/);
+    expect(() =>
+      compareHorizons([
+        { label: "a", pathway: broken },
+        { label: "b", pathway: broken },
+      ]),
+    ).toThrow(/horizon 2050 lacks/);
   });
 });
 

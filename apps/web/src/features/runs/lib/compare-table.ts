@@ -44,7 +44,8 @@ export function compareHorizons(runs: CompareInput[]): CompareHorizon[] {
       .sort((a, b) => Number(a) - Number(b));
     const figures = at.map((h) => {
       const { p5, p50, p95 } = h.temperature;
-      if (p5 === undefined || p50 === undefined || p95 === undefined) throw new RangeError(`horizon ${year} lacks the 5th, 50th or 95th percentile needed to compare`);
+      if (p5 === undefined || p50 === undefined || p95 === undefined)
+        throw new RangeError(`horizon ${year} lacks the 5th, 50th or 95th percentile needed to compare`);
       return { median: p50, width: p95 - p5, exceedance: Object.fromEntries(thresholds.map((t) => [t, h.exceedance[t]!])) };
     });
     const base = figures[0]!;
