@@ -44,11 +44,11 @@ export function CompareHorizonTables({ runs }: { runs: Array<{ label: string; pa
           <tbody>
             {h.rows.map((r) => (
               <tr key={r.runLabel + r.pathwayName}>
-                <Th scope="row" className="text-sm normal-case tracking-normal text-ink">
+                <th scope="row" className="border-b border-line px-3 py-2 text-left text-sm font-medium text-ink">
                   {r.runLabel}
                   {r.reference && " "}
                   {r.reference && <span className="ml-1 text-xs font-normal text-muted">(reference)</span>}
-                </Th>
+                </th>
                 <Td>{r.pathwayName}</Td>
                 <Td numeric className="font-semibold text-ink">
                   {r.median.toFixed(2)}

@@ -29,10 +29,10 @@ export function CompareSettings({ runs }: { runs: Run[] }) {
         <tbody>
           {[...differing, ...rows.filter((r) => !r.differs)].map((row) => (
             <tr key={row.name} data-differs={row.differs} className={row.differs ? "bg-ember-50" : undefined}>
-              <Th scope="row" className="text-sm normal-case tracking-normal text-ink">
+              <th scope="row" className="border-b border-line px-3 py-2 text-left text-sm font-medium text-ink">
                 {row.name}
                 {row.differs && <span className="ml-1 text-xs font-normal text-ember-800">differs</span>}
-              </Th>
+              </th>
               {row.values.map((v, i) => (
                 <Td key={i} className="break-words text-sm">
                   {v}
