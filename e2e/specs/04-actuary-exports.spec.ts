@@ -2,7 +2,7 @@ import { expect, test } from "@playwright/test";
 import { members, names } from "../support/names";
 import { openFromNav } from "../support/navigation";
 import { downloadChart } from "../support/chart-download";
-import { lineCells, pdfPages } from "../support/pdf-text";
+import { pdfPages } from "../support/pdf-text";
 import { chooseVersion, runIdFromUrl, type RunResult } from "../support/runs";
 import { snap } from "../support/screenshots";
 import { signIn } from "../support/sign-in";
@@ -60,7 +60,9 @@ test("actuary applies the peril profiles and portfolio, exports the workbook, wh
   };
   const result = (await (await page.request.get(`/api/runs/${runId}/result`)).json()) as RunResult;
 
-  const downloadStarted = page.waitForEvent("download");
+  // The workbook's Members sheet is recomputed from the stored spec before the file is sent:
+  // 15–20 s measured on a loaded two-core machine, above the 20 s default wait.
+  const downloadStarted = page.waitForEvent("download", { timeout: 90_000 });
   await page.getByRole("link", { name: "Workbook (.xlsx)" }).click();
   const download = await downloadStarted;
   expect(download.suggestedFilename()).toMatch(/\.xlsx$/);
@@ -99,7 +101,7 @@ test("actuary applies the peril profiles and portfolio, exports the workbook, wh
 
   // A chart leaves the product with its title, units, legend and a footnote naming the run,
   // the model version and the result hash; its file name names the run and the chart.
-  await page.getByRole("radiogroup", { name: "Pathway" }).getByRole("radio", { name: "Harbourline Middle" }).click();
+  await page.getByRole("radiogroup", { name: "Pathway", exact: true }).getByRole("radio", { name: "Harbourline Middle" }).click();
   const fan = page.getByRole("figure", { name: /^Warming above 1850–1900 \(K\)$/ });
   const chart = await downloadChart(page, fan, testInfo);
   expect(chart.svgName).toBe("plumeline-q3-orsa-flood-and-heat-lens-warming-above-1850-1900-k.svg");
@@ -112,7 +114,7 @@ test("actuary applies the peril profiles and portfolio, exports the workbook, wh
 
   // The report: its text, as pdftotext extracts it, holds the result hash and the horizon
   // figures exactly as the run page's horizon table writes them.
-  const reportStarted = page.waitForEvent("download");
+  const reportStarted = page.waitForEvent("download", { timeout: 60_000 });
   await page.getByRole("link", { name: "Report (PDF)" }).click();
   const report = await reportStarted;
   expect(report.suggestedFilename()).toMatch(/\.pdf$/);
@@ -137,15 +139,15 @@ test("actuary applies the peril profiles and portfolio, exports the workbook, wh
     // The screen writes the API's numbers to two decimals…
     expect(shown[2]).toBe(h.temperature.p50!.toFixed(2));
     // …and the report's row for that year holds the same figures in the same order.
-    const row = section.split("\n").find((l) => lineCells(l)[0] === String(h.year) && lineCells(l).includes(shown[2]!));
-    expect(row, `report row for ${h.year}`).toBeDefined();
-    expect(lineCells(row!).slice(1)).toEqual(shown);
+    const row = [String(h.year), ...shown].join(" ");
+    expect(section.split("\n"), `report row for ${h.year}`).toContain(row);
   }
 
   // The export is on record.
   await openFromNav(page, "Exports");
-  const record = page.getByRole("row").filter({ hasText: names.actuaryRun }).first();
-  await expect(record).toBeVisible();
-  await expect(record).toContainText(/xlsx|workbook/i);
+  // Both files are on record: the workbook and, after it, the report.
+  const records = page.getByRole("row").filter({ hasText: names.actuaryRun });
+  await expect(records.filter({ hasText: /\.xlsx/ }).first()).toBeVisible();
+  await expect(records.filter({ hasText: /report\.pdf/ }).first()).toBeVisible();
   await snap(page, testInfo, "exports");
 });

@@ -232,27 +232,24 @@ export function downloadSvg(svg: string, fileName: string) {
 
 /** Draws the SVG into a canvas at `scale`× (2× reads sharply on slides and print) and saves a PNG. */
 export async function downloadPng(svg: string, width: number, height: number, fileName: string, scale = 2) {
-  const url = URL.createObjectURL(new Blob([svg], { type: "image/svg+xml;charset=utf-8" }));
-  try {
-    const image = new Image();
-    image.width = width;
-    image.height = height;
-    await new Promise<void>((resolve, reject) => {
-      image.onload = () => resolve();
-      image.onerror = () => reject(new Error("The chart could not be drawn as an image"));
-      image.src = url;
-    });
-    const canvas = document.createElement("canvas");
-    canvas.width = Math.round(width * scale);
-    canvas.height = Math.round(height * scale);
-    const ctx = canvas.getContext("2d");
-    if (!ctx) throw new Error("This browser cannot draw to a canvas, so no PNG can be made; download the SVG instead");
-    ctx.scale(scale, scale);
-    ctx.drawImage(image, 0, 0, width, height);
-    const blob = await new Promise<Blob | null>((resolve) => canvas.toBlob(resolve, "image/png"));
-    if (!blob) throw new Error("The chart could not be encoded as PNG");
-    saveBlob(blob, fileName);
-  } finally {
-    URL.revokeObjectURL(url);
-  }
+  // A data: URL, not a blob: one: the app's content security policy lets images load from
+  // 'self' and data: only, so a blob: image would fail to load.
+  const image = new Image();
+  image.width = width;
+  image.height = height;
+  await new Promise<void>((resolve, reject) => {
+    image.onload = () => resolve();
+    image.onerror = () => reject(new Error("The chart could not be drawn as an image"));
+    image.src = `data:image/svg+xml;charset=utf-8,${encodeURIComponent(svg)}`;
+  });
+  const canvas = document.createElement("canvas");
+  canvas.width = Math.round(width * scale);
+  canvas.height = Math.round(height * scale);
+  const ctx = canvas.getContext("2d");
+  if (!ctx) throw new Error("This browser cannot draw to a canvas, so no PNG can be made; download the SVG instead");
+  ctx.scale(scale, scale);
+  ctx.drawImage(image, 0, 0, width, height);
+  const blob = await new Promise<Blob | null>((resolve) => canvas.toBlob(resolve, "image/png"));
+  if (!blob) throw new Error("The chart could not be encoded as PNG");
+  saveBlob(blob, fileName);
 }
