@@ -18,39 +18,17 @@ export function unitOf(label: string): string {
   return /\(([^()]+)\)\s*$/.exec(label)?.[1] ?? label;
 }
 
-/** Plain multi-line chart over years (e.g. concentrations given in ppm or ppb). */
-export function LineChart({
-  title,
-  years,
-  series,
-  yLabel,
-  height = 240,
-}: {
-  title: string;
-  years: number[];
-  series: LineSeries[];
-  yLabel: string;
-  height?: number;
-}) {
+/**
+ * Plain multi-line chart over years (e.g. concentrations given in ppm or ppb). A NaN value is
+ * a year the series does not cover: the line breaks there and the table shows "–".
+ */
+export function LineChart({ title, years, series, yLabel, height = 240 }: { title: string; years: number[]; series: LineSeries[]; yLabel: string; height?: number }) {
   const [ref, width] = useChartWidth<HTMLDivElement>();
   const m = DEFAULT_MARGINS;
   const { innerWidth, innerHeight } = innerSize(width, height, m);
   const [lo, hi] = extent(series.flatMap((s) => s.values)) as [number, number];
-  const x = useMemo(
-    () =>
-      scaleLinear()
-        .domain([years[0]!, years.at(-1)!])
-        .range([0, innerWidth]),
-    [years, innerWidth],
-  );
-  const y = useMemo(
-    () =>
-      scaleLinear()
-        .domain([Math.min(0, lo ?? 0), hi ?? 1])
-        .range([innerHeight, 0])
-        .nice(),
-    [lo, hi, innerHeight],
-  );
+  const x = useMemo(() => scaleLinear().domain([years[0]!, years.at(-1)!]).range([0, innerWidth]), [years, innerWidth]);
+  const y = useMemo(() => scaleLinear().domain([Math.min(0, lo ?? 0), hi ?? 1]).range([innerHeight, 0]).nice(), [lo, hi, innerHeight]);
   return (
     <ChartFrame
       title={title}
@@ -60,10 +38,10 @@ export function LineChart({
         <DataTable
           caption={title}
           columns={["Year", ...series.map((s) => s.label)]}
-          rows={years
-            .map((yr, k) => ({ yr, k }))
-            .filter(({ yr }) => yr % 10 === 0)
-            .map(({ yr, k }) => [yr, ...series.map((s) => s.values[k]?.toFixed(2) ?? "–")])}
+          rows={years.map((yr, k) => ({ yr, k })).filter(({ yr }) => yr % 10 === 0).map(({ yr, k }) => [yr, ...series.map((s) => {
+            const v = s.values[k];
+            return v !== undefined && Number.isFinite(v) ? v.toFixed(2) : "–";
+          })])}
         />
       }
     >
@@ -81,17 +59,13 @@ export function LineChart({
             <AxisLeft scale={y} width={innerWidth} label={yLabel} />
             <AxisBottom scale={x} height={innerHeight} width={innerWidth} label="Year" ticks={Math.max(2, Math.floor(innerWidth / 80))} />
             {series.map((s, i) => (
-              <path
-                key={s.id}
-                d={
+              <path key={s.id} d={
                   line<number>()
+                    .defined((v) => Number.isFinite(v))
                     .x((_, k) => x(years[k]!))
                     .y((v) => y(v))(s.values) ?? ""
                 }
-                fill="none"
-                stroke={s.color ?? seriesColor(i)}
-                strokeWidth={2}
-              />
+                data-series={s.id} fill="none" stroke={s.color ?? seriesColor(i)} strokeWidth={2} />
             ))}
           </g>
         </svg>
