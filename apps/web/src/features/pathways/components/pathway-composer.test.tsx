@@ -132,7 +132,11 @@ describe("PathwayComposer", () => {
     await userEvent.paste("x".repeat(1950));
     await userEvent.click(screen.getByRole("button", { name: "Save as new pathway" }));
     const recipeLength = 'Composed in Plumeline from "Base ramp" (id p-base): 1. CO2 scaled by 1 in 2000–2003.'.length;
-    expect(screen.getByText(`must be at most 2000 characters — the recipe alone takes ${recipeLength}; shorten the description or use fewer steps`)).toBeInTheDocument();
+    expect(
+      screen.getByText(
+        `must be at most 2000 characters — the recipe alone takes ${recipeLength}; shorten the description or use fewer steps`,
+      ),
+    ).toBeInTheDocument();
     expect(fetch.count("POST", "/api/pathways")).toBe(0);
   });
 });
