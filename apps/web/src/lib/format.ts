@@ -12,7 +12,7 @@ export {
   moneyUnit,
   type MoneyScale,
 } from "@plumeline/contracts";
-import { formatFixed, formatPercent } from "@plumeline/contracts";
+import { formatFixed, formatPercent, formatUtcDateTime } from "@plumeline/contracts";
 
 export const formatNumber = (v: number | null | undefined, digits = 2) =>
   v === null || v === undefined || !Number.isFinite(v) ? "–" : formatFixed(v, digits);
@@ -37,10 +37,7 @@ export const formatInteger = (v: number | null | undefined) =>
  * for every reader whatever their browser's zone, and the same as the exported workbook.
  */
 export function formatDateTime(iso: string | null | undefined): string {
-  if (!iso) return "–";
-  const d = new Date(iso);
-  if (Number.isNaN(d.getTime())) return iso;
-  return `${d.toISOString().slice(0, 10)} ${d.toISOString().slice(11, 16)} UTC`;
+  return iso ? formatUtcDateTime(iso) : "–";
 }
 
 /** A day as "5 Dec 2026", taken in UTC like the times, so a date and its time never disagree. */

@@ -144,7 +144,8 @@ function Editor({ record, viewer }: { record: PerilProfileRecord | undefined; vi
       <div className="mb-4 empty:hidden">
         <PerilActionError error={copy.error ?? remove.error} />
       </div>
-      <div className="grid gap-6 xl:grid-cols-[1fr_1fr]">
+      {/* minmax(0, 1fr): the chart's drawn width must not squeeze the form column (it did, to a 66 px Name box at 1280 px). */}
+      <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
         <Card>
           <CardHeader title="Profile" />
           <CardBody>

@@ -32,8 +32,10 @@ export function PerilProfileForm({
   };
 
   return (
-    <div className="flex flex-col gap-4">
-      <div className="grid gap-4 sm:grid-cols-2">
+    // Container queries, not viewport ones: the form sits beside its preview on wide screens, so
+    // its own width (not the window's) decides when two fields fit side by side.
+    <div className="@container flex flex-col gap-4">
+      <div className="grid gap-4 @lg:grid-cols-2">
         <Field label="Name" error={errors.name}>
           {(a) => <Input {...a} {...text("name")} />}
         </Field>
@@ -97,7 +99,7 @@ export function PerilProfileForm({
       {draft.kind === "per-kelvin" ? (
         <fieldset className="rounded-md border border-line p-3">
           <legend className="px-1 text-xs text-muted">multiplier = (1 + r)^(warming − warming in risk view), r uncertain</legend>
-          <div className="grid gap-3 sm:grid-cols-2">
+          <div className="grid gap-3 @2xl:grid-cols-2">
             <Field label="Distribution of r">
               {(a) => (
                 <Select {...a} value={draft.rateType} disabled={readOnly} onChange={(e) => setRateType(e.target.value as RateType)}>
