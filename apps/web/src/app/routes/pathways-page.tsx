@@ -20,7 +20,7 @@ export default function PathwaysPage() {
           canWrite && (
             <>
               <ButtonLink to={paths.pathwayCompose.build()} variant="secondary">
-                Compose from JSON
+                Compose a pathway
               </ButtonLink>
               <ButtonLink to={paths.pathwayUpload.build()} variant="primary">
                 Upload CSV / XLSX
@@ -38,7 +38,7 @@ export default function PathwaysPage() {
           </div>
         ) : pathways.data.length === 0 ? (
           <div className="p-4">
-            <EmptyState title="No pathways yet">Upload a CSV or XLSX file, or compose one from JSON.</EmptyState>
+            <EmptyState title="No pathways yet">Upload a CSV or XLSX file, or compose one from an existing pathway.</EmptyState>
           </div>
         ) : (
           <PathwaysTable pathways={pathways.data} />
