@@ -9,7 +9,9 @@ import { signIn } from "../support/sign-in";
  */
 test.describe.configure({ mode: "serial" });
 
-test("the model-version editor asks before leaving, keeps a draft across a reload, and forgets it when discarded", async ({ page }, testInfo) => {
+test("the model-version editor asks before leaving, keeps a draft across a reload, and forgets it when discarded", async ({
+  page,
+}, testInfo) => {
   await signIn(page, "analyst");
   await page.goto("/model-versions/new");
   await expect(page.getByRole("heading", { level: 1, name: "New model version" })).toBeVisible();
@@ -87,6 +89,8 @@ async function expectSelectsFit(page: Page) {
       // Room for the text plus the padding and the arrow (about 40 px), inside the card.
       return textWidth + 40 <= box.width && (!card || box.right <= card.right);
     });
-    expect(fits, `the select showing "${await select.evaluate((el: HTMLSelectElement) => el.selectedOptions[0]?.textContent)}" fits`).toBe(true);
+    expect(fits, `the select showing "${await select.evaluate((el: HTMLSelectElement) => el.selectedOptions[0]?.textContent)}" fits`).toBe(
+      true,
+    );
   }
 }

@@ -49,7 +49,10 @@ describe("version numbers count within a version's own line of descent", () => {
     const back = await analyst.patch(`/api/model-versions/${child.id}`).send({ name: "Edit base" });
     expect(back.body.versionNumber).toBe(2);
 
-    const audit = await t.ctx.models.AuditEvent.findAll({ where: { action: "model-version.updated", entityId: child.id }, order: [["createdAt", "ASC"]] });
+    const audit = await t.ctx.models.AuditEvent.findAll({
+      where: { action: "model-version.updated", entityId: child.id },
+      order: [["createdAt", "ASC"]],
+    });
     expect(audit.map((a) => a.summary)).toEqual([
       'Draft "Edit base" v2 edited (name); renumbered v1 in its line of descent.',
       'Draft "Edit stress" v1 edited (notes).',

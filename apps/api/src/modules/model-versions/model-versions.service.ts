@@ -197,13 +197,16 @@ export async function updateModelVersion(ctx: Ctx, user: RequestUser, id: string
     const changes: Record<string, unknown> = Object.fromEntries(Object.entries(body).filter(([, v]) => v !== undefined));
     const before = `"${row.name}" v${row.versionNumber}`; // as it was known until this edit
     // A new name or parent can move the draft to another line of descent, and so renumber it.
+    let renumbered = "";
     if (body.name !== undefined || body.parentId !== undefined) {
       const parentId = body.parentId !== undefined ? body.parentId : row.parentId;
       const parent = body.parentId !== undefined ? newParent : parentId ? await ctx.models.ModelVersion.findByPk(parentId, { transaction }) : null;
       const place = await placeInLine(ctx, { id: row.id, name: body.name ?? row.name, parent }, transaction);
-      if (place.familyId !== row.familyId) Object.assign(changes, place);
+      if (place.familyId !== row.familyId) {
+        Object.assign(changes, place);
+        renumbered = `; renumbered v${place.versionNumber} in its line of descent`;
+      }
     }
-    const renumbered = changes.versionNumber !== undefined ? `; renumbered v${String(changes.versionNumber)} in its line of descent` : "";
     await row.update(changes, { transaction });
     await recordAudit(
       ctx,

@@ -31,14 +31,13 @@ describe("peril-profile editor keeps unsaved work", () => {
     answerProfile();
     const first = renderRoute(<PerilProfileEditor viewer={owner} />, at);
     const name = await screen.findByRole("textbox", { name: "Name" });
-    await userEvent.clear(name);
-    await userEvent.type(name, "Flood, Northmere (wetter)");
+    await userEvent.type(name, " wet"); // a few keystrokes: each one redraws the whole form
     const kept = JSON.parse(localStorage.getItem(key) ?? "null") as { savedAt: string; value: { name: string } };
-    expect(kept.value.name).toBe("Flood, Northmere (wetter)");
+    expect(kept.value.name).toBe("Flood, Northmere wet");
     first.unmount(); // the reload
 
     renderRoute(<PerilProfileEditor viewer={owner} />, at);
-    expect(await screen.findByRole("textbox", { name: "Name" })).toHaveValue("Flood, Northmere (wetter)");
+    expect(await screen.findByRole("textbox", { name: "Name" })).toHaveValue("Flood, Northmere wet");
     expect(screen.getByText(`Restored unsaved draft from ${formatDateTime(kept.savedAt)}.`)).toBeInTheDocument();
     await userEvent.click(screen.getByRole("button", { name: "Discard it" }));
     expect(screen.getByRole("textbox", { name: "Name" })).toHaveValue("Flood, Northmere");

@@ -94,7 +94,11 @@ export function PerilProfileForm({
           />
         )}
       </div>
-      {errors.scaling && <p className="text-xs font-medium text-danger" role="alert">{errors.scaling}</p>}
+      {errors.scaling && (
+        <p className="text-xs font-medium text-danger" role="alert">
+          {errors.scaling}
+        </p>
+      )}
 
       {draft.kind === "per-kelvin" ? (
         <fieldset className="rounded-md border border-line p-3">
@@ -115,7 +119,12 @@ export function PerilProfileForm({
               <div className="grid grid-cols-2 gap-3">
                 <Field label="Range covers">
                   {(a) => (
-                    <Select {...a} value={draft.coverage} disabled={readOnly} onChange={(e) => set("coverage", e.target.value as "90" | "66")}>
+                    <Select
+                      {...a}
+                      value={draft.coverage}
+                      disabled={readOnly}
+                      onChange={(e) => set("coverage", e.target.value as "90" | "66")}
+                    >
                       <option value="90">5–95 %</option>
                       <option value="66">17–83 %</option>
                     </Select>
@@ -123,7 +132,12 @@ export function PerilProfileForm({
                 </Field>
                 <Field label="Fitted as">
                   {(a) => (
-                    <Select {...a} value={draft.shape} disabled={readOnly} onChange={(e) => set("shape", e.target.value as "lognormal" | "split-normal")}>
+                    <Select
+                      {...a}
+                      value={draft.shape}
+                      disabled={readOnly}
+                      onChange={(e) => set("shape", e.target.value as "lognormal" | "split-normal")}
+                    >
                       <option value="split-normal">split-normal</option>
                       <option value="lognormal">lognormal</option>
                     </Select>
@@ -145,12 +159,20 @@ export function PerilProfileForm({
               </Field>
             ))}
           </div>
-          {errors["scaling.rate"] && <p className="mt-2 text-xs font-medium text-danger" role="alert">{errors["scaling.rate"]}</p>}
+          {errors["scaling.rate"] && (
+            <p className="mt-2 text-xs font-medium text-danger" role="alert">
+              {errors["scaling.rate"]}
+            </p>
+          )}
         </fieldset>
       ) : (
         <ReturnPeriodTablesEditor value={draft} onChange={(part) => onChange({ ...draft, ...part })} errors={errors} readOnly={readOnly} />
       )}
-      <Field label="Source" hint="Where the scaling comes from (publication, table or figure) and how sure it is, or “illustrative”." error={errors.source}>
+      <Field
+        label="Source"
+        hint="Where the scaling comes from (publication, table or figure) and how sure it is, or “illustrative”."
+        error={errors.source}
+      >
         {(a) => <Textarea {...a} {...text("source")} />}
       </Field>
     </div>
