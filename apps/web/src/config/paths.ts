@@ -77,6 +77,7 @@ export const paths = {
 
   adminUsers: route({ path: "/admin/users", build: () => "/admin/users", permission: "users:manage", purpose: "Managing users and roles" }),
   adminAudit: route({ path: "/admin/audit", build: () => "/admin/audit", permission: "audit:read", purpose: "Reading the audit log" }),
+  adminSettings: route({ path: "/admin/review-policy", build: () => "/admin/review-policy", permission: "settings:manage", purpose: "Setting the review policy" }),
   adminOutbox: route({ path: "/admin/outbox", build: (id?: string) => `/admin/outbox${qs({ message: id })}`, permission: "outbox:read", purpose: "Reading the outbox" }),
 } as const;
 
