@@ -26,7 +26,8 @@ afterEach(() => {
   vi.restoreAllMocks();
 });
 
-describe("peril-profile editor keeps unsaved work", () => {
+// A whole editor redraws on every keystroke: on a busy shared machine a test can pass 5 s of wall time.
+describe("peril-profile editor keeps unsaved work", { timeout: 20_000 }, () => {
   it("keeps typed changes across a reload and says where the form started from; discarding brings back the saved profile", async () => {
     answerProfile();
     const first = renderRoute(<PerilProfileEditor viewer={owner} />, at);

@@ -28,7 +28,8 @@ function renderEditor(onSave = vi.fn()) {
 
 afterEach(() => localStorage.clear());
 
-describe("ModelEditorWithDraft", () => {
+// A whole editor redraws on every keystroke: on a busy shared machine a test can pass 5 s of wall time.
+describe("ModelEditorWithDraft", { timeout: 20_000 }, () => {
   it("restores a kept draft, distributions included, and discarding returns to the saved version", () => {
     const kept = loadedForm(initial);
     kept.notes = "Wider ECS tail, per the reviewer's note.";
