@@ -10,6 +10,8 @@ export const names = {
   runOnWider: "Wider aerosol–cloud: three pathways",
   runOnPrevious: "Core v1: three pathways",
   actuaryRun: "Q3 ORSA: flood and heat lens",
+  hotterDraft: "Core assumptions, ECS median 4 K trial",
+  runToCancel: "Large run, cancelled",
   invitedUser: { email: "newcomer@harbourline.example", name: "Noor Castellan" },
 } as const;
 
