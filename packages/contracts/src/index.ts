@@ -21,4 +21,5 @@ export * from "./api/perils.js";
 export * from "./api/run-statements.js";
 export * from "./format/number-format.js";
 export * from "./format/input-labels.js";
+export * from "./format/time-format.js";
 export * from "./compose/index.js";

@@ -61,7 +61,8 @@ export const paths = {
   runNew: route({ path: "/runs/new", build: (versionId?: string) => `/runs/new${qs({ version: versionId })}`, permission: "runs:create", purpose: "Starting runs" }),
   runCompare: route({
     path: "/runs/compare",
-    build: (a?: string, b?: string) => `/runs/compare${qs({ a, b })}`,
+    // The run ids in the address (?runs=a,b,c), so a comparison can be bookmarked and shared.
+    build: (...runIds: string[]) => `/runs/compare${runIds.length ? `?runs=${runIds.map(encodeURIComponent).join(",")}` : ""}`,
     permission: "runs:read",
     purpose: "Comparing runs",
   }),

@@ -8,6 +8,7 @@ import {
   formatKelvin,
   formatMoney,
   formatProbability,
+  formatUtcDateTime,
   inputLabel,
   moneyScale,
   moneyUnit,
@@ -31,7 +32,8 @@ const percentileKeys = (set: Record<string, unknown>) =>
     .sort((a, b) => Number(a.slice(1)) - Number(b.slice(1)));
 const byNumber = (a: string, b: string) => Number(a) - Number(b);
 const year = (v: number | null | undefined) => (v === null || v === undefined || !Number.isFinite(v) ? "–" : String(Math.round(v)));
-const date = (iso: string | null) => (iso ? iso.replace("T", " ").slice(0, 16) + " UTC" : "–");
+// The one way Plumeline writes a time (UTC, to the minute, saying so), as on screen and in the workbook.
+const date = (iso: string | null) => (iso ? formatUtcDateTime(iso) : "–");
 
 /**
  * The run report as a PDF a board or supervisor reads: what the run is for, which model

@@ -3,7 +3,10 @@ import { useQueryClient } from "@tanstack/react-query";
 import { paths } from "@/config/paths";
 import { useMe } from "@/features/auth/api/get-me";
 import { exportsRootKey } from "@/features/exports/api/get-exports";
+import { useModelVersion } from "@/features/model-versions/api/get-model-version";
 import { useRun } from "@/features/runs/api/get-run";
+import { RunLoadError } from "@/features/runs/components/run-load-error";
+import { versionStateWhenRunMade } from "@/features/runs/lib/version-status-at-run";
 import { useRunResult } from "@/features/runs/api/get-run-result";
 import { CancelRunAction } from "@/features/runs/components/cancel-run-action";
 import { ExportPanel } from "@/features/runs/components/export-panel";
@@ -13,6 +16,7 @@ import { ResultView } from "@/features/runs/components/result-view";
 import { RunManifest } from "@/features/runs/components/run-manifest";
 import { RunProgress } from "@/features/runs/components/run-progress";
 import { RunPerilSection } from "@/features/peril/components/run-peril-section";
+import { ChartSourceProvider, runSourceLine } from "@/components/charts/chart-source";
 import { ApprovedSeal, ExploratoryStamp, StatusBadge } from "@/components/ui/badges";
 import { ButtonLink } from "@/components/ui/button";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
@@ -26,15 +30,23 @@ export default function RunPage() {
   const succeeded = run.data?.status === "succeeded";
   const result = useRunResult(runId, succeeded);
   const queryClient = useQueryClient();
+  // Only an exploratory run's banner needs the version (its submission and decision times).
+  const version = useModelVersion(run.data?.exploratory ? run.data.modelVersion.id : undefined);
   const can = (p: string) => me.data?.permissions.includes(p) ?? false;
 
   if (run.isPending) return <LoadingState label="Loading run…" />;
-  if (run.isError) return <ErrorState error={run.error} retry={() => run.refetch()} />;
+  if (run.isError) return <RunLoadError error={run.error} retry={() => void run.refetch()} />;
   const r = run.data;
   const active = r.status === "queued" || r.status === "running";
 
+  // Every chart downloaded from this page names the run, its model version and result hash.
+  const chartSource = {
+    lines: [runSourceLine(r, r.manifest.resultHash ?? "not recorded", r.exploratory), `Engine ${r.manifest.engineVersion ?? "version not recorded"} · ${r.members.toLocaleString("en-GB")} members · seed ${r.seed}`],
+    fileLabel: r.name || r.id.slice(0, 8),
+  };
+
   return (
-    <>
+    <ChartSourceProvider source={chartSource}>
       <PageHeader
         kicker={
           <span className="flex items-center gap-2">
@@ -62,7 +74,7 @@ export default function RunPage() {
       />
       {r.exploratory && (
         <div className="stamp-exploratory mb-6 rounded-md px-4 py-2 text-sm font-medium">
-          EXPLORATORY — model version “{r.modelVersion.name} v{r.modelVersion.versionNumber}” was {r.modelVersion.status === "approved" ? "not yet approved" : r.modelVersion.status} when this run was made. Do not use for filings.
+          EXPLORATORY — model version “{r.modelVersion.name} v{r.modelVersion.versionNumber}” was {versionStateWhenRunMade(version.data, r.createdAt)} when this run was made. Do not use for filings.
         </div>
       )}
       {!succeeded && (
@@ -123,6 +135,6 @@ export default function RunPage() {
           )}
         </div>
       </div>
-    </>
+    </ChartSourceProvider>
   );
 }
