@@ -106,7 +106,7 @@ function pathwaySection(w: ReportWriter, m: WorkbookManifest, result: RunResult,
   w.h1(`Warming — ${p.name}`);
   const baseline = `${m.baseline[0]}–${m.baseline[1]}`;
   w.paragraph(
-    `Global mean surface temperature anomaly against ${baseline} (K). Filled: ${p.name}, median with 17–83 % (likely) and 5–95 % (very likely) bands` +
+    `Global mean surface temperature anomaly against ${baseline} (K). Filled: ${p.name}, median with 17th–83rd and 5th–95th percentile bands` +
       `${result.pathways.length > 1 ? "; lines: the other pathways' medians" : ""}. Dashed lines: the warming thresholds.`,
     { muted: true, size: 8.5 },
   );
