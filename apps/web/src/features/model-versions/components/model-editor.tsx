@@ -80,7 +80,13 @@ export function ModelEditor({
         agents: Object.fromEntries(Object.entries(agents).map(([a, d]) => [a, { scale: d }])),
         correlations: correlations.map((c) => ({ between: [c.a, c.b], rank: num(c.rank) })),
         constraint: constraintOn
-          ? { from: num(constraint.from), to: num(constraint.to), observed: num(constraint.observed), sd: num(constraint.sd) }
+          ? {
+              from: num(constraint.from),
+              to: num(constraint.to),
+              observed: num(constraint.observed),
+              sd: num(constraint.sd),
+              internalVariability: num(constraint.internalVariability),
+            }
           : null,
         forcingExpression: expression,
       },
@@ -278,13 +284,14 @@ export function ModelEditor({
             Weight members by observed warming
           </label>
           {constraintOn && (
-            <div className="grid gap-3 sm:grid-cols-4">
+            <div className="grid gap-3 sm:grid-cols-5">
               {(
                 [
                   ["from", "Window from (year)"],
                   ["to", "Window to (year)"],
                   ["observed", "Observed warming (K)"],
                   ["sd", "Observation sd (K)"],
+                  ["internalVariability", "Internal variability sd (K)"],
                 ] as const
               ).map(([k, label]) => (
                 <Field key={k} label={label} error={err(`model.constraint.${k}`)}>
@@ -298,8 +305,10 @@ export function ModelEditor({
                   )}
                 </Field>
               ))}
-              <p className="text-xs text-muted sm:col-span-4">
+              <p className="text-xs text-muted sm:col-span-5">
                 AR6 SPM A.1.2: 2011–2020 was 1.09 K [0.95–1.20] above 1850–1900; sd 0.076 K treats that range as 5–95 %.
+                Internal variability (added to the observation sd in quadrature): 0.21 K reads AR6 SPM A.1.3&apos;s −0.2 to
+                +0.2 °C for 2010–2019 as a 17–83 % range; 0 ignores it.
               </p>
             </div>
           )}

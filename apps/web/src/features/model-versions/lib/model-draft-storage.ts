@@ -8,6 +8,7 @@ import {
   type Distribution,
   type ForcingAgent,
 } from "@plumeline/contracts";
+import { DEFAULT_INTERNAL_VARIABILITY } from "@plumeline/engine";
 import { inputLabel } from "@/lib/input-labels";
 import { initialModelDraftForm, type ModelDraft, type ModelDraftForm } from "./model-draft-form";
 
@@ -34,7 +35,10 @@ export const storedModelFormSchema: z.ZodType<StoredModelForm> = z.object({
     .strict(),
   correlations: z.array(z.object({ a: text, b: text, rank: text }).strict()),
   constraintOn: z.boolean(),
-  constraint: z.object({ from: text, to: text, observed: text, sd: text }).strict(),
+  // internalVariability joined the form later: a draft kept before then restores with the default.
+  constraint: z
+    .object({ from: text, to: text, observed: text, sd: text, internalVariability: text.default(String(DEFAULT_INTERNAL_VARIABILITY)) })
+    .strict(),
   expression: z.enum(FORCING_EXPRESSIONS),
   defaults: z.object({ percentiles: text, thresholds: text, horizons: text, baseline: text }).strict(),
   perilProfileIds: z.array(text),
