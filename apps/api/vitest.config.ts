@@ -5,6 +5,8 @@ import { defineConfig } from "vitest/config";
 export default defineConfig({
   test: {
     include: ["src/**/*.test.ts"],
+    // Migrates and seeds one SQLite file per run; each test file starts from a copy of it.
+    globalSetup: ["src/test-support/template-database.ts"],
     environment: "node",
     pool: "forks",
     fileParallelism: false,

@@ -1,9 +1,10 @@
 import { randomBytes } from "node:crypto";
-import { mkdtemp, rm } from "node:fs/promises";
+import { copyFile, mkdtemp, rm } from "node:fs/promises";
 import os from "node:os";
 import path from "node:path";
 import { demoUsers, type DemoUser } from "@plumeline/seeds";
 import type { Express } from "express";
+import { inject } from "vitest";
 import { createApp } from "../app.js";
 import { loadConfig } from "../config.js";
 import { closeContext, createContext, type AppContext } from "../context.js";
@@ -39,6 +40,10 @@ export async function createTestContext(env: Record<string, string> = {}): Promi
     WEB_DIST: path.join(dataDir, "no-web-build"),
     ...env,
   });
+  // The run's template (test-support/template-database.ts) is already migrated and seeded;
+  // starting from a copy saves every file the migrations and the slow password hashing.
+  const template = inject("templateDatabase");
+  if (template) await copyFile(template, config.databaseFile);
   const ctx = await createContext(config);
   await migrate(ctx.sequelize);
   const userIds = await seedUsers(ctx, demoUsers);
