@@ -20,3 +20,4 @@ export * from "./api/perils.js";
 export * from "./api/run-statements.js";
 export * from "./format/number-format.js";
 export * from "./format/input-labels.js";
+export * from "./api/paging.js";

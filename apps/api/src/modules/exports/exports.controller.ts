@@ -1,4 +1,4 @@
-import type { ResultTable } from "@plumeline/contracts";
+import type { ListExportsQuery, ResultTable } from "@plumeline/contracts";
 import type { Request, Response } from "express";
 import { contextOf, currentUser } from "../../middleware/request-context.js";
 import { createHash } from "node:crypto";
@@ -58,6 +58,6 @@ export const exportsController = {
     send(res, await downloadExportAgain(contextOf(req), currentUser(req), (req.params as { exportId: string }).exportId));
   },
   async list(req: Request, res: Response) {
-    res.json(await listExports(contextOf(req), currentUser(req), req.query));
+    res.json(await listExports(contextOf(req), currentUser(req), req.query as unknown as ListExportsQuery));
   },
 };

@@ -1,4 +1,4 @@
-import type { ChangeClass, CreateModelVersionBody, ModelVersionImpactBody, ModelVersionStatus, UpdateModelVersionBody } from "@plumeline/contracts";
+import type { ChangeClass, CreateModelVersionBody, ListModelVersionsQuery, ModelVersionImpactBody, UpdateModelVersionBody } from "@plumeline/contracts";
 import type { Request, Response } from "express";
 import { contextOf, currentUser } from "../../middleware/request-context.js";
 import { modelVersionImpact } from "./model-version-impact.service.js";
@@ -17,7 +17,7 @@ const idOf = (req: Request) => (req.params as { id: string }).id;
 
 export const modelVersionsController = {
   async list(req: Request, res: Response) {
-    res.json(await listModelVersions(contextOf(req), (req.query as { status?: ModelVersionStatus }).status));
+    res.json(await listModelVersions(contextOf(req), req.query as unknown as ListModelVersionsQuery));
   },
   async get(req: Request, res: Response) {
     res.json(await getModelVersion(contextOf(req), idOf(req)));

@@ -1,4 +1,4 @@
-import { issueDetails, uploadPathwayFieldsSchema, type CreatePathwayBody, type UpdatePathwayBody } from "@plumeline/contracts";
+import { issueDetails, uploadPathwayFieldsSchema, type CreatePathwayBody, type ListPathwaysQuery, type UpdatePathwayBody } from "@plumeline/contracts";
 import type { Request, Response } from "express";
 import { badRequest } from "../../errors/app-error.js";
 import { contextOf, currentUser } from "../../middleware/request-context.js";
@@ -6,7 +6,7 @@ import { createPathway, getPathway, listPathways, updatePathway, uploadPathway }
 
 export const pathwaysController = {
   async list(req: Request, res: Response) {
-    res.json(await listPathways(contextOf(req)));
+    res.json(await listPathways(contextOf(req), req.query as unknown as ListPathwaysQuery));
   },
   async get(req: Request, res: Response) {
     res.json(await getPathway(contextOf(req), (req.params as { id: string }).id));

@@ -1,4 +1,4 @@
-import { createPathwayBodySchema, updatePathwayBodySchema } from "@plumeline/contracts";
+import { createPathwayBodySchema, listPathwaysQuerySchema, updatePathwayBodySchema } from "@plumeline/contracts";
 import { Router } from "express";
 import { z } from "zod";
 import { authenticate } from "../../middleware/authenticate.js";
@@ -15,7 +15,7 @@ const idParams = z.object({ id: z.string().min(1) });
 
 export const pathwaysRouter: Router = Router();
 
-pathwaysRouter.get("/", authenticate, requirePermission("pathways:read"), pathwaysController.list);
+pathwaysRouter.get("/", authenticate, requirePermission("pathways:read"), validate({ query: listPathwaysQuerySchema }), pathwaysController.list);
 pathwaysRouter.post("/upload", authenticate, requirePermission("pathways:write"), upload, pathwaysController.upload);
 pathwaysRouter.get("/:id", authenticate, requirePermission("pathways:read"), validate({ params: idParams }), pathwaysController.get);
 pathwaysRouter.post("/", authenticate, requirePermission("pathways:write"), validate({ body: createPathwayBodySchema }), pathwaysController.create);

@@ -1,4 +1,4 @@
-import type { CurveRange, PerilCurvePreviewBody, PerilProfileBody, UpdatePerilProfileBody } from "@plumeline/contracts";
+import type { CurveRange, ListPerilProfilesQuery, PerilCurvePreviewBody, PerilProfileBody, UpdatePerilProfileBody } from "@plumeline/contracts";
 import { curveRangeSchema } from "@plumeline/contracts";
 import type { Request, Response } from "express";
 import { contextOf, currentUser } from "../../middleware/request-context.js";
@@ -17,7 +17,7 @@ const idOf = (req: Request) => (req.params as { id: string }).id;
 
 export const perilProfilesController = {
   async list(req: Request, res: Response) {
-    res.json(await listPerilProfiles(contextOf(req)));
+    res.json(await listPerilProfiles(contextOf(req), req.query as unknown as ListPerilProfilesQuery));
   },
   async get(req: Request, res: Response) {
     res.json(await getPerilProfile(contextOf(req), idOf(req)));

@@ -1,6 +1,7 @@
 import {
   copyPerilProfileBodySchema,
   curveRangeSchema,
+  listPerilProfilesQuerySchema,
   perilCurvePreviewBodySchema,
   perilProfileBodySchema,
   updatePerilProfileBodySchema,
@@ -16,7 +17,7 @@ const params = z.object({ id: z.string().min(1) });
 
 export const perilProfilesRouter: Router = Router();
 
-perilProfilesRouter.get("/", authenticate, requirePermission("perils:read"), c.list);
+perilProfilesRouter.get("/", authenticate, requirePermission("perils:read"), validate({ query: listPerilProfilesQuerySchema }), c.list);
 perilProfilesRouter.post("/", authenticate, requirePermission("perils:write"), validate({ body: perilProfileBodySchema }), c.create);
 // A draft's curve saves nothing, so reading the lens is enough to ask for it.
 perilProfilesRouter.post("/preview", authenticate, requirePermission("perils:read"), validate({ body: perilCurvePreviewBodySchema }), c.preview);

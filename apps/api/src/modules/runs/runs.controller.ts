@@ -1,4 +1,4 @@
-import type { CreateRunBody } from "@plumeline/contracts";
+import type { CreateRunBody, ListRunsQuery } from "@plumeline/contracts";
 import type { Request, Response } from "express";
 import { contextOf, currentUser } from "../../middleware/request-context.js";
 import { getReplay, listReplays, requestReplay } from "./replays.service.js";
@@ -8,7 +8,7 @@ const idOf = (req: Request) => (req.params as { id: string }).id;
 
 export const runsController = {
   async list(req: Request, res: Response) {
-    res.json(await listRuns(contextOf(req), currentUser(req), req.query));
+    res.json(await listRuns(contextOf(req), currentUser(req), req.query as unknown as ListRunsQuery));
   },
   async get(req: Request, res: Response) {
     res.json(await getRun(contextOf(req), idOf(req)));
