@@ -11,11 +11,16 @@ import type { TestContext } from "./test-context.js";
 
 /** Moves a row's creation time, so date filters have something to tell apart. */
 export async function setCreatedAt(t: TestContext, table: string, id: string, iso: string): Promise<void> {
-  await t.ctx.sequelize.query(`UPDATE ${table} SET created_at = ? WHERE id = ?`, { replacements: [new Date(iso).toISOString().replace("T", " ").replace("Z", " +00:00"), id] });
+  await t.ctx.sequelize.query(`UPDATE ${table} SET created_at = ? WHERE id = ?`, {
+    replacements: [new Date(iso).toISOString().replace("T", " ").replace("Z", " +00:00"), id],
+  });
 }
 
 /** A queued run row (no spec the engine would accept: listing never reads it). */
-export async function insertRun(t: TestContext, fields: { name: string; modelVersionId: string; createdBy: string; status?: string; members?: number }): Promise<string> {
+export async function insertRun(
+  t: TestContext,
+  fields: { name: string; modelVersionId: string; createdBy: string; status?: string; members?: number },
+): Promise<string> {
   const id = randomUUID();
   await t.ctx.models.Run.create({
     id,

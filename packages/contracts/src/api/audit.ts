@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { listDateSchema, pagedQuerySchema, pageSchema } from "./paging.js";
+import { listDateSchema, pagedQuerySchema, pageSchema, type ListQueryInput } from "./paging.js";
 
 /** One append-only audit row: who did what to which entity, when. */
 export const auditEventSchema = z.object({
@@ -45,7 +45,7 @@ export const auditQuerySchema = pagedQuerySchema(AUDIT_SORT_KEYS, "createdAt:des
   to: listDateSchema.optional(),
 });
 export type AuditQuery = z.infer<typeof auditQuerySchema>;
-export type AuditQueryInput = z.input<typeof auditQuerySchema>;
+export type AuditQueryInput = ListQueryInput<typeof auditQuerySchema>;
 
 export const auditPageSchema = pageSchema(auditEventSchema).extend({
   /** Sign-in rows that matched the other filters but were hidden (0 when none were hidden). */

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { authorAndDateFilters, pagedQuerySchema, pageSchema } from "./paging.js";
+import { authorAndDateFilters, pagedQuerySchema, pageSchema, type ListQueryInput } from "./paging.js";
 
 /** Tables a run result can be exported as, one CSV each (docs/API.md). */
 export const RESULT_TABLES = [
@@ -45,7 +45,7 @@ export const listExportsQuerySchema = pagedQuerySchema(EXPORT_SORT_KEYS, "create
   ...authorAndDateFilters,
 });
 export type ListExportsQuery = z.infer<typeof listExportsQuerySchema>;
-export type ListExportsQueryInput = z.input<typeof listExportsQuerySchema>;
+export type ListExportsQueryInput = ListQueryInput<typeof listExportsQuerySchema>;
 
 export const exportRecordSchema = z.object({
   id: z.string(),

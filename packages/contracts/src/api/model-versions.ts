@@ -2,7 +2,7 @@ import { z } from "zod";
 import { modelSpecSchema, percentileSchema } from "../engine/run-spec.js";
 import { boundedUniqueList, MAX_HORIZONS, MAX_PERCENTILES, MAX_THRESHOLDS } from "../engine/spec-limits.js";
 import { defaultRunSettings } from "../engine/default-assumptions.js";
-import { authorAndDateFilters, pagedQuerySchema, pageSchema } from "./paging.js";
+import { authorAndDateFilters, pagedQuerySchema, pageSchema, type ListQueryInput } from "./paging.js";
 
 /**
  * Model versions: the uncertainty assumptions (the engine's `model` object) plus the run
@@ -83,7 +83,7 @@ export const listModelVersionsQuerySchema = pagedQuerySchema(MODEL_VERSION_SORT_
   ...authorAndDateFilters,
 });
 export type ListModelVersionsQuery = z.infer<typeof listModelVersionsQuerySchema>;
-export type ListModelVersionsQueryInput = z.input<typeof listModelVersionsQuerySchema>;
+export type ListModelVersionsQueryInput = ListQueryInput<typeof listModelVersionsQuerySchema>;
 
 export const diffModelVersionQuerySchema = z.object({ against: z.string().min(1).optional() });
 

@@ -70,3 +70,9 @@ export interface Page<T> {
   items: T[];
   total: number;
 }
+
+/**
+ * What a caller sends for a list (all optional): the schema's input, with limit and offset
+ * as numbers (the schema coerces query-string text, so its own input type is `unknown`).
+ */
+export type ListQueryInput<S extends z.ZodType> = Omit<z.input<S>, "limit" | "offset"> & { limit?: number; offset?: number };

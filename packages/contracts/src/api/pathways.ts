@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { pathwayAgentsSchema } from "../engine/run-spec.js";
 import { MAX_YEAR, MIN_YEAR, plausibleYear } from "../engine/spec-limits.js";
-import { authorAndDateFilters, pagedQuerySchema, pageSchema } from "./paging.js";
+import { authorAndDateFilters, pagedQuerySchema, pageSchema, type ListQueryInput } from "./paging.js";
 
 /**
  * Pathway bodies and responses (docs/API.md "pathways"). A pathway's `agents` are exactly the
@@ -95,7 +95,7 @@ export const listPathwaysQuerySchema = pagedQuerySchema(PATHWAY_SORT_KEYS, "crea
   ...authorAndDateFilters,
 });
 export type ListPathwaysQuery = z.infer<typeof listPathwaysQuerySchema>;
-export type ListPathwaysQueryInput = z.input<typeof listPathwaysQuerySchema>;
+export type ListPathwaysQueryInput = ListQueryInput<typeof listPathwaysQuerySchema>;
 
 /** A pathway in full: `agents` is the series object exactly as the engine's pathway spec takes it. */
 export const pathwaySchema = pathwaySummarySchema.extend({ agents: pathwayAgentsSchema });

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { perilProfileSchema, portfolioRowSchema, TABLE_WARMING_RANGE } from "../engine/peril.js";
-import { authorAndDateFilters, pagedQuerySchema, pageSchema } from "./paging.js";
+import { authorAndDateFilters, pagedQuerySchema, pageSchema, type ListQueryInput } from "./paging.js";
 
 /**
  * Peril profiles and portfolio baselines over the REST API (docs/API.md "peril-profiles",
@@ -58,7 +58,7 @@ export const listPerilProfilesQuerySchema = pagedQuerySchema(PERIL_PROFILE_SORT_
   ...authorAndDateFilters,
 });
 export type ListPerilProfilesQuery = z.infer<typeof listPerilProfilesQuerySchema>;
-export type ListPerilProfilesQueryInput = z.input<typeof listPerilProfilesQuerySchema>;
+export type ListPerilProfilesQueryInput = ListQueryInput<typeof listPerilProfilesQuerySchema>;
 
 const DEFAULT_CURVE_PERCENTILES = [5, 17, 50, 83, 95];
 /** Most warming levels a preview curve may ask for (keeps the response small). */

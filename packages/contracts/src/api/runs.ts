@@ -2,7 +2,7 @@ import { z } from "zod";
 import { MAX_MEMBERS, percentileSchema } from "../engine/run-spec.js";
 import { boundedUniqueList, MAX_HORIZONS, MAX_PATHWAYS_PER_RUN, MAX_PERCENTILES, MAX_THRESHOLDS } from "../engine/spec-limits.js";
 import { MODEL_VERSION_STATUSES } from "./model-versions.js";
-import { authorAndDateFilters, pagedQuerySchema, pageSchema } from "./paging.js";
+import { authorAndDateFilters, pagedQuerySchema, pageSchema, type ListQueryInput } from "./paging.js";
 
 /** Runs: an ensemble of one model version over one or more pathways, executed by the queue. */
 export const RUN_STATUSES = ["queued", "running", "succeeded", "failed", "cancelled"] as const;
@@ -43,7 +43,7 @@ export const listRunsQuerySchema = pagedQuerySchema(RUN_SORT_KEYS, "createdAt:de
   ...authorAndDateFilters,
 });
 export type ListRunsQuery = z.infer<typeof listRunsQuerySchema>;
-export type ListRunsQueryInput = z.input<typeof listRunsQuerySchema>;
+export type ListRunsQueryInput = ListQueryInput<typeof listRunsQuerySchema>;
 
 export const runSummarySchema = z.object({
   id: z.string(),

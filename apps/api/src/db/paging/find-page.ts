@@ -25,7 +25,10 @@ export interface FindPageOptions<M extends Model, K extends string> {
  * its sort allow-list (the chosen direction on every column of the key, then the primary
  * key, so rows that tie never swap between pages), limit and offset.
  */
-export async function findPage<M extends Model, K extends string>(model: ModelStatic<M>, options: FindPageOptions<M, K>): Promise<{ rows: M[]; total: number }> {
+export async function findPage<M extends Model, K extends string>(
+  model: ModelStatic<M>,
+  options: FindPageOptions<M, K>,
+): Promise<{ rows: M[]; total: number }> {
   const { key, direction } = parseSort(options.page.sort);
   const dir = direction === "asc" ? "ASC" : "DESC";
   const order: OrderItem[] = [...options.sortColumns[key].map((column): OrderItem => [column, dir]), [model.primaryKeyAttribute, dir]];

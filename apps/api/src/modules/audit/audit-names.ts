@@ -22,7 +22,10 @@ interface NamedRow {
 }
 
 /** `type:id` -> display name for every entity in the rows, and actor id -> name. */
-export async function auditNames(models: Models, rows: readonly NamedRow[]): Promise<{ entity: Map<string, string>; actor: Map<string, string> }> {
+export async function auditNames(
+  models: Models,
+  rows: readonly NamedRow[],
+): Promise<{ entity: Map<string, string>; actor: Map<string, string> }> {
   const idsOf = (type: string) => [...new Set(rows.filter((r) => r.entityType === type && r.entityId !== null).map((r) => r.entityId!))];
   const userIds = [...new Set([...idsOf("user"), ...rows.map((r) => r.actorId).filter((id): id is string => id !== null)])];
   const inIds = (ids: string[]) => ({ where: { id: { [Op.in]: ids } } });

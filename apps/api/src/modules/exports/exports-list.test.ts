@@ -13,19 +13,54 @@ beforeAll(async () => {
   actuary = await signIn(t.app, "actuary");
   const analyst = await signIn(t.app, "analyst");
   const version = await analyst.post("/api/model-versions").send(testModelVersionBody());
-  const coastal = await insertRun(t, { name: "Coastal review", modelVersionId: version.body.id, createdBy: t.userIds.analyst, status: "succeeded" });
-  const inland = await insertRun(t, { name: "Inland review", modelVersionId: version.body.id, createdBy: t.userIds.analyst, status: "succeeded" });
+  const coastal = await insertRun(t, {
+    name: "Coastal review",
+    modelVersionId: version.body.id,
+    createdBy: t.userIds.analyst,
+    status: "succeeded",
+  });
+  const inland = await insertRun(t, {
+    name: "Inland review",
+    modelVersionId: version.body.id,
+    createdBy: t.userIds.analyst,
+    status: "succeeded",
+  });
   // Register rows as the export service writes them (the files themselves are not needed to list them).
   const rows = [
-    { runId: coastal, format: "csv", table: "warming_percentiles", fileName: "coastal-review-warming_percentiles.csv", byteSize: 300, by: "actuary", day: "2026-05-01" },
-    { runId: coastal, format: "xlsx", table: "workbook", fileName: "coastal-review.xlsx", byteSize: 9000, by: "analyst", day: "2026-05-02" },
+    {
+      runId: coastal,
+      format: "csv",
+      table: "warming_percentiles",
+      fileName: "coastal-review-warming_percentiles.csv",
+      byteSize: 300,
+      by: "actuary",
+      day: "2026-05-01",
+    },
+    {
+      runId: coastal,
+      format: "xlsx",
+      table: "workbook",
+      fileName: "coastal-review.xlsx",
+      byteSize: 9000,
+      by: "analyst",
+      day: "2026-05-02",
+    },
     { runId: inland, format: "pdf", table: "report", fileName: "inland-review.pdf", byteSize: 5000, by: "actuary", day: "2026-05-03" },
   ] as const;
   for (const row of rows) {
     const id = randomUUID();
     await t.ctx.models.ExportRecord.create({
-      id, runId: row.runId, format: row.format, resultTable: row.table, fileName: row.fileName, exploratory: true,
-      resultHash: "1".repeat(64), checksum: "2".repeat(64), byteSize: row.byteSize, createdBy: t.userIds[row.by], manifest: null,
+      id,
+      runId: row.runId,
+      format: row.format,
+      resultTable: row.table,
+      fileName: row.fileName,
+      exploratory: true,
+      resultHash: "1".repeat(64),
+      checksum: "2".repeat(64),
+      byteSize: row.byteSize,
+      createdBy: t.userIds[row.by],
+      manifest: null,
     });
     await setCreatedAt(t, "exports", id, `${row.day}T08:00:00Z`);
   }
@@ -43,7 +78,11 @@ describe("GET /api/exports as a paged list", () => {
     expect(p1.body.total).toBe(3);
     expect(files(p1.body)).toEqual(["inland-review.pdf", "coastal-review.xlsx"]);
     expect(files((await actuary.get("/api/exports?limit=2&offset=2")).body)).toEqual(["coastal-review-warming_percentiles.csv"]);
-    expect(files((await actuary.get("/api/exports?sort=byteSize:asc")).body)).toEqual(["coastal-review-warming_percentiles.csv", "inland-review.pdf", "coastal-review.xlsx"]);
+    expect(files((await actuary.get("/api/exports?sort=byteSize:asc")).body)).toEqual([
+      "coastal-review-warming_percentiles.csv",
+      "inland-review.pdf",
+      "coastal-review.xlsx",
+    ]);
   });
 
   it("searches file name, table and the run's name; _ literally", async () => {

@@ -35,7 +35,11 @@ describe("GET /api/model-versions as a paged list", () => {
     expect(p1.body.total).toBe(3);
     expect(names(p1.body)).toEqual(["Constrained ECS", "Core assumptions"]);
     expect(names((await manager.get("/api/model-versions?sort=name:asc&limit=2&offset=2")).body)).toEqual(["Wide tail"]);
-    expect(names((await manager.get("/api/model-versions?sort=createdAt:asc")).body)).toEqual(["Core assumptions", "Constrained ECS", "Wide tail"]);
+    expect(names((await manager.get("/api/model-versions?sort=createdAt:asc")).body)).toEqual([
+      "Core assumptions",
+      "Constrained ECS",
+      "Wide tail",
+    ]);
   });
 
   it("searches name and notes case-insensitively, _ literally", async () => {
@@ -49,7 +53,10 @@ describe("GET /api/model-versions as a paged list", () => {
     expect((await manager.get("/api/model-versions?status=approved")).body.total).toBe(0);
     expect((await manager.get("/api/model-versions?author=ines")).body.total).toBe(3);
     expect((await manager.get("/api/model-versions?author=ruth")).body.total).toBe(0);
-    expect(names((await manager.get("/api/model-versions?from=2026-03-02T00:00:00Z&to=2026-03-03")).body)).toEqual(["Wide tail", "Constrained ECS"]);
+    expect(names((await manager.get("/api/model-versions?from=2026-03-02T00:00:00Z&to=2026-03-03")).body)).toEqual([
+      "Wide tail",
+      "Constrained ECS",
+    ]);
   });
 
   it("answers 400 naming each bad query field", async () => {

@@ -8,7 +8,6 @@ import {
   type ModelSpec,
   type ModelVersionDefaults,
   type ModelVersionDiff,
-  type ModelVersionStatus,
   type ModelVersionSummary,
   type UpdateModelVersionBody,
   type ListModelVersionsQuery,

@@ -61,6 +61,11 @@ describe("GET /api/pathways as a paged list", () => {
   });
 
   it("answers 400 naming each bad query field", async () => {
-    await expectBadQuery(manager, "/api/pathways?limit=abc&sort=checksum:asc&locked=maybe&from=2026-02-30x", ["limit", "sort", "locked", "from"]);
+    await expectBadQuery(manager, "/api/pathways?limit=abc&sort=checksum:asc&locked=maybe&from=2026-02-30x", [
+      "limit",
+      "sort",
+      "locked",
+      "from",
+    ]);
   });
 });

@@ -18,7 +18,9 @@ beforeAll(async () => {
     { by: analyst, name: "Rainfall 10% uplift", region: "Northmere Coast", metric: "severity", day: "2026-04-03" },
   ];
   for (const row of rows) {
-    const res = await row.by.post("/api/peril-profiles").send({ ...testRainfallProfileBody, name: row.name, region: row.region, metric: row.metric });
+    const res = await row.by
+      .post("/api/peril-profiles")
+      .send({ ...testRainfallProfileBody, name: row.name, region: row.region, metric: row.metric });
     expect(res.status).toBe(201);
     await setCreatedAt(t, "peril_profiles", res.body.id, `${row.day}T08:00:00Z`);
   }

@@ -23,7 +23,13 @@ beforeAll(async () => {
   const analyst = await signIn(t.app, "analyst");
   const version = await analyst.post("/api/model-versions").send(testModelVersionBody());
   for (const row of ROWS) {
-    ids[row.name] = await insertRun(t, { name: row.name, modelVersionId: version.body.id, createdBy: t.userIds[row.by], status: row.status, members: row.members });
+    ids[row.name] = await insertRun(t, {
+      name: row.name,
+      modelVersionId: version.body.id,
+      createdBy: t.userIds[row.by],
+      status: row.status,
+      members: row.members,
+    });
     await setCreatedAt(t, "runs", ids[row.name]!, `${row.day}T12:00:00Z`);
   }
 });
@@ -47,14 +53,32 @@ describe("GET /api/runs as a paged list", () => {
     const p3 = await actuary.get("/api/runs?sort=name:asc&limit=2&offset=4");
     expect([p1.body.total, p2.body.total, p3.body.total]).toEqual([5, 5, 5]);
     // SQLite orders text by bytes: " " (0x20) sorts before "_" (0x5f).
-    expect([...names(p1.body), ...names(p2.body), ...names(p3.body)]).toEqual(["Coastal 100% stress", "Coastal_base", "Harbour base", "Inland base", "Inland stress"]);
+    expect([...names(p1.body), ...names(p2.body), ...names(p3.body)]).toEqual([
+      "Coastal 100% stress",
+      "Coastal_base",
+      "Harbour base",
+      "Inland base",
+      "Inland stress",
+    ]);
     expect((await actuary.get("/api/runs?offset=10")).body).toEqual({ items: [], total: 5 });
   });
 
   it("sorts by each allowed key in both directions", async () => {
-    expect(names((await actuary.get("/api/runs?sort=members:desc")).body)).toEqual(["Coastal 100% stress", "Harbour base", "Inland base", "Coastal_base", "Inland stress"]);
+    expect(names((await actuary.get("/api/runs?sort=members:desc")).body)).toEqual([
+      "Coastal 100% stress",
+      "Harbour base",
+      "Inland base",
+      "Coastal_base",
+      "Inland stress",
+    ]);
     expect(names((await actuary.get("/api/runs?sort=createdAt:asc")).body)[0]).toBe("Coastal 100% stress");
-    expect((await actuary.get("/api/runs?sort=status:asc")).body.items.map((r: { status: string }) => r.status)).toEqual(["failed", "queued", "succeeded", "succeeded", "succeeded"]);
+    expect((await actuary.get("/api/runs?sort=status:asc")).body.items.map((r: { status: string }) => r.status)).toEqual([
+      "failed",
+      "queued",
+      "succeeded",
+      "succeeded",
+      "succeeded",
+    ]);
   });
 
   it("searches names case-insensitively and takes % and _ literally", async () => {
@@ -70,7 +94,11 @@ describe("GET /api/runs as a paged list", () => {
     expect(names((await actuary.get("/api/runs?author=wrenfield&sort=name:asc")).body)).toEqual(["Coastal_base", "Inland stress"]);
     expect((await actuary.get("/api/runs?author=analyst@harbourline")).body.total).toBe(3);
     expect((await actuary.get("/api/runs?mine=true")).body.total).toBe(2);
-    expect(names((await actuary.get("/api/runs?from=2026-01-02&to=2026-01-04&sort=createdAt:asc")).body)).toEqual(["Coastal_base", "Inland base", "Inland stress"]);
+    expect(names((await actuary.get("/api/runs?from=2026-01-02&to=2026-01-04&sort=createdAt:asc")).body)).toEqual([
+      "Coastal_base",
+      "Inland base",
+      "Inland stress",
+    ]);
     expect((await actuary.get("/api/runs?to=2026-01-01T11:59:59Z")).body.total).toBe(0);
     expect(idsOf((await actuary.get("/api/runs?status=succeeded&author=ines&q=base&from=2026-01-04")).body)).toEqual([ids["Harbour base"]]);
   });

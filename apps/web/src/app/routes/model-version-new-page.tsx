@@ -4,7 +4,7 @@ import { useModelVersion } from "@/features/model-versions/api/get-model-version
 import { useCreateModelVersion } from "@/features/model-versions/api/save-model-version";
 import { ModelEditor, type ModelDraft } from "@/features/model-versions/components/model-editor";
 import { STARTING_DRAFT } from "@/features/model-versions/lib/starting-draft";
-import { usePerilProfiles } from "@/features/peril/api/get-peril-profiles";
+import { usePerilProfileChoices } from "@/features/peril/api/get-peril-profiles";
 import { PageHeader } from "@/components/ui/page-header";
 import { ErrorState, LoadingState } from "@/components/ui/states";
 
@@ -13,7 +13,7 @@ export default function ModelVersionNewPage() {
   const fromId = params.get("from") ?? undefined;
   const parent = useModelVersion(fromId);
   const create = useCreateModelVersion();
-  const profiles = usePerilProfiles();
+  const profiles = usePerilProfileChoices();
   const navigate = useNavigate();
   if (fromId && parent.isPending) return <LoadingState />;
   if (fromId && parent.isError) return <ErrorState error={parent.error} />;

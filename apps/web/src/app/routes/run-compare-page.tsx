@@ -1,5 +1,5 @@
 import { useSearchParams } from "react-router-dom";
-import { useRuns } from "@/features/runs/api/get-runs";
+import { useRunChoices } from "@/features/runs/api/get-runs";
 import { useRun } from "@/features/runs/api/get-run";
 import { useRunResult } from "@/features/runs/api/get-run-result";
 import { runBaseline } from "@/features/runs/lib/compare-baseline";
@@ -14,7 +14,7 @@ import { ApprovedSeal, ExploratoryStamp } from "@/components/ui/badges";
 /** Pick two finished runs (or the same run twice with two pathways) and compare them on shared axes. */
 export default function RunComparePage() {
   const [params, setParams] = useSearchParams();
-  const runs = useRuns({ status: "succeeded" });
+  const runs = useRunChoices({ status: "succeeded" });
   const a = params.get("a") ?? "";
   const b = params.get("b") ?? "";
   const pa = params.get("pa") ?? "";
