@@ -3,6 +3,7 @@ import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
+import { issueDetails } from "@plumeline/contracts";
 import { z } from "zod";
 import { LOG_LEVELS, type LogLevel } from "./logging/logger.js";
 
@@ -68,7 +69,7 @@ export class ConfigError extends Error {
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   const parsed = envSchema.safeParse(env);
   if (!parsed.success) {
-    const lines = parsed.error.issues.map((issue) => `${issue.path.join(".")}: ${issue.message}`);
+    const lines = issueDetails(parsed.error).map((detail) => `${detail.path}: ${detail.message}`);
     throw new ConfigError(`Invalid configuration:\n  ${lines.join("\n  ")}`);
   }
   const e = parsed.data;
@@ -76,16 +77,22 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   // Mailed links (run finished, review, reset) start with the public origin; without it each
   // process would fall back to its own port, and a worker's mail would point at the worker.
   if (e.NODE_ENV === "production" && !e.PUBLIC_ORIGIN)
-    throw new ConfigError("Invalid configuration:\n  PUBLIC_ORIGIN: required when NODE_ENV=production (the address people open; mailed links start with it)");
+    throw new ConfigError(
+      "Invalid configuration:\n  PUBLIC_ORIGIN: required when NODE_ENV=production (the address people open; mailed links start with it)",
+    );
   // WORKERS=0 means "this process computes nothing": only workers elsewhere (QUEUE=bullmq) could run the jobs.
   if (e.QUEUE === "sqlite" && e.WORKERS === 0)
     throw new ConfigError("Invalid configuration:\n  WORKERS: 0 needs QUEUE=bullmq (with the table queue nothing else would run the jobs)");
 
   const dataDir = path.resolve(repoRoot, e.PLUMELINE_DATA_DIR ?? "data");
   const publicOrigin = (e.PUBLIC_ORIGIN ?? `http://localhost:${e.PORT}`).replace(/\/$/, "");
-  const extraOrigins = (e.TRUSTED_ORIGINS ?? "").split(",").map((o) => o.trim()).filter(Boolean);
+  const extraOrigins = (e.TRUSTED_ORIGINS ?? "")
+    .split(",")
+    .map((o) => o.trim())
+    .filter(Boolean);
   // The Vite dev server and the loopback spellings of this port are trusted in development only.
-  const localOrigins = e.NODE_ENV === "development" ? [`http://localhost:${e.PORT}`, `http://127.0.0.1:${e.PORT}`, "http://localhost:5173"] : [];
+  const localOrigins =
+    e.NODE_ENV === "development" ? [`http://localhost:${e.PORT}`, `http://127.0.0.1:${e.PORT}`, "http://localhost:5173"] : [];
 
   return {
     env: e.NODE_ENV,

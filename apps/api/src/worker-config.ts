@@ -1,4 +1,5 @@
 import os from "node:os";
+import { issueDetails } from "@plumeline/contracts";
 import { z } from "zod";
 
 /**
@@ -24,7 +25,7 @@ export interface WorkerConfig {
 export function loadWorkerConfig(env: NodeJS.ProcessEnv = process.env): WorkerConfig {
   const parsed = workerEnvSchema.safeParse(env);
   if (!parsed.success) {
-    const lines = parsed.error.issues.map((issue) => `${issue.path.join(".")}: ${issue.message}`);
+    const lines = issueDetails(parsed.error).map((detail) => `${detail.path}: ${detail.message}`);
     throw new Error(`Invalid worker configuration:\n  ${lines.join("\n  ")}`);
   }
   const e = parsed.data;

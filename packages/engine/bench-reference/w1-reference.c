@@ -4,11 +4,12 @@
  *
  * Build and run:  gcc -O3 -march=native -o w1-reference w1-reference.c -lm
  *                 ./w1-reference [MEMBERS=100000] [--temperature end-of-year|annual-mean]
- *                                [--feedback f2x|co2-scaled]
+ *                                [--feedback f2x|co2-scaled] [--seed S]
  * The defaults are W1's definition; the two options follow the engine's conventions where they
  * differ from it (README.md: "Where the engine's conventions differ").
  * Prints one JSON line: impl, members, years, total_s, sample_s, simulate_s, summarize_s,
- * member_years_per_s, check.
+ * member_years_per_s, check. --seed (default 20261205) seeds the random stream: the check
+ * varies with it by sampling noise only (README.md: "What each program prints").
  *
  * Memory stays O(members): the members are advanced year by year twice — a first pass up to
  * 1900 for each member's 1850–1900 mean, then the reporting pass that summarises each year as
@@ -148,13 +149,14 @@ static double seconds_now(void) {
 }
 
 static int usage(const char *problem) {
-  fprintf(stderr, "w1-reference: %s\nusage: w1-reference [MEMBERS >= 2] [--temperature end-of-year|annual-mean] [--feedback f2x|co2-scaled]\n", problem);
+  fprintf(stderr, "w1-reference: %s\nusage: w1-reference [MEMBERS >= 2] [--temperature end-of-year|annual-mean] [--feedback f2x|co2-scaled] [--seed S]\n", problem);
   return 2;
 }
 
 int main(int argc, char **argv) {
   size_t n = 100000;
   int annual_mean = 0, co2_scaled_feedback = 0;
+  uint64_t seed = 20261205;
   for (int i = 1; i < argc; i++) {
     if (strcmp(argv[i], "--temperature") == 0 && i + 1 < argc) {
       const char *v = argv[++i];
@@ -164,6 +166,11 @@ int main(int argc, char **argv) {
       const char *v = argv[++i];
       if (strcmp(v, "co2-scaled") == 0) co2_scaled_feedback = 1;
       else if (strcmp(v, "f2x") != 0) return usage("--feedback must be f2x or co2-scaled");
+    } else if (strcmp(argv[i], "--seed") == 0 && i + 1 < argc) {
+      char *end;
+      const char *v = argv[++i];
+      seed = strtoull(v, &end, 10);
+      if (*v == '\0' || *v == '-' || *end != '\0') return usage("--seed must be a whole number");
     } else {
       char *end;
       unsigned long long value = strtoull(argv[i], &end, 10);
@@ -177,7 +184,7 @@ int main(int argc, char **argv) {
       base_forcing[k][t] = AGENT_AMPLITUDE[k] * pow((double)t / (YEARS - 1), 2.5 + 0.3 * k);
 
   double start = seconds_now();
-  seed_rng(20261205);
+  seed_rng(seed);
   double *scale = malloc(sizeof(double) * AGENTS * n);
   Propagator *step = malloc(sizeof(Propagator) * n);
   double *upper = malloc(sizeof(double) * n), *deep = malloc(sizeof(double) * n);

@@ -3,11 +3,12 @@ vectorised over members, a loop over years, every year's temperatures kept in on
 members x years array, then numpy.percentile per year.
 
 Usage: python3 w1_reference.py [MEMBERS=100000] [--temperature end-of-year|annual-mean]
-                               [--feedback f2x|co2-scaled]
+                               [--feedback f2x|co2-scaled] [--seed S]
 The defaults are W1's definition; the two options follow the engine's conventions where they
 differ from it (README.md: "Where the engine's conventions differ").
 Prints one JSON line: impl, members, years, total_s, sample_s, simulate_s, summarize_s,
-member_years_per_s, check. Needs numpy.
+member_years_per_s, check. --seed (default 20261205) seeds the random generator: the check
+varies with it by sampling noise only. Needs numpy.
 """
 import argparse
 import json
@@ -100,9 +101,12 @@ def parse_args(argv):
     parser.add_argument("members", nargs="?", type=int, default=100_000)
     parser.add_argument("--temperature", choices=["end-of-year", "annual-mean"], default="end-of-year")
     parser.add_argument("--feedback", choices=["f2x", "co2-scaled"], default="f2x")
+    parser.add_argument("--seed", type=int, default=20261205)
     args = parser.parse_args(argv[1:])
     if args.members < 2:
         parser.error("MEMBERS must be at least 2")
+    if args.seed < 0:
+        parser.error("--seed must be a whole number of at least 0")
     return args
 
 
@@ -112,7 +116,7 @@ def main(argv):
     base = base_forcing()
 
     start = time.perf_counter()
-    scales, params = sample_members(np.random.default_rng(20261205), n, args.feedback == "co2-scaled")
+    scales, params = sample_members(np.random.default_rng(args.seed), n, args.feedback == "co2-scaled")
     step = exact_propagators(**params)
     sampled = time.perf_counter()
 

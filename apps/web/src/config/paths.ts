@@ -34,7 +34,8 @@ export const paths = {
   pathwayUpload: route({ path: "/pathways/upload", build: () => "/pathways/upload", permission: "pathways:write", purpose: "Uploading pathways" }),
   pathwayCompose: route({
     path: "/pathways/compose",
-    build: (fromId?: string) => `/pathways/compose${qs({ from: fromId })}`,
+    // mode "json": the advanced editor of the pathway as raw JSON; otherwise the step composer.
+    build: (fromId?: string, mode?: "json") => `/pathways/compose${qs({ from: fromId, mode })}`,
     permission: "pathways:write",
     purpose: "Composing pathways",
   }),

@@ -1,3 +1,4 @@
+import { issueDetails } from "@plumeline/contracts";
 import type { z } from "zod";
 import { ApiError, apiErrorFromBody } from "./api-error";
 import { env } from "./env";
@@ -69,7 +70,7 @@ async function request<T>(method: string, path: string, opts: RequestOptions<T> 
         res.status,
         "unexpected_response",
         `The server's answer to ${method} ${path} did not have the expected shape`,
-        parsed.error.issues.map((i) => ({ path: i.path.join("."), message: i.message })),
+        issueDetails(parsed.error),
       );
     }
     return parsed.data;
@@ -82,7 +83,6 @@ export const api = {
   get: <T>(path: string, opts?: Omit<RequestOptions<T>, "body">) => request<T>("GET", path, opts),
   post: <T>(path: string, body?: unknown, opts?: Omit<RequestOptions<T>, "body">) =>
     request<T>("POST", path, { ...opts, body: body ?? {} }),
-  patch: <T>(path: string, body: unknown, opts?: Omit<RequestOptions<T>, "body">) =>
-    request<T>("PATCH", path, { ...opts, body }),
+  patch: <T>(path: string, body: unknown, opts?: Omit<RequestOptions<T>, "body">) => request<T>("PATCH", path, { ...opts, body }),
   delete: <T>(path: string, opts?: Omit<RequestOptions<T>, "body">) => request<T>("DELETE", path, opts),
 };

@@ -1,3 +1,4 @@
+import { formatIssues } from "@plumeline/contracts";
 import { z } from "zod";
 
 /**
@@ -13,7 +14,7 @@ const envSchema = z.object({
 
 const parsed = envSchema.safeParse(import.meta.env);
 if (!parsed.success) {
-  throw new Error(`Invalid web environment: ${parsed.error.issues.map((i) => `${i.path.join(".")} ${i.message}`).join("; ")}`);
+  throw new Error(`Invalid web environment: ${formatIssues(parsed.error).join("; ")}`);
 }
 
 export const env = {

@@ -2,6 +2,7 @@ import { z } from "zod";
 import { pathwayAgentsSchema } from "../engine/run-spec.js";
 import { MAX_YEAR, MIN_YEAR, plausibleYear } from "../engine/spec-limits.js";
 import { authorAndDateFilters, pagedQuerySchema, pageSchema, type ListQueryInput } from "./paging.js";
+import { pathwayRecipeSchema } from "../compose/pathway-recipe.js";
 
 /**
  * Pathway bodies and responses (docs/API.md "pathways"). A pathway's `agents` are exactly the
@@ -27,13 +28,20 @@ function lastYearIssue(startYear: number, agents: Record<string, Record<string, 
   const length = Math.max(0, ...Object.values(agents).flatMap((s) => (s ? Object.values(s).map((v) => v.length) : [])));
   const last = startYear + length - 1;
   // An implausible start is reported on its own (plausibleYear); only a plausible one is followed.
-  return startYear >= MIN_YEAR && startYear <= MAX_YEAR && last > MAX_YEAR ? `with ${length} yearly values runs to ${last}; years must lie from ${MIN_YEAR} to ${MAX_YEAR}` : null;
+  return startYear >= MIN_YEAR && startYear <= MAX_YEAR && last > MAX_YEAR
+    ? `with ${length} yearly values runs to ${last}; years must lie from ${MIN_YEAR} to ${MAX_YEAR}`
+    : null;
 }
 
 export const createPathwayBodySchema = pathwayMetadataSchema
   .extend({
     startYear: plausibleYear(),
     agents: pathwayAgentsSchema,
+    /**
+     * How a composed pathway was made (compose/pathway-recipe.ts). The API replays it from the
+     * pathways it names and refuses the body unless the series match, then audits it.
+     */
+    recipe: pathwayRecipeSchema.optional(),
   })
   .strict()
   .superRefine((body, ctx) => {
@@ -106,5 +114,7 @@ export const pathwayPreviewSchema = z.object({
   endYear: z.number().int(),
   agents: z.array(z.object({ agent: z.string(), quantity: z.enum(["erf", "ppm", "ppb"]), column: z.string() })),
   rows: z.array(z.record(z.string(), z.number())),
+  /** Every year of every column as the pathway would store it, so the preview can draw them. */
+  series: pathwayAgentsSchema,
 });
 export type PathwayPreview = z.infer<typeof pathwayPreviewSchema>;

@@ -31,8 +31,8 @@ export type BenchScope = "w1" | "full";
  * streaming summaries, result assembly and hashing), from spec to finished result.
  * check = Σ over years of the five temperature percentiles plus the share above 1.5 K.
  */
-export async function runW1(members: number, threads?: number, scope: BenchScope = "w1", debug = false): Promise<W1Line> {
-  const spec = w1Spec(members);
+export async function runW1(members: number, threads?: number, scope: BenchScope = "w1", debug = false, seed?: string): Promise<W1Line> {
+  const spec = seed === undefined ? w1Spec(members) : w1Spec(members, seed);
   const times: StageTimes = { sample: 0, simulate: 0, summarise: 0, finish: 0 };
   const summaries = scope === "full" ? {} : { forcing: false, imbalance: false };
   const cpuStart = process.cpuUsage();

@@ -19,14 +19,21 @@ import { readSpecFile, userPath } from "./read-spec-file.js";
 async function main(argv: string[]): Promise<void> {
   const args = parseArgs(argv);
   if (args.command === "bench") {
-    process.stdout.write(`${JSON.stringify(await runW1(args.members!, args.threads, args.full ? "full" : "w1", args.debug === true))}\n`);
+    process.stdout.write(
+      `${JSON.stringify(await runW1(args.members!, args.threads, args.full ? "full" : "w1", args.debug === true, args.seed))}\n`,
+    );
     return;
   }
   const spec = readSpecFile(args.file!);
   if (args.command === "validate") {
     // Everything short of running: the schema, the engine's own checks and the sampling.
     const { spec: withDefaults } = preparePlan(spec);
-    const answer = { valid: true, members: withDefaults.members, pathways: withDefaults.pathways.length, inputHash: inputHash(withDefaults) };
+    const answer = {
+      valid: true,
+      members: withDefaults.members,
+      pathways: withDefaults.pathways.length,
+      inputHash: inputHash(withDefaults),
+    };
     process.stdout.write(`${JSON.stringify(answer)}\n`);
     return;
   }

@@ -5,10 +5,11 @@ export const USAGE = `usage:
   engine members SPEC.json [--out FILE]            CSV, one row per member: member, inputs,
                                                    weight, <pathwayId>@<year> warming (K)
   engine validate SPEC.json                        checks a spec without running it
-  engine bench --members N [--threads T] [--full] [--debug]
+  engine bench --members N [--threads T] [--full] [--debug] [--seed S]
                                                    one W1 benchmark line (bench-reference/README.md);
                                                    --full also summarises forcing and imbalance;
-                                                   --debug adds the process CPU seconds (cpu_s)`;
+                                                   --debug adds the process CPU seconds (cpu_s);
+                                                   --seed draws another ensemble (default "w1")`;
 
 export interface ParsedArgs {
   command: "run" | "members" | "validate" | "bench";
@@ -20,6 +21,8 @@ export interface ParsedArgs {
   full?: boolean;
   /** bench: add diagnostic fields to the line (cpu_s: CPU seconds of all threads during the run). */
   debug?: boolean;
+  /** bench: the run's seed (default "w1"), to see how the check value varies between ensembles. */
+  seed?: string;
 }
 
 /** Parses the CLI's small grammar; anything unexpected is a CliError naming the argument. */
@@ -45,7 +48,10 @@ export function parseArgs(argv: string[]): ParsedArgs {
     else if (arg === "--members" && command === "bench") parsed.members = count("--members");
     else if (arg === "--full" && command === "bench") parsed.full = true;
     else if (arg === "--debug" && command === "bench") parsed.debug = true;
-    else if (!arg.startsWith("--") && command !== "bench" && parsed.file === undefined) parsed.file = arg;
+    else if (arg === "--seed" && command === "bench") {
+      parsed.seed = value();
+      if (parsed.seed === "") throw new CliError("--seed must not be empty");
+    } else if (!arg.startsWith("--") && command !== "bench" && parsed.file === undefined) parsed.file = arg;
     else throw new CliError(`unexpected argument "${arg}"\n${USAGE}`);
   }
   if (command !== "bench" && parsed.file === undefined) throw new CliError(`${command} needs a SPEC.json file\n${USAGE}`);

@@ -1,5 +1,6 @@
+import { AleaStream } from "../random/alea-stream.js";
 import { createRandom, deriveSeed } from "../random/create-random.js";
-import { imanConover, latinHypercubeColumnInto, monteCarloColumnInto } from "../sampling/index.js";
+import { imanConover, latinHypercubeColumnInto } from "../sampling/index.js";
 import { SpecError } from "../spec/spec-error.js";
 import type { RunSpec } from "../spec/types.js";
 import { columnQuantiles } from "./column-quantiles.js";
@@ -17,14 +18,33 @@ export const allocateLocal: Allocate = (length) => new Float64Array(length);
  * correlations are then re-paired by Iman–Conover (1982) towards the target rank
  * correlations, which keeps each marginal exactly; finally each uniform goes through the
  * input's inverse CDF. Fixed inputs are a constant column. Cost O(members × inputs).
- * Each column is drawn straight into its (possibly shared) array, no copy.
+ * Each column is drawn straight into its (possibly shared) array, no copy. The streams are
+ * createRandom's (AleaStream); Monte Carlo columns are drawn two at a time
+ * (AleaStream.fillTwo: the same draws, ~2× faster than one stream after the other).
  */
 export function sampleInputs(spec: RunSpec, inputs: ModelInput[], allocate: Allocate = allocateLocal): Float64Array[] {
   const columns = inputs.map(() => allocate(spec.members));
   const correlated = correlatedInputs(spec, inputs);
-  inputs.forEach((_, i) => sampleColumn(spec, inputs[i]!, columns[i]!, correlated.includes(i)));
+  const streams = inputs.map((input) =>
+    input.distribution.type === "fixed" ? null : new AleaStream(deriveSeed(spec.seed, `input/${input.name}`)),
+  );
+  if (spec.sampling === "monte-carlo") drawMonteCarloUniforms(streams, columns);
+  inputs.forEach((_, i) => sampleColumn(spec, inputs[i]!, columns[i]!, streams[i]!, correlated.includes(i)));
   correlateColumns(spec, inputs, columns, correlated);
   return columns;
+}
+
+/** Every uncertain input's Monte Carlo uniforms, from its own stream, two columns at a time. */
+function drawMonteCarloUniforms(streams: (AleaStream | null)[], columns: Float64Array[]): void {
+  const drawn = streams.flatMap((stream, i) => (stream ? [i] : []));
+  for (let k = 0; k + 1 < drawn.length; k += 2) {
+    const [a, b] = [drawn[k]!, drawn[k + 1]!];
+    AleaStream.fillTwo(streams[a]!, columns[a]!, streams[b]!, columns[b]!);
+  }
+  if (drawn.length % 2 === 1) {
+    const last = drawn[drawn.length - 1]!;
+    streams[last]!.fill(columns[last]!);
+  }
 }
 
 /**
@@ -39,20 +59,19 @@ function correlatedInputs(spec: RunSpec, inputs: ModelInput[]): number[] {
 }
 
 /**
- * Fills one input's column from the input's own stream: its uniforms, mapped through the
- * inverse CDF in place unless `uniformsOnly` (a correlated input: correlateColumns maps it
- * after re-pairing). Depends on nothing but the spec and the input, so columns can be
- * sampled in any order, on any thread.
+ * Fills one input's column from the input's own stream (null for a fixed input): its
+ * uniforms (Monte Carlo ones are already drawn), mapped through the inverse CDF in place
+ * unless `uniformsOnly` (a correlated input: correlateColumns maps it after re-pairing).
+ * Depends on nothing but the spec and the input, so columns can be sampled in any order,
+ * on any thread.
  */
-function sampleColumn(spec: RunSpec, input: ModelInput, column: Float64Array, uniformsOnly: boolean): void {
+function sampleColumn(spec: RunSpec, input: ModelInput, column: Float64Array, stream: AleaStream | null, uniformsOnly: boolean): void {
   const d = input.distribution;
-  if (d.type === "fixed") {
-    column.fill(d.value);
+  if (d.type === "fixed" || stream === null) {
+    if (d.type === "fixed") column.fill(d.value);
     return;
   }
-  const random = createRandom(deriveSeed(spec.seed, `input/${input.name}`));
-  if (spec.sampling === "latin-hypercube") latinHypercubeColumnInto(column, random);
-  else monteCarloColumnInto(column, random);
+  if (spec.sampling === "latin-hypercube") latinHypercubeColumnInto(column, () => stream.next());
   if (!uniformsOnly) columnQuantiles(d, column, column);
 }
 

@@ -1,4 +1,4 @@
-import type { RandomSource } from "../random/create-random.js";
+import type { RandomSource, SeededRandom } from "../random/create-random.js";
 import { requireCount } from "./checks.js";
 
 /**
@@ -21,8 +21,15 @@ export function monteCarloUniforms(members: number, dimensions: number, random: 
   return columns;
 }
 
-/** One column of monteCarloUniforms written into `column` (its length is the member count): no allocation. */
-export function monteCarloColumnInto(column: Float64Array, random: RandomSource): Float64Array {
+/**
+ * One column of monteCarloUniforms written into `column` (its length is the member count): no
+ * allocation. A seeded stream (createRandom) fills it in one call, with the same draws.
+ */
+export function monteCarloColumnInto(column: Float64Array, random: RandomSource | SeededRandom): Float64Array {
+  if ("fill" in random) {
+    random.fill(column);
+    return column;
+  }
   for (let i = 0; i < column.length; i++) column[i] = random();
   return column;
 }

@@ -1,8 +1,18 @@
-import type { ListExportsQuery, ResultTable } from "@plumeline/contracts";
 import type { Request, Response } from "express";
 import { contextOf, currentUser } from "../../middleware/request-context.js";
+import { validated } from "../../middleware/validate.js";
+import { exportsInputs as input } from "./exports.inputs.js";
 import { createHash } from "node:crypto";
-import { downloadExportAgain, exportReport, exportTableCsv, exportTablesZip, exportWorkbook, listExports, openMemberTableCsv, type ExportFile } from "./exports.service.js";
+import {
+  downloadExportAgain,
+  exportReport,
+  exportTableCsv,
+  exportTablesZip,
+  exportWorkbook,
+  listExports,
+  openMemberTableCsv,
+  type ExportFile,
+} from "./exports.service.js";
 
 function send(res: Response, file: ExportFile) {
   res.setHeader("Content-Type", file.contentType);
@@ -10,11 +20,11 @@ function send(res: Response, file: ExportFile) {
   res.send(file.bytes);
 }
 
-const runId = (req: Request) => (req.params as { id: string }).id;
+const runId = (res: Response) => validated(res, input.byRun).params.id;
 
 export const exportsController = {
   async csv(req: Request, res: Response) {
-    const { id, table } = req.params as { id: string; table: ResultTable };
+    const { id, table } = validated(res, input.table).params;
     send(res, await exportTableCsv(contextOf(req), currentUser(req), id, table));
   },
   /**
@@ -23,7 +33,7 @@ export const exportsController = {
    * that goes away stops the recomputation thread; nothing is recorded then.
    */
   async membersCsv(req: Request, res: Response) {
-    const download = await openMemberTableCsv(contextOf(req), currentUser(req), runId(req));
+    const download = await openMemberTableCsv(contextOf(req), currentUser(req), runId(res));
     const hash = createHash("sha256");
     let byteSize = 0;
     try {
@@ -46,18 +56,18 @@ export const exportsController = {
     }
   },
   async tablesZip(req: Request, res: Response) {
-    send(res, await exportTablesZip(contextOf(req), currentUser(req), runId(req)));
+    send(res, await exportTablesZip(contextOf(req), currentUser(req), runId(res)));
   },
   async workbook(req: Request, res: Response) {
-    send(res, await exportWorkbook(contextOf(req), currentUser(req), runId(req)));
+    send(res, await exportWorkbook(contextOf(req), currentUser(req), runId(res)));
   },
   async report(req: Request, res: Response) {
-    send(res, await exportReport(contextOf(req), currentUser(req), runId(req)));
+    send(res, await exportReport(contextOf(req), currentUser(req), runId(res)));
   },
   async again(req: Request, res: Response) {
-    send(res, await downloadExportAgain(contextOf(req), currentUser(req), (req.params as { exportId: string }).exportId));
+    send(res, await downloadExportAgain(contextOf(req), currentUser(req), validated(res, input.again).params.exportId));
   },
   async list(req: Request, res: Response) {
-    res.json(await listExports(contextOf(req), currentUser(req), req.query as unknown as ListExportsQuery));
+    res.json(await listExports(contextOf(req), currentUser(req), validated(res, input.list).query));
   },
 };

@@ -1,7 +1,8 @@
-import type { ChangeClass, CreateModelVersionBody, ListModelVersionsQuery, ModelVersionImpactBody, UpdateModelVersionBody } from "@plumeline/contracts";
 import type { Request, Response } from "express";
 import { contextOf, currentUser } from "../../middleware/request-context.js";
+import { validated } from "../../middleware/validate.js";
 import { modelVersionImpact } from "./model-version-impact.service.js";
+import { modelVersionsInputs as input } from "./model-versions.inputs.js";
 import {
   createModelVersion,
   decideModelVersion,
@@ -13,38 +14,42 @@ import {
   updateModelVersion,
 } from "./model-versions.service.js";
 
-const idOf = (req: Request) => (req.params as { id: string }).id;
-
 export const modelVersionsController = {
   async list(req: Request, res: Response) {
-    res.json(await listModelVersions(contextOf(req), req.query as unknown as ListModelVersionsQuery));
+    res.json(await listModelVersions(contextOf(req), validated(res, input.list).query));
   },
   async get(req: Request, res: Response) {
-    res.json(await getModelVersion(contextOf(req), idOf(req)));
+    res.json(await getModelVersion(contextOf(req), validated(res, input.byId).params.id));
   },
   async create(req: Request, res: Response) {
-    res.status(201).json(await createModelVersion(contextOf(req), currentUser(req), req.body as CreateModelVersionBody));
+    res.status(201).json(await createModelVersion(contextOf(req), currentUser(req), validated(res, input.create).body));
   },
   async update(req: Request, res: Response) {
-    res.json(await updateModelVersion(contextOf(req), currentUser(req), idOf(req), req.body as UpdateModelVersionBody));
+    const { params, body } = validated(res, input.update);
+    res.json(await updateModelVersion(contextOf(req), currentUser(req), params.id, body));
   },
   async diff(req: Request, res: Response) {
-    res.json(await diffModelVersion(contextOf(req), idOf(req), (req.query as { against?: string }).against));
+    const { params, query } = validated(res, input.diff);
+    res.json(await diffModelVersion(contextOf(req), params.id, query.against));
   },
   async impact(req: Request, res: Response) {
-    res.json(await modelVersionImpact(contextOf(req), idOf(req), req.body as ModelVersionImpactBody));
+    const { params, body } = validated(res, input.impact);
+    res.json(await modelVersionImpact(contextOf(req), params.id, body));
   },
   async submit(req: Request, res: Response) {
-    const body = req.body as { changeClass: ChangeClass; note?: string };
-    res.json(await submitModelVersion(contextOf(req), currentUser(req), idOf(req), body.changeClass, body.note));
+    const { params, body } = validated(res, input.submit);
+    res.json(await submitModelVersion(contextOf(req), currentUser(req), params.id, body.changeClass, body.note));
   },
   async approve(req: Request, res: Response) {
-    res.json(await decideModelVersion(contextOf(req), currentUser(req), idOf(req), "approved", (req.body as { comment: string }).comment));
+    const { params, body } = validated(res, input.decide);
+    res.json(await decideModelVersion(contextOf(req), currentUser(req), params.id, "approved", body.comment));
   },
   async reject(req: Request, res: Response) {
-    res.json(await decideModelVersion(contextOf(req), currentUser(req), idOf(req), "rejected", (req.body as { comment: string }).comment));
+    const { params, body } = validated(res, input.decide);
+    res.json(await decideModelVersion(contextOf(req), currentUser(req), params.id, "rejected", body.comment));
   },
   async retire(req: Request, res: Response) {
-    res.json(await retireModelVersion(contextOf(req), currentUser(req), idOf(req), (req.body as { comment?: string }).comment));
+    const { params, body } = validated(res, input.retire);
+    res.json(await retireModelVersion(contextOf(req), currentUser(req), params.id, body.comment));
   },
 };

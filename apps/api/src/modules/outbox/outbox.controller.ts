@@ -1,5 +1,7 @@
 import type { Request, Response } from "express";
 import { contextOf } from "../../middleware/request-context.js";
+import { validated } from "../../middleware/validate.js";
+import { outboxInputs as input } from "./outbox.inputs.js";
 import { getOutboxMessage, listOutbox } from "./outbox.service.js";
 
 export const outboxController = {
@@ -7,7 +9,6 @@ export const outboxController = {
     res.json(await listOutbox(contextOf(req)));
   },
   async show(req: Request, res: Response) {
-    const { id } = req.params as unknown as { id: number };
-    res.json(await getOutboxMessage(contextOf(req), id));
+    res.json(await getOutboxMessage(contextOf(req), validated(res, input.show).params.id));
   },
 };

@@ -1,26 +1,25 @@
-import { issueDetails, uploadPathwayFieldsSchema, type CreatePathwayBody, type ListPathwaysQuery, type UpdatePathwayBody } from "@plumeline/contracts";
 import type { Request, Response } from "express";
-import { badRequest } from "../../errors/app-error.js";
 import { contextOf, currentUser } from "../../middleware/request-context.js";
+import { validated } from "../../middleware/validate.js";
+import { pathwaysInputs as input } from "./pathways.inputs.js";
 import { createPathway, getPathway, listPathways, updatePathway, uploadPathway } from "./pathways.service.js";
 
 export const pathwaysController = {
   async list(req: Request, res: Response) {
-    res.json(await listPathways(contextOf(req), req.query as unknown as ListPathwaysQuery));
+    res.json(await listPathways(contextOf(req), validated(res, input.list).query));
   },
   async get(req: Request, res: Response) {
-    res.json(await getPathway(contextOf(req), (req.params as { id: string }).id));
+    res.json(await getPathway(contextOf(req), validated(res, input.byId).params.id));
   },
   async create(req: Request, res: Response) {
-    res.status(201).json(await createPathway(contextOf(req), currentUser(req), req.body as CreatePathwayBody));
+    res.status(201).json(await createPathway(contextOf(req), currentUser(req), validated(res, input.create).body));
   },
   async update(req: Request, res: Response) {
-    res.json(await updatePathway(contextOf(req), currentUser(req), (req.params as { id: string }).id, req.body as UpdatePathwayBody));
+    const { params, body } = validated(res, input.update);
+    res.json(await updatePathway(contextOf(req), currentUser(req), params.id, body));
   },
   async upload(req: Request, res: Response) {
-    const fields = uploadPathwayFieldsSchema.safeParse(req.body ?? {});
-    if (!fields.success) throw badRequest(issueDetails(fields.error, { fallback: "body" }));
-    const out = await uploadPathway(contextOf(req), currentUser(req), req.file, fields.data);
+    const out = await uploadPathway(contextOf(req), currentUser(req), req.file, validated(res, input.upload).body);
     if ("preview" in out) res.json(out.preview);
     else res.status(201).json(out.pathway);
   },

@@ -25,6 +25,7 @@ import { recordAudit } from "../audit/audit.service.js";
 import { pathwayChecksum } from "./pathway-checksum.js";
 import { assertFileGiven, readUploadedRows, type UploadedFile } from "../../uploads/tabular-file.js";
 import { checkSeriesShape, seriesAgents, seriesLength } from "./pathway-series.js";
+import { checkPathwayRecipe } from "./pathway-recipe-check.js";
 import { parsePathwayTable, type PathwaySeries } from "./pathway-table.js";
 import type { PathwayModel } from "./pathway.model.js";
 
@@ -90,6 +91,7 @@ export async function createPathway(ctx: Ctx, user: RequestUser, body: CreatePat
   const shape = checkSeriesShape(input.agents);
   if (shape.length > 0) throw badRequest(shape, "The pathway's series are inconsistent.");
   const agents = input.agents as PathwaySeries;
+  const recipe = input.recipe ? await checkPathwayRecipe(ctx, input.recipe, { startYear: input.startYear, agents: input.agents }) : null;
   const row = await ctx.sequelize.transaction(async (transaction) => {
     const created = await ctx.models.Pathway.create(
       {
@@ -114,8 +116,8 @@ export async function createPathway(ctx: Ctx, user: RequestUser, body: CreatePat
         action: "pathway.created",
         entityType: "pathway",
         entityId: created.id,
-        summary: `Pathway "${created.name}" created from ${origin} (${created.startYear}–${created.endYear}, checksum ${created.checksum.slice(0, 12)}…).`,
-        data: { checksum: created.checksum, source: created.source, vintage: created.vintage, origin },
+        summary: `Pathway "${created.name}" created from ${recipe ? `the composer (${recipe.summary})` : origin} (${created.startYear}–${created.endYear}, checksum ${created.checksum.slice(0, 12)}…).`,
+        data: { checksum: created.checksum, source: created.source, vintage: created.vintage, origin: recipe ? "composer" : origin, ...(recipe ? { recipe: recipe.recipe } : {}) },
       },
       transaction,
     );
@@ -213,6 +215,7 @@ export async function uploadPathway(
         endYear: table.table.endYear,
         agents: table.table.columns.map((c) => ({ agent: c.agent, quantity: c.quantity, column: c.header })),
         rows: table.table.rows.slice(0, PREVIEW_ROWS),
+        series: table.table.agents as PathwayPreview["series"],
       },
     };
   const pathway = await createPathway(

@@ -65,6 +65,8 @@ describe("POST /api/pathways/upload", () => {
     expect(preview.status).toBe(200);
     expect(preview.body).toMatchObject({ startYear: 2000, endYear: 2002, agents: [{ agent: "co2", quantity: "ppm" }, { agent: "aerosol-cloud", quantity: "erf" }] });
     expect(preview.body.rows[1]).toEqual({ year: 2001, co2_ppm: 372, "aerosol-cloud_erf_wm2": -0.81 });
+    // The whole series too, as it would be stored, so the preview can chart every year.
+    expect(preview.body.series).toEqual({ co2: { ppm: [370, 372, 374] }, "aerosol-cloud": { erf: [-0.8, -0.81, -0.82] } });
     expect(await t.ctx.models.Pathway.count()).toBe(before);
 
     const created = await analyst
@@ -118,6 +120,51 @@ describe("POST /api/pathways/upload", () => {
     expect(big.status).toBe(413);
     expect((await actuary.post("/api/pathways/upload").attach("file", Buffer.from(csv), "x.csv")).status).toBe(403);
     expect((await request(t.app).post("/api/pathways/upload").attach("file", Buffer.from(csv), "x.csv")).status).toBe(401);
+  });
+});
+
+describe("POST /api/pathways with a composer's recipe", () => {
+  // Two small invented pathways over 2000–2003 to compose from.
+  const basePathway = { name: "Recipe base", source: "test", vintage: "v1", startYear: 2000, agents: { co2: { erf: [1, 1.5, 2, 2.5] }, ozone: { erf: [0.25, 0.25, 0.5, 0.5] } } };
+  const otherPathway = { ...basePathway, name: "Recipe other", agents: { co2: { erf: [3, 3, 3, 3] }, ozone: { erf: [0, 0, 0, 0] } } };
+
+  it("replays the recipe from the stored pathways, saves the body when it matches and audits the recipe", async () => {
+    const base = (await analyst.post("/api/pathways").send(basePathway)).body as { id: string };
+    const other = (await analyst.post("/api/pathways").send(otherPathway)).body as { id: string };
+    const recipe = {
+      basePathwayId: base.id,
+      steps: [
+        { kind: "scale", agent: "co2", factor: 2 },
+        { kind: "splice", agent: "ozone", sourcePathwayId: other.id, fromYear: 2002, toYear: 2003 },
+        { kind: "extend", toYear: 2005, method: "hold" },
+      ],
+    };
+    // By hand: CO2 doubled then held; ozone 2002–2003 taken from the other pathway (0), then held.
+    const agents = { co2: { erf: [2, 3, 4, 5, 5, 5] }, ozone: { erf: [0.25, 0.25, 0, 0, 0, 0] } };
+    const res = await analyst.post("/api/pathways").send({ ...basePathway, name: "Composed", startYear: 2000, agents, recipe });
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ endYear: 2005, agents });
+    const audit = await t.ctx.models.AuditEvent.findOne({ where: { action: "pathway.created", entityId: res.body.id } });
+    expect(audit?.get("summary")).toContain(`from the composer (Composed in Plumeline from "Recipe base" (id ${base.id}): 1. CO2 scaled by 2 in every year.`);
+    expect(audit?.get("data")).toMatchObject({ origin: "composer", recipe });
+
+    const tampered = await analyst.post("/api/pathways").send({ ...basePathway, name: "Tampered", agents: { ...agents, ozone: { erf: [0.25, 0.25, 0, 0.1, 0, 0] } }, recipe });
+    expect(tampered.status).toBe(400);
+    expect(tampered.body.error.details).toEqual([
+      { path: "recipe", message: "does not reproduce the submitted series (first difference: Ozone in 2003); a pathway it names may have been edited meanwhile" },
+    ]);
+  });
+
+  it("names a missing pathway and a step that cannot be replayed by their field", async () => {
+    const base = (await analyst.post("/api/pathways").send(basePathway)).body as { id: string };
+    const missing = await analyst
+      .post("/api/pathways")
+      .send({ ...basePathway, recipe: { basePathwayId: base.id, steps: [{ kind: "blend", otherPathwayId: "no-such-pathway", weight: 0.5 }] } });
+    expect(missing.status).toBe(400);
+    expect(missing.body.error.details).toEqual([{ path: "recipe.steps[0].otherPathwayId", message: "names no pathway (no-such-pathway)" }]);
+    const late = await analyst.post("/api/pathways").send({ ...basePathway, recipe: { basePathwayId: base.id, steps: [{ kind: "extend", toYear: 2003, method: "hold" }] } });
+    expect(late.status).toBe(400);
+    expect(late.body.error.details).toEqual([{ path: "recipe.steps[0].toYear", message: "toYear 2003 must come after the pathway's last year 2003" }]);
   });
 });
 

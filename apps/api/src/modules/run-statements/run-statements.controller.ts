@@ -1,15 +1,15 @@
-import type { CreateRunStatementBody } from "@plumeline/contracts";
 import type { Request, Response } from "express";
 import { contextOf, currentUser } from "../../middleware/request-context.js";
+import { validated } from "../../middleware/validate.js";
+import { runStatementsInputs as input } from "./run-statements.inputs.js";
 import { listRunStatements, recordRunStatement } from "./run-statements.service.js";
-
-const idOf = (req: Request) => (req.params as { id: string }).id;
 
 export const runStatementsController = {
   async list(req: Request, res: Response) {
-    res.json(await listRunStatements(contextOf(req), idOf(req)));
+    res.json(await listRunStatements(contextOf(req), validated(res, input.list).params.id));
   },
   async create(req: Request, res: Response) {
-    res.status(201).json(await recordRunStatement(contextOf(req), currentUser(req), idOf(req), req.body as CreateRunStatementBody));
+    const { params, body } = validated(res, input.create);
+    res.status(201).json(await recordRunStatement(contextOf(req), currentUser(req), params.id, body));
   },
 };

@@ -1,10 +1,14 @@
 import { useNavigate, useSearchParams } from "react-router-dom";
 import { paths } from "@/config/paths";
 import { usePathway } from "@/features/pathways/api/get-pathway";
+import { usePathwayChoices } from "@/features/pathways/api/get-pathways";
 import { PathwayComposeForm } from "@/features/pathways/components/pathway-compose-form";
+import { PathwayComposer } from "@/features/pathways/components/pathway-composer";
+import { ButtonLink } from "@/components/ui/button";
 import { Card, CardBody } from "@/components/ui/card";
+import { Field, Select } from "@/components/ui/field";
 import { PageHeader } from "@/components/ui/page-header";
-import { ErrorState, LoadingState } from "@/components/ui/states";
+import { EmptyState, ErrorState, LoadingState } from "@/components/ui/states";
 
 const EMPTY = {
   name: "",
@@ -17,14 +21,18 @@ const EMPTY = {
 
 /** Pretty JSON with each series on one line, so a 350-year pathway stays readable and editable. */
 function compactJson(value: unknown): string {
-  return JSON.stringify(value, null, 2).replace(/\[\s*(-?[\d.e+-]+(?:,\s*-?[\d.e+-]+)*)\s*\]/g, (_, nums: string) => `[${nums.split(/,\s*/).join(", ")}]`);
+  return JSON.stringify(value, null, 2).replace(
+    /\[\s*(-?[\d.e+-]+(?:,\s*-?[\d.e+-]+)*)\s*\]/g,
+    (_, nums: string) => `[${nums.split(/,\s*/).join(", ")}]`,
+  );
 }
 
-export default function PathwayComposePage() {
-  const [params] = useSearchParams();
-  const fromId = params.get("from") ?? undefined;
+/** The advanced path: the whole pathway as JSON, for people who already hold the numbers. */
+function JsonComposer({ fromId }: { fromId: string | undefined }) {
   const from = usePathway(fromId);
   const navigate = useNavigate();
+  if (fromId && from.isPending) return <LoadingState />;
+  if (fromId && from.isError) return <ErrorState error={from.error} />;
   const body =
     fromId && from.data
       ? compactJson({
@@ -36,22 +44,65 @@ export default function PathwayComposePage() {
           agents: from.data.agents,
         })
       : compactJson(EMPTY);
+  return <PathwayComposeForm key={fromId ?? "new"} initialJson={body} onSaved={(p) => navigate(paths.pathway.build(p.id))} />;
+}
+
+/** The step composer: choose the pathway to start from, then add steps. */
+function StepComposer({ fromId, choose }: { fromId: string | undefined; choose: (id: string) => void }) {
+  const list = usePathwayChoices();
+  const from = usePathway(fromId);
+  const navigate = useNavigate();
+  if (list.isPending) return <LoadingState label="Loading pathways…" />;
+  if (list.isError) return <ErrorState error={list.error} retry={() => list.refetch()} />;
+  const choices = list.data.map((p) => ({ id: p.id, name: p.name, startYear: p.startYear, endYear: p.endYear }));
+  if (choices.length === 0)
+    return <EmptyState title="No pathways to start from">Upload a pathway first, or write one as JSON (advanced).</EmptyState>;
+  return (
+    <div className="flex flex-col gap-6">
+      <Field label="Start from" hint="The pathway whose numbers the steps change; it stays as it is.">
+        {(p) => (
+          <Select {...p} value={fromId ?? ""} onChange={(e) => choose(e.target.value)} className="max-w-xl">
+            <option value="">Choose a pathway…</option>
+            {choices.map((c) => (
+              <option key={c.id} value={c.id}>
+                {c.name} ({c.startYear}–{c.endYear})
+              </option>
+            ))}
+          </Select>
+        )}
+      </Field>
+      {fromId && from.isPending && <LoadingState label="Loading the pathway…" />}
+      {fromId && from.isError && <ErrorState error={from.error} />}
+      {from.data && (
+        <PathwayComposer key={from.data.id} base={from.data} choices={choices} onSaved={(p) => navigate(paths.pathway.build(p.id))} />
+      )}
+    </div>
+  );
+}
+
+export default function PathwayComposePage() {
+  const [params, setParams] = useSearchParams();
+  const fromId = params.get("from") ?? undefined;
+  const json = params.get("mode") === "json";
   return (
     <>
       <PageHeader
         kicker="Pathways"
-        title="Compose a pathway"
-        description={fromId ? "Starts from the JSON of an existing pathway; change what you need and save it as a new pathway." : "Write the pathway as JSON."}
+        title={json ? "Compose a pathway as JSON" : "Compose a pathway"}
+        description={
+          json
+            ? "Advanced: the whole pathway as JSON, checked live with the schema the API uses."
+            : "Start from an existing pathway and change it step by step: scale an agent, splice in years from another pathway, blend two pathways, extend past the last year. It is saved as a new pathway with its recipe."
+        }
+        actions={
+          <ButtonLink to={json ? paths.pathwayCompose.build(fromId) : paths.pathwayCompose.build(fromId, "json")} variant="secondary">
+            {json ? "Back to the step composer" : "Advanced: edit as JSON"}
+          </ButtonLink>
+        }
       />
       <Card>
         <CardBody>
-          {fromId && from.isPending ? (
-            <LoadingState />
-          ) : fromId && from.isError ? (
-            <ErrorState error={from.error} />
-          ) : (
-            <PathwayComposeForm key={fromId ?? "new"} initialJson={body} onSaved={(p) => navigate(paths.pathway.build(p.id))} />
-          )}
+          {json ? <JsonComposer fromId={fromId} /> : <StepComposer fromId={fromId} choose={(id) => setParams(id ? { from: id } : {})} />}
         </CardBody>
       </Card>
     </>

@@ -35,7 +35,7 @@ export default function PathwaysPage() {
           canWrite && (
             <>
               <ButtonLink to={paths.pathwayCompose.build()} variant="secondary">
-                Compose from JSON
+                Compose a pathway
               </ButtonLink>
               <ButtonLink to={paths.pathwayUpload.build()} variant="primary">
                 Upload CSV / XLSX
@@ -69,7 +69,7 @@ export default function PathwaysPage() {
             list.filtered ? (
               <EmptyState title="No pathways match these filters" />
             ) : (
-              <EmptyState title="No pathways yet">Upload a CSV or XLSX file, or compose one from JSON.</EmptyState>
+              <EmptyState title="No pathways yet">Upload a CSV or XLSX file, or compose one from an existing pathway.</EmptyState>
             )
           }
         >

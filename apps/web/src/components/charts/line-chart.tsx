@@ -13,7 +13,10 @@ export interface LineSeries {
   color?: string;
 }
 
-/** Plain multi-line chart over years (e.g. concentrations given in ppm or ppb). */
+/**
+ * Plain multi-line chart over years (e.g. concentrations given in ppm or ppb). A NaN value is
+ * a year the series does not cover: the line breaks there and the table shows "–".
+ */
 export function LineChart({ title, years, series, yLabel, height = 240 }: { title: string; years: number[]; series: LineSeries[]; yLabel: string; height?: number }) {
   const [ref, width] = useChartWidth<HTMLDivElement>();
   const m = DEFAULT_MARGINS;
@@ -28,7 +31,10 @@ export function LineChart({ title, years, series, yLabel, height = 240 }: { titl
         <DataTable
           caption={title}
           columns={["Year", ...series.map((s) => s.label)]}
-          rows={years.map((yr, k) => ({ yr, k })).filter(({ yr }) => yr % 10 === 0).map(({ yr, k }) => [yr, ...series.map((s) => s.values[k]?.toFixed(2) ?? "–")])}
+          rows={years.map((yr, k) => ({ yr, k })).filter(({ yr }) => yr % 10 === 0).map(({ yr, k }) => [yr, ...series.map((s) => {
+            const v = s.values[k];
+            return v !== undefined && Number.isFinite(v) ? v.toFixed(2) : "–";
+          })])}
         />
       }
     >
@@ -46,7 +52,13 @@ export function LineChart({ title, years, series, yLabel, height = 240 }: { titl
             <AxisLeft scale={y} width={innerWidth} label={yLabel} />
             <AxisBottom scale={x} height={innerHeight} width={innerWidth} label="Year" ticks={Math.max(2, Math.floor(innerWidth / 80))} />
             {series.map((s, i) => (
-              <path key={s.id} d={line<number>().x((_, k) => x(years[k]!)).y((v) => y(v))(s.values) ?? ""} fill="none" stroke={s.color ?? seriesColor(i)} strokeWidth={2} />
+              <path key={s.id} d={
+                  line<number>()
+                    .defined((v) => Number.isFinite(v))
+                    .x((_, k) => x(years[k]!))
+                    .y((v) => y(v))(s.values) ?? ""
+                }
+                data-series={s.id} fill="none" stroke={s.color ?? seriesColor(i)} strokeWidth={2} />
             ))}
           </g>
         </svg>

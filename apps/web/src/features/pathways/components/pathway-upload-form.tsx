@@ -4,7 +4,7 @@ import { Button } from "@/components/ui/button";
 import { Field, Input, Textarea } from "@/components/ui/field";
 import { ErrorState } from "@/components/ui/states";
 import { isApiError } from "@/lib/api-error";
-import { PathwayPreviewTable } from "./pathway-preview-table";
+import { PathwayUploadPreview } from "./pathway-upload-preview";
 import { usePreviewPathwayUpload, useUploadPathway, type PathwayUploadInput } from "../api/upload-pathway";
 import { fieldErrors } from "@/lib/field-errors";
 
@@ -90,19 +90,7 @@ export function PathwayUploadForm({ onSaved }: { onSaved: (p: Pathway) => void }
       )}
       {result && input && (
         <section aria-labelledby="preview-title" className="flex flex-col gap-3">
-          <h2 id="preview-title" className="text-base font-semibold">
-            Preview: {result.startYear}–{result.endYear}, {result.agents.length} agents
-          </h2>
-          <p className="text-sm text-muted">
-            Columns read:{" "}
-            {result.agents.map((a) => (
-              <code key={a.column} className="mr-2">
-                {a.column} → {a.agent} ({a.quantity === "erf" ? "W m-2" : a.quantity})
-              </code>
-            ))}
-          </p>
-          <PathwayPreviewTable rows={result.rows} />
-          <p className="text-xs text-muted">First {result.rows.length} rows shown.</p>
+          <PathwayUploadPreview name={input.name} preview={result} />
           {upload.error && <ErrorState error={upload.error} />}
           <div>
             <Button onClick={() => upload.mutate(input, { onSuccess: onSaved })} disabled={upload.isPending}>
