@@ -26,7 +26,18 @@ test.beforeAll(async ({ baseURL }) => {
     seed,
     sampling: "latin-hypercube",
   });
+  // A third run for the comparison: the same version and pathways under another seed, so the
+  // settings table has one more difference to name.
+  const other = await postJson<RunSummary>(api, "/api/runs", {
+    name: names.runOnPreviousOtherSeed,
+    modelVersionId: v1.id,
+    pathwayIds: await pathwayIds(api, seededPathways),
+    members,
+    seed: `${seed}-other`,
+    sampling: "latin-hypercube",
+  });
   await waitForRun(api, run.id);
+  await waitForRun(api, other.id);
   await api.dispose();
 });
 
@@ -75,7 +86,7 @@ test("analyst runs the approved version, reads the fan chart and horizons, compa
 
   // The horizon table shows what the API computed (2 decimals, K).
   const api = page.request;
-  const result = await (await api.get(`/api/runs/${runId}/result`)).json() as RunResult;
+  const result = (await (await api.get(`/api/runs/${runId}/result`)).json()) as RunResult;
   const highTab = page.getByRole("radiogroup", { name: "Pathway" }).getByRole("radio", { name: "Harbourline High" });
   await highTab.click();
   await expect(highTab).toHaveAttribute("aria-checked", "true");
@@ -94,16 +105,36 @@ test("analyst runs the approved version, reads the fan chart and horizons, compa
   // Compare with the previous version: same pathways, same seed, wider aerosol–cloud range.
   await page.getByRole("link", { name: "Compare…" }).click();
   await expect(page.getByRole("heading", { level: 1, name: "Compare" })).toBeVisible();
-  const right = page.getByLabel("Right: run");
-  const previous = right.locator("option").filter({ hasText: names.runOnPrevious });
-  await right.selectOption((await previous.getAttribute("value")));
-  await page.getByLabel("Left: pathway").selectOption({ label: "Harbourline High" });
-  await page.getByLabel("Right: pathway").selectOption({ label: "Harbourline High" });
+  // The address carries the run ids; this run is the reference.
+  await expect(page).toHaveURL(/\/runs\/compare\?runs=[0-9a-f-]{36}$/);
+  const second = page.getByLabel("Run 2", { exact: true });
+  await second.selectOption(await second.locator("option").filter({ hasText: names.runOnPrevious }).first().getAttribute("value"));
+  await page.getByLabel("Reference run: pathway").selectOption({ label: "Harbourline High" });
+  await page.getByLabel("Run 2: pathway").selectOption({ label: "Harbourline High" });
   await expect(page.getByRole("figure", { name: `${names.runOnWider}: Harbourline High` })).toBeVisible();
   await expect(page.getByRole("figure", { name: `${names.runOnPrevious}: Harbourline High` })).toBeVisible();
-  await expect(page.getByRole("figure", { name: "Both on one chart" })).toBeVisible();
+  await expect(page.getByRole("figure", { name: "All on one chart" })).toBeVisible();
   await expect(page.getByRole("figure", { name: "Warming at the shared horizons" })).toBeVisible();
+  await expect(page.getByTestId("differing-settings")).toHaveText("Differ: model version.");
   await snap(page, testInfo, "compare-versions", "compare.png");
+
+  // A third run: rows are labelled by run name, with differences from the reference.
+  await page.getByRole("button", { name: "Add a run" }).click();
+  const third = page.getByLabel("Run 3", { exact: true });
+  await third.selectOption(await third.locator("option").filter({ hasText: names.runOnPreviousOtherSeed }).getAttribute("value"));
+  await page.getByLabel("Run 3: pathway").selectOption({ label: "Harbourline High" });
+  await expect(page).toHaveURL(/\?runs=[0-9a-f-]{36},[0-9a-f-]{36},[0-9a-f-]{36}&pathways=/);
+  await expect(page.getByTestId("differing-settings")).toHaveText("Differ: model version, seed.");
+  const table2100 = page.getByRole("table", { name: "Warming in 2100" });
+  await expect(table2100.getByRole("rowheader")).toHaveText([
+    `${names.runOnWider} (reference)`,
+    names.runOnPrevious,
+    names.runOnPreviousOtherSeed,
+  ]);
+  // Δ median of the third run: a signed difference in K.
+  await expect(table2100.getByRole("row").nth(3).getByRole("cell").nth(2)).toHaveText(/^[+−]\d\.\d\d$|^0\.00$/);
+  await page.getByRole("heading", { name: "Settings that differ" }).scrollIntoViewIfNeeded();
+  await snap(page, testInfo, "compare-three-runs", "compare-three-runs.png");
 });
 
 test("a run on an unapproved version is marked exploratory on its page and on the desk", async ({ page, baseURL }, testInfo) => {

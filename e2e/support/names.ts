@@ -9,6 +9,7 @@ export const names = {
   managerOwnDraft: "Manager's own tweak",
   runOnWider: "Wider aerosol–cloud: three pathways",
   runOnPrevious: "Core v1: three pathways",
+  runOnPreviousOtherSeed: "Core v1: another seed",
   actuaryRun: "Q3 ORSA: flood and heat lens",
   invitedUser: { email: "newcomer@harbourline.example", name: "Noor Castellan" },
 } as const;

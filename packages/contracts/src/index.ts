@@ -14,6 +14,7 @@ export * from "./api/outbox.js";
 export * from "./api/pathways.js";
 export * from "./api/model-versions.js";
 export * from "./api/model-version-impact.js";
+export * from "./api/materiality.js";
 export * from "./api/runs.js";
 export * from "./api/exports.js";
 export * from "./api/perils.js";

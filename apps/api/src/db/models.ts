@@ -15,6 +15,7 @@ import { initExportRecordModel } from "../modules/exports/export-record.model.js
 import { initRunStatementModel } from "../modules/run-statements/run-statement.model.js";
 import { initPerilProfileModel } from "../modules/peril-profiles/peril-profile.model.js";
 import { initPortfolioModel } from "../modules/portfolios/portfolio.model.js";
+import { initSettingModel } from "../modules/settings/setting.model.js";
 
 /**
  * Registers every module's model on this Sequelize instance. Model classes bind to the
@@ -30,6 +31,7 @@ export function initModels(sequelize: Sequelize) {
     Verification: initVerificationModel(sequelize),
     AuditEvent: initAuditEventModel(sequelize),
     OutboxMessage: initOutboxMessageModel(sequelize),
+    Setting: initSettingModel(sequelize),
     // domain (pathways, model versions, runs, jobs, results, exports)
     Pathway: initPathwayModel(sequelize),
     ModelVersion: initModelVersionModel(sequelize),

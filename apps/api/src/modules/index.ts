@@ -12,6 +12,7 @@ import { exportsRouter, runExportsRouter } from "./exports/exports.routes.js";
 import { runStatementsRouter } from "./run-statements/run-statements.routes.js";
 import { perilProfilesRouter } from "./peril-profiles/peril-profiles.routes.js";
 import { portfoliosRouter } from "./portfolios/portfolios.routes.js";
+import { settingsRouter } from "./settings/settings.routes.js";
 
 /**
  * Every module's router and the path it is mounted at under /api. app.ts mounts them in
@@ -25,6 +26,7 @@ export const moduleRouters: ReadonlyArray<readonly [path: string, router: Router
   ["/audit", auditRouter],
   ["/audit.csv", auditCsvRouter],
   ["/outbox", outboxRouter],
+  ["/settings", settingsRouter],
   // domain (pathways, model-versions, runs, results, exports)
   ["/pathways", pathwaysRouter],
   ["/model-versions", modelVersionsRouter],

@@ -66,6 +66,7 @@ export const routes: RouteObject[] = [
           page("adminUsers", () => import("./routes/admin-users-page")),
           page("adminAudit", () => import("./routes/admin-audit-page")),
           page("adminOutbox", () => import("./routes/admin-outbox-page")),
+          page("adminSettings", () => import("./routes/admin-settings-page")),
           { path: "*", lazy: async () => ({ Component: (await import("./routes/not-found-page")).default }) },
         ],
       },

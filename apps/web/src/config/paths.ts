@@ -61,7 +61,8 @@ export const paths = {
   runNew: route({ path: "/runs/new", build: (versionId?: string) => `/runs/new${qs({ version: versionId })}`, permission: "runs:create", purpose: "Starting runs" }),
   runCompare: route({
     path: "/runs/compare",
-    build: (a?: string, b?: string) => `/runs/compare${qs({ a, b })}`,
+    // The run ids in the address (?runs=a,b,c), so a comparison can be bookmarked and shared.
+    build: (...runIds: string[]) => `/runs/compare${runIds.length ? `?runs=${runIds.map(encodeURIComponent).join(",")}` : ""}`,
     permission: "runs:read",
     purpose: "Comparing runs",
   }),
@@ -77,6 +78,7 @@ export const paths = {
 
   adminUsers: route({ path: "/admin/users", build: () => "/admin/users", permission: "users:manage", purpose: "Managing users and roles" }),
   adminAudit: route({ path: "/admin/audit", build: () => "/admin/audit", permission: "audit:read", purpose: "Reading the audit log" }),
+  adminSettings: route({ path: "/admin/review-policy", build: () => "/admin/review-policy", permission: "settings:manage", purpose: "Setting the review policy" }),
   adminOutbox: route({ path: "/admin/outbox", build: (id?: string) => `/admin/outbox${qs({ message: id })}`, permission: "outbox:read", purpose: "Reading the outbox" }),
 } as const;
 

@@ -84,5 +84,6 @@ export const api = {
   post: <T>(path: string, body?: unknown, opts?: Omit<RequestOptions<T>, "body">) =>
     request<T>("POST", path, { ...opts, body: body ?? {} }),
   patch: <T>(path: string, body: unknown, opts?: Omit<RequestOptions<T>, "body">) => request<T>("PATCH", path, { ...opts, body }),
+  put: <T>(path: string, body: unknown, opts?: Omit<RequestOptions<T>, "body">) => request<T>("PUT", path, { ...opts, body }),
   delete: <T>(path: string, opts?: Omit<RequestOptions<T>, "body">) => request<T>("DELETE", path, opts),
 };

@@ -5,6 +5,8 @@ import { formatPath } from "../engine/format-issues.js";
 export const errorDetailSchema = z.object({
   path: z.string(),
   message: z.string(),
+  /** Machine-readable facts behind the message, when a client may act on them (e.g. which materiality threshold fired). */
+  data: z.record(z.string(), z.union([z.string(), z.number(), z.null()])).optional(),
 });
 export type ErrorDetail = z.infer<typeof errorDetailSchema>;
 

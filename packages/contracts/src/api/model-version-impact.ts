@@ -1,16 +1,20 @@
 import { z } from "zod";
 import { MODEL_VERSION_STATUSES } from "./model-versions.js";
+import { materialityFiringSchema, materialityPolicySchema } from "./materiality.js";
 import { percentileSetSchema, precisionSchema } from "../engine/run-result.js";
 
 /**
  * Effect of a model version on key outputs (POST /api/model-versions/:id/impact): a small,
  * seeded preview ensemble of the version and of the version it is compared against (its
- * parent by default), on one pathway, built exactly as a run would be.
+ * parent by default), on every pathway the version pins (or those asked for), built exactly
+ * as a run would be. Indicative: the run is the record.
  */
 export const IMPACT_DEFAULT_MEMBERS = 2000;
 export const IMPACT_MIN_MEMBERS = 200;
 export const IMPACT_MAX_MEMBERS = 20000;
-/** Fixed seed: the same two versions and pathway always give the same preview. */
+/** A preview runs every pathway in both ensembles, so its cost grows with their number. */
+export const IMPACT_MAX_PATHWAYS = 8;
+/** Fixed seed: the same two versions and pathways always give the same preview. */
 export const IMPACT_SEED = "impact-preview";
 export const IMPACT_SAMPLING = "latin-hypercube" as const;
 
@@ -18,8 +22,12 @@ export const modelVersionImpactBodySchema = z
   .object({
     /** Version to compare against; default the version's parent. */
     againstId: z.string({ error: "must be a model version id" }).min(1, "must not be empty").optional(),
-    /** Pathway to run both on; default the first pinned pathway, else the seeded middle pathway. */
-    pathwayId: z.string({ error: "must be a pathway id" }).min(1, "must not be empty").optional(),
+    /** Pathways to run both on; default every pathway the version pins (else its comparison's, else the seeded middle pathway). */
+    pathwayIds: z
+      .array(z.string({ error: "must be a pathway id" }).min(1, "must not be empty"), { error: "must be a list of pathway ids" })
+      .min(1, "must name at least one pathway")
+      .max(IMPACT_MAX_PATHWAYS, `must name at most ${IMPACT_MAX_PATHWAYS} pathways (a preview)`)
+      .optional(),
     members: z
       .number({ error: "must be a number" })
       .int("must be a whole number")
@@ -45,7 +53,6 @@ export const impactSideSchema = z.object({
   inputHash: z.string(),
   resultHash: z.string(),
   effectiveMembers: z.number(),
-  horizons: z.array(impactHorizonSchema),
   implied: z.object({ ecs: percentileSetSchema, tcr: percentileSetSchema }),
 });
 export type ImpactSide = z.infer<typeof impactSideSchema>;
@@ -54,8 +61,24 @@ export type ImpactSide = z.infer<typeof impactSideSchema>;
 export const spreadChangeSchema = z.object({ medianShift: z.number(), widthChange: z.number() });
 export type SpreadChange = z.infer<typeof spreadChangeSchema>;
 
-export const modelVersionImpactSchema = z.object({
+const horizonDifferenceSchema = spreadChangeSchema.extend({
+  year: z.number().int(),
+  /** Change in exceedance probability per threshold (version minus comparison). */
+  exceedance: z.record(z.string(), z.number()),
+});
+
+/** One pathway of the preview: the horizons of both versions on it, and the differences. */
+export const impactPathwaySchema = z.object({
   pathway: z.object({ id: z.string(), name: z.string() }),
+  version: z.array(impactHorizonSchema),
+  against: z.array(impactHorizonSchema),
+  differences: z.array(horizonDifferenceSchema),
+});
+export type ImpactPathway = z.infer<typeof impactPathwaySchema>;
+
+export const modelVersionImpactSchema = z.object({
+  /** Every pathway previewed, in the order asked for (default: the version's pinned order). */
+  pathways: z.array(impactPathwaySchema).min(1),
   members: z.number().int(),
   seed: z.string(),
   sampling: z.enum(["latin-hypercube", "monte-carlo"]),
@@ -65,17 +88,10 @@ export const modelVersionImpactSchema = z.object({
   version: impactSideSchema,
   /** The version it is compared against. */
   against: impactSideSchema,
-  differences: z.object({
-    horizons: z.array(
-      spreadChangeSchema.extend({
-        year: z.number().int(),
-        /** Change in exceedance probability per threshold (version minus comparison). */
-        exceedance: z.record(z.string(), z.number()),
-      }),
-    ),
-    ecs: spreadChangeSchema,
-    tcr: spreadChangeSchema,
-  }),
+  /** Implied sensitivities do not depend on the pathway: one difference per run. */
+  differences: z.object({ ecs: spreadChangeSchema, tcr: spreadChangeSchema }),
+  /** The policy in force when this answer was made, and every threshold the preview passed. */
+  materiality: z.object({ policy: materialityPolicySchema, fired: z.array(materialityFiringSchema) }),
   /** True when the answer came from the cache (same pair of input hashes). */
   cached: z.boolean(),
   computedAt: z.string(),

@@ -21,6 +21,7 @@ export const permissions = [
   "audit:read",
   "users:manage",
   "outbox:read",
+  "settings:manage",
 ] as const;
 export type Permission = (typeof permissions)[number];
 
@@ -62,6 +63,7 @@ export const permissionsByRole: Record<Role, readonly Permission[]> = {
     "audit:read",
     "users:manage",
     "outbox:read",
+    "settings:manage",
   ],
 };
 

@@ -425,7 +425,7 @@ export const PERIL_RULES: readonly string[] = [
 export const PORTFOLIO_TOTAL_NOTES: readonly string[] = [
   "Totals are added member by member: each ensemble member's projected figures are summed over all rows of the portfolio, then percentiles are taken; percentiles are never added.",
   "Rows no peril profile projects enter the totals at their baseline figures, unchanged.",
-  "Adding 1-in-100 and 1-in-200 losses within a member gives no diversification credit between perils and regions: read the tail totals as an upper bound (they assume every row's tail event strikes in the same year), not as the portfolio's own 1-in-100 or 1-in-200 loss. Defer to the firm's capital model for aggregate tail losses.",
+  "Adding 1-in-100 and 1-in-200 losses within a member gives no diversification credit between perils and regions, so read the tail totals as an upper bound in that sense, not as the portfolio's own 1-in-100 or 1-in-200 loss. Adding the rows' tail losses assumes their tail events strike in the same year (perfectly dependent); for a percentile measure that is conservative in practice but not a guaranteed bound, because percentiles of a sum can exceed the sum of percentiles when losses are heavy-tailed. Defer to the firm's capital model and licensed actuarial judgement for aggregate tail losses.",
   "Currencies are kept apart: a portfolio with rows in several currencies gets one total per currency and no combined total. Plumeline converts no currency.",
 ];
 

@@ -1,25 +1,38 @@
-import type { ImpactSide, ModelVersionImpact, PercentileSet, RunResult, SpreadChange } from "@plumeline/contracts";
+import type { ImpactPathway, ImpactSide, ModelVersionImpact, PercentileSet, RunResult, SpreadChange } from "@plumeline/contracts";
 
 type VersionRef = ImpactSide["version"];
 
 /**
- * The key outputs a reviewer compares, taken from one preview ensemble's result: per horizon
- * the temperature percentiles, their Monte Carlo precision and the exceedance probabilities
- * (first and only pathway), plus the implied ECS/TCR percentiles. Nothing is recomputed here:
+ * The run-wide facts of one preview ensemble's result: hashes, effective members and the
+ * implied ECS/TCR percentiles (these do not depend on the pathway). Nothing is recomputed here:
  * every number is the engine's own, so it matches a run of the same spec exactly.
  */
 export function impactSide(version: VersionRef, result: RunResult): ImpactSide {
-  const pathway = result.pathways[0];
-  if (!pathway) throw new Error("the preview ensemble returned no pathway");
   return {
     version,
     engineVersion: result.engineVersion,
     inputHash: result.inputHash,
     resultHash: result.resultHash,
     effectiveMembers: result.effectiveMembers,
-    horizons: pathway.horizons.map((h) => ({ year: h.year, temperature: h.temperature, precision: h.precision, exceedance: h.exceedance })),
     implied: result.implied,
   };
+}
+
+type Horizons = ImpactPathway["version"];
+
+const horizonsOf = (result: RunResult, pathwayId: string, side: string): Horizons => {
+  const pathway = result.pathways.find((p) => p.id === pathwayId);
+  if (!pathway) throw new Error(`the ${side} preview ensemble returned no pathway ${pathwayId}`);
+  return pathway.horizons.map((h) => ({ year: h.year, temperature: h.temperature, precision: h.precision, exceedance: h.exceedance }));
+};
+
+/** Per pathway (in the order given): both versions' horizons, matched by pathway id, and their differences. */
+export function impactPathways(pathways: Array<{ id: string; name: string }>, mine: RunResult, theirs: RunResult): ImpactPathway[] {
+  return pathways.map((p) => {
+    const version = horizonsOf(mine, p.id, "version's");
+    const against = horizonsOf(theirs, p.id, "comparison's");
+    return { pathway: { id: p.id, name: p.name }, version, against, differences: horizonDifferences(version, against) };
+  });
 }
 
 /**
@@ -37,10 +50,10 @@ export function spreadChange(version: PercentileSet, against: PercentileSet): Sp
   return { medianShift: need(version, "p50") - need(against, "p50"), widthChange: width(version) - width(against) };
 }
 
-/** Differences at every horizon (matched by year) and for the implied sensitivities. */
-export function impactDifferences(version: ImpactSide, against: ImpactSide): ModelVersionImpact["differences"] {
-  const againstByYear = new Map(against.horizons.map((h) => [h.year, h]));
-  const horizons = version.horizons.flatMap((h) => {
+/** Differences at every horizon of one pathway, matched by year (version minus comparison). */
+export function horizonDifferences(version: Horizons, against: Horizons): ImpactPathway["differences"] {
+  const againstByYear = new Map(against.map((h) => [h.year, h]));
+  return version.flatMap((h) => {
     const other = againstByYear.get(h.year);
     if (!other) return [];
     const exceedance = Object.fromEntries(
@@ -51,8 +64,11 @@ export function impactDifferences(version: ImpactSide, against: ImpactSide): Mod
     );
     return [{ year: h.year, ...spreadChange(h.temperature, other.temperature), exceedance }];
   });
+}
+
+/** Differences of the implied sensitivities (run-wide, not per pathway). */
+export function impliedDifferences(version: ImpactSide, against: ImpactSide): ModelVersionImpact["differences"] {
   return {
-    horizons,
     ecs: spreadChange(version.implied.ecs, against.implied.ecs),
     tcr: spreadChange(version.implied.tcr, against.implied.tcr),
   };

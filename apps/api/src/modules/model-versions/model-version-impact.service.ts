@@ -1,5 +1,6 @@
 import {
   IMPACT_DEFAULT_MEMBERS,
+  IMPACT_MAX_PATHWAYS,
   IMPACT_SAMPLING,
   IMPACT_SEED,
   type CreateRunBody,
@@ -10,24 +11,26 @@ import {
 } from "@plumeline/contracts";
 import { demoPathways } from "@plumeline/seeds";
 import type { AppContext } from "../../context.js";
-import { badRequest } from "../../errors/app-error.js";
+import { Op } from "sequelize";
+import { badRequest, notFound } from "../../errors/app-error.js";
 import type { PathwayModel } from "../pathways/pathway.model.js";
 import { buildRunSpec } from "../runs/build-run-spec.js";
 import { ImpactCache } from "./impact-cache.js";
 import { runPreviewEnsembles } from "./impact-ensembles.js";
-import { impactDifferences, impactSide } from "./impact-summary.js";
+import { getMaterialityPolicy } from "../settings/materiality.service.js";
+import { impactPathways, impactSide, impliedDifferences } from "./impact-summary.js";
+import { materialityFirings } from "./materiality-check.js";
 import type { ModelVersionModel } from "./model-version.model.js";
-import { findModelVersion } from "./model-versions.service.js";
 
 type Ctx = Pick<AppContext, "models">;
-type Computed = Omit<ModelVersionImpact, "cached">;
+type Computed = Omit<ModelVersionImpact, "cached" | "materiality">;
 
 /** Loaded on first use, as in the runs module: only endpoints that need the engine depend on it. */
 const loadEngine = () => import("@plumeline/engine");
 
 const cache = new ImpactCache<Computed>();
 
-/** The pathway the demo seed calls "Harbourline Middle" — the fallback when no pathway is pinned. */
+/** The pathway the demo seed calls "Harbourline Middle" — the fallback when neither version pins a pathway. */
 const SEEDED_MIDDLE_NAME = demoPathways.find((p) => p.key === "harbourline-middle")?.name ?? "Harbourline Middle";
 
 /** Percentiles the preview reports: the version's own plus 5, 50 and 95, which the differences need. */
@@ -35,19 +38,32 @@ function previewPercentiles(version: ModelVersionModel): number[] {
   return [...new Set([...version.defaults.percentiles, 5, 50, 95])].sort((a, b) => a - b);
 }
 
-async function resolvePathway(ctx: Ctx, body: ModelVersionImpactBody, version: ModelVersionModel, against: ModelVersionModel): Promise<PathwayModel> {
-  if (body.pathwayId) {
-    const chosen = await ctx.models.Pathway.findByPk(body.pathwayId);
-    if (!chosen) throw badRequest([{ path: "pathwayId", message: `pathway ${body.pathwayId} does not exist` }]);
-    return chosen;
+/**
+ * The pathways to preview on: those asked for (each must exist), else every pathway the version
+ * pins, else every one its comparison pins, else the seeded middle pathway. A pinned id whose
+ * pathway has gone is skipped (pins are checked when saved; this only guards old rows).
+ */
+export async function resolvePathways(ctx: Ctx, requested: string[] | undefined, version: ModelVersionModel, against: ModelVersionModel): Promise<PathwayModel[]> {
+  if (requested) {
+    const found = await ctx.models.Pathway.findAll({ where: { id: { [Op.in]: requested } } });
+    const byId = new Map(found.map((p) => [p.id, p]));
+    const errors: ErrorDetail[] = requested.flatMap((id, i) => {
+      if (requested.indexOf(id) !== i) return [{ path: `pathwayIds[${i}]`, message: `repeats pathway ${id}` }];
+      return byId.has(id) ? [] : [{ path: `pathwayIds[${i}]`, message: `pathway ${id} does not exist` }];
+    });
+    if (errors.length > 0) throw badRequest(errors);
+    return requested.map((id) => byId.get(id)!);
   }
-  for (const id of [...(version.pathwayIds ?? []), ...(against.pathwayIds ?? [])]) {
-    const pinned = await ctx.models.Pathway.findByPk(id);
-    if (pinned) return pinned;
+  for (const pinned of [version.pathwayIds ?? [], against.pathwayIds ?? []]) {
+    if (pinned.length === 0) continue;
+    const found = await ctx.models.Pathway.findAll({ where: { id: { [Op.in]: pinned } } });
+    const byId = new Map(found.map((p) => [p.id, p]));
+    const ordered = pinned.flatMap((id) => byId.get(id) ?? []).slice(0, IMPACT_MAX_PATHWAYS);
+    if (ordered.length > 0) return ordered;
   }
   const seeded = await ctx.models.Pathway.findOne({ where: { name: SEEDED_MIDDLE_NAME }, order: [["createdAt", "ASC"]] });
-  if (seeded) return seeded;
-  throw badRequest([{ path: "pathwayId", message: `neither version pins a pathway and "${SEEDED_MIDDLE_NAME}" is not loaded; name a pathway` }]);
+  if (seeded) return [seeded];
+  throw badRequest([{ path: "pathwayIds", message: `neither version pins a pathway and "${SEEDED_MIDDLE_NAME}" is not loaded; name a pathway` }]);
 }
 
 async function resolveAgainst(ctx: Ctx, body: ModelVersionImpactBody, version: ModelVersionModel): Promise<ModelVersionModel> {
@@ -66,10 +82,10 @@ async function resolveAgainst(ctx: Ctx, body: ModelVersionImpactBody, version: M
  * thresholds and horizons on both sides so the tables line up; each version's own model and
  * baseline. A spec the engine contract refuses is a 400 naming the side and the field.
  */
-export function buildImpactSpecs(version: ModelVersionModel, against: ModelVersionModel, pathway: PathwayModel, members: number): { version: RunSpec; against: RunSpec } {
+export function buildImpactSpecs(version: ModelVersionModel, against: ModelVersionModel, pathways: PathwayModel[], members: number): { version: RunSpec; against: RunSpec } {
   const runBody = (modelVersionId: string): CreateRunBody => ({
     modelVersionId,
-    pathwayIds: [pathway.id],
+    pathwayIds: pathways.map((p) => p.id),
     members,
     seed: IMPACT_SEED,
     sampling: IMPACT_SAMPLING,
@@ -77,8 +93,8 @@ export function buildImpactSpecs(version: ModelVersionModel, against: ModelVersi
     thresholds: version.defaults.thresholds,
     horizons: version.defaults.horizons,
   });
-  const mine = buildRunSpec(runBody(version.id), version, [pathway]);
-  const theirs = buildRunSpec(runBody(against.id), against, [pathway]);
+  const mine = buildRunSpec(runBody(version.id), version, pathways);
+  const theirs = buildRunSpec(runBody(against.id), against, pathways);
   const errors: ErrorDetail[] = [
     ...(mine.ok ? [] : mine.errors.map((e) => ({ ...e, message: `${version.name} v${version.versionNumber}: ${e.message}` }))),
     ...(theirs.ok ? [] : theirs.errors.map((e) => ({ ...e, message: `${against.name} v${against.versionNumber}: ${e.message}` }))),
@@ -90,16 +106,20 @@ export function buildImpactSpecs(version: ModelVersionModel, against: ModelVersi
 const ref = (row: ModelVersionModel) => ({ id: row.id, name: row.name, versionNumber: row.versionNumber, status: row.status });
 
 /**
- * Effect of a model version on key outputs: a small seeded preview ensemble of the version and
- * of its comparison (parent by default) on one pathway, run off the request thread, summarised
- * side by side with the differences. Cached by the pair of engine input hashes. Read-only.
+ * The preview of `version` against `against` on `pathways`: two small seeded ensembles (every
+ * pathway in each), run off the request thread, summarised per pathway with the differences,
+ * then held against today's materiality policy. The numbers are cached by the pair of engine
+ * input hashes (which cover the pathway set, the member count and both models); the policy is
+ * applied after the cache, so changing it never serves stale firings.
  */
-export async function modelVersionImpact(ctx: Ctx, id: string, body: ModelVersionImpactBody): Promise<ModelVersionImpact> {
-  const version = await findModelVersion(ctx, id);
-  const against = await resolveAgainst(ctx, body, version);
-  const pathway = await resolvePathway(ctx, body, version, against);
-  const members = body.members ?? IMPACT_DEFAULT_MEMBERS;
-  const specs = buildImpactSpecs(version, against, pathway, members);
+export async function previewImpact(
+  ctx: Ctx,
+  version: ModelVersionModel,
+  against: ModelVersionModel,
+  pathways: PathwayModel[],
+  members: number,
+): Promise<ModelVersionImpact> {
+  const specs = buildImpactSpecs(version, against, pathways, members);
   const { inputHash } = await loadEngine();
   const key = `${inputHash(specs.version)}|${inputHash(specs.against)}`;
   const { value, cached } = cache.getOrCompute(key, async () => {
@@ -108,7 +128,7 @@ export async function modelVersionImpact(ctx: Ctx, id: string, body: ModelVersio
     const versionSide = impactSide(ref(version), mine!);
     const againstSide = impactSide(ref(against), theirs!);
     return {
-      pathway: { id: pathway.id, name: pathway.name },
+      pathways: impactPathways(pathways, mine!, theirs!),
       members,
       seed: IMPACT_SEED,
       sampling: IMPACT_SAMPLING,
@@ -116,12 +136,28 @@ export async function modelVersionImpact(ctx: Ctx, id: string, body: ModelVersio
       thresholds: specs.version.thresholds,
       version: versionSide,
       against: againstSide,
-      differences: impactDifferences(versionSide, againstSide),
+      differences: impliedDifferences(versionSide, againstSide),
       computedAt: new Date().toISOString(),
       seconds: Math.round((performance.now() - started) / 10) / 100,
     };
   });
   const computed = await value;
+  const policy = await getMaterialityPolicy(ctx);
   // Names and statuses can change without changing the numbers (e.g. approval): report today's.
-  return { ...computed, version: { ...computed.version, version: ref(version) }, against: { ...computed.against, version: ref(against) }, cached };
+  return {
+    ...computed,
+    version: { ...computed.version, version: ref(version) },
+    against: { ...computed.against, version: ref(against) },
+    materiality: { policy, fired: materialityFirings(computed.pathways, policy) },
+    cached,
+  };
+}
+
+/** POST /api/model-versions/:id/impact: resolves the comparison and the pathways, then previews. Read-only. */
+export async function modelVersionImpact(ctx: Ctx, id: string, body: ModelVersionImpactBody): Promise<ModelVersionImpact> {
+  const version = await ctx.models.ModelVersion.findByPk(id);
+  if (!version) throw notFound("Model version", id);
+  const against = await resolveAgainst(ctx, body, version);
+  const pathways = await resolvePathways(ctx, body.pathwayIds, version, against);
+  return previewImpact(ctx, version, against, pathways, body.members ?? IMPACT_DEFAULT_MEMBERS);
 }

@@ -49,7 +49,8 @@ describe("POST /api/model-versions/:id/impact", () => {
     first = await manager.post(`/api/model-versions/${childId}/impact`).send({ members: MEMBERS });
     expect(first.status).toBe(200);
     const body = first.body;
-    expect(body).toMatchObject({ pathway: { id: pathwayId }, members: MEMBERS, seed: "impact-preview", sampling: "latin-hypercube", cached: false });
+    expect(body.pathways.map((p: { pathway: { id: string } }) => p.pathway.id)).toEqual([pathwayId]);
+    expect(body).toMatchObject({ members: MEMBERS, seed: "impact-preview", sampling: "latin-hypercube", cached: false });
     expect(body.version.version.id).toBe(childId);
     expect(body.against.version.id).toBe(parentId);
 
@@ -66,13 +67,13 @@ describe("POST /api/model-versions/:id/impact", () => {
     expect(body.against.resultHash).toBe(directParent.resultHash);
     const h2100 = direct.pathways[0]!.horizons.find((h) => h.year === 2100)!;
     const p2100 = directParent.pathways[0]!.horizons.find((h) => h.year === 2100)!;
-    const mine2100 = body.version.horizons.find((h: { year: number }) => h.year === 2100);
+    const mine2100 = body.pathways[0].version.find((h: { year: number }) => h.year === 2100);
     expect(mine2100.temperature).toEqual(h2100.temperature);
     expect(mine2100.exceedance).toEqual(h2100.exceedance);
     expect(body.version.implied).toEqual(direct.implied);
 
     // Differences are version minus comparison, recomputed here from the direct results.
-    const diff2100 = body.differences.horizons.find((h: { year: number }) => h.year === 2100);
+    const diff2100 = body.pathways[0].differences.find((h: { year: number }) => h.year === 2100);
     expect(diff2100.medianShift).toBeCloseTo(h2100.temperature.p50! - p2100.temperature.p50!, 12);
     expect(diff2100.widthChange).toBeCloseTo(h2100.temperature.p95! - h2100.temperature.p5! - (p2100.temperature.p95! - p2100.temperature.p5!), 12);
     expect(diff2100.exceedance["2"]).toBeCloseTo(h2100.exceedance["2"]! - p2100.exceedance["2"]!, 12);
@@ -125,13 +126,17 @@ describe("POST /api/model-versions/:id/impact", () => {
     const unknownAgainst = await manager.post(`/api/model-versions/${childId}/impact`).send({ againstId: "nope" });
     expect(unknownAgainst.status).toBe(400);
     expect(unknownAgainst.body.error.details[0]).toMatchObject({ path: "againstId", message: "model version nope does not exist" });
-    const unknownPathway = await manager.post(`/api/model-versions/${childId}/impact`).send({ pathwayId: "nope" });
+    const unknownPathway = await manager.post(`/api/model-versions/${childId}/impact`).send({ pathwayIds: [pathwayId, "nope"] });
     expect(unknownPathway.status).toBe(400);
-    expect(unknownPathway.body.error.details[0]).toMatchObject({ path: "pathwayId" });
+    expect(unknownPathway.body.error.details[0]).toMatchObject({ path: "pathwayIds[1]", message: "pathway nope does not exist" });
+    const repeated = await manager.post(`/api/model-versions/${childId}/impact`).send({ pathwayIds: [pathwayId, pathwayId] });
+    expect(repeated.body.error.details[0]).toMatchObject({ path: "pathwayIds[1]" });
+    const none = await manager.post(`/api/model-versions/${childId}/impact`).send({ pathwayIds: [] });
+    expect(none.body.error.details[0]).toMatchObject({ path: "pathwayIds", message: "must name at least one pathway" });
     // No pinned pathway on either side and no demo seed loaded: the caller must name one.
     const neither = await manager.post(`/api/model-versions/${parentId}/impact`).send({ againstId: (await analyst.post("/api/model-versions").send(testModelVersionBody())).body.id });
     expect(neither.status).toBe(400);
-    expect(neither.body.error.details[0].path).toBe("pathwayId");
+    expect(neither.body.error.details[0].path).toBe("pathwayIds");
   });
 
   it("answers 401 without a session and 404 for an unknown version", async () => {

@@ -29,6 +29,7 @@ import { mailDecided, mailSubmitted } from "./model-version-mail.js";
 import type { ModelVersionModel } from "./model-version.model.js";
 import { releasePathwayLocks } from "../pathways/release-pathway-locks.js";
 import { assertEngineAcceptsModel } from "./engine-model-check.js";
+import { checkMinorChange, type MaterialityCheck } from "./materiality-gate.js";
 
 type Ctx = Pick<AppContext, "models" | "sequelize" | "mailer" | "config">;
 
@@ -245,9 +246,21 @@ export async function diffModelVersion(ctx: Ctx, id: string, againstId?: string)
 }
 
 export async function submitModelVersion(ctx: Ctx, user: RequestUser, id: string, changeClass: ChangeClass, note?: string): Promise<ModelVersion> {
+  // A minor filing is held to the materiality policy first, outside the write transaction: the
+  // preview takes seconds and must not hold the database. The draft must not change meanwhile.
+  let materiality: MaterialityCheck | null = null;
+  let checkedEditAt = 0;
+  if (changeClass === "minor") {
+    const before = await findModelVersion(ctx, id);
+    refuseUnlessEditableDraft(before, user, "submitted");
+    materiality = await checkMinorChange(ctx, before);
+    checkedEditAt = before.updatedAt.getTime();
+  }
   const row = await ctx.sequelize.transaction(async (transaction) => {
     const row = await findModelVersion(ctx, id, transaction);
     refuseUnlessEditableDraft(row, user, "submitted");
+    if (materiality && row.updatedAt.getTime() !== checkedEditAt)
+      throw conflict(`"${row.name}" v${row.versionNumber} changed while its materiality was checked; submit it again.`, "model_version_changed");
     await row.update({ status: "in-review", changeClass, submissionNote: note ?? null, submittedAt: new Date() }, { transaction });
     // The reviewer signs off on these numbers: they stop changing from now on, not at approval.
     await lockPathways(ctx, row.pathwayIds ?? [], transaction);
@@ -259,7 +272,7 @@ export async function submitModelVersion(ctx: Ctx, user: RequestUser, id: string
         entityType: "model-version",
         entityId: id,
         summary: `"${row.name}" v${row.versionNumber} submitted for review as a ${changeClass} change.`,
-        data: { changeClass, note: note ?? null },
+        data: { changeClass, note: note ?? null, materiality },
       },
       transaction,
     );

@@ -23,12 +23,13 @@ export const NAV_ITEMS: NavItem[] = [
   {
     label: "Admin",
     to: paths.adminUsers.build(),
-    anyOf: ["users:manage", "audit:read", "outbox:read"],
+    anyOf: ["users:manage", "audit:read", "outbox:read", "settings:manage"],
     icon: "M12 3l7 3v5c0 5-3 8-7 10-4-2-7-5-7-10V6z",
     targets: [
       ["users:manage", paths.adminUsers.build()],
       ["audit:read", paths.adminAudit.build()],
       ["outbox:read", paths.adminOutbox.build()],
+      ["settings:manage", paths.adminSettings.build()],
     ],
   },
 ];

@@ -5,6 +5,7 @@ import { useExports } from "@/features/exports/api/get-exports";
 import { ExportsTable } from "@/features/exports/components/exports-table";
 import { useModelVersionChoices } from "@/features/model-versions/api/get-model-versions";
 import { ModelVersionsTable } from "@/features/model-versions/components/model-versions-table";
+import { ReturnedToYou } from "@/features/model-versions/components/returned-to-you";
 import { ReviewQueue } from "@/features/model-versions/components/review-queue";
 import { useRunChoices, useRuns } from "@/features/runs/api/get-runs";
 import { RunsTable } from "@/features/runs/components/runs-table";
@@ -49,6 +50,11 @@ export default function DeskPage() {
               <ReviewsWaiting userId={user.id} />
             </PanelErrorBoundary>
           )}
+          {can("model-versions:write") && (
+            <PanelErrorBoundary>
+              <ReturnedToMe userId={user.id} />
+            </PanelErrorBoundary>
+          )}
           {can("runs:read") && (
             <PanelErrorBoundary>
               <MyRuns userId={user.id} canCreate={can("runs:create")} mine={can("runs:create")} />
@@ -78,6 +84,7 @@ export default function DeskPage() {
                 <ButtonLink to={paths.adminUsers.build()}>Users and roles</ButtonLink>
                 <ButtonLink to={paths.adminAudit.build()}>Audit log</ButtonLink>
                 <ButtonLink to={paths.adminOutbox.build()}>Outbox</ButtonLink>
+                {can("settings:manage") && <ButtonLink to={paths.adminSettings.build()}>Review policy</ButtonLink>}
               </CardBody>
             </Card>
           )}
@@ -130,6 +137,15 @@ function ReviewsWaiting({ userId }: { userId: string }) {
       )}
     </Card>
   );
+}
+
+/** My rejected versions nothing has been drafted from yet (a child means the author already acted on it). */
+function ReturnedToMe({ userId }: { userId: string }) {
+  const versions = useModelVersions();
+  if (!versions.data) return null;
+  const drafted = new Set(versions.data.map((v) => v.parentId));
+  const returned = versions.data.filter((v) => v.authorId === userId && v.status === "rejected" && !drafted.has(v.id));
+  return <ReturnedToYou versions={returned} />;
 }
 
 function MyDrafts({ userId }: { userId: string }) {

@@ -8,6 +8,7 @@ import { DiffTable } from "@/features/model-versions/components/diff-table";
 import { ImpactPanel } from "@/features/model-versions/components/impact-panel";
 import { PinnedPerilProfilesList, profileNames } from "@/features/model-versions/components/pinned-peril-profiles";
 import { usePerilProfileChoices } from "@/features/peril/api/get-peril-profiles";
+import { usePinnedPathways } from "@/app/use-pinned-pathways";
 import { ReviewWaitNote } from "@/features/model-versions/components/review-wait-note";
 import { SubmitPanel } from "@/features/model-versions/components/submit-panel";
 import { StatusBadge } from "@/components/ui/badges";
@@ -23,6 +24,7 @@ export default function ModelVersionPage() {
   const version = useModelVersion(versionId);
   const diff = useModelVersionDiff(versionId);
   const profiles = usePerilProfileChoices();
+  const pinned = usePinnedPathways(version.data?.pathwayIds ?? []);
   if (version.isPending) return <LoadingState />;
   if (version.isError) return <ErrorState error={version.error} retry={() => version.refetch()} />;
   const v = version.data;
@@ -111,9 +113,9 @@ export default function ModelVersionPage() {
           <CardBody>{diff.isPending ? <LoadingState /> : diff.isError ? <ErrorState error={diff.error} /> : <DiffTable diff={diff.data} profileNames={profileNames(profiles.data)} />}</CardBody>
         </Card>
         <Card>
-          <CardHeader title="Effect on key outputs" subtitle="A preview ensemble of this version and its parent, side by side." />
+          <CardHeader title="Effect on key outputs" subtitle="A preview ensemble of this version and its parent, side by side, on every pinned pathway." />
           <CardBody>
-            <ImpactPanel versionId={v.id} parentId={v.parentId} autoStart={false} />
+            {pinned === null ? <LoadingState /> : <ImpactPanel versionId={v.id} parentId={v.parentId} autoStart={false} pathways={pinned} changeClass={v.changeClass} />}
           </CardBody>
         </Card>
         <Card>

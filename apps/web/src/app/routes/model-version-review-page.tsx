@@ -8,6 +8,7 @@ import { DiffTable } from "@/features/model-versions/components/diff-table";
 import { ImpactPanel } from "@/features/model-versions/components/impact-panel";
 import { profileNames } from "@/features/model-versions/components/pinned-peril-profiles";
 import { usePerilProfileChoices } from "@/features/peril/api/get-peril-profiles";
+import { usePinnedPathways } from "@/app/use-pinned-pathways";
 import { StatusBadge } from "@/components/ui/badges";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
@@ -19,6 +20,7 @@ export default function ModelVersionReviewPage() {
   const version = useModelVersion(versionId);
   const diff = useModelVersionDiff(versionId);
   const profiles = usePerilProfileChoices();
+  const pinned = usePinnedPathways(version.data?.pathwayIds ?? []);
   if (version.isPending) return <LoadingState />;
   if (version.isError) return <ErrorState error={version.error} />;
   const v = version.data;
@@ -40,9 +42,9 @@ export default function ModelVersionReviewPage() {
             <CardBody>{diff.isPending ? <LoadingState /> : diff.isError ? <ErrorState error={diff.error} /> : <DiffTable diff={diff.data} profileNames={profileNames(profiles.data)} />}</CardBody>
           </Card>
           <Card>
-            <CardHeader title="Effect on key outputs" subtitle="The same preview ensemble of this version and the one it replaces, side by side." />
+            <CardHeader title="Effect on key outputs" subtitle="The same preview ensemble of this version and the one it replaces, side by side, on every pinned pathway." />
             <CardBody>
-              <ImpactPanel versionId={v.id} parentId={v.parentId} autoStart />
+              {pinned === null ? <LoadingState /> : <ImpactPanel versionId={v.id} parentId={v.parentId} autoStart pathways={pinned} changeClass={v.changeClass} />}
             </CardBody>
           </Card>
           <Card>

@@ -3,6 +3,7 @@ import { paths } from "@/config/paths";
 import { useCan } from "@/features/auth/use-permission";
 import { usePathway } from "@/features/pathways/api/get-pathway";
 import { PathwayCharts } from "@/features/pathways/components/pathway-charts";
+import { ChartSourceProvider } from "@/components/charts/chart-source";
 import { ButtonLink } from "@/components/ui/button";
 import { Card, CardBody } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
@@ -61,7 +62,10 @@ export default function PathwayPage() {
       </Card>
       <Card>
         <CardBody>
-          <PathwayCharts name={p.name} startYear={p.startYear} agents={p.agents} />
+          {/* A pathway has no run: its downloaded charts name the pathway, its source, vintage and checksum instead. */}
+          <ChartSourceProvider source={{ lines: [`Pathway “${p.name}” · source ${p.source} · vintage ${p.vintage}`, `Pathway checksum ${p.checksum}`], fileLabel: p.name }}>
+            <PathwayCharts name={p.name} startYear={p.startYear} agents={p.agents} />
+          </ChartSourceProvider>
         </CardBody>
       </Card>
     </>

@@ -13,6 +13,7 @@ import { usePerilCurvePreview } from "@/features/peril/api/get-peril-curve";
 import { getPerilProfileQueryOptions, usePerilProfile } from "@/features/peril/api/get-peril-profile";
 import { useCopyPerilProfile, useCreatePerilProfile, useDeletePerilProfile, useUpdatePerilProfile } from "@/features/peril/api/save-peril-profile";
 import { PerilActionError } from "@/features/peril/components/peril-action-error";
+import { ChartSourceProvider } from "@/components/charts/chart-source";
 import { PerilCurveChart } from "@/features/peril/components/peril-curve-chart";
 import { PerilProfileForm } from "@/features/peril/components/peril-profile-form";
 import { PerilRecordError } from "@/features/peril/components/peril-record-error";
@@ -134,7 +135,15 @@ function Editor({ record, viewer }: { record: PerilProfileRecord | undefined; vi
           <CardBody>
             <PanelErrorBoundary resetKey={JSON.stringify(settled)}>
               {curve.data ? (
-                <PerilCurveChart curve={curve.data} />
+                // A profile preview has no run: its downloads name the profile and say it is a preview of the form.
+                <ChartSourceProvider
+                  source={{
+                    lines: [`Peril profile “${record?.name ?? "new, not saved"}”${record ? ` · last saved ${record.updatedAt.slice(0, 10)}` : ""} · preview of the profile as edited on screen`],
+                    fileLabel: record?.name,
+                  }}
+                >
+                  <PerilCurveChart curve={curve.data} />
+                </ChartSourceProvider>
               ) : curve.isError ? (
                 <ErrorState error={curve.error} title="The preview needs a valid profile" />
               ) : parsed.body === null ? (

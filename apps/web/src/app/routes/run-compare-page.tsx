@@ -1,44 +1,51 @@
-import { useSearchParams } from "react-router-dom";
+import { useNavigate, useSearchParams } from "react-router-dom";
+import type { Run, RunResult } from "@plumeline/contracts";
 import { useRunChoices } from "@/features/runs/api/get-runs";
 import { useRun } from "@/features/runs/api/get-run";
 import { useRunResult } from "@/features/runs/api/get-run-result";
 import { runBaseline } from "@/features/runs/lib/compare-baseline";
+import { MAX_COMPARED_RUNS, readCompareSelection, writeCompareSelection, type CompareSlot } from "@/features/runs/lib/compare-selection";
 import { CompareView } from "@/features/runs/components/compare-view";
-import { Card, CardBody } from "@/components/ui/card";
+import { CompareSettings } from "@/features/runs/components/compare-settings";
+import { ChartSourceProvider, runSourceLine } from "@/components/charts/chart-source";
+import { Button } from "@/components/ui/button";
+import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { Cautions } from "@/components/ui/cautions";
 import { Field, Select } from "@/components/ui/field";
 import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState, ErrorState, LoadingState } from "@/components/ui/states";
 import { ApprovedSeal, ExploratoryStamp } from "@/components/ui/badges";
 
-/** Pick two finished runs (or the same run twice with two pathways) and compare them on shared axes. */
+/** One slot's run and result; always called four times, so the hooks keep their order. */
+function useSlot(slot: CompareSlot | undefined) {
+  const id = slot?.runId || undefined;
+  return { run: useRun(id), result: useRunResult(id) };
+}
+
+const slotName = (i: number) => (i === 0 ? "Reference run" : `Run ${i + 1}`);
+
+/** Pick two to four finished runs (the first is the reference) and compare them on shared axes. */
 export default function RunComparePage() {
-  const [params, setParams] = useSearchParams();
+  const [params] = useSearchParams();
+  const navigate = useNavigate();
   const runs = useRunChoices({ status: "succeeded" });
-  const a = params.get("a") ?? "";
-  const b = params.get("b") ?? "";
-  const pa = params.get("pa") ?? "";
-  const pb = params.get("pb") ?? "";
-  const ra = useRunResult(a || undefined);
-  const rb = useRunResult(b || undefined);
-  // The manifests carry each run's baseline, which the shared warming axis must name.
-  const manifestA = useRun(a || undefined);
-  const manifestB = useRun(b || undefined);
-  const set = (k: string, v: string) =>
-    setParams((prev) => {
-      const next = new URLSearchParams(prev);
-      if (v) next.set(k, v);
-      else next.delete(k);
-      if (k === "a") next.delete("pa");
-      if (k === "b") next.delete("pb");
-      return next;
-    });
-  const runA = runs.data?.find((r) => r.id === a);
-  const runB = runs.data?.find((r) => r.id === b);
+  const slots = readCompareSelection(params);
+  const loaded = [useSlot(slots[0]), useSlot(slots[1]), useSlot(slots[2]), useSlot(slots[3])].slice(0, slots.length);
+  const save = (next: CompareSlot[]) => void navigate({ search: `?${writeCompareSelection(next)}` }, { replace: true });
+  const setSlot = (i: number, change: Partial<CompareSlot>) => save(slots.map((s, k) => (k === i ? { ...s, ...change } : s)));
+
+  const chosen = slots.map((s, i) => ({ slot: s, ...loaded[i]! })).filter((x) => x.slot.runId);
+  const pending = chosen.some((x) => x.run.isPending || x.result.isPending);
+  const failed = chosen.find((x) => x.run.isError || x.result.isError);
+  const ready = chosen.length >= 2 && !pending && !failed;
 
   return (
     <>
-      <PageHeader kicker="Runs" title="Compare" description="Two runs, or two pathways of one run, side by side on the same warming axis." />
+      <PageHeader
+        kicker="Runs"
+        title="Compare"
+        description="Two to four runs, or pathways of one run, side by side on the same warming axis; the first is the reference the differences are taken from."
+      />
       {runs.isPending ? (
         <LoadingState />
       ) : runs.isError ? (
@@ -48,67 +55,105 @@ export default function RunComparePage() {
       ) : (
         <div className="flex flex-col gap-6">
           <Card>
-            <CardBody className="grid gap-4 md:grid-cols-2">
-              {(
-                [
-                  ["a", "pa", a, pa, ra.data, runA, "Left"],
-                  ["b", "pb", b, pb, rb.data, runB, "Right"],
-                ] as const
-              ).map(([key, pkey, value, pvalue, result, run, side]) => (
-                <div key={key} className="grid gap-2">
-                  <Field label={`${side}: run`}>
-                    {(p) => (
-                      <Select {...p} value={value} onChange={(e) => set(key, e.target.value)}>
-                        <option value="">Choose a run…</option>
-                        {runs.data.map((r) => (
-                          <option key={r.id} value={r.id}>
-                            {r.name} — {r.modelVersion.name} v{r.modelVersion.versionNumber}
-                            {r.exploratory ? " (exploratory)" : " (approved)"}
-                          </option>
-                        ))}
-                      </Select>
-                    )}
-                  </Field>
-                  {result && (
-                    <Field label={`${side}: pathway`}>
+            <CardBody className="grid gap-4 md:grid-cols-2 xl:grid-cols-4">
+              {slots.map((slot, i) => {
+                const { run, result } = loaded[i]!;
+                return (
+                  <div key={i} className="grid content-start gap-2">
+                    <Field label={slotName(i)}>
                       {(p) => (
-                        <Select {...p} value={pvalue || result.pathways[0]?.id} onChange={(e) => set(pkey, e.target.value)}>
-                          {result.pathways.map((pw) => (
-                            <option key={pw.id} value={pw.id}>
-                              {pw.name}
+                        <Select {...p} value={slot.runId} onChange={(e) => setSlot(i, { runId: e.target.value, pathwayId: "" })}>
+                          <option value="">Choose a run…</option>
+                          {runs.data.map((r) => (
+                            <option key={r.id} value={r.id}>
+                              {r.name} — {r.modelVersion.name} v{r.modelVersion.versionNumber}
+                              {r.exploratory ? " (exploratory)" : " (approved)"}
                             </option>
                           ))}
                         </Select>
                       )}
                     </Field>
-                  )}
-                  {/* Both sides say how they were made, so "two approved versions" reads at a glance. */}
-                  {run && (run.exploratory ? <ExploratoryStamp size="sm" /> : <ApprovedSeal size="sm" className="self-start" />)}
+                    {result.data && (
+                      <Field label={`${slotName(i)}: pathway`}>
+                        {(p) => (
+                          <Select
+                            {...p}
+                            value={slot.pathwayId || result.data.pathways[0]?.id}
+                            onChange={(e) => setSlot(i, { pathwayId: e.target.value })}
+                          >
+                            {result.data.pathways.map((pw) => (
+                              <option key={pw.id} value={pw.id}>
+                                {pw.name}
+                              </option>
+                            ))}
+                          </Select>
+                        )}
+                      </Field>
+                    )}
+                    <div className="flex items-center gap-2">
+                      {/* Every run says how it was made, so "approved versions only" reads at a glance. */}
+                      {run.data &&
+                        (run.data.exploratory ? <ExploratoryStamp size="sm" /> : <ApprovedSeal size="sm" className="self-start" />)}
+                      {slots.length > 2 && (
+                        <Button variant="secondary" size="sm" onClick={() => save(slots.filter((_, k) => k !== i))}>
+                          Remove
+                        </Button>
+                      )}
+                    </div>
+                  </div>
+                );
+              })}
+              {slots.length < MAX_COMPARED_RUNS && (
+                <div className="flex items-start">
+                  <Button variant="secondary" onClick={() => save([...slots, { runId: "", pathwayId: "" }])}>
+                    Add a run
+                  </Button>
                 </div>
-              ))}
+              )}
             </CardBody>
           </Card>
           <Cautions />
-          {a && b ? (
-            ra.isPending || rb.isPending ? (
-              <LoadingState label="Loading both results…" />
-            ) : ra.isError || rb.isError ? (
-              <ErrorState error={ra.error ?? rb.error} />
-            ) : (
-              <Card>
-                <CardBody>
-                  <CompareView
-                    a={{ label: runA?.name ?? "Left", result: ra.data, pathwayId: pa || ra.data.pathways[0]!.id, baseline: runBaseline(manifestA.data) }}
-                    b={{ label: runB?.name ?? "Right", result: rb.data, pathwayId: pb || rb.data.pathways[0]!.id, baseline: runBaseline(manifestB.data) }}
-                  />
-                </CardBody>
-              </Card>
-            )
+          {chosen.length < 2 ? (
+            <EmptyState title="Choose at least two runs">Pick the same run twice to compare two of its pathways.</EmptyState>
+          ) : pending ? (
+            <LoadingState label="Loading the results…" />
+          ) : failed ? (
+            <ErrorState error={failed.run.error ?? failed.result.error} />
           ) : (
-            <EmptyState title="Choose two runs">Pick the same run on both sides to compare two of its pathways.</EmptyState>
+            ready && <Compared chosen={chosen.map((x) => ({ slot: x.slot, run: x.run.data!, result: x.result.data! }))} />
           )}
         </div>
       )}
     </>
+  );
+}
+
+function Compared({ chosen }: { chosen: Array<{ slot: CompareSlot; run: Run; result: RunResult }> }) {
+  // Downloaded charts name every compared run, its model version and result hash.
+  const source = { lines: chosen.map((x) => runSourceLine(x.run, x.result.resultHash, x.run.exploratory)), fileLabel: "compare" };
+  return (
+    <ChartSourceProvider source={source}>
+      <Card>
+        <CardHeader
+          title="Settings that differ"
+          subtitle="What was changed between the runs, so a difference in the figures can be traced to its cause."
+        />
+        <CardBody>
+          <CompareSettings runs={chosen.map((x) => x.run)} />
+        </CardBody>
+      </Card>
+      <Card className="mt-6">
+        <CardBody>
+          <CompareView
+            sides={chosen.map((x) => ({
+              label: x.run.name || x.run.id.slice(0, 8),
+              result: x.result,
+              pathwayId: x.slot.pathwayId || x.result.pathways[0]!.id,
+              baseline: runBaseline(x.run),
+            }))}
+          />
+        </CardBody>
+      </Card>
+    </ChartSourceProvider>
   );
 }

@@ -13,6 +13,7 @@ import { ResultView } from "@/features/runs/components/result-view";
 import { RunManifest } from "@/features/runs/components/run-manifest";
 import { RunProgress } from "@/features/runs/components/run-progress";
 import { RunPerilSection } from "@/features/peril/components/run-peril-section";
+import { ChartSourceProvider, runSourceLine } from "@/components/charts/chart-source";
 import { ApprovedSeal, ExploratoryStamp, StatusBadge } from "@/components/ui/badges";
 import { ButtonLink } from "@/components/ui/button";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
@@ -33,8 +34,14 @@ export default function RunPage() {
   const r = run.data;
   const active = r.status === "queued" || r.status === "running";
 
+  // Every chart downloaded from this page names the run, its model version and result hash.
+  const chartSource = {
+    lines: [runSourceLine(r, r.manifest.resultHash ?? "not recorded", r.exploratory), `Engine ${r.manifest.engineVersion ?? "version not recorded"} · ${r.members.toLocaleString("en-GB")} members · seed ${r.seed}`],
+    fileLabel: r.name || r.id.slice(0, 8),
+  };
+
   return (
-    <>
+    <ChartSourceProvider source={chartSource}>
       <PageHeader
         kicker={
           <span className="flex items-center gap-2">
@@ -123,6 +130,6 @@ export default function RunPage() {
           )}
         </div>
       </div>
-    </>
+    </ChartSourceProvider>
   );
 }

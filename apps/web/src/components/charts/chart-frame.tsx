@@ -1,10 +1,13 @@
-import { useId, useState, type ReactNode } from "react";
+import { useId, useRef, useState, type ReactNode } from "react";
 import { cx } from "@/components/ui/cx";
+import { ChartDownload } from "./chart-download";
+import type { LegendEntry } from "./chart-export";
 
 /**
  * A chart's frame: a title, an optional one-line description, the chart, and a button that
  * swaps it for a table holding the same numbers (the accessible alternative). The SVG gets
- * role="img" with the title as its name so screen readers announce what it shows.
+ * role="img" with the title as its name so screen readers announce what it shows. Every chart
+ * can leave the product as SVG or PNG carrying its title, `units`, `legend` and a footnote.
  */
 export function ChartFrame({
   title,
@@ -13,8 +16,14 @@ export function ChartFrame({
   children,
   actions,
   className,
+  units,
+  legend = [],
 }: {
   title: string;
+  /** The unit of the chart's values, named in every download ("K", "W m⁻²", "% of members"). */
+  units: string;
+  /** The chart's key, drawn into downloads (on screen the chart draws its own). */
+  legend?: LegendEntry[];
   description?: ReactNode;
   table: ReactNode;
   children: ReactNode;
@@ -23,8 +32,9 @@ export function ChartFrame({
 }) {
   const [showTable, setShowTable] = useState(false);
   const id = useId();
+  const frame = useRef<HTMLElement>(null);
   return (
-    <figure className={cx("m-0 flex min-w-0 flex-col gap-2", className)} aria-labelledby={`${id}-title`}>
+    <figure ref={frame} className={cx("m-0 flex min-w-0 flex-col gap-2", className)} aria-labelledby={`${id}-title`}>
       <div className="flex flex-wrap items-start justify-between gap-2">
         <div>
           <h3 id={`${id}-title`} className="text-sm font-semibold text-ink">
@@ -34,6 +44,7 @@ export function ChartFrame({
         </div>
         <div className="flex items-center gap-2">
           {actions}
+          {!showTable && <ChartDownload frame={frame} title={title} units={units} legend={legend} />}
           <button
             type="button"
             className="rounded border border-line px-2 py-0.5 text-xs text-muted hover:bg-surface-2"
@@ -57,7 +68,11 @@ export function DataTable({ columns, rows, caption }: { columns: string[]; rows:
       <thead className="sticky top-0 bg-surface">
         <tr>
           {columns.map((c, i) => (
-            <th key={c} scope="col" className={cx("border-b border-line-strong px-2 py-1 font-semibold text-muted", i === 0 ? "text-left" : "text-right")}>
+            <th
+              key={c}
+              scope="col"
+              className={cx("border-b border-line-strong px-2 py-1 font-semibold text-muted", i === 0 ? "text-left" : "text-right")}
+            >
               {c}
             </th>
           ))}

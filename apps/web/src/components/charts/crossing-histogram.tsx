@@ -62,7 +62,17 @@ const percent = (share: number) => (share > 0 && share < 0.01 ? formatProbabilit
  * its own 0–100 % scale, the share of members that never cross: a share of all members is
  * not a rate per year, so it never shares the histogram's axis.
  */
-export function CrossingHistogram({ title, crossing, unit = "K", height = 240 }: { title: string; crossing: CrossingDistribution; unit?: string; height?: number }) {
+export function CrossingHistogram({
+  title,
+  crossing,
+  unit = "K",
+  height = 240,
+}: {
+  title: string;
+  crossing: CrossingDistribution;
+  unit?: string;
+  height?: number;
+}) {
   const [ref, width] = useChartWidth<HTMLDivElement>();
   const m = { ...DEFAULT_MARGINS, right: 20 };
   const { innerWidth, innerHeight } = innerSize(width, height, m);
@@ -71,10 +81,24 @@ export function CrossingHistogram({ title, crossing, unit = "K", height = 240 }:
   const lo = years.length ? Math.min(...years) : 2000;
   const hi = years.length ? Math.max(...years) : 2100;
   const pad = Math.max(2, Math.round((hi - lo) * 0.08));
-  const x = useMemo(() => scaleLinear().domain([lo - pad, hi + pad]).range([0, innerWidth]).nice(), [lo, hi, pad, innerWidth]);
+  const x = useMemo(
+    () =>
+      scaleLinear()
+        .domain([lo - pad, hi + pad])
+        .range([0, innerWidth])
+        .nice(),
+    [lo, hi, pad, innerWidth],
+  );
   // Height = share per year, shown as % of members per year.
   const density = bins.map((b) => (b.share * 100) / Math.max(1, b.to - b.from));
-  const y = useMemo(() => scaleLinear().domain([0, Math.max(0.5, ...density) * 1.1]).range([innerHeight, 0]).nice(), [density, innerHeight]);
+  const y = useMemo(
+    () =>
+      scaleLinear()
+        .domain([0, Math.max(0.5, ...density) * 1.1])
+        .range([innerHeight, 0])
+        .nice(),
+    [density, innerHeight],
+  );
   const p50 = crossing.percentiles.p50;
   const by = crossing.lastYear ? ` by ${crossing.lastYear}` : "";
   const spread =
@@ -85,6 +109,14 @@ export function CrossingHistogram({ title, crossing, unit = "K", height = 240 }:
   return (
     <ChartFrame
       title={title}
+      units="members (% per year); first-crossing year"
+      legend={[
+        { label: `First-crossing years (members in % per year)`, color: "var(--pl-ember-400)", kind: "swatch" },
+        ...(p50 !== null && p50 !== undefined
+          ? [{ label: `Median first-crossing year: ${p50}`, color: "var(--pl-ink)", dash: "3 3" }]
+          : []),
+        { label: `Never cross${by}: ${percent(crossing.never)} of all members`, color: "var(--pl-accent)", kind: "swatch" as const },
+      ]}
       description={`First year the member's warming is above ${crossing.threshold} ${unit}. ${spread}`}
       table={
         <DataTable
@@ -102,7 +134,13 @@ export function CrossingHistogram({ title, crossing, unit = "K", height = 240 }:
           <svg width={width} height={height} role="img" aria-label={`${title}: members in % per year against first-crossing year`}>
             <g transform={`translate(${m.left},${m.top})`}>
               <AxisLeft scale={y} width={innerWidth} label="Members (% per year)" ticks={4} />
-              <AxisBottom scale={x} height={innerHeight} width={innerWidth} label="First-crossing year" ticks={Math.max(2, Math.floor(innerWidth / 80))} />
+              <AxisBottom
+                scale={x}
+                height={innerHeight}
+                width={innerWidth}
+                label="First-crossing year"
+                ticks={Math.max(2, Math.floor(innerWidth / 80))}
+              />
               {bins.map((b, i) => (
                 <rect
                   key={i}

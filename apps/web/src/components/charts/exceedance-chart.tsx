@@ -3,6 +3,7 @@ import { line, scaleLinear } from "d3";
 import { formatProbabilityTenths } from "@/lib/format";
 import { AxisBottom, AxisLeft } from "./axes";
 import { ChartFrame, DataTable } from "./chart-frame";
+import { firstActiveIndex } from "./chart-domains";
 import { DEFAULT_MARGINS, innerSize } from "./margins";
 import { useChartWidth } from "./use-chart-width";
 
@@ -38,8 +39,20 @@ export function ExceedanceChart({
   const [ref, width] = useChartWidth<HTMLDivElement>();
   const m = DEFAULT_MARGINS;
   const { innerWidth, innerHeight } = innerSize(width, height, m);
-  const start = Math.max(0, fromYear === undefined ? 0 : years.findIndex((y) => y >= fromYear));
-  const x = useMemo(() => scaleLinear().domain([years[start]!, years[years.length - 1]!]).range([0, innerWidth]), [years, start, innerWidth]);
+  const from = Math.max(0, fromYear === undefined ? 0 : years.findIndex((y) => y >= fromYear));
+  // The year axis starts a decade before any chance leaves zero, not at the run's first year.
+  const start = firstActiveIndex(
+    years,
+    curves.map((c) => c.probability),
+    from,
+  );
+  const x = useMemo(
+    () =>
+      scaleLinear()
+        .domain([years[start]!, years[years.length - 1]!])
+        .range([0, innerWidth]),
+    [years, start, innerWidth],
+  );
   const y = useMemo(() => scaleLinear().domain([0, 100]).range([innerHeight, 0]), [innerHeight]);
   const sorted = [...curves].sort((a, b) => a.threshold - b.threshold);
   const idx = Array.from({ length: years.length - start }, (_, k) => start + k);
@@ -47,12 +60,18 @@ export function ExceedanceChart({
   return (
     <ChartFrame
       title={title}
-      description={`Share of members whose warming is above each threshold in that year.`}
+      units={`% of members (chance of warming above each threshold, in ${unit})`}
+      legend={sorted.map((c, i) => ({ label: `above ${c.threshold} ${unit}`, color: THRESHOLD_COLORS[i % THRESHOLD_COLORS.length]! }))}
+      description={`Share of members whose warming is above each threshold in that year.${
+        start > from ? ` Drawn from ${years[start]}: before then no threshold is exceeded by more than 0.05 % of members.` : ""
+      }`}
       table={
         <DataTable
           caption={title}
           columns={["Year", ...sorted.map((c) => `Chance > ${c.threshold} ${unit}`)]}
-          rows={idx.filter((k) => years[k]! % 10 === 0).map((k) => [years[k]!, ...sorted.map((c) => formatProbabilityTenths(c.probability[k]))])}
+          rows={idx
+            .filter((k) => years[k]! % 10 === 0)
+            .map((k) => [years[k]!, ...sorted.map((c) => formatProbabilityTenths(c.probability[k]))])}
         />
       }
     >
@@ -73,7 +92,11 @@ export function ExceedanceChart({
               <path
                 key={c.threshold}
                 data-threshold={c.threshold}
-                d={line<number>().x((k) => x(years[k]!)).y((k) => y(c.probability[k]! * 100))(idx) ?? ""}
+                d={
+                  line<number>()
+                    .x((k) => x(years[k]!))
+                    .y((k) => y(c.probability[k]! * 100))(idx) ?? ""
+                }
                 fill="none"
                 stroke={THRESHOLD_COLORS[i % THRESHOLD_COLORS.length]}
                 strokeWidth={2}

@@ -4,6 +4,7 @@ import { AxisBottom, AxisLeft } from "./axes";
 import { BandKey } from "./band-key";
 import { BAND_LABELS } from "./band-labels";
 import { ChartFrame, DataTable } from "./chart-frame";
+import { paddedDomain } from "./chart-domains";
 import { DEFAULT_MARGINS, innerSize } from "./margins";
 import { FanReadout } from "./fan-readout";
 import { seriesColor, thresholdStyle } from "./palette";
@@ -64,7 +65,10 @@ function yearWindow(years: number[], from: number, to: number): [number, number]
   return [a, b + 1];
 }
 
-/** Y domain covering every visible band, padded a little and always including 0. */
+/**
+ * Y domain covering every visible band from 0 (warming read from the baseline), padded a
+ * little; below zero it stops just under the lowest band rather than at a rounded-out tick.
+ */
 export function fanYDomain(series: FanSeries[], from = -Infinity, to = Infinity): [number, number] {
   let lo = 0;
   let hi = 0;
@@ -73,8 +77,7 @@ export function fanYDomain(series: FanSeries[], from = -Infinity, to = Infinity)
     lo = Math.min(lo, min(s.p5.slice(a, b)) ?? 0);
     hi = Math.max(hi, max(s.p95.slice(a, b)) ?? 0);
   }
-  const pad = (hi - lo) * 0.04 || 0.5;
-  return [lo < 0 ? lo - pad : 0, hi + pad];
+  return paddedDomain(lo, hi, { includeZero: true });
 }
 
 /**
@@ -110,7 +113,11 @@ export function FanChart({
 
   const x = useMemo(() => scaleLinear().domain([x0, x1]).range([0, innerWidth]), [x0, x1, innerWidth]);
   const y = useMemo(
-    () => scaleLinear().domain(yDomain ?? fanYDomain(visible.length ? visible : series, x0, x1)).range([innerHeight, 0]).nice(),
+    // No nice(): rounding the domain out to whole ticks ran the axis a kelvin below the data.
+    () =>
+      scaleLinear()
+        .domain(yDomain ?? fanYDomain(visible.length ? visible : series, x0, x1))
+        .range([innerHeight, 0]),
     [yDomain, visible, series, x0, x1, innerHeight],
   );
 
@@ -136,9 +143,10 @@ export function FanChart({
           color: s.color ?? seriesColor(i),
           outer: outline ? edges(s.p5, s.p95) : band(s.p5, s.p95),
           inner: outline ? edges(s.p17, s.p83) : band(s.p17, s.p83),
-          median: line<number>()
-            .x((k) => x(s.years[k]!))
-            .y((k) => y(s.p50[k]!))(idx) ?? "",
+          median:
+            line<number>()
+              .x((k) => x(s.years[k]!))
+              .y((k) => y(s.p50[k]!))(idx) ?? "",
         };
       }),
     [series, x, y, x0, x1],
@@ -167,7 +175,10 @@ export function FanChart({
       return k < 0 ? [] : [{ series: s, color, values: KEYS.map((key) => s[key][k]!) }];
     });
   // Outlined series go on top of filled ones, so their edges and dashed median stay visible.
-  const drawOrder = [...shapes].sort((a, b) => Number(a.s.treatment === "outline" || a.s.treatment === "median") - Number(b.s.treatment === "outline" || b.s.treatment === "median"));
+  const drawOrder = [...shapes].sort(
+    (a, b) =>
+      Number(a.s.treatment === "outline" || a.s.treatment === "median") - Number(b.s.treatment === "outline" || b.s.treatment === "median"),
+  );
 
   const table = (
     <DataTable
@@ -185,7 +196,26 @@ export function FanChart({
   return (
     <ChartFrame
       title={title}
-      description={description ?? `Median line, ${BAND_LABELS.inner} and ${BAND_LABELS.outer} bands. Hover or use arrow keys to read a year.`}
+      units={unit}
+      legend={[
+        ...shapes
+          .filter(({ s }) => !hidden.has(s.id))
+          .map(({ s, color }) =>
+            s.treatment === "outline"
+              ? { label: `${s.name} (outlined bands, dashed median)`, color, dash: "7 4" }
+              : s.treatment === "median"
+                ? { label: `${s.name} (median only)`, color }
+                : { label: series.length > 1 ? `${s.name} (filled bands)` : s.name, color, kind: "swatch" as const },
+          ),
+        {
+          label: `bands: ${BAND_LABELS.outer} (light), ${BAND_LABELS.inner} (strong); line: ${BAND_LABELS.median}`,
+          color: "var(--pl-ink)",
+        },
+        ...thresholds.map((t, k) => ({ label: `${t} ${unit} threshold`, color: thresholdStyle(k).color, dash: thresholdStyle(k).dash })),
+      ]}
+      description={
+        description ?? `Median line, ${BAND_LABELS.inner} and ${BAND_LABELS.outer} bands. Hover or use arrow keys to read a year.`
+      }
       table={table}
     >
       {series.length > 1 && (
@@ -242,11 +272,25 @@ export function FanChart({
               </g>
             )}
             <AxisLeft scale={y} width={innerWidth} label={yLabel} />
-            <AxisBottom scale={x} height={innerHeight} width={innerWidth} label="Year" format={(v) => String(v)} ticks={Math.max(2, Math.floor(innerWidth / 80))} />
+            <AxisBottom
+              scale={x}
+              height={innerHeight}
+              width={innerWidth}
+              label="Year"
+              format={(v) => String(v)}
+              ticks={Math.max(2, Math.floor(innerWidth / 80))}
+            />
             {thresholds.map((t, k) =>
               t >= y.domain()[0]! && t <= y.domain()[1]! ? (
                 <g key={t} data-threshold={t}>
-                  <line x2={innerWidth} y1={y(t)} y2={y(t)} stroke={thresholdStyle(k).color} strokeDasharray={thresholdStyle(k).dash} strokeWidth={1.2} />
+                  <line
+                    x2={innerWidth}
+                    y1={y(t)}
+                    y2={y(t)}
+                    stroke={thresholdStyle(k).color}
+                    strokeDasharray={thresholdStyle(k).dash}
+                    strokeWidth={1.2}
+                  />
                   <text x={4} y={y(t) - 4} fill={thresholdStyle(k).color} className="text-[10px] num">
                     {t} {unit}
                   </text>
@@ -274,9 +318,7 @@ export function FanChart({
                   </g>
                 ),
               )}
-            {hoverYear !== null && (
-              <line x1={x(hoverYear)} x2={x(hoverYear)} y2={innerHeight} stroke="var(--pl-ink)" strokeOpacity={0.4} />
-            )}
+            {hoverYear !== null && <line x1={x(hoverYear)} x2={x(hoverYear)} y2={innerHeight} stroke="var(--pl-ink)" strokeOpacity={0.4} />}
             <rect
               width={innerWidth}
               height={innerHeight}
@@ -305,7 +347,17 @@ function LegendSwatch({ color, outline, lineOnly = false }: { color: string; out
     );
   return (
     <svg aria-hidden width={22} height={12} className="shrink-0">
-      <rect x={1} y={1} width={20} height={10} rx={2} fill={outline ? "none" : color} fillOpacity={0.3} stroke={outline ? color : "none"} strokeWidth={1.2} />
+      <rect
+        x={1}
+        y={1}
+        width={20}
+        height={10}
+        rx={2}
+        fill={outline ? "none" : color}
+        fillOpacity={0.3}
+        stroke={outline ? color : "none"}
+        strokeWidth={1.2}
+      />
       <line x1={2} x2={20} y1={6} y2={6} stroke={color} strokeWidth={2} strokeDasharray={outline ? "4 2" : undefined} />
     </svg>
   );

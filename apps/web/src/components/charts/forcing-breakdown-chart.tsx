@@ -17,7 +17,17 @@ export interface AgentForcing {
  * Effective radiative forcing by agent at one year: a bar to the median, a bracket from
  * 5 % to 95 %. Warming agents extend right of zero, cooling agents left.
  */
-export function ForcingBreakdownChart({ title, year, agents, total }: { title: string; year: number; agents: AgentForcing[]; total?: AgentForcing }) {
+export function ForcingBreakdownChart({
+  title,
+  year,
+  agents,
+  total,
+}: {
+  title: string;
+  year: number;
+  agents: AgentForcing[];
+  total?: AgentForcing;
+}) {
   const [ref, width] = useChartWidth<HTMLDivElement>();
   const rows = useMemo(() => (total ? [...agents, total] : agents), [agents, total]);
   const labelWidth = 150;
@@ -29,11 +39,27 @@ export function ForcingBreakdownChart({ title, year, agents, total }: { title: s
   const lo = Math.min(0, ...rows.map((r) => r.p5));
   const hi = Math.max(0, ...rows.map((r) => r.p95));
   const x = useMemo(() => scaleLinear().domain([lo, hi]).range([0, innerWidth]).nice(), [lo, hi, innerWidth]);
-  const yb = useMemo(() => scaleBand().domain(rows.map((r) => r.label)).range([0, innerHeight]).padding(0.3), [rows, innerHeight]);
+  const yb = useMemo(
+    () =>
+      scaleBand()
+        .domain(rows.map((r) => r.label))
+        .range([0, innerHeight])
+        .padding(0.3),
+    [rows, innerHeight],
+  );
 
   return (
     <ChartFrame
       title={title}
+      units="W m-2 (effective radiative forcing)"
+      legend={[
+        ...rows.map((r) => ({
+          label: r.label,
+          color: total && r === total ? "var(--pl-ink)" : agentColor(r.agent),
+          kind: "swatch" as const,
+        })),
+        { label: "5th–95th percentile bracket (bars are medians)", color: "var(--pl-ink)" },
+      ]}
       description={`Effective radiative forcing in ${year}: median bar with its 5–95 % bracket.`}
       table={
         <DataTable

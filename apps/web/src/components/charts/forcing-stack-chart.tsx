@@ -17,25 +17,50 @@ export interface AgentSeries {
  * Forcing by agent over time, stacked: warming agents pile up above zero and cooling agents
  * below (diverging offset), with the net total drawn as a line on top.
  */
-export function ForcingStackChart({ title, years, agents, height = 340 }: { title: string; years: number[]; agents: AgentSeries[]; height?: number }) {
+export function ForcingStackChart({
+  title,
+  years,
+  agents,
+  height = 340,
+}: {
+  title: string;
+  years: number[];
+  agents: AgentSeries[];
+  height?: number;
+}) {
   const [ref, width] = useChartWidth<HTMLDivElement>();
   const m = DEFAULT_MARGINS;
   const { innerWidth, innerHeight } = innerSize(width, height, m);
   const rows = useMemo(() => years.map((_, k) => Object.fromEntries(agents.map((a) => [a.agent, a.values[k] ?? 0]))), [years, agents]);
   const total = useMemo(() => years.map((_, k) => agents.reduce((s, a) => s + (a.values[k] ?? 0), 0)), [years, agents]);
   const layers = useMemo(
-    () => stack<Record<string, number>>().keys(agents.map((a) => a.agent)).offset(stackOffsetDiverging).order(stackOrderNone)(rows),
+    () =>
+      stack<Record<string, number>>()
+        .keys(agents.map((a) => a.agent))
+        .offset(stackOffsetDiverging)
+        .order(stackOrderNone)(rows),
     [rows, agents],
   );
   const lo = Math.min(0, ...layers.flatMap((l) => l.map((d) => d[0])));
   const hi = Math.max(0, ...layers.flatMap((l) => l.map((d) => d[1])));
-  const x = useMemo(() => scaleLinear().domain([years[0]!, years[years.length - 1]!]).range([0, innerWidth]), [years, innerWidth]);
+  const x = useMemo(
+    () =>
+      scaleLinear()
+        .domain([years[0]!, years[years.length - 1]!])
+        .range([0, innerWidth]),
+    [years, innerWidth],
+  );
   const y = useMemo(() => scaleLinear().domain([lo, hi]).range([innerHeight, 0]).nice(), [lo, hi, innerHeight]);
   const labelOf = new Map(agents.map((a) => [a.agent, a.label]));
 
   return (
     <ChartFrame
       title={title}
+      units="W m-2 (effective radiative forcing)"
+      legend={[
+        ...agents.map((a) => ({ label: a.label, color: agentColor(a.agent), kind: "swatch" as const })),
+        { label: "Total", color: "var(--pl-ink)" },
+      ]}
       description="Stacked effective radiative forcing by agent (warming above zero, cooling below); the line is the net total."
       table={
         <DataTable
@@ -82,7 +107,11 @@ export function ForcingStackChart({ title, years, agents, height = 340 }: { titl
             ))}
             <path
               data-role="total"
-              d={line<number>().x((_, k) => x(years[k]!)).y((v) => y(v))(total) ?? ""}
+              d={
+                line<number>()
+                  .x((_, k) => x(years[k]!))
+                  .y((v) => y(v))(total) ?? ""
+              }
               fill="none"
               stroke="var(--pl-ink)"
               strokeWidth={1.8}

@@ -13,6 +13,11 @@ export interface LineSeries {
   color?: string;
 }
 
+/** The unit in an axis label's last brackets ("CO₂ (ppm)" -> "ppm"), else the whole label. */
+export function unitOf(label: string): string {
+  return /\(([^()]+)\)\s*$/.exec(label)?.[1] ?? label;
+}
+
 /**
  * Plain multi-line chart over years (e.g. concentrations given in ppm or ppb). A NaN value is
  * a year the series does not cover: the line breaks there and the table shows "–".
@@ -27,6 +32,8 @@ export function LineChart({ title, years, series, yLabel, height = 240 }: { titl
   return (
     <ChartFrame
       title={title}
+      units={unitOf(yLabel)}
+      legend={series.map((s, i) => ({ label: s.label, color: s.color ?? seriesColor(i) }))}
       table={
         <DataTable
           caption={title}

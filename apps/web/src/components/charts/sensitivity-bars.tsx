@@ -14,7 +14,17 @@ export interface SensitivityBar {
  * Sensitivity budget at one horizon: which inputs drive the spread of warming, largest
  * first. Signed indices (rank correlations) extend left or right of zero.
  */
-export function SensitivityBars({ title, horizon, bars, indexLabel = "Rank correlation with warming (–1 to 1)" }: { title: string; horizon: number; bars: SensitivityBar[]; indexLabel?: string }) {
+export function SensitivityBars({
+  title,
+  horizon,
+  bars,
+  indexLabel = "Rank correlation with warming (–1 to 1)",
+}: {
+  title: string;
+  horizon: number;
+  bars: SensitivityBar[];
+  indexLabel?: string;
+}) {
   const [ref, width] = useChartWidth<HTMLDivElement>();
   const sorted = [...bars].sort((a, b) => Math.abs(b.index) - Math.abs(a.index));
   // Wide enough for the longest input name the budget can hold, "Other well-mixed gases scale"
@@ -27,11 +37,23 @@ export function SensitivityBars({ title, horizon, bars, indexLabel = "Rank corre
   const lo = Math.min(0, ...sorted.map((b) => b.index));
   const hi = Math.max(0.05, ...sorted.map((b) => b.index));
   const x = useMemo(() => scaleLinear().domain([lo, hi]).range([0, innerWidth]).nice(), [lo, hi, innerWidth]);
-  const yb = useMemo(() => scaleBand().domain(sorted.map((b) => b.label)).range([0, innerHeight]).padding(0.25), [sorted, innerHeight]);
+  const yb = useMemo(
+    () =>
+      scaleBand()
+        .domain(sorted.map((b) => b.label))
+        .range([0, innerHeight])
+        .padding(0.25),
+    [sorted, innerHeight],
+  );
 
   return (
     <ChartFrame
       title={title}
+      units={indexLabel}
+      legend={[
+        { label: "pushes warming up (positive)", color: "var(--pl-ember-400)", kind: "swatch" },
+        { label: "pushes warming down (negative)", color: "var(--pl-series-2)", kind: "swatch" },
+      ]}
       description={`What drives the spread of warming in ${horizon}.`}
       table={<DataTable caption={title} columns={["Input", indexLabel]} rows={sorted.map((b) => [b.label, b.index.toFixed(3)])} />}
     >
@@ -50,7 +72,12 @@ export function SensitivityBars({ title, horizon, bars, indexLabel = "Rank corre
                   height={yb.bandwidth()}
                   fill={b.index >= 0 ? "var(--pl-ember-400)" : "var(--pl-series-2)"}
                 />
-                <text x={x(Math.max(0, b.index)) + 4} y={yb(b.label)! + yb.bandwidth() / 2} dy="0.32em" className="fill-muted text-[11px] num">
+                <text
+                  x={x(Math.max(0, b.index)) + 4}
+                  y={yb(b.label)! + yb.bandwidth() / 2}
+                  dy="0.32em"
+                  className="fill-muted text-[11px] num"
+                >
                   {b.index.toFixed(2)}
                 </text>
               </g>

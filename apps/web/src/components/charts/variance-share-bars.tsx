@@ -52,33 +52,60 @@ export function VarianceShareBars({ title, horizon, rows }: { title: string; hor
   return (
     <ChartFrame
       title={title}
+      units="% of the variance of warming (first-order share); rank correlation from –1 to 1"
+      legend={[
+        { label: "share explained by the input on its own", color: "var(--pl-ember-400)", kind: "swatch" },
+        { label: `${INTERACTIONS_LABEL} (what the shares leave)`, color: "var(--pl-line-strong)", dash: "3 2" },
+      ]}
       description={`Share of the variance of warming in ${horizon} that each input explains on its own; what the shares leave is interactions between inputs. Rank correlation beside each: its sign says which way the input pushes warming.`}
       table={
         <DataTable
           caption={title}
           columns={["Input", "Share of variance (first order)", "Rank correlation (Spearman)"]}
-          rows={[
-            ...sorted.map((r) => [r.label, pct(r.share), signed(r.rankCorrelation)]),
-            [INTERACTIONS_LABEL, pct(remainder), "–"],
-          ]}
+          rows={[...sorted.map((r) => [r.label, pct(r.share), signed(r.rankCorrelation)]), [INTERACTIONS_LABEL, pct(remainder), "–"]]}
         />
       }
     >
       <div ref={ref} className="w-full">
-        <svg width={width} height={innerHeight + m.top + m.bottom} role="img" aria-label={`${title}: share of the variance of warming (%) by input, with rank correlations`}>
+        <svg
+          width={width}
+          height={innerHeight + m.top + m.bottom}
+          role="img"
+          aria-label={`${title}: share of the variance of warming (%) by input, with rank correlations`}
+        >
           <g transform={`translate(${m.left},${m.top})`}>
             <text x={innerWidth + 8} y={-8} className="fill-muted text-[11px]">
               Rank corr.
             </text>
             <AxisLeftBand scale={yb} labelWidth={labelWidth} />
-            <AxisBottom scale={x} height={innerHeight} width={innerWidth} label="Share of the variance of warming (%)" ticks={5} format={(v) => `${Math.round(v * 100)}`} />
+            <AxisBottom
+              scale={x}
+              height={innerHeight}
+              width={innerWidth}
+              label="Share of the variance of warming (%)"
+              ticks={5}
+              format={(v) => `${Math.round(v * 100)}`}
+            />
             {sorted.map((r) => (
               <g key={r.input} data-input={r.input}>
-                <rect data-role="share" x={x(0)} width={x(r.share) - x(0)} y={yb(r.label)} height={yb.bandwidth()} fill="var(--pl-ember-400)" />
+                <rect
+                  data-role="share"
+                  x={x(0)}
+                  width={x(r.share) - x(0)}
+                  y={yb(r.label)}
+                  height={yb.bandwidth()}
+                  fill="var(--pl-ember-400)"
+                />
                 <text x={x(r.share) + 4} y={yb(r.label)! + yb.bandwidth() / 2} dy="0.32em" className="fill-muted text-[11px] num">
                   {pct(r.share)}
                 </text>
-                <text data-role="rank-correlation" x={innerWidth + 8} y={yb(r.label)! + yb.bandwidth() / 2} dy="0.32em" className="fill-text text-[11px] num">
+                <text
+                  data-role="rank-correlation"
+                  x={innerWidth + 8}
+                  y={yb(r.label)! + yb.bandwidth() / 2}
+                  dy="0.32em"
+                  className="fill-text text-[11px] num"
+                >
                   {signed(r.rankCorrelation)}
                 </text>
               </g>
@@ -94,7 +121,12 @@ export function VarianceShareBars({ title, horizon, rows }: { title: string; hor
                 stroke="var(--pl-line-strong)"
                 strokeDasharray="3 2"
               />
-              <text x={x(remainder) + 4} y={yb(INTERACTIONS_LABEL)! + yb.bandwidth() / 2} dy="0.32em" className="fill-muted text-[11px] num">
+              <text
+                x={x(remainder) + 4}
+                y={yb(INTERACTIONS_LABEL)! + yb.bandwidth() / 2}
+                dy="0.32em"
+                className="fill-muted text-[11px] num"
+              >
                 {pct(remainder)}
               </text>
             </g>
@@ -103,8 +135,8 @@ export function VarianceShareBars({ title, horizon, rows }: { title: string; hor
       </div>
       {overshoot && (
         <p role="note" className="text-xs text-muted">
-          The estimated first-order shares add up to {Math.round(sum * 100)} %, above 100 % only by sampling noise of the estimate: no
-          share is left for interactions at this ensemble size.
+          The estimated first-order shares add up to {Math.round(sum * 100)} %, above 100 % only by sampling noise of the estimate: no share
+          is left for interactions at this ensemble size.
         </p>
       )}
     </ChartFrame>

@@ -8,6 +8,7 @@ export function AdminTabs({ permissions }: { permissions: readonly string[] }) {
     { to: paths.adminUsers.build(), label: "Users and roles", permission: "users:manage" },
     { to: paths.adminAudit.build(), label: "Audit log", permission: "audit:read" },
     { to: paths.adminOutbox.build(), label: "Outbox", permission: "outbox:read" },
+    { to: paths.adminSettings.build(), label: "Review policy", permission: "settings:manage" },
   ].filter((t) => permissions.includes(t.permission));
   return (
     <nav aria-label="Admin" className="mb-5 flex gap-1 border-b border-line">

@@ -6,7 +6,7 @@ import { modelVersionsRootKey } from "./get-model-versions";
 /**
  * The effect of a version on key outputs. A POST (the server runs two preview ensembles) that
  * reads nothing and changes nothing, so it is cached like a query: same version, comparison,
- * pathway and members, same answer (the server caches by input hashes too). Editing a draft
+ * pathway set and members, same answer (the server caches by input hashes too). Editing a draft
  * invalidates everything under the model-versions key, this included.
  */
 export const getModelVersionImpact = (id: string, body: ModelVersionImpactBody = {}, signal?: AbortSignal) =>
@@ -14,7 +14,7 @@ export const getModelVersionImpact = (id: string, body: ModelVersionImpactBody =
 
 export const getModelVersionImpactQueryOptions = (id: string, body: ModelVersionImpactBody = {}) =>
   queryOptions({
-    queryKey: [...modelVersionsRootKey, "impact", id, { againstId: body.againstId ?? null, pathwayId: body.pathwayId ?? null, members: body.members ?? null }],
+    queryKey: [...modelVersionsRootKey, "impact", id, { againstId: body.againstId ?? null, pathwayIds: body.pathwayIds ?? null, members: body.members ?? null }],
     queryFn: ({ signal }) => getModelVersionImpact(id, body, signal),
     // A few seconds of server CPU per answer, and deterministic: never refetch on focus or remount.
     staleTime: Number.POSITIVE_INFINITY,

@@ -9,12 +9,12 @@ afterEach(() => vi.unstubAllGlobals());
 
 describe("useModelVersionImpact", () => {
   it("keys each preview by version, comparison, pathway and members under the model-versions root", () => {
-    expect(getModelVersionImpactQueryOptions("mv-3").queryKey).toEqual(["model-versions", "impact", "mv-3", { againstId: null, pathwayId: null, members: null }]);
+    expect(getModelVersionImpactQueryOptions("mv-3").queryKey).toEqual(["model-versions", "impact", "mv-3", { againstId: null, pathwayIds: null, members: null }]);
     expect(getModelVersionImpactQueryOptions("mv-3", { againstId: "mv-1", members: 500 }).queryKey).toEqual([
       "model-versions",
       "impact",
       "mv-3",
-      { againstId: "mv-1", pathwayId: null, members: 500 },
+      { againstId: "mv-1", pathwayIds: null, members: 500 },
     ]);
   });
 
@@ -23,7 +23,7 @@ describe("useModelVersionImpact", () => {
     const client = testQueryClient();
     const wrapper = wrapperFor(client);
     const first = renderHook(() => useModelVersionImpact("mv-3", { members: 2000 }), { wrapper });
-    await waitFor(() => expect(first.result.current.data?.pathway.name).toBe("Harbourline Middle"));
+    await waitFor(() => expect(first.result.current.data?.pathways[0]?.pathway.name).toBe("Harbourline Middle"));
     expect(server.calls[0]).toMatchObject({ method: "POST", body: { members: 2000 } });
     renderHook(() => useModelVersionImpact("mv-3", { members: 2000 }), { wrapper });
     await new Promise((r) => setTimeout(r, 20));

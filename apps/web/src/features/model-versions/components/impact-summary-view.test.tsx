@@ -13,7 +13,7 @@ describe("ImpactSummaryView", () => {
 
   it("puts both versions' medians and 5–95 ranges side by side and highlights a shift beyond the preview noise", () => {
     render(<ImpactSummaryView impact={impactFixture()} />);
-    const table = screen.getByRole("table", { name: "Warming at the horizons" });
+    const table = screen.getByRole("table", { name: "Warming at the horizons on Harbourline Middle" });
     const headers = within(table).getAllByRole("columnheader").map((h) => h.textContent);
     expect(headers).toEqual(["Year", "Core v2", "Core v3", "Median shift", "5–95 width change"]);
     const r2100 = rowOf(table, "2100");
@@ -30,7 +30,7 @@ describe("ImpactSummaryView", () => {
 
   it("shows exceedance probabilities per threshold and implied ECS/TCR with their changes", () => {
     render(<ImpactSummaryView impact={impactFixture()} />);
-    const exceed = screen.getByRole("table", { name: "Exceedance probabilities" });
+    const exceed = screen.getByRole("table", { name: "Exceedance probabilities on Harbourline Middle" });
     const row = within(exceed).getAllByRole("row").find((r) => r.textContent?.startsWith("2100> 3 K"))!;
     expect(within(row).getAllByRole("cell").map((c) => c.textContent)).toEqual(["2100", "> 3 K", "20 %", "35 %", "+15.0 pts"]);
     const sens = screen.getByRole("table", { name: "Implied climate sensitivity" });
@@ -44,9 +44,34 @@ describe("ImpactSummaryView", () => {
     ]);
   });
 
-  it("names the pathway and member count and states the Monte Carlo precision of a small preview", () => {
+  it("shows every previewed pathway in its own section, in the order of the answer", () => {
     render(<ImpactSummaryView impact={impactFixture()} />);
-    expect(screen.getByText(/Harbourline Middle/)).toBeInTheDocument();
+    expect(screen.getAllByRole("heading", { level: 3 }).map((h) => h.textContent)).toEqual(["On Harbourline Middle", "On Harbourline Low"]);
+    const low = screen.getByRole("table", { name: "Warming at the horizons on Harbourline Low" });
+    expect(within(rowOf(low, "2100")).getAllByRole("cell").map((c) => c.textContent).slice(1, 3)).toEqual(["1.75 (1.40–2.35)", "1.80 (1.40–2.40)"]);
+  });
+
+  it("lists each materiality threshold that fired, and says when the author classed it minor", () => {
+    render(<ImpactSummaryView impact={impactFixture()} changeClass="minor" />);
+    const box = screen.getByRole("region", { name: "Materiality" });
+    expect(box).toHaveTextContent("4 materiality thresholds fired — yet the change is classed as minor");
+    expect(within(box).getAllByRole("listitem").map((li) => li.textContent)).toEqual([
+      "fired: median shift +0.30 K > 0.1 K on Harbourline Middle 2100",
+      "fired: 5–95 % width change +25.0 % > 10 % on Harbourline Middle 2100",
+      "fired: P(>2 K) change +10.0 pts > 5 pts on Harbourline Middle 2100",
+      "fired: P(>3 K) change +15.0 pts > 5 pts on Harbourline Middle 2100",
+    ]);
+  });
+
+  it("says so quietly when nothing fired", () => {
+    const base = impactFixture();
+    render(<ImpactSummaryView impact={{ ...base, materiality: { ...base.materiality, fired: [] } }} />);
+    expect(screen.getByLabelText("Materiality")).toHaveTextContent("No materiality threshold fired on the previewed pathways");
+  });
+
+  it("names the pathways and member count and states the Monte Carlo precision of a small preview", () => {
+    render(<ImpactSummaryView impact={impactFixture()} />);
+    expect(screen.getByText("Harbourline Middle, Harbourline Low")).toBeInTheDocument();
     const note = screen.getByRole("note");
     expect(note).toHaveTextContent("2,000 members per version");
     // Median: half of the fixture's 0.06 K wide interval. Exceedance: 1.96·√(0.25/2000) = 0.0219 (binomial, p = ½).

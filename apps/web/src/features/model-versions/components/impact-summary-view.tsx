@@ -1,8 +1,9 @@
-import type { ImpactSide, ModelVersionImpact, PercentileSet, SpreadChange } from "@plumeline/contracts";
+import type { ImpactPathway, ImpactSide, ModelVersionImpact, PercentileSet, SpreadChange } from "@plumeline/contracts";
 import { Table, Td, Th } from "@/components/ui/table";
 import { cx } from "@/components/ui/cx";
 import { formatInteger, formatKelvin, formatProbability } from "@/lib/format";
 import { exceedanceHalfWidth, shiftNoise, widestMedianHalfWidth } from "../lib/impact-precision";
+import { MaterialityFirings } from "./materiality-firings";
 
 const label = (side: ImpactSide) => `${side.version.name} v${side.version.versionNumber}`;
 const signed = (v: number, digits = 2) => `${v > 0 ? "+" : v < 0 ? "−" : "±"}${Math.abs(v).toFixed(digits)}`;
@@ -28,10 +29,10 @@ function Shift({ value: raw, noise, unit, digits = 2 }: { value: number; noise: 
   );
 }
 
-function HorizonTable({ impact }: { impact: ModelVersionImpact }) {
-  const againstByYear = new Map(impact.against.horizons.map((h) => [h.year, h]));
+function HorizonTable({ impact, pathway }: { impact: ModelVersionImpact; pathway: ImpactPathway }) {
+  const againstByYear = new Map(pathway.against.map((h) => [h.year, h]));
   return (
-    <Table aria-label="Warming at the horizons">
+    <Table aria-label={`Warming at the horizons on ${pathway.pathway.name}`}>
       <caption className="mb-2 text-left text-sm text-muted">Warming at each horizon (K above the baseline): median (5–95 %)</caption>
       <thead>
         <tr>
@@ -43,9 +44,9 @@ function HorizonTable({ impact }: { impact: ModelVersionImpact }) {
         </tr>
       </thead>
       <tbody>
-        {impact.differences.horizons.map((d) => {
-          const mine = impact.version.horizons.find((h) => h.year === d.year);
-          const noise = shiftNoise(impact, d.year);
+        {pathway.differences.map((d) => {
+          const mine = pathway.version.find((h) => h.year === d.year);
+          const noise = shiftNoise(pathway, d.year);
           return (
             <tr key={d.year}>
               <Td className="num">{d.year}</Td>
@@ -65,12 +66,12 @@ function HorizonTable({ impact }: { impact: ModelVersionImpact }) {
   );
 }
 
-function ExceedanceTable({ impact }: { impact: ModelVersionImpact }) {
+function ExceedanceTable({ impact, pathway }: { impact: ModelVersionImpact; pathway: ImpactPathway }) {
   // Noise of a difference of two independent-looking proportions: √2 times one half-width (conservative; shared seed).
   const noise = exceedanceHalfWidth(impact.members) * Math.SQRT2;
-  const againstByYear = new Map(impact.against.horizons.map((h) => [h.year, h]));
+  const againstByYear = new Map(pathway.against.map((h) => [h.year, h]));
   return (
-    <Table aria-label="Exceedance probabilities">
+    <Table aria-label={`Exceedance probabilities on ${pathway.pathway.name}`}>
       <caption className="mb-2 text-left text-sm text-muted">Probability that warming exceeds each threshold in the horizon year</caption>
       <thead>
         <tr>
@@ -82,7 +83,7 @@ function ExceedanceTable({ impact }: { impact: ModelVersionImpact }) {
         </tr>
       </thead>
       <tbody>
-        {impact.differences.horizons.flatMap((d) =>
+        {pathway.differences.flatMap((d) =>
           impact.thresholds.map((threshold) => {
             const key = String(threshold);
             const change = d.exceedance[key];
@@ -91,7 +92,7 @@ function ExceedanceTable({ impact }: { impact: ModelVersionImpact }) {
                 <Td className="num">{d.year}</Td>
                 <Td numeric>&gt; {threshold} K</Td>
                 <Td numeric>{formatProbability(againstByYear.get(d.year)?.exceedance[key])}</Td>
-                <Td numeric>{formatProbability(impact.version.horizons.find((h) => h.year === d.year)?.exceedance[key])}</Td>
+                <Td numeric>{formatProbability(pathway.version.find((h) => h.year === d.year)?.exceedance[key])}</Td>
                 <Td numeric>{change === undefined ? "–" : <Shift value={change * 100} noise={noise * 100} unit="pts" digits={1} />}</Td>
               </tr>
             );
@@ -140,23 +141,33 @@ function SensitivityTable({ impact }: { impact: ModelVersionImpact }) {
 
 /**
  * Side-by-side key outputs of a version and the version it is compared against, from one
- * preview answer (plain data, no fetching): horizon warming, exceedance probabilities and
- * implied ECS/TCR, each with the change; what was run; and how precise such a preview is.
+ * preview answer (plain data, no fetching): which materiality thresholds fired; per pathway the
+ * horizon warming and exceedance probabilities, each with the change; implied ECS/TCR (the
+ * same on every pathway); what was run; and how precise such a preview is.
  */
-export function ImpactSummaryView({ impact }: { impact: ModelVersionImpact }) {
+export function ImpactSummaryView({ impact, changeClass }: { impact: ModelVersionImpact; changeClass?: "major" | "minor" | null }) {
   const medianPrecision = widestMedianHalfWidth(impact);
+  const names = impact.pathways.map((p) => p.pathway.name).join(", ");
   return (
     <div className="flex flex-col gap-5">
       <p className="text-sm">
         <span className="font-medium">{label(impact.version)}</span> against <span className="font-medium">{label(impact.against)}</span> on{" "}
-        <span className="font-medium">{impact.pathway.name}</span> · {formatInteger(impact.members)} members each · seed “{impact.seed}” ·{" "}
+        {impact.pathways.length === 1 ? "" : `${impact.pathways.length} pathways: `}
+        <span className="font-medium">{names}</span> · {formatInteger(impact.members)} members each · seed “{impact.seed}” ·{" "}
         {impact.sampling === "latin-hypercube" ? "Latin hypercube" : "Monte Carlo"} sampling
       </p>
-      <HorizonTable impact={impact} />
-      <ExceedanceTable impact={impact} />
+      <MaterialityFirings fired={impact.materiality.fired} policy={impact.materiality.policy} changeClass={changeClass} />
+      {impact.pathways.map((pathway) => (
+        <section key={pathway.pathway.id} aria-label={`On ${pathway.pathway.name}`} className="flex flex-col gap-3">
+          <h3 className="text-sm font-semibold text-ink">On {pathway.pathway.name}</h3>
+          <HorizonTable impact={impact} pathway={pathway} />
+          <ExceedanceTable impact={impact} pathway={pathway} />
+        </section>
+      ))}
       <SensitivityTable impact={impact} />
       <p className="rounded-md border border-line bg-surface-2 px-3 py-2 text-xs text-muted" role="note">
-        A small preview ensemble, not a run: {formatInteger(impact.members)} members per version, one fixed seed, not stored. Medians are known to about ±
+        A small preview ensemble, not a run: {formatInteger(impact.members)} members per version, one fixed seed, not stored — indicative only; the run is the
+        record. Medians are known to about ±
         {medianPrecision === null ? "–" : medianPrecision.toFixed(2)} K (95 % order-statistic interval, widest horizon) and exceedance probabilities to about ±
         {(exceedanceHalfWidth(impact.members) * 100).toFixed(1)} points (95 %, binomial, worst case). Shifts within that noise are greyed; red is warmer or wider,
         green cooler or narrower. Start a full run for numbers to rely on.

@@ -3,9 +3,36 @@ import { submitModelVersionBodySchema, type ChangeClass } from "@plumeline/contr
 import { Button } from "@/components/ui/button";
 import { Field, Textarea } from "@/components/ui/field";
 import { ErrorState } from "@/components/ui/states";
+import { isApiError } from "@/lib/api-error";
 import { useTransitionModelVersion } from "../api/transition-model-version";
 
-/** The author sends a draft for independent review, classing the change as major or minor. */
+/**
+ * The server's refusal of a minor filing: which thresholds the preview passed, and the way on
+ * (class it as major). The numbers are the reviewer's preview's, so the author sees what they will.
+ */
+function MaterialityRefusal({ messages, onReclass }: { messages: string[]; onReclass: () => void }) {
+  return (
+    <div role="alert" className="rounded-md border border-danger/40 bg-danger-soft px-4 py-3 text-sm">
+      <p className="font-semibold text-danger">Not a minor change under the firm's materiality policy</p>
+      <ul className="mt-1 list-disc pl-5 text-text">
+        {messages.slice(0, 12).map((m) => (
+          <li key={m}>fired: {m}</li>
+        ))}
+      </ul>
+      {messages.length > 12 && <p className="mt-1 text-text">…and {messages.length - 12} more.</p>}
+      <p className="mt-2 text-text">Class it as a major change to submit it for full validation, or change the draft.</p>
+      <Button variant="secondary" size="sm" className="mt-2" onClick={onReclass}>
+        Class as major
+      </Button>
+    </div>
+  );
+}
+
+/**
+ * The author sends a draft for independent review, classing the change as major or minor. A
+ * minor filing is checked against the materiality policy first (the server runs the preview),
+ * which takes seconds, so the button says so.
+ */
 export function SubmitPanel({ versionId }: { versionId: string }) {
   const transition = useTransitionModelVersion();
   const [changeClass, setChangeClass] = useState<ChangeClass | "">("");
@@ -45,11 +72,24 @@ export function SubmitPanel({ versionId }: { versionId: string }) {
         )}
       </fieldset>
       <Field label="Note to the reviewer (optional)">{(p) => <Textarea {...p} value={note} onChange={(e) => setNote(e.target.value)} maxLength={2000} rows={2} />}</Field>
-      {transition.error && <ErrorState error={transition.error} />}
-      <div>
+      {isApiError(transition.error) && transition.error.code === "materiality_threshold_exceeded" ? (
+        <MaterialityRefusal
+          messages={transition.error.details.map((d) => d.message)}
+          onReclass={() => {
+            setChangeClass("major");
+            transition.reset();
+          }}
+        />
+      ) : (
+        transition.error && <ErrorState error={transition.error} />
+      )}
+      <div className="flex flex-wrap items-center gap-3">
         <Button onClick={submit} disabled={transition.isPending}>
-          {transition.isPending ? "Submitting…" : "Submit for review"}
+          {transition.isPending ? (changeClass === "minor" ? "Checking materiality…" : "Submitting…") : "Submit for review"}
         </Button>
+        {changeClass === "minor" && (
+          <span className="text-xs text-muted">A minor change is first previewed against its parent on every pinned pathway (a few seconds per pathway).</span>
+        )}
       </div>
     </div>
   );

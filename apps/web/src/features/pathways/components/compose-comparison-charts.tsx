@@ -1,3 +1,4 @@
+import { useState } from "react";
 import { AGENT_LABELS, agentSeries, type ForcingAgent, type PathwayData } from "@plumeline/contracts";
 import { LineChart } from "@/components/charts/line-chart";
 import { alignOnYears } from "../lib/align-years";
@@ -6,6 +7,8 @@ import { forcingTotal } from "../lib/forcing-total";
 const BASE_COLOR = "var(--pl-muted)";
 const COMPOSED_COLOR = "var(--pl-series-1)";
 const UNIT_LABEL = { erf: "W m-2", ppm: "ppm", ppb: "ppb" } as const;
+/** Agent charts shown before "Show all": an extension changes every agent, and eleven charts per step bury the next step. */
+const FIRST_AGENT_CHARTS = 4;
 
 /**
  * Base pathway against a composed state: net forcing, then one small chart per agent the step
@@ -32,6 +35,8 @@ export function ComposeComparisonCharts({
     { startYear: base.startYear, values: before.total },
     { startYear: composed.startYear, values: after.total },
   ]);
+  const [showAll, setShowAll] = useState(false);
+  const shown = showAll ? changed : changed.slice(0, FIRST_AGENT_CHARTS);
   const concentrations = [...new Set([...before.concentrationAgents, ...after.concentrationAgents])];
   return (
     <div className="flex flex-col gap-4">
@@ -54,7 +59,7 @@ export function ComposeComparisonCharts({
       )}
       {changed.length > 0 && (
         <div className="grid gap-4 lg:grid-cols-2">
-          {changed.map((agent) => {
+          {shown.map((agent) => {
             const a = agentSeries(base.agents, agent);
             const b = agentSeries(composed.agents, agent);
             const unit = UNIT_LABEL[(b ?? a)!.quantity];
@@ -81,6 +86,18 @@ export function ComposeComparisonCharts({
               />
             );
           })}
+        </div>
+      )}
+      {changed.length > FIRST_AGENT_CHARTS && (
+        <div>
+          <button
+            type="button"
+            className="text-sm font-medium text-accent underline"
+            aria-expanded={showAll}
+            onClick={() => setShowAll((v) => !v)}
+          >
+            {showAll ? `Show the first ${FIRST_AGENT_CHARTS} changed agents only` : `Show all ${changed.length} changed agents`}
+          </button>
         </div>
       )}
     </div>

@@ -90,23 +90,64 @@ export function AalBandChart({
   return (
     <ChartFrame
       title={title}
+      units={`${unit} (average annual loss)`}
+      legend={[
+        { label: "median (50th percentile)", color },
+        { label: "17th–83rd percentile (bar)", color, kind: "swatch" },
+        { label: "5th–95th percentile (whisker)", color },
+        ...(today !== null ? [{ label: "today's AAL (portfolio baseline)", color: "var(--pl-ink)", dash: "3 2" }] : []),
+      ]}
       description={`Projected AAL across members at each horizon, in ${currency}.${today !== null ? " The square is today's AAL from the portfolio baseline." : ""}${fromZero ? "" : " The loss axis spans the projections and today's AAL: it does not start at zero."}`}
       table={table}
     >
       <div ref={ref} className="flex w-full flex-col gap-2">
         <AalChartLegend color={color} withToday={today !== null} />
-        <svg width={width} height={height} role="img" aria-label={`${title}: projected average annual loss by horizon (${currency})`} className="block overflow-visible">
+        <svg
+          width={width}
+          height={height}
+          role="img"
+          aria-label={`${title}: projected average annual loss by horizon (${currency})`}
+          className="block overflow-visible"
+        >
           <g transform={`translate(${m.left},${m.top})`}>
-            <AxisLeft scale={y} width={innerWidth} label={fromZero ? `Average annual loss (${currency})` : `AAL (${currency}), axis not from 0`} format={(v) => compact.format(v)} />
+            <AxisLeft
+              scale={y}
+              width={innerWidth}
+              label={fromZero ? `Average annual loss (${currency})` : `AAL (${currency}), axis not from 0`}
+              format={(v) => compact.format(v)}
+            />
             <line x2={innerWidth} y1={innerHeight} y2={innerHeight} stroke="var(--pl-line-strong)" />
             {!fromZero && (
               // The usual broken-axis mark: two short slashes where the axis would go on to zero.
-              <path data-testid="axis-break" d={`M-5,${innerHeight - 2} l10,-5 M-5,${innerHeight + 3} l10,-5`} stroke="var(--pl-muted)" strokeWidth={1.2} fill="none" />
+              <path
+                data-testid="axis-break"
+                d={`M-5,${innerHeight - 2} l10,-5 M-5,${innerHeight + 3} l10,-5`}
+                stroke="var(--pl-muted)"
+                strokeWidth={1.2}
+                fill="none"
+              />
             )}
             {today !== null && (
               <g data-testid="baseline-aal">
-                <line x1={centre(TODAY)} x2={innerWidth} y1={y(today)} y2={y(today)} stroke="var(--pl-ink)" strokeOpacity={0.35} strokeDasharray="4 3" />
-                <rect data-point="today" x={centre(TODAY) - 5} y={y(today) - 5} width={10} height={10} fill="var(--pl-surface)" stroke="var(--pl-ink)" strokeWidth={1.5} />
+                <line
+                  x1={centre(TODAY)}
+                  x2={innerWidth}
+                  y1={y(today)}
+                  y2={y(today)}
+                  stroke="var(--pl-ink)"
+                  strokeOpacity={0.35}
+                  strokeDasharray="4 3"
+                />
+                <rect
+                  data-point="today"
+                  x={centre(TODAY) - 5}
+                  y={y(today) - 5}
+                  width={10}
+                  height={10}
+                  fill="var(--pl-surface)"
+                  stroke="var(--pl-ink)"
+                  strokeWidth={1.5}
+                />
                 <text x={centre(TODAY) + 10} y={y(today)} dy="0.32em" className="fill-text text-[11px] num">
                   {compact.format(today)}
                 </text>

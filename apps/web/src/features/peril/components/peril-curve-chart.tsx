@@ -31,12 +31,23 @@ export function curveYDomain(curve: MultiplierCurveData): [number, number] {
  * already in the firm's risk view (where every band meets 1). A table profile has no scaling
  * uncertainty: one line per table, labelled with the return period of the events it describes.
  */
-export function PerilCurveChart({ curve, title = "Multiplier against warming", height = 300 }: { curve: MultiplierCurveData; title?: string; height?: number }) {
+export function PerilCurveChart({
+  curve,
+  title = "Multiplier against warming",
+  height = 300,
+}: {
+  curve: MultiplierCurveData;
+  title?: string;
+  height?: number;
+}) {
   const [ref, width] = useChartWidth<HTMLDivElement>();
   const m = DEFAULT_MARGINS;
   const { innerWidth, innerHeight } = innerSize(width, height, m);
   const x = useMemo(
-    () => scaleLinear().domain([curve.warming[0] ?? 0, curve.warming.at(-1) ?? 1]).range([0, innerWidth]),
+    () =>
+      scaleLinear()
+        .domain([curve.warming[0] ?? 0, curve.warming.at(-1) ?? 1])
+        .range([0, innerWidth]),
     [curve.warming, innerWidth],
   );
   const y = useMemo(() => scaleLinear().domain(curveYDomain(curve)).range([innerHeight, 0]).nice(), [curve, innerHeight]);
@@ -64,13 +75,27 @@ export function PerilCurveChart({ curve, title = "Multiplier against warming", h
   const tableRows = curve.warming
     .map((w, i) => ({ w, i }))
     .filter(({ w }) => Math.abs(w * 2 - Math.round(w * 2)) < 1e-9)
-    .map(({ w, i }) => [w.toFixed(1), ...(byTable ? tables.map((t) => t.multiplier[i]!.toFixed(3)) : keys.map((k) => curve.bands[k]![i]!.toFixed(3)))]);
+    .map(({ w, i }) => [
+      w.toFixed(1),
+      ...(byTable ? tables.map((t) => t.multiplier[i]!.toFixed(3)) : keys.map((k) => curve.bands[k]![i]!.toFixed(3))),
+    ]);
   const columns = byTable ? tables.map((t) => `1-in-${t.returnPeriod}-year events`) : keys.map((k) => `${k.slice(1)} %`);
   const baselineVisible = curve.baselineWarming >= x.domain()[0]! && curve.baselineWarming <= x.domain()[1]!;
 
   return (
     <ChartFrame
       title={title}
+      units="multiplier (× the firm's baseline view) against warming above 1850–1900 (K)"
+      legend={[
+        ...(byTable
+          ? tables.map((t, k) => ({ label: `1-in-${t.returnPeriod}-year events`, color: seriesColor(k) }))
+          : [
+              { label: "5th–95th percentile (light) and 17th–83rd percentile (strong) bands", color, kind: "swatch" as const },
+              { label: "median (50th percentile)", color },
+            ]),
+        { label: "multiplier 1 (the baseline view)", color: "var(--pl-ink)", dash: "4 3" },
+        ...(baselineVisible ? [{ label: "warming already in the risk view", color: "var(--pl-accent)", dash: "2 3" }] : []),
+      ]}
       description={
         byTable
           ? "One line per table, for the events of the return period it states; a table carries no scaling uncertainty. Between return periods the lens reads along a straight line in log return period."
@@ -79,11 +104,31 @@ export function PerilCurveChart({ curve, title = "Multiplier against warming", h
       table={<DataTable caption={title} columns={["Warming (K)", ...columns]} rows={tableRows} />}
     >
       <div ref={ref} className="w-full">
-        <svg width={width} height={height} role="img" aria-label={`${title}: multiplier against warming above 1850–1900`} className="block overflow-visible">
+        <svg
+          width={width}
+          height={height}
+          role="img"
+          aria-label={`${title}: multiplier against warming above 1850–1900`}
+          className="block overflow-visible"
+        >
           <g transform={`translate(${m.left},${m.top})`}>
             <AxisLeft scale={y} width={innerWidth} label="Multiplier (× baseline view)" format={(v) => v.toFixed(2)} />
-            <AxisBottom scale={x} height={innerHeight} width={innerWidth} label="Warming above 1850–1900 (K)" format={(v) => v.toFixed(1)} />
-            <line data-testid="unit-line" x2={innerWidth} y1={y(1)} y2={y(1)} stroke="var(--pl-ink)" strokeOpacity={0.45} strokeDasharray="4 3" />
+            <AxisBottom
+              scale={x}
+              height={innerHeight}
+              width={innerWidth}
+              label="Warming above 1850–1900 (K)"
+              format={(v) => v.toFixed(1)}
+            />
+            <line
+              data-testid="unit-line"
+              x2={innerWidth}
+              y1={y(1)}
+              y2={y(1)}
+              stroke="var(--pl-ink)"
+              strokeOpacity={0.45}
+              strokeDasharray="4 3"
+            />
             {byTable ? (
               tables.map((t, k) => (
                 <g key={t.returnPeriod} data-return-period={t.returnPeriod}>
@@ -102,7 +147,14 @@ export function PerilCurveChart({ curve, title = "Multiplier against warming", h
             )}
             {baselineVisible && (
               <g data-testid="baseline-marker">
-                <line x1={x(curve.baselineWarming)} x2={x(curve.baselineWarming)} y2={innerHeight} stroke="var(--pl-accent)" strokeWidth={1.5} strokeDasharray="2 3" />
+                <line
+                  x1={x(curve.baselineWarming)}
+                  x2={x(curve.baselineWarming)}
+                  y2={innerHeight}
+                  stroke="var(--pl-accent)"
+                  strokeWidth={1.5}
+                  strokeDasharray="2 3"
+                />
                 <text x={x(curve.baselineWarming) + 4} y={12} className="fill-accent text-[10px]">
                   in risk view: {curve.baselineWarming.toFixed(2)} K
                 </text>

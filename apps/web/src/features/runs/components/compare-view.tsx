@@ -1,11 +1,13 @@
 import type { RunResult } from "@plumeline/contracts";
-import { FanChart, fanYDomain } from "@/components/charts/fan-chart";
+import { FanChart, fanYDomain, type FanSeries } from "@/components/charts/fan-chart";
 import { PercentileStrips, type PercentileStrip } from "@/components/charts/percentile-strips";
 import { seriesColor } from "@/components/charts/palette";
-import { compareAxis } from "../lib/compare-baseline";
+import { compareAxis, compareYears } from "../lib/compare-baseline";
 import { hasFanPercentiles, toFanSeries } from "../lib/result-adapters";
+import { CompareHorizonTables } from "./compare-horizon-tables";
 
 export interface CompareSide {
+  /** The run's name: every row, chart and legend is labelled by it. */
   label: string;
   result: RunResult;
   pathwayId: string;
@@ -14,50 +16,80 @@ export interface CompareSide {
 }
 
 /**
- * Two results side by side on shared axes: the same warming scale on both fan charts, and
- * the horizons they have in common as percentile strips on one axis.
+ * Two to four results on shared axes, the first as the reference: the horizon tables side by
+ * side with each run's differences from the reference, one fan chart per run on the same
+ * warming scale, all of them on one chart, and the shared horizons as percentile strips.
  */
-export function CompareView({ a, b, fromYear = 1850 }: { a: CompareSide; b: CompareSide; fromYear?: number }) {
-  const pa = a.result.pathways.find((p) => p.id === a.pathwayId) ?? a.result.pathways[0];
-  const pb = b.result.pathways.find((p) => p.id === b.pathwayId) ?? b.result.pathways[0];
-  if (!pa || !pb) return null;
-  if (!hasFanPercentiles(pa.temperature) || !hasFanPercentiles(pb.temperature))
-    return <p className="text-sm text-muted">Comparison needs the 5/17/50/83/95 percentiles in both results.</p>;
-  const axis = compareAxis(a.baseline, b.baseline);
-  const sa = { ...toFanSeries(pa), id: "a", name: `${a.label}: ${pa.name}`, color: seriesColor(0) };
-  const sb = { ...toFanSeries(pb), id: "b", name: `${b.label}: ${pb.name}`, color: seriesColor(1) };
-  // On one chart the right side is drawn as outlines with a dashed median, so the two
-  // colours never blend and neither median hides the other.
-  const sbOutlined = { ...sb, treatment: "outline" as const };
-  const shared = fanYDomain([sa, sb], fromYear);
-  const toYear = Math.min(sa.years.at(-1)!, sb.years.at(-1)!);
-  const common = pa.horizons.map((h) => h.year).filter((y) => pb.horizons.some((h) => h.year === y));
+export function CompareView({ sides }: { sides: CompareSide[] }) {
+  const chosen = sides.map((s) => ({ ...s, pathway: s.result.pathways.find((p) => p.id === s.pathwayId) ?? s.result.pathways[0] }));
+  if (chosen.some((s) => !s.pathway)) return <p className="text-sm text-muted">A chosen result holds no pathways.</p>;
+  const ready = chosen as Array<(typeof chosen)[number] & { pathway: NonNullable<(typeof chosen)[number]["pathway"]> }>;
+  if (!ready.every((s) => hasFanPercentiles(s.pathway.temperature)))
+    return <p className="text-sm text-muted">Comparison needs the 5/17/50/83/95 percentiles in every result.</p>;
+  const axis = compareAxis(...ready.map((s) => s.baseline));
+  const [fromYear, toYear] = compareYears(ready.map((s) => ({ years: s.pathway.years, baseline: s.baseline })));
+  const series: FanSeries[] = ready.map((s, i) => ({
+    ...toFanSeries(s.pathway),
+    id: `run-${i}`,
+    name: `${s.label}: ${s.pathway.name}`,
+    color: seriesColor(i),
+  }));
+  // On one chart the reference keeps filled bands; with one other run it is outlined (edges,
+  // dashed median), with more only their medians are drawn, so the chart never becomes a tangle.
+  const together = series.map((s, i) =>
+    i === 0 ? s : { ...s, treatment: series.length === 2 ? ("outline" as const) : ("median" as const) },
+  );
+  const shared = fanYDomain(series, fromYear, toYear);
+  const common = ready[0]!.pathway.horizons
+    .map((h) => h.year)
+    .filter((y) => ready.every((s) => s.pathway.horizons.some((h) => h.year === y)));
   const strips: PercentileStrip[] = common.flatMap((year) =>
-    [
-      { side: "a", label: "left", p: pa, color: seriesColor(0) },
-      { side: "b", label: "right", p: pb, color: seriesColor(1) },
-    ].map(({ side, label, p, color }) => {
-      const t = p.horizons.find((h) => h.year === year)!.temperature;
-      return { id: `${year}-${side}`, label: `${year} · ${label}`, p5: t.p5!, p17: t.p17!, p50: t.p50!, p83: t.p83!, p95: t.p95!, color };
+    ready.map((s, i) => {
+      const t = s.pathway.horizons.find((h) => h.year === year)!.temperature;
+      return {
+        id: `${year}-${i}`,
+        label: `${year} · ${s.label}`,
+        p5: t.p5!,
+        p17: t.p17!,
+        p50: t.p50!,
+        p83: t.p83!,
+        p95: t.p95!,
+        color: seriesColor(i),
+      };
     }),
   );
   return (
     <div className="flex flex-col gap-6">
       {axis.mismatch && (
         <p role="note" className="rounded-md border border-ember-400 bg-ember-50 px-3 py-2 text-sm text-ember-800">
-          The two runs measure warming from different baselines ({a.baseline!.join("–")} and {b.baseline!.join("–")}): equal heights on these charts are not equal
-          warming. Compare runs made with the same baseline for figures to quote.
+          The runs measure warming from different baselines ({[...new Set(ready.map((s) => s.baseline!.join("–")))].join(" and ")}): equal
+          heights on these charts are not equal warming. Compare runs made with the same baseline for figures to quote.
         </p>
       )}
+      <CompareHorizonTables runs={ready.map((s) => ({ label: s.label, pathway: s.pathway }))} />
       <div className="grid gap-6 xl:grid-cols-2">
-        {[sa, sb].map((s) => (
-          <FanChart key={s.id} title={s.name} series={[s]} yLabel={axis.label} unit="K" fromYear={fromYear} toYear={toYear} yDomain={shared} height={320} />
+        {series.map((s) => (
+          <FanChart
+            key={s.id}
+            title={s.name}
+            series={[s]}
+            yLabel={axis.label}
+            unit="K"
+            fromYear={fromYear}
+            toYear={toYear}
+            yDomain={shared}
+            height={320}
+          />
         ))}
       </div>
       <FanChart
-        title="Both on one chart"
-        description="Left: filled bands, solid median. Right: outlined bands, dashed median. Inner band 17–83 %, outer 5–95 % (dotted edge when outlined). Hover or use arrow keys to read a year."
-        series={[sa, sbOutlined]}
+        title="All on one chart"
+        description={
+          series.length === 2
+            ? `${ready[0]!.label} (reference): filled bands, solid median. ${ready[1]!.label}: outlined bands, dashed median. Inner band 17–83 %, outer 5–95 % (dotted edge when outlined). Hover or use arrow keys to read a year.`
+            : `${ready[0]!.label} (reference): filled bands, solid median; the other runs: their medians. Inner band 17–83 %, outer 5–95 %. Hover or use arrow keys to read a year.`
+        }
+        series={together}
         yLabel={axis.label}
         unit="K"
         fromYear={fromYear}
@@ -68,9 +100,10 @@ export function CompareView({ a, b, fromYear = 1850 }: { a: CompareSide; b: Comp
       {strips.length > 0 && (
         <PercentileStrips
           title="Warming at the shared horizons"
-          description={`Left: ${sa.name}. Right: ${sb.name}.`}
+          description={ready.map((s) => `${s.label}: ${s.pathway.name}`).join(" · ")}
           strips={strips}
           axisLabel={axis.label}
+          series={ready.map((s, i) => ({ label: `${s.label}: ${s.pathway.name}`, color: seriesColor(i) }))}
         />
       )}
     </div>
