@@ -141,7 +141,8 @@ function ReviewsWaiting({ userId }: { userId: string }) {
 
 /** My rejected versions nothing has been drafted from yet (a child means the author already acted on it). */
 function ReturnedToMe({ userId }: { userId: string }) {
-  const versions = useModelVersions();
+  // The 200 most recently changed versions: a rejection waiting for its author is recent.
+  const versions = useModelVersionChoices();
   if (!versions.data) return null;
   const drafted = new Set(versions.data.map((v) => v.parentId));
   const returned = versions.data.filter((v) => v.authorId === userId && v.status === "rejected" && !drafted.has(v.id));
