@@ -11,6 +11,8 @@ export const names = {
   runOnPrevious: "Core v1: three pathways",
   runOnPreviousOtherSeed: "Core v1: another seed",
   actuaryRun: "Q3 ORSA: flood and heat lens",
+  hotterDraft: "Core assumptions, ECS median 4 K trial",
+  runToCancel: "Large run, cancelled",
   invitedUser: { email: "newcomer@harbourline.example", name: "Noor Castellan" },
 } as const;
 

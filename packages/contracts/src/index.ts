@@ -22,4 +22,5 @@ export * from "./api/run-statements.js";
 export * from "./format/number-format.js";
 export * from "./format/input-labels.js";
 export * from "./api/paging.js";
+export * from "./format/time-format.js";
 export * from "./compose/index.js";

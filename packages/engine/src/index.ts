@@ -7,6 +7,7 @@ export { memberTable, type MemberTable } from "./ensemble/member-table.js";
 export { memberTableCsv } from "./ensemble/member-table-csv.js";
 export { preparePlan } from "./ensemble/prepare-plan.js";
 export { applyDefaults } from "./spec/apply-defaults.js";
+export { DEFAULT_INTERNAL_VARIABILITY } from "./spec/constraint-defaults.js";
 export { validateSpec } from "./spec/validate-spec.js";
 export { SpecError, RunCancelledError } from "./spec/spec-error.js";
 export {

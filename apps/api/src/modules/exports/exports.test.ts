@@ -123,6 +123,17 @@ describe("GET /api/runs/:id/workbook.xlsx", () => {
     for (const c of RESULT_CAUTIONS) expect(cautions).toContain(c);
   });
 
+  it("writes its times in UTC and says so on the manifest", async () => {
+    const manifest = workbook.getWorksheet("Manifest")!;
+    const valueOf = (label: string) => (manifest.getSheetValues().find((row) => Array.isArray(row) && row[1] === label) as unknown[] | undefined)?.[2];
+    expect(valueOf("Times")).toBe("All times in this workbook are UTC.");
+    // The run's own ISO 8601 time (a trailing Z is UTC) read as date, space, time to the second, "UTC".
+    const created = (await analyst.get(`/api/runs/${runId}`)).body.createdAt as string;
+    expect(created).toMatch(/Z$/);
+    expect(valueOf("Run created at")).toBe(`${created.slice(0, 10)} ${created.slice(11, 19)} UTC`);
+    for (const label of ["Run finished at", "Exported at"]) expect(valueOf(label), label).toMatch(/^\d{4}-\d{2}-\d{2} \d{2}:\d{2}:\d{2} UTC$/);
+  });
+
   it("labels bands by their percentiles: no calibrated likelihood word on any sheet", () => {
     // IPCC AR6 WG1 reserves "likely", "very likely", … (calibrated uncertainty language, after
     // Mastrandrea et al. 2010) for its authors' assessed ranges; an ensemble's 17th–83rd or

@@ -5,6 +5,7 @@ import {
   PORTFOLIO_TOTAL_NOTES,
   RANGE_SHAPE_LABELS,
   RESULT_CAUTIONS,
+  formatUtcDateTime,
   type Distribution,
   type ModelSpec,
   type ResultTable,
@@ -105,6 +106,9 @@ function describeDistribution(d: Distribution): string {
   }
 }
 
+/** A time on a sheet: to the second, in UTC, and saying so (a bare ISO "Z" is easy to misread as local). */
+const utc = (iso: string | null): string | null => (iso === null ? null : formatUtcDateTime(iso, { seconds: true }));
+
 function addManifest(workbook: ExcelJS.Workbook, m: WorkbookManifest, result: RunResult): void {
   const sheet = workbook.addWorksheet("Manifest");
   sheet.getColumn(1).width = 28;
@@ -120,13 +124,14 @@ function addManifest(workbook: ExcelJS.Workbook, m: WorkbookManifest, result: Ru
   const pairs: Array<[string, TableCell]> = [
     ["Run", `${m.runName} (${m.runId})`],
     ["Run made by", m.createdBy],
-    ["Run created at", m.createdAt],
-    ["Run finished at", m.finishedAt],
+    ["Times", "All times in this workbook are UTC."],
+    ["Run created at", utc(m.createdAt)],
+    ["Run finished at", utc(m.finishedAt)],
     ["Model version", `${mv.name} v${mv.versionNumber} (${mv.id})`],
     ["Model version status (now)", mv.status],
     ["Change class", mv.changeClass],
     ["Decided by", mv.decidedBy],
-    ["Decided at", mv.decidedAt],
+    ["Decided at", utc(mv.decidedAt)],
     ["Seed", m.seed],
     ["Members", m.members],
     ["Effective members", result.effectiveMembers],
@@ -139,7 +144,7 @@ function addManifest(workbook: ExcelJS.Workbook, m: WorkbookManifest, result: Ru
     ["Input hash", m.inputHash],
     ["Result hash", m.resultHash],
     ["Exported by", m.exportedBy],
-    ["Exported at", m.exportedAt],
+    ["Exported at", utc(m.exportedAt)],
   ];
   for (const [k, v] of pairs) {
     const row = sheet.addRow([k, safe(v)]);
@@ -169,8 +174,8 @@ function addStatements(sheet: ExcelJS.Worksheet, statements: WorkbookManifest["s
     sheet.addRow(["none recorded"]);
     return;
   }
-  sheet.addRow(["kind", "statement", "recorded by", "recorded at"]).font = BOLD;
-  for (const st of statements) sheet.addRow([st.kind, st.text, st.by, st.at].map(safe));
+  sheet.addRow(["kind", "statement", "recorded by", "recorded at (UTC)"]).font = BOLD;
+  for (const st of statements) sheet.addRow([st.kind, st.text, st.by, utc(st.at)].map(safe));
 }
 
 function addInputs(workbook: ExcelJS.Workbook, model: ModelSpec): void {

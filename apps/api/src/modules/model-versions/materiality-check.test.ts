@@ -37,5 +37,8 @@ describe("materialityFirings", () => {
   it("says each firing in one plain sentence", () => {
     const [median] = materialityFirings([pathway({ year: 2050, medianShift: 0.14, widthChange: 0, exceedance: {} }, { year: 2100, medianShift: 0, widthChange: 0, exceedance: {} })], policy);
     expect(describeFiring(median!)).toBe("median shift +0.14 K > 0.1 K on Ramp 2050");
+    // Just past the limit, the sentence shows the decimal that passes it.
+    const [near] = materialityFirings([pathway({ year: 2050, medianShift: 0.1042, widthChange: 0, exceedance: {} }, { year: 2100, medianShift: 0, widthChange: 0, exceedance: {} })], policy);
+    expect(describeFiring(near!)).toBe("median shift +0.104 K > 0.1 K on Ramp 2050");
   });
 });

@@ -32,17 +32,25 @@ export function materialityFirings(pathways: ImpactPathway[], policy: Materialit
   return fired;
 }
 
-const signed = (v: number, digits: number) => `${v >= 0 ? "+" : "−"}${Math.abs(v).toFixed(digits)}`;
+/**
+ * A signed value with enough decimals to be seen passing its limit: a shift of 0.104 K against
+ * 0.1 K reads "+0.104", never "+0.10 K > 0.1 K" (up to four decimals).
+ */
+function signed(v: number, digits: number, limit: number): string {
+  let d = digits;
+  while (d < 4 && Number(Math.abs(v).toFixed(d)) <= limit) d++;
+  return `${v >= 0 ? "+" : "−"}${Math.abs(v).toFixed(d)}`;
+}
 
 /** One plain sentence per firing, e.g. "median shift +0.14 K > 0.1 K on Harbourline Middle 2050". */
 export function describeFiring(f: MaterialityFiring): string {
   const where = `on ${f.pathwayName} ${f.year}`;
   switch (f.metric) {
     case "median-shift":
-      return `median shift ${signed(f.value, 2)} K > ${f.limit} K ${where}`;
+      return `median shift ${signed(f.value, 2, f.limit)} K > ${f.limit} K ${where}`;
     case "width-change":
-      return `5–95 % width change ${signed(f.value, 1)} % > ${f.limit} % ${where}`;
+      return `5–95 % width change ${signed(f.value, 1, f.limit)} % > ${f.limit} % ${where}`;
     case "exceedance":
-      return `P(>${f.warmingThreshold} K) change ${signed(f.value, 1)} pts > ${f.limit} pts ${where}`;
+      return `P(>${f.warmingThreshold} K) change ${signed(f.value, 1, f.limit)} pts > ${f.limit} pts ${where}`;
   }
 }

@@ -30,6 +30,7 @@ import type { ModelVersionModel } from "./model-version.model.js";
 import { releasePathwayLocks } from "../pathways/release-pathway-locks.js";
 import { assertEngineAcceptsModel } from "./engine-model-check.js";
 import { checkMinorChange, type MaterialityCheck } from "./materiality-gate.js";
+import { placeInLine } from "./model-version-line.js";
 
 type Ctx = Pick<AppContext, "models" | "sequelize" | "mailer" | "config">;
 
@@ -158,13 +159,12 @@ export async function createModelVersion(ctx: Ctx, user: RequestUser, body: Crea
   const row = await ctx.sequelize.transaction(async (transaction) => {
     const parent = await checkReferences(ctx, input.parentId, input.pathwayIds, input.perilProfileIds, transaction);
     const id = randomUUID();
-    const familyId = parent?.familyId ?? id;
-    const highest = await ctx.models.ModelVersion.max<number | null, ModelVersionModel>("versionNumber", { where: { familyId }, transaction });
+    const { familyId, versionNumber } = await placeInLine(ctx, { id, name: input.name, parent }, transaction);
     const created = await ctx.models.ModelVersion.create(
       {
         id,
         familyId,
-        versionNumber: (highest ?? 0) + 1,
+        versionNumber,
         name: input.name,
         status: "draft",
         parentId: input.parentId ?? null,
@@ -184,7 +184,7 @@ export async function createModelVersion(ctx: Ctx, user: RequestUser, body: Crea
         action: "model-version.created",
         entityType: "model-version",
         entityId: id,
-        summary: `Draft model version "${created.name}" v${created.versionNumber} created${parent ? ` from v${parent.versionNumber}` : ""}.`,
+        summary: `Draft model version "${created.name}" v${created.versionNumber} created${parent ? ` from "${parent.name}" v${parent.versionNumber}` : ""}.`,
         data: { parentId: created.parentId, familyId },
       },
       transaction,
@@ -210,8 +210,20 @@ export async function updateModelVersion(ctx: Ctx, user: RequestUser, id: string
     if (body.model !== undefined || body.defaults !== undefined)
       // The route validated the body with the contracts schema, so these are parsed (defaults applied).
       await assertEngineAcceptsModel((body.model ?? row.model) as ModelSpec, (body.defaults ?? row.defaults) as ModelVersionDefaults);
-    await checkReferences(ctx, body.parentId, body.pathwayIds, body.perilProfileIds, transaction);
-    const changes = Object.fromEntries(Object.entries(body).filter(([, v]) => v !== undefined));
+    const newParent = await checkReferences(ctx, body.parentId, body.pathwayIds, body.perilProfileIds, transaction);
+    const changes: Record<string, unknown> = Object.fromEntries(Object.entries(body).filter(([, v]) => v !== undefined));
+    const before = `"${row.name}" v${row.versionNumber}`; // as it was known until this edit
+    // A new name or parent can move the draft to another line of descent, and so renumber it.
+    let renumbered = "";
+    if (body.name !== undefined || body.parentId !== undefined) {
+      const parentId = body.parentId !== undefined ? body.parentId : row.parentId;
+      const parent = body.parentId !== undefined ? newParent : parentId ? await ctx.models.ModelVersion.findByPk(parentId, { transaction }) : null;
+      const place = await placeInLine(ctx, { id: row.id, name: body.name ?? row.name, parent }, transaction);
+      if (place.familyId !== row.familyId) {
+        Object.assign(changes, place);
+        renumbered = `; renumbered v${place.versionNumber} in its line of descent`;
+      }
+    }
     await row.update(changes, { transaction });
     await recordAudit(
       ctx,
@@ -220,7 +232,7 @@ export async function updateModelVersion(ctx: Ctx, user: RequestUser, id: string
         action: "model-version.updated",
         entityType: "model-version",
         entityId: id,
-        summary: `Draft "${row.name}" v${row.versionNumber} edited (${Object.keys(changes).join(", ") || "no fields"}).`,
+        summary: `Draft ${before} edited (${Object.keys(body).filter((k) => body[k as keyof typeof body] !== undefined).join(", ") || "no fields"})${renumbered}.`,
         data: { fields: Object.keys(changes) },
       },
       transaction,

@@ -74,8 +74,8 @@ export function drawFanChart(
     s.bands
       ? [
           { label: `${s.name}: median`, color: s.color, kind: "line" as const },
-          { label: "17–83 % (likely)", color: s.color, kind: "band" as const },
-          { label: "5–95 % (very likely)", color: s.color, kind: "band" as const },
+          { label: "17th–83rd percentile", color: s.color, kind: "band" as const },
+          { label: "5th–95th percentile", color: s.color, kind: "band" as const },
         ]
       : [{ label: `${s.name}: median`, color: s.color, kind: "line" as const }],
   );

@@ -154,22 +154,31 @@ export class ReportWriter {
     }
     this.ensure(rowHeight * 3);
     header();
+    const cellFont = (c: Column, i: number) => {
+      const font = c.mono ? "mono" : i === options.boldColumn ? "sans-bold" : "sans";
+      return this.doc.font(font).fontSize(c.mono ? size - 1 : size);
+    };
     rows.forEach((row, r) => {
-      if (this.doc.y + rowHeight > this.bottom) {
+      // A long cell (a pathway's source) wraps inside its column and the row grows to hold it;
+      // a fixed row height let wrapped text run over the rows below.
+      let height = rowHeight;
+      columns.forEach((c, i) => {
+        height = Math.max(height, cellFont(c, i).heightOfString(row[i] ?? "", { width: widths[i]! - 6 }) + 6.5);
+      });
+      if (this.doc.y + height > this.bottom) {
         this.doc.addPage();
         header();
       }
       const y = this.doc.y;
-      if (r % 2 === 1) this.doc.rect(this.left, y, this.width, rowHeight).fillColor(SURFACE_2).fillOpacity(0.55).fill().fillOpacity(1);
+      if (r % 2 === 1) this.doc.rect(this.left, y, this.width, height).fillColor(SURFACE_2).fillOpacity(0.55).fill().fillOpacity(1);
       let x = this.left;
       columns.forEach((c, i) => {
-        const font = c.mono ? "mono" : i === options.boldColumn ? "sans-bold" : "sans";
-        this.doc.font(font).fontSize(c.mono ? size - 1 : size).fillColor(TEXT);
-        this.doc.text(row[i] ?? "", x + 3, y + 3.5, { width: widths[i]! - 6, align: c.align ?? "left", lineBreak: false, ellipsis: true });
+        cellFont(c, i).fillColor(TEXT);
+        this.doc.text(row[i] ?? "", x + 3, y + 3.5, { width: widths[i]! - 6, align: c.align ?? "left" });
         x += widths[i]!;
       });
-      this.doc.moveTo(this.left, y + rowHeight).lineTo(this.left + this.width, y + rowHeight).lineWidth(0.4).strokeColor(LINE).stroke();
-      this.doc.y = y + rowHeight;
+      this.doc.moveTo(this.left, y + height).lineTo(this.left + this.width, y + height).lineWidth(0.4).strokeColor(LINE).stroke();
+      this.doc.y = y + height;
     });
     this.doc.x = this.left;
     this.doc.moveDown(0.5);

@@ -65,7 +65,16 @@ beforeAll(async () => {
     modelVersion: { id: "mv", name: "Wider aerosol", versionNumber: 2, status: "in-review", changeClass: "minor", decidedBy: null, decidedAt: null },
     pathways: [
       { id: "p1", name: "Test high", source: "hand-made test ramp", vintage: "test-1", startYear: 1850, endYear: 2100, checksum: "a".repeat(64) },
-      { id: "p2", name: "Test low", source: "hand-made test ramp", vintage: "test-1", startYear: 1850, endYear: 2100, checksum: "b".repeat(64) },
+      {
+        id: "p2",
+        name: "Test low",
+        // Long enough to wrap in its column: the row must grow to hold it, and every word must survive.
+        source: "hand-made test ramp with a long description of where each agent's figures come from and how the years after 2020 were extended",
+        vintage: "test-1",
+        startYear: 1850,
+        endYear: 2100,
+        checksum: "b".repeat(64),
+      },
     ],
     seed: "report",
     members: 300,
@@ -139,5 +148,18 @@ describe("run report PDF", () => {
     expect(bytes.includes(Buffer.from("/Subtype /Image"))).toBe(false);
     const again = await buildRunReport(manifest, result, { perils: profiles });
     expect(again.equals(bytes)).toBe(true);
+  });
+
+  it("writes a long pathway source in full, wrapped within its row, and names bands by percentiles", () => {
+    const words = pages[0]!.replace(/\s+/g, " ");
+    expect(words).toContain("how the years after 2020 were extended");
+    // The next row of the table (or the note under it) starts below the wrapped source, not on top of it.
+    const lines = pages[0]!.split("\n");
+    const sourceEnd = lines.findIndex((l) => l.includes("were extended"));
+    const note = lines.findIndex((l) => l.includes("SHA-256"));
+    expect(note).toBeGreaterThan(sourceEnd);
+    // A raw ensemble's spread is not an assessed range, so no band is called "likely" (IPCC AR6 WG1 calibrated language, Mastrandrea et al. 2010).
+    expect(text).not.toMatch(/likely/i);
+    expect(text).toContain("17th–83rd");
   });
 });

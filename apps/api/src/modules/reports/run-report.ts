@@ -8,6 +8,7 @@ import {
   formatKelvin,
   formatMoney,
   formatProbability,
+  formatUtcDateTime,
   inputLabel,
   moneyScale,
   moneyUnit,
@@ -31,7 +32,8 @@ const percentileKeys = (set: Record<string, unknown>) =>
     .sort((a, b) => Number(a.slice(1)) - Number(b.slice(1)));
 const byNumber = (a: string, b: string) => Number(a) - Number(b);
 const year = (v: number | null | undefined) => (v === null || v === undefined || !Number.isFinite(v) ? "–" : String(Math.round(v)));
-const date = (iso: string | null) => (iso ? iso.replace("T", " ").slice(0, 16) + " UTC" : "–");
+// The one way Plumeline writes a time (UTC, to the minute, saying so), as on screen and in the workbook.
+const date = (iso: string | null) => (iso ? formatUtcDateTime(iso) : "–");
 
 /**
  * The run report as a PDF a board or supervisor reads: what the run is for, which model
@@ -104,7 +106,7 @@ function pathwaySection(w: ReportWriter, m: WorkbookManifest, result: RunResult,
   w.h1(`Warming — ${p.name}`);
   const baseline = `${m.baseline[0]}–${m.baseline[1]}`;
   w.paragraph(
-    `Global mean surface temperature anomaly against ${baseline} (K). Filled: ${p.name}, median with 17–83 % (likely) and 5–95 % (very likely) bands` +
+    `Global mean surface temperature anomaly against ${baseline} (K). Filled: ${p.name}, median with 17th–83rd and 5th–95th percentile bands` +
       `${result.pathways.length > 1 ? "; lines: the other pathways' medians" : ""}. Dashed lines: the warming thresholds.`,
     { muted: true, size: 8.5 },
   );

@@ -1,4 +1,4 @@
-import { useParams } from "react-router-dom";
+import { Link, useParams } from "react-router-dom";
 import { paths } from "@/config/paths";
 import { useMe } from "@/features/auth/api/get-me";
 import { useModelVersion } from "@/features/model-versions/api/get-model-version";
@@ -30,6 +30,8 @@ export default function ModelVersionPage() {
   const v = version.data;
   const can = (p: string) => me.data?.permissions.includes(p) ?? false;
   const own = v.authorId === me.data?.user.id;
+  // The diff is taken against the parent by default, and names it.
+  const parent = v.parentId && diff.data?.against?.id === v.parentId ? diff.data.against : null;
   const c = v.model.constraint;
 
   return (
@@ -41,7 +43,21 @@ export default function ModelVersionPage() {
           </span>
         }
         title={`${v.name} v${v.versionNumber}`}
-        description={`Drafted by ${v.authorName ?? "–"} · ${formatDateTime(v.createdAt)}${v.changeClass ? ` · ${v.changeClass} change` : ""}`}
+        description={
+          <>
+            Drafted by {v.authorName ?? "–"} · {formatDateTime(v.createdAt)}
+            {/* The number counts within the version's own line, so a renamed copy's parent is named here. */}
+            {parent && (
+              <>
+                {" · from "}
+                <Link to={paths.modelVersion.build(parent.id)} className="text-accent underline">
+                  {parent.name} v{parent.versionNumber}
+                </Link>
+              </>
+            )}
+            {v.changeClass ? ` · ${v.changeClass} change` : ""}
+          </>
+        }
         actions={
           <>
             {can("model-versions:write") && v.status === "draft" && own && (

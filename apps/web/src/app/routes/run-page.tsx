@@ -3,7 +3,10 @@ import { useQueryClient } from "@tanstack/react-query";
 import { paths } from "@/config/paths";
 import { useMe } from "@/features/auth/api/get-me";
 import { exportsRootKey } from "@/features/exports/api/get-exports";
+import { useModelVersion } from "@/features/model-versions/api/get-model-version";
 import { useRun } from "@/features/runs/api/get-run";
+import { RunLoadError } from "@/features/runs/components/run-load-error";
+import { versionStateWhenRunMade } from "@/features/runs/lib/version-status-at-run";
 import { useRunResult } from "@/features/runs/api/get-run-result";
 import { CancelRunAction } from "@/features/runs/components/cancel-run-action";
 import { ExportPanel } from "@/features/runs/components/export-panel";
@@ -27,10 +30,12 @@ export default function RunPage() {
   const succeeded = run.data?.status === "succeeded";
   const result = useRunResult(runId, succeeded);
   const queryClient = useQueryClient();
+  // Only an exploratory run's banner needs the version (its submission and decision times).
+  const version = useModelVersion(run.data?.exploratory ? run.data.modelVersion.id : undefined);
   const can = (p: string) => me.data?.permissions.includes(p) ?? false;
 
   if (run.isPending) return <LoadingState label="Loading run…" />;
-  if (run.isError) return <ErrorState error={run.error} retry={() => run.refetch()} />;
+  if (run.isError) return <RunLoadError error={run.error} retry={() => void run.refetch()} />;
   const r = run.data;
   const active = r.status === "queued" || r.status === "running";
 
@@ -69,7 +74,7 @@ export default function RunPage() {
       />
       {r.exploratory && (
         <div className="stamp-exploratory mb-6 rounded-md px-4 py-2 text-sm font-medium">
-          EXPLORATORY — model version “{r.modelVersion.name} v{r.modelVersion.versionNumber}” was {r.modelVersion.status === "approved" ? "not yet approved" : r.modelVersion.status} when this run was made. Do not use for filings.
+          EXPLORATORY — model version “{r.modelVersion.name} v{r.modelVersion.versionNumber}” was {versionStateWhenRunMade(version.data, r.createdAt)} when this run was made. Do not use for filings.
         </div>
       )}
       {!succeeded && (

@@ -1,4 +1,4 @@
-import { useReducer, type SubmitEvent } from "react";
+import { useEffect, useReducer, type SubmitEvent } from "react";
 import {
   AGENT_LABELS,
   CLIMATE_INPUTS,
@@ -18,7 +18,7 @@ import { CLIMATE_INPUT_LABELS, inputLabel, SCALE_FACTOR_UNIT } from "@/lib/input
 import { DistributionEditor } from "./distribution-editor";
 import { PinnedPerilProfilesPicker, type PinnableProfile } from "./pinned-peril-profiles";
 import { parseNumbers } from "@/lib/parse-numbers";
-import { initialModelDraftForm, modelDraftReducer, NEW_AGENT_SCALE, type ModelDraft } from "../lib/model-draft-form";
+import { initialModelDraftForm, modelDraftReducer, NEW_AGENT_SCALE, type ModelDraft, type ModelDraftForm } from "../lib/model-draft-form";
 
 export type { ModelDraft } from "../lib/model-draft-form";
 
@@ -41,6 +41,8 @@ export function ModelEditor({
   serverError,
   onSave,
   perilProfiles,
+  startingForm,
+  onFormChange,
 }: {
   initial: ModelDraft;
   submitLabel: string;
@@ -49,9 +51,14 @@ export function ModelEditor({
   onSave: (body: CreateModelVersionBody) => void;
   /** Profiles that may be pinned (the picker shows once the list is known; the pins are always sent). */
   perilProfiles?: readonly PinnableProfile[];
+  /** The form state to start from instead of `initial`'s (a draft restored from this browser). */
+  startingForm?: ModelDraftForm;
+  /** Told every state of the form, so the page can keep it and know whether it is saved. */
+  onFormChange?: (form: ModelDraftForm) => void;
 }) {
   // One reducer holds the whole form (lib/model-draft-form.ts); the fields below read from it.
-  const [form, dispatch] = useReducer(modelDraftReducer, initial, initialModelDraftForm);
+  const [form, dispatch] = useReducer(modelDraftReducer, initial, (i) => startingForm ?? initialModelDraftForm(i));
+  useEffect(() => onFormChange?.(form), [form, onFormChange]);
   const { name, notes, climate, agents, correlations, constraintOn, constraint, expression, defaults, perilProfileIds, errors } = form;
   const addAgent = form.agentToAdd;
   const inputs = [...CLIMATE_INPUTS, ...FORCING_AGENTS];
@@ -72,7 +79,15 @@ export function ModelEditor({
         climate,
         agents: Object.fromEntries(Object.entries(agents).map(([a, d]) => [a, { scale: d }])),
         correlations: correlations.map((c) => ({ between: [c.a, c.b], rank: num(c.rank) })),
-        constraint: constraintOn ? { from: num(constraint.from), to: num(constraint.to), observed: num(constraint.observed), sd: num(constraint.sd) } : null,
+        constraint: constraintOn
+          ? {
+              from: num(constraint.from),
+              to: num(constraint.to),
+              observed: num(constraint.observed),
+              sd: num(constraint.sd),
+              internalVariability: num(constraint.internalVariability),
+            }
+          : null,
         forcingExpression: expression,
       },
       defaults: Object.fromEntries(Object.entries(lists).map(([k, v]) => [k, "values" in v ? v.values : []])),
@@ -81,7 +96,8 @@ export function ModelEditor({
     if (Object.keys(next).length === 0) {
       const parsed = createModelVersionBodySchema.safeParse(body);
       if (!parsed.success) {
-        for (const i of parsed.error.issues) next[formatPath(i.path.filter((p): p is string | number => typeof p !== "symbol"))] ??= i.message;
+        for (const i of parsed.error.issues)
+          next[formatPath(i.path.filter((p): p is string | number => typeof p !== "symbol"))] ??= i.message;
       } else {
         dispatch({ type: "errors", errors: {} });
         onSave(body as CreateModelVersionBody);
@@ -104,7 +120,11 @@ export function ModelEditor({
           </Field>
           <Field label="Concentration-to-forcing expression" hint="Used for pathways given as CO2/CH4/N2O concentrations.">
             {(p) => (
-              <Select {...p} value={expression} onChange={(e) => dispatch({ type: "expression", value: e.target.value as typeof expression })}>
+              <Select
+                {...p}
+                value={expression}
+                onChange={(e) => dispatch({ type: "expression", value: e.target.value as typeof expression })}
+              >
                 {FORCING_EXPRESSIONS.map((x) => (
                   <option key={x} value={x}>
                     {EXPRESSION_LABELS[x] ?? x}
@@ -113,7 +133,12 @@ export function ModelEditor({
               </Select>
             )}
           </Field>
-          <Field label="Notes: sources and justification" error={err("notes")} className="lg:col-span-2" hint="Cite where every assumption comes from; reviewers read this.">
+          <Field
+            label="Notes: sources and justification"
+            error={err("notes")}
+            className="lg:col-span-2"
+            hint="Cite where every assumption comes from; reviewers read this."
+          >
             {(p) => <Textarea {...p} value={notes} onChange={(e) => dispatch({ type: "notes", value: e.target.value })} rows={5} />}
           </Field>
         </CardBody>
@@ -136,7 +161,10 @@ export function ModelEditor({
       </Card>
 
       <Card>
-        <CardHeader title="Forcing scale factors" subtitle="Each member multiplies an agent's series by a sampled factor. Agents not listed keep a factor of exactly 1." />
+        <CardHeader
+          title="Forcing scale factors"
+          subtitle="Each member multiplies an agent's series by a sampled factor. Agents not listed keep a factor of exactly 1."
+        />
         <CardBody className="flex flex-col gap-3">
           {FORCING_AGENTS.filter((a) => a in agents).map((a) => (
             <div key={a} className="relative">
@@ -159,7 +187,11 @@ export function ModelEditor({
           <div className="flex items-end gap-2">
             <label className="flex flex-col gap-1 text-sm">
               <span className="font-medium text-ink">Add a scale factor for</span>
-              <Select value={addAgent} onChange={(e) => dispatch({ type: "chooseAgentToAdd", agent: e.target.value as ForcingAgent | "" })} className="w-64">
+              <Select
+                value={addAgent}
+                onChange={(e) => dispatch({ type: "chooseAgentToAdd", agent: e.target.value as ForcingAgent | "" })}
+                className="w-64"
+              >
                 <option value="">Choose an agent…</option>
                 {FORCING_AGENTS.filter((a) => !(a in agents)).map((a) => (
                   <option key={a} value={a}>
@@ -168,11 +200,7 @@ export function ModelEditor({
                 ))}
               </Select>
             </label>
-            <Button
-              variant="secondary"
-              disabled={!addAgent}
-              onClick={() => dispatch({ type: "addChosenAgent" })}
-            >
+            <Button variant="secondary" disabled={!addAgent} onClick={() => dispatch({ type: "addChosenAgent" })}>
               Add
             </Button>
           </div>
@@ -180,18 +208,31 @@ export function ModelEditor({
       </Card>
 
       <Card>
-        <CardHeader title="Rank correlations" subtitle="Imposed between sampled inputs by Iman–Conover; leave empty for independent inputs." />
+        <CardHeader
+          title="Rank correlations"
+          subtitle="Imposed between sampled inputs by Iman–Conover; leave empty for independent inputs."
+        />
         <CardBody className="flex flex-col gap-2">
           {correlations.map((c, i) => (
             <div key={i} className="flex flex-wrap items-start gap-2" data-correlation={i}>
-              <Select aria-label={`Correlation ${i + 1}: first input`} value={c.a} onChange={(e) => dispatch({ type: "correlation", index: i, field: "a", value: e.target.value })} className="w-56">
+              <Select
+                aria-label={`Correlation ${i + 1}: first input`}
+                value={c.a}
+                onChange={(e) => dispatch({ type: "correlation", index: i, field: "a", value: e.target.value })}
+                className="w-56"
+              >
                 {inputs.map((k) => (
                   <option key={k} value={k}>
                     {inputLabel(k)}
                   </option>
                 ))}
               </Select>
-              <Select aria-label={`Correlation ${i + 1}: second input`} value={c.b} onChange={(e) => dispatch({ type: "correlation", index: i, field: "b", value: e.target.value })} className="w-56">
+              <Select
+                aria-label={`Correlation ${i + 1}: second input`}
+                value={c.b}
+                onChange={(e) => dispatch({ type: "correlation", index: i, field: "b", value: e.target.value })}
+                className="w-56"
+              >
                 {inputs.map((k) => (
                   <option key={k} value={k}>
                     {inputLabel(k)}
@@ -212,7 +253,9 @@ export function ModelEditor({
               </Button>
               {(err(`model.correlations[${i}].rank`) || err(`model.correlations[${i}].between`)) && (
                 <p role="alert" className="basis-full text-xs font-medium text-danger">
-                  {err(`model.correlations[${i}].rank`) ? `Rank ${err(`model.correlations[${i}].rank`)}` : err(`model.correlations[${i}].between`)}
+                  {err(`model.correlations[${i}].rank`)
+                    ? `Rank ${err(`model.correlations[${i}].rank`)}`
+                    : err(`model.correlations[${i}].between`)}
                 </p>
               )}
             </div>
@@ -226,28 +269,46 @@ export function ModelEditor({
       </Card>
 
       <Card>
-        <CardHeader title="Observational constraint" subtitle="Weights members by how well their warming over an observed window matches the observation." />
+        <CardHeader
+          title="Observational constraint"
+          subtitle="Weights members by how well their warming over an observed window matches the observation."
+        />
         <CardBody className="flex flex-col gap-3">
           <label className="flex items-center gap-2 text-sm">
-            <input type="checkbox" checked={constraintOn} onChange={(e) => dispatch({ type: "constraintOn", on: e.target.checked })} className="accent-[var(--pl-accent)]" />
+            <input
+              type="checkbox"
+              checked={constraintOn}
+              onChange={(e) => dispatch({ type: "constraintOn", on: e.target.checked })}
+              className="accent-[var(--pl-accent)]"
+            />
             Weight members by observed warming
           </label>
           {constraintOn && (
-            <div className="grid gap-3 sm:grid-cols-4">
+            <div className="grid gap-3 sm:grid-cols-5">
               {(
                 [
                   ["from", "Window from (year)"],
                   ["to", "Window to (year)"],
                   ["observed", "Observed warming (K)"],
                   ["sd", "Observation sd (K)"],
+                  ["internalVariability", "Internal variability sd (K)"],
                 ] as const
               ).map(([k, label]) => (
                 <Field key={k} label={label} error={err(`model.constraint.${k}`)}>
-                  {(p) => <Input {...p} className="num" value={constraint[k]} onChange={(e) => dispatch({ type: "constraint", field: k, value: e.target.value })} />}
+                  {(p) => (
+                    <Input
+                      {...p}
+                      className="num"
+                      value={constraint[k]}
+                      onChange={(e) => dispatch({ type: "constraint", field: k, value: e.target.value })}
+                    />
+                  )}
                 </Field>
               ))}
-              <p className="text-xs text-muted sm:col-span-4">
+              <p className="text-xs text-muted sm:col-span-5">
                 AR6 SPM A.1.2: 2011–2020 was 1.09 K [0.95–1.20] above 1850–1900; sd 0.076 K treats that range as 5–95 %.
+                Internal variability (added to the observation sd in quadrature): 0.21 K reads AR6 SPM A.1.3&apos;s −0.2 to
+                +0.2 °C for 2010–2019 as a 17–83 % range; 0 ignores it.
               </p>
             </div>
           )}
@@ -265,8 +326,19 @@ export function ModelEditor({
               ["baseline", "Baseline period (first, last year)"],
             ] as const
           ).map(([k, label]) => (
-            <Field key={k} label={label} error={err(`defaults.${k}`) ?? Object.entries(errors).find(([p]) => p.startsWith(`defaults.${k}[`))?.[1]}>
-              {(p) => <Input {...p} className="num" value={defaults[k]} onChange={(e) => dispatch({ type: "defaults", field: k, value: e.target.value })} />}
+            <Field
+              key={k}
+              label={label}
+              error={err(`defaults.${k}`) ?? Object.entries(errors).find(([p]) => p.startsWith(`defaults.${k}[`))?.[1]}
+            >
+              {(p) => (
+                <Input
+                  {...p}
+                  className="num"
+                  value={defaults[k]}
+                  onChange={(e) => dispatch({ type: "defaults", field: k, value: e.target.value })}
+                />
+              )}
             </Field>
           ))}
         </CardBody>
@@ -274,9 +346,16 @@ export function ModelEditor({
 
       {perilProfiles && (
         <Card>
-          <CardHeader title="Pinned peril profiles" subtitle="Reviewed with this version; a run of it that names no profiles applies these." />
+          <CardHeader
+            title="Pinned peril profiles"
+            subtitle="Reviewed with this version; a run of it that names no profiles applies these."
+          />
           <CardBody>
-            <PinnedPerilProfilesPicker profiles={perilProfiles} value={perilProfileIds} onChange={(ids) => dispatch({ type: "perilProfileIds", ids })} />
+            <PinnedPerilProfilesPicker
+              profiles={perilProfiles}
+              value={perilProfileIds}
+              onChange={(ids) => dispatch({ type: "perilProfileIds", ids })}
+            />
             {err("perilProfileIds") && <p className="mt-2 text-sm text-danger">{err("perilProfileIds")}</p>}
           </CardBody>
         </Card>
@@ -287,9 +366,7 @@ export function ModelEditor({
           <p className="font-semibold text-danger">The version cannot be saved yet</p>
           <ul className="mt-1 list-disc pl-5">
             {errorList.slice(0, 12).map(([path, message]) => (
-              <li key={path}>
-                {path === "inputs" ? message : `${path} ${message}`}
-              </li>
+              <li key={path}>{path === "inputs" ? message : `${path} ${message}`}</li>
             ))}
           </ul>
         </div>

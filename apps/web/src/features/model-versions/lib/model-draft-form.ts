@@ -1,4 +1,5 @@
 import type { Distribution, ForcingAgent, ModelSpec, ModelVersionDefaults } from "@plumeline/contracts";
+import { DEFAULT_INTERNAL_VARIABILITY } from "@plumeline/engine";
 
 /** What the model editor starts from: a new draft, a copy of a version, or a draft to edit. */
 export interface ModelDraft {
@@ -18,7 +19,7 @@ export interface CorrelationRow {
   rank: string;
 }
 
-export type ConstraintField = "from" | "to" | "observed" | "sd";
+export type ConstraintField = "from" | "to" | "observed" | "sd" | "internalVariability";
 export type DefaultsField = "percentiles" | "thresholds" | "horizons" | "baseline";
 
 /**
@@ -67,7 +68,7 @@ export const NEW_AGENT_SCALE: Distribution = { type: "range", p50: 1, low: 0.8, 
 const NEW_CORRELATION: CorrelationRow = { a: "ecs", b: "aerosol-cloud", rank: "-0.3" };
 
 /** The observational constraint's fields when a draft has none yet (editable starting values). */
-const CONSTRAINT_START = { from: 2011, to: 2020, observed: 1.09, sd: 0.076 };
+const CONSTRAINT_START = { from: 2011, to: 2020, observed: 1.09, sd: 0.076, internalVariability: DEFAULT_INTERNAL_VARIABILITY };
 
 export function initialModelDraftForm(initial: ModelDraft): ModelDraftForm {
   const c = initial.model.constraint ?? CONSTRAINT_START;
@@ -78,7 +79,14 @@ export function initialModelDraftForm(initial: ModelDraft): ModelDraftForm {
     agents: Object.fromEntries(Object.entries(initial.model.agents).map(([a, v]) => [a, v?.scale ?? null])),
     correlations: initial.model.correlations.map((x) => ({ a: x.between[0], b: x.between[1], rank: String(x.rank) })),
     constraintOn: initial.model.constraint !== null,
-    constraint: { from: String(c.from), to: String(c.to), observed: String(c.observed), sd: String(c.sd) },
+    constraint: {
+      from: String(c.from),
+      to: String(c.to),
+      observed: String(c.observed),
+      sd: String(c.sd),
+      // A version saved before the field existed ran with the engine's default.
+      internalVariability: String(c.internalVariability ?? DEFAULT_INTERNAL_VARIABILITY),
+    },
     expression: initial.model.forcingExpression,
     defaults: {
       percentiles: initial.defaults.percentiles.join(", "),

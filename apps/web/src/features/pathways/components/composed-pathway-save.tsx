@@ -62,7 +62,13 @@ export function ComposedPathwaySave({
     check && !check.success
       ? check.error.issues.map((i) => ({ path: nameSeriesYear(formatPath(i.path), body?.startYear ?? 0), message: i.message }))
       : [];
-  const fieldError = (field: keyof ComposedMetadata) => (tried ? problems.find((p) => p.path === field)?.message : undefined);
+  const fieldError = (field: keyof ComposedMetadata) => {
+    const message = tried ? problems.find((p) => p.path === field)?.message : undefined;
+    // The recipe shares the description's room: say so, or "at most 2000 characters" reads as the author's fault alone.
+    return message && field === "description"
+      ? `${message} — the recipe alone takes ${recipeText.length}; shorten the description or use fewer steps`
+      : message;
+  };
   const serverError = isApiError(create.error)
     ? new ApiError(
         create.error.status,

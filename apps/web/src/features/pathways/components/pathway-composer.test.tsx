@@ -123,4 +123,20 @@ describe("PathwayComposer", () => {
     const alert = await screen.findByText("The server did not save the pathway");
     expect(alert.closest("[role=alert]")).toHaveTextContent("agents.co2.erf, year 2003 must be finite");
   });
+
+  it("counts the recipe against the description's 2000 characters and says so, saving nothing", async () => {
+    const fetch = stubFetch(() => undefined);
+    renderWithClient(<PathwayComposer base={base} choices={choices} onSaved={() => undefined} />);
+    await addStep("Scale an agent");
+    await userEvent.click(screen.getByLabelText("Description (optional)"));
+    await userEvent.paste("x".repeat(1950));
+    await userEvent.click(screen.getByRole("button", { name: "Save as new pathway" }));
+    const recipeLength = 'Composed in Plumeline from "Base ramp" (id p-base): 1. CO2 scaled by 1 in 2000–2003.'.length;
+    expect(
+      screen.getByText(
+        `must be at most 2000 characters — the recipe alone takes ${recipeLength}; shorten the description or use fewer steps`,
+      ),
+    ).toBeInTheDocument();
+    expect(fetch.count("POST", "/api/pathways")).toBe(0);
+  });
 });

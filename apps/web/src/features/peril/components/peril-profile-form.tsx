@@ -32,8 +32,10 @@ export function PerilProfileForm({
   };
 
   return (
-    <div className="flex flex-col gap-4">
-      <div className="grid gap-4 sm:grid-cols-2">
+    // Container queries, not viewport ones: the form sits beside its preview on wide screens, so
+    // its own width (not the window's) decides when two fields fit side by side.
+    <div className="@container flex flex-col gap-4">
+      <div className="grid gap-4 @lg:grid-cols-2">
         <Field label="Name" error={errors.name}>
           {(a) => <Input {...a} {...text("name")} />}
         </Field>
@@ -92,12 +94,16 @@ export function PerilProfileForm({
           />
         )}
       </div>
-      {errors.scaling && <p className="text-xs font-medium text-danger" role="alert">{errors.scaling}</p>}
+      {errors.scaling && (
+        <p className="text-xs font-medium text-danger" role="alert">
+          {errors.scaling}
+        </p>
+      )}
 
       {draft.kind === "per-kelvin" ? (
         <fieldset className="rounded-md border border-line p-3">
           <legend className="px-1 text-xs text-muted">multiplier = (1 + r)^(warming − warming in risk view), r uncertain</legend>
-          <div className="grid gap-3 sm:grid-cols-2">
+          <div className="grid gap-3 @2xl:grid-cols-2">
             <Field label="Distribution of r">
               {(a) => (
                 <Select {...a} value={draft.rateType} disabled={readOnly} onChange={(e) => setRateType(e.target.value as RateType)}>
@@ -113,7 +119,12 @@ export function PerilProfileForm({
               <div className="grid grid-cols-2 gap-3">
                 <Field label="Range covers">
                   {(a) => (
-                    <Select {...a} value={draft.coverage} disabled={readOnly} onChange={(e) => set("coverage", e.target.value as "90" | "66")}>
+                    <Select
+                      {...a}
+                      value={draft.coverage}
+                      disabled={readOnly}
+                      onChange={(e) => set("coverage", e.target.value as "90" | "66")}
+                    >
                       <option value="90">5–95 %</option>
                       <option value="66">17–83 %</option>
                     </Select>
@@ -121,7 +132,12 @@ export function PerilProfileForm({
                 </Field>
                 <Field label="Fitted as">
                   {(a) => (
-                    <Select {...a} value={draft.shape} disabled={readOnly} onChange={(e) => set("shape", e.target.value as "lognormal" | "split-normal")}>
+                    <Select
+                      {...a}
+                      value={draft.shape}
+                      disabled={readOnly}
+                      onChange={(e) => set("shape", e.target.value as "lognormal" | "split-normal")}
+                    >
                       <option value="split-normal">split-normal</option>
                       <option value="lognormal">lognormal</option>
                     </Select>
@@ -143,12 +159,20 @@ export function PerilProfileForm({
               </Field>
             ))}
           </div>
-          {errors["scaling.rate"] && <p className="mt-2 text-xs font-medium text-danger" role="alert">{errors["scaling.rate"]}</p>}
+          {errors["scaling.rate"] && (
+            <p className="mt-2 text-xs font-medium text-danger" role="alert">
+              {errors["scaling.rate"]}
+            </p>
+          )}
         </fieldset>
       ) : (
         <ReturnPeriodTablesEditor value={draft} onChange={(part) => onChange({ ...draft, ...part })} errors={errors} readOnly={readOnly} />
       )}
-      <Field label="Source" hint="Where the scaling comes from (publication, table or figure) and how sure it is, or “illustrative”." error={errors.source}>
+      <Field
+        label="Source"
+        hint="Where the scaling comes from (publication, table or figure) and how sure it is, or “illustrative”."
+        error={errors.source}
+      >
         {(a) => <Textarea {...a} {...text("source")} />}
       </Field>
     </div>
