@@ -87,6 +87,11 @@ export default tseslint.config(
       "no-restricted-syntax": [
         "error",
         { selector: "ThisExpression", message: "Routes pass controller methods unbound: a controller never reads `this`." },
+        // validate() leaves the raw request as it came; the parsed, typed values come from validated().
+        {
+          selector: "MemberExpression[object.name='req'][property.name=/^(body|query|params)$/]",
+          message: "Read the request's checked input with validated(res, input.<endpoint>), not req.body/query/params (those are the raw, unchecked values).",
+        },
       ],
     },
   },

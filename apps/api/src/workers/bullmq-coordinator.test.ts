@@ -9,8 +9,8 @@ import { requestUserOf } from "../test-support/request-user.js";
 import { signIn, type SignedInAgent } from "../test-support/sign-in.js";
 import { createTestContext, type TestContext } from "../test-support/test-context.js";
 import { startBullmqCoordinator, type BullmqCoordinator } from "./bullmq-coordinator.js";
-import { replayJobKind, REPLAY_JOB_TYPE } from "./process-replay-job.js";
-import { RUN_JOB_TYPE } from "./process-run-job.js";
+import { REPLAY_JOB_TYPE, RUN_JOB_TYPE } from "../queue/job-types.js";
+import { replayJobKind } from "./process-replay-job.js";
 import { startRemoteEngineWorker, type RemoteEngineWorker } from "./remote-engine-worker.js";
 import { runJobKind } from "./run-job-kind.js";
 

@@ -7,7 +7,7 @@ import { jobSignal } from "../queue/job-signal.js";
 import type { JobModel } from "../queue/job.model.js";
 import { BULLMQ_HOLDER, type EngineJobKindHandler } from "./engine-job-kind.js";
 import type { EngineOutcome } from "./engine-thread-client.js";
-import { OutcomeDiscarded, type WorkerContext } from "./process-run-job.js";
+import { OutcomeDiscarded, type WorkerContext } from "./worker-step.js";
 import { startRemoteEngineWorker, type RemoteEngineWorker } from "./remote-engine-worker.js";
 import type { WorkerPool } from "./worker-pool.js";
 import { logger } from "../logging/logger.js";

@@ -1,8 +1,8 @@
 import type { AppContext } from "../context.js";
 import { createSqlJobQueue } from "../queue/sql-job-queue.js";
 import { startBullmqCoordinator } from "./bullmq-coordinator.js";
-import { replayJobKind, REPLAY_JOB_TYPE } from "./process-replay-job.js";
-import { RUN_JOB_TYPE } from "./process-run-job.js";
+import { REPLAY_JOB_TYPE, RUN_JOB_TYPE } from "../queue/job-types.js";
+import { replayJobKind } from "./process-replay-job.js";
 import { runJobKind } from "./run-job-kind.js";
 import { startWorkerPool, type WorkerPool } from "./worker-pool.js";
 

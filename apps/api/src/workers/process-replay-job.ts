@@ -2,15 +2,12 @@ import { replayJobPayloadSchema } from "@plumeline/contracts";
 import { Op } from "sequelize";
 import { recordAudit } from "../modules/audit/audit.service.js";
 import type { RunReplayModel } from "../modules/runs/run-replay.model.js";
-import { REPLAY_JOB_TYPE } from "../modules/runs/replays.service.js";
 import type { ClaimedJob, JobQueue } from "../queue/job-queue.js";
 import type { JobModel } from "../queue/job.model.js";
 import { BULLMQ_HOLDER, type EngineJobKindHandler } from "./engine-job-kind.js";
 import { EngineThreadCrashed, type EngineOutcome, type EngineThread } from "./engine-thread-client.js";
-import { OutcomeDiscarded, type StepOptions, type StepOutcome, type WorkerContext } from "./process-run-job.js";
+import { OutcomeDiscarded, type StepOptions, type StepOutcome, type WorkerContext } from "./worker-step.js";
 import { logger } from "../logging/logger.js";
-
-export { REPLAY_JOB_TYPE };
 
 const replayIdOf = (payload: unknown) => replayJobPayloadSchema.parse(payload).replayId;
 

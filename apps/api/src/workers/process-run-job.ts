@@ -1,27 +1,15 @@
 import { runJobPayloadSchema, type RunResult } from "@plumeline/contracts";
-import type { AppContext } from "../context.js";
 import { recordAudit } from "../modules/audit/audit.service.js";
 import type { ResultDocument } from "../modules/results/result-document.js";
 import { storeRunResult } from "../modules/results/store-run-result.js";
 import type { RunModel } from "../modules/runs/run.model.js";
 import type { ClaimedJob, JobQueue } from "../queue/job-queue.js";
 import { EngineThreadCrashed, type EngineOutcome, type EngineThread } from "./engine-thread-client.js";
-import { processClaimedReplayJob, REPLAY_JOB_TYPE } from "./process-replay-job.js";
+import { processClaimedReplayJob } from "./process-replay-job.js";
+import { OutcomeDiscarded, type StepOptions, type StepOutcome, type WorkerContext } from "./worker-step.js";
+import { REPLAY_JOB_TYPE, RUN_JOB_TYPE } from "../queue/job-types.js";
 import { mailRunOutcome } from "./run-notifications.js";
 import { logger } from "../logging/logger.js";
-
-export const RUN_JOB_TYPE = "ensemble-run";
-
-export type WorkerContext = Pick<AppContext, "models" | "sequelize" | "mailer" | "config">;
-
-export interface StepOptions {
-  /** Least time between two progress writes to the database (the engine reports far more often). */
-  progressWriteMs?: number;
-  /** True while the server shuts down: a job interrupted then gets its attempt back. */
-  isStopping?: () => boolean;
-}
-
-export type StepOutcome = "idle" | "succeeded" | "failed" | "cancelled" | "requeued";
 
 /**
  * One worker step: claim the oldest queued run job, run the engine in
@@ -100,11 +88,6 @@ function throttledProgress(ctx: WorkerContext, queue: JobQueue, job: ClaimedJob,
     },
     flush: () => chain,
   };
-}
-
-/** The job was no longer held by the one reporting its outcome: nothing was written (a result is never stored twice). */
-export class OutcomeDiscarded extends Error {
-  override name = "OutcomeDiscarded";
 }
 
 /**

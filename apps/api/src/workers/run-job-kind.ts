@@ -4,7 +4,8 @@ import { recordAudit } from "../modules/audit/audit.service.js";
 import type { JobQueue } from "../queue/job-queue.js";
 import type { JobModel } from "../queue/job.model.js";
 import { BULLMQ_HOLDER, type EngineJobKindHandler } from "./engine-job-kind.js";
-import { OutcomeDiscarded, recordRunOutcome, type WorkerContext } from "./process-run-job.js";
+import { recordRunOutcome } from "./process-run-job.js";
+import { OutcomeDiscarded, type WorkerContext } from "./worker-step.js";
 
 /** Ensemble runs through BullMQ: the run row mirrors its job (engine-job-kind.ts). */
 export function runJobKind(ctx: WorkerContext, queue: JobQueue): EngineJobKindHandler {

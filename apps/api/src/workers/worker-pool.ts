@@ -2,7 +2,8 @@ import os from "node:os";
 import type { JobQueue } from "../queue/job-queue.js";
 import { jobSignal } from "../queue/job-signal.js";
 import { EngineThread } from "./engine-thread-client.js";
-import { processNextRunJob, syncRunsWithRequeuedJobs, type WorkerContext } from "./process-run-job.js";
+import { processNextRunJob, syncRunsWithRequeuedJobs } from "./process-run-job.js";
+import type { WorkerContext } from "./worker-step.js";
 import { logger } from "../logging/logger.js";
 
 export interface WorkerPoolOptions {

@@ -1,10 +1,11 @@
 import { z } from "zod";
-import { perilProfileSchema, portfolioRowSchema, TABLE_WARMING_RANGE } from "../engine/peril.js";
+import { perilProfileSchema, TABLE_WARMING_RANGE } from "../engine/peril-profile.js";
+import { portfolioRowSchema } from "../engine/peril-portfolio.js";
 import { authorAndDateFilters, pagedQuerySchema, pageSchema, type ListQueryInput } from "./paging.js";
 
 /**
  * Peril profiles and portfolio baselines over the REST API (docs/API.md "peril-profiles",
- * "portfolios"). A stored profile is the engine's peril profile (engine/peril.ts) plus who
+ * "portfolios"). A stored profile is the engine's peril profile (engine/peril-profile.ts) plus who
  * made it and whether it is locked: a profile that an approved (or retired) model version
  * pins, or that a run used, is part of a record and cannot change — copy it instead.
  */

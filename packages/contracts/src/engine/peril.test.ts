@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { formatIssues } from "./format-issues.js";
-import { perilProfileSchema, portfolioRowsSchema, portfolioSchema, perilProfilesSchema, CURRENCY_CODES } from "./peril.js";
+import { perilProfileSchema, perilProfilesSchema } from "./peril-profile.js";
+import { CURRENCY_CODES, portfolioRowsSchema, portfolioSchema } from "./peril-portfolio.js";
 import { runSpecSchema } from "./run-spec.js";
 import { runResultSchema } from "./run-result.js";
 

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { perilResultSchema } from "./peril.js";
+import { perilResultSchema } from "./peril-result.js";
 
 /**
  * Percentile summaries keyed "p" + percentile ("p5", "p17", "p50", …), following the
@@ -90,7 +90,7 @@ export const runResultSchema = z.object({
   /** Implied sensitivities of the sampled members (weighted by the first pathway's constraint, if any). */
   implied: z.object({ ecs: percentileSetSchema, tcr: percentileSetSchema }),
   pathways: z.array(pathwayResultSchema),
-  /** Peril lens results, present when the spec carried perils (peril.ts). */
+  /** Peril lens results, present when the spec carried perils (peril-result.ts). */
   perils: perilResultSchema.optional(),
 });
 

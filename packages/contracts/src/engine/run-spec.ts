@@ -2,7 +2,8 @@ import { z } from "zod";
 import { distributionSchema } from "./distribution.js";
 import { defaultRunSettings } from "./default-assumptions.js";
 import { CLIMATE_INPUTS, FORCING_AGENTS, FORCING_EXPRESSIONS, type ForcingAgent } from "./agents.js";
-import { perilProfilesSchema, perilSpecIssues, portfolioSchema } from "./peril.js";
+import { perilProfilesSchema, perilSpecIssues } from "./peril-profile.js";
+import { portfolioSchema } from "./peril-portfolio.js";
 import { boundedUniqueList, MAX_HORIZONS, MAX_PATHWAYS_PER_RUN, MAX_PERCENTILES, MAX_THRESHOLDS, plausibleYear } from "./spec-limits.js";
 
 export * from "./spec-limits.js";
@@ -150,7 +151,7 @@ export const runSpecSchema = z
       .min(1, "must hold at least one pathway")
       .max(MAX_PATHWAYS_PER_RUN, `must hold at most ${MAX_PATHWAYS_PER_RUN} pathways (the limit per run)`),
     model: modelSpecSchema,
-    /** Optional peril lens (peril.ts): profiles applied at the horizons, and a portfolio baseline. */
+    /** Optional peril lens (peril-profile.ts, peril-portfolio.ts): profiles applied at the horizons, and a portfolio baseline. */
     perils: perilProfilesSchema.optional(),
     portfolio: portfolioSchema.optional(),
   })

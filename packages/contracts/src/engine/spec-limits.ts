@@ -2,7 +2,8 @@ import { z } from "zod";
 
 /**
  * Resource limits of one run and one pathway, shared by the API, the web forms and the engine
- * CLI (the engine library keeps the same numbers in packages/engine/src/spec/limits.ts).
+ * CLI (the engine library keeps the same numbers in packages/engine/src/spec/limits.ts; an API test,
+ * limits-agree.test.ts, holds the two equal).
  * WHY: each threshold, horizon and percentile multiplies engine work, stored result rows and
  * workbook columns; a run with 17,000 thresholds once held the database for minutes.
  */

@@ -1,8 +1,8 @@
 /**
  * Peril lens shapes as the engine sees them. They mirror the shared contracts
- * (packages/contracts/src/engine/peril.ts) field for field; the engine library imports
- * nothing of ours, so they are restated here. The rules they follow are written out in
- * the contracts file and in PERIL_RULES there.
+ * (packages/contracts/src/engine/peril-profile.ts, peril-portfolio.ts and peril-result.ts)
+ * field for field; the engine library imports nothing of ours, so they are restated here.
+ * The rules they follow are written out in the contracts' profile file and in PERIL_RULES there.
  */
 import type { Distribution } from "../distributions/types.js";
 

@@ -4,7 +4,7 @@ import { checkTable } from "./table-multiplier.js";
 import { tablesOf } from "./table-profile.js";
 import type { PerilProfile, Portfolio } from "./types.js";
 
-/** Limits the contracts state too (packages/contracts/src/engine/peril.ts). */
+/** Limits the contracts state too (packages/contracts/src/engine/peril-profile.ts). */
 export const BASELINE_WARMING_RANGE = [0, 3] as const;
 /** Rates are checked at these tail probabilities: P(r ≤ −1) must be below 1e-9. */
 const RATE_TAIL_PROBABILITY = 1e-9;

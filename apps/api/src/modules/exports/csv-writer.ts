@@ -1,5 +1,5 @@
 import { neutraliseFormula } from "./neutralise-formula.js";
-import type { Table, TableCell } from "./result-tables.js";
+import type { Table, TableCell } from "./table.js";
 
 /**
  * RFC 4180 CSV: comma-separated, CRLF line ends, fields quoted when they hold a comma, quote or

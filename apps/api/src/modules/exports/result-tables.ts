@@ -1,12 +1,7 @@
 import type { PathwayResult, ResultTable, RunResult } from "@plumeline/contracts";
 import { perilTable } from "../peril-profiles/peril-result-tables.js";
 import { portfolioTotalsTable } from "../peril-profiles/portfolio-totals-table.js";
-
-export type TableCell = string | number | null;
-export interface Table {
-  columns: string[];
-  rows: TableCell[][];
-}
+import type { Table, TableCell } from "./table.js";
 
 /** Percentile keys in the order the result gives them ("p5", "p17", …), then "mean" if present. */
 function statKeys(series: Record<string, number[]>): string[] {

@@ -18,7 +18,8 @@ import { PROBABILITY_FORMAT, probabilityNumberFormat } from "./probability-numbe
 import { addMemberSheet, type MemberSheet } from "./member-sheet.js";
 import { neutraliseFormula } from "./neutralise-formula.js";
 import { withFixedEntryDates } from "./stable-zip.js";
-import { resultTable, type Table, type TableCell } from "./result-tables.js";
+import { resultTable } from "./result-tables.js";
+import type { Table, TableCell } from "./table.js";
 
 /** What the manifest sheet states about the run (all of it read from the database, not the request). */
 export interface WorkbookManifest {

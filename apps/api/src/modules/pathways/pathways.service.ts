@@ -1,10 +1,8 @@
 import { randomUUID } from "node:crypto";
 import {
   createPathwayBodySchema,
-  issueDetails,
   pathwayMetadataSchema,
   type CreatePathwayBody,
-  type ErrorDetail,
   type Pathway,
   type PathwayPreview,
   type PathwaySummary,
@@ -24,6 +22,7 @@ import type { RequestUser } from "../../middleware/request-context.js";
 import { recordAudit } from "../audit/audit.service.js";
 import { pathwayChecksum } from "./pathway-checksum.js";
 import { assertFileGiven, readUploadedRows, type UploadedFile } from "../../uploads/tabular-file.js";
+import { checkUpload } from "../../uploads/upload-problems.js";
 import { checkSeriesShape, seriesAgents, seriesLength } from "./pathway-series.js";
 import { checkPathwayRecipe } from "./pathway-recipe-check.js";
 import { parsePathwayTable, type PathwaySeries } from "./pathway-table.js";
@@ -192,36 +191,27 @@ export async function uploadPathway(
 ): Promise<{ preview: PathwayPreview } | { pathway: Pathway }> {
   assertFileGiven(file);
   const rows = await readUploadedRows(file);
-  const table = parsePathwayTable(rows);
-  const errors: ErrorDetail[] = table.ok ? [] : [...table.errors];
-  let metadata: ReturnType<typeof pathwayMetadataSchema.parse> | null = null;
-  if (!fields.preview) {
-    const parsed = pathwayMetadataSchema.safeParse({
-      name: fields.name ?? "",
-      description: fields.description ?? "",
-      source: fields.source ?? "",
-      vintage: fields.vintage ?? "",
-    });
-    if (parsed.success) metadata = parsed.data;
-    else errors.push(...issueDetails(parsed.error));
-  }
-  if (!table.ok || errors.length > 0)
-    throw badRequest(errors, `The upload has ${errors.length} problem${errors.length === 1 ? "" : "s"}; nothing was saved.`);
+  const { read: parsed, fields: metadata } = checkUpload(parsePathwayTable(rows), fields.preview, pathwayMetadataSchema, {
+    name: fields.name,
+    description: fields.description,
+    source: fields.source,
+    vintage: fields.vintage,
+  });
 
   if (fields.preview)
     return {
       preview: {
-        startYear: table.table.startYear,
-        endYear: table.table.endYear,
-        agents: table.table.columns.map((c) => ({ agent: c.agent, quantity: c.quantity, column: c.header })),
-        rows: table.table.rows.slice(0, PREVIEW_ROWS),
-        series: table.table.agents as PathwayPreview["series"],
+        startYear: parsed.table.startYear,
+        endYear: parsed.table.endYear,
+        agents: parsed.table.columns.map((c) => ({ agent: c.agent, quantity: c.quantity, column: c.header })),
+        rows: parsed.table.rows.slice(0, PREVIEW_ROWS),
+        series: parsed.table.agents as PathwayPreview["series"],
       },
     };
   const pathway = await createPathway(
     ctx,
     user,
-    { ...metadata!, startYear: table.table.startYear, agents: table.table.agents as CreatePathwayBody["agents"] },
+    { ...metadata!, startYear: parsed.table.startYear, agents: parsed.table.agents as CreatePathwayBody["agents"] },
     `upload ${file.originalname}`,
   );
   return { pathway };

@@ -1,5 +1,5 @@
 import { BEYOND_TABLE_WARNING_SHARE, type PerilProfileResult, type PerilResult, type PerilSummary, type RunResult } from "@plumeline/contracts";
-import type { Table, TableCell } from "../exports/result-tables.js";
+import type { Table, TableCell } from "../exports/table.js";
 
 /** The peril lens export tables (CSV names; also the workbook sheets below). */
 export const PERIL_TABLES = ["peril-multipliers", "peril-return-periods", "peril-losses"] as const;

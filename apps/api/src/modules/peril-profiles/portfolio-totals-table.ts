@@ -1,5 +1,5 @@
 import type { RunResult } from "@plumeline/contracts";
-import type { Table, TableCell } from "../exports/result-tables.js";
+import type { Table, TableCell } from "../exports/table.js";
 import { summaryKeys } from "./peril-result-tables.js";
 
 const METRICS = [

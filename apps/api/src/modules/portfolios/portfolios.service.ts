@@ -1,8 +1,6 @@
 import { randomUUID } from "node:crypto";
 import {
-  issueDetails,
   portfolioMetadataSchema,
-  type ErrorDetail,
   type Portfolio,
   type PortfolioPreview,
   type PortfolioRecord,
@@ -11,10 +9,11 @@ import {
 } from "@plumeline/contracts";
 import { Op, type Transaction } from "sequelize";
 import type { AppContext } from "../../context.js";
-import { badRequest, notFound } from "../../errors/app-error.js";
+import { notFound } from "../../errors/app-error.js";
 import type { RequestUser } from "../../middleware/request-context.js";
 import { recordAudit } from "../audit/audit.service.js";
 import { assertFileGiven, readUploadedRows, type UploadedFile } from "../../uploads/tabular-file.js";
+import { checkUpload } from "../../uploads/upload-problems.js";
 import { portfolioChecksum } from "./portfolio-checksum.js";
 import { parsePortfolioTable } from "./portfolio-table.js";
 import type { PortfolioModel } from "./portfolio.model.js";
@@ -111,16 +110,10 @@ export async function uploadPortfolio(
 ): Promise<{ preview: PortfolioPreview } | { portfolio: PortfolioRecord }> {
   assertFileGiven(file);
   const raw = await readUploadedRows(file);
-  const table = parsePortfolioTable(raw);
-  const errors: ErrorDetail[] = table.ok ? [] : [...table.errors];
-  let metadata: { name: string; description: string } | null = null;
-  if (!fields.preview) {
-    const parsed = portfolioMetadataSchema.safeParse({ name: fields.name ?? "", description: fields.description ?? "" });
-    if (parsed.success) metadata = parsed.data;
-    else errors.push(...issueDetails(parsed.error));
-  }
-  if (!table.ok || errors.length > 0)
-    throw badRequest(errors, `The upload has ${errors.length} problem${errors.length === 1 ? "" : "s"}; nothing was saved.`);
+  const { read: table, fields: metadata } = checkUpload(parsePortfolioTable(raw), fields.preview, portfolioMetadataSchema, {
+    name: fields.name,
+    description: fields.description,
+  });
   if (fields.preview)
     return {
       preview: {

@@ -210,7 +210,7 @@ function forcingAndSensitivity(w: ReportWriter, p: PathwayResult): void {
     w.h3(`Forcing by agent in ${h.year} — ${p.name}`, (agents.length + 1) * 16 + 44);
     const rows = agents.map((a) => {
       const s = h.forcingByAgent[a]!;
-      return { label: AGENT_LABELS[a], color: AGENT_COLORS[a] ?? INK, p5: s.p5 ?? s.p50 ?? null, p50: s.p50 ?? null, p95: s.p95 ?? s.p50 ?? null, note: formatFixed(s.p50 ?? 0, 2) };
+      return { label: AGENT_LABELS[a], color: AGENT_COLORS[a], p5: s.p5 ?? s.p50 ?? null, p50: s.p50 ?? null, p95: s.p95 ?? s.p50 ?? null, note: formatFixed(s.p50 ?? 0, 2) };
     });
     if (h.forcing.p50 !== undefined)
       rows.push({ label: "Total", color: INK, p5: h.forcing.p5 ?? h.forcing.p50, p50: h.forcing.p50, p95: h.forcing.p95 ?? h.forcing.p50, note: formatFixed(h.forcing.p50, 2) });

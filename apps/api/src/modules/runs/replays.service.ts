@@ -4,6 +4,7 @@ import { Op } from "sequelize";
 import type { AppContext } from "../../context.js";
 import { conflict, notFound } from "../../errors/app-error.js";
 import type { RequestUser } from "../../middleware/request-context.js";
+import { REPLAY_JOB_TYPE } from "../../queue/job-types.js";
 import { jobSignal } from "../../queue/job-signal.js";
 import { createSqlJobQueue } from "../../queue/sql-job-queue.js";
 import { recordAudit } from "../audit/audit.service.js";
@@ -11,8 +12,6 @@ import type { RunReplayModel } from "./run-replay.model.js";
 import { findRun } from "./runs.service.js";
 
 type Ctx = Pick<AppContext, "models" | "sequelize">;
-
-export const REPLAY_JOB_TYPE = "ensemble-replay";
 
 export function presentReplay(r: RunReplayModel): Replay {
   return {

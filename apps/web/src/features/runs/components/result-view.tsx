@@ -95,10 +95,12 @@ export function ResultView({ run, result }: { run: Run; result: RunResult }) {
             {fanReady ? (
               <FanChart
                 title={`Warming above ${baselineLabel} (K)`}
-                series={toFocusedFanSeries(result.pathways, pathway.id)}
+                series={toFocusedFanSeries(result.pathways, pathway.id, otherBands)}
                 description={
                   result.pathways.length > 1
-                    ? `Filled: ${pathway.name} (in focus), median line with 17th–83rd and 5th–95th percentile bands. Outlined: the other pathways — solid edges 17th–83rd, dotted edges 5th–95th percentile, dashed median. Hover or use arrow keys to read a year.`
+                    ? `Filled: ${pathway.name} (in focus), median line with 17th–83rd and 5th–95th percentile bands. ${
+                        otherBands ? "Outlined: the other pathways — solid edges 17th–83rd, dotted edges 5th–95th percentile, dashed median." : "Lines: the other pathways' medians."
+                      } Hover or use arrow keys to read a year.`
                     : undefined
                 }
                 yLabel={`Warming above ${baselineLabel} (K)`}

@@ -1,6 +1,6 @@
 import { z } from "zod";
-import currencyCodes from "currency-codes";
 import { distributionSchema, type Distribution } from "./distribution.js";
+import { finite, label, slug } from "./peril-fields.js";
 
 /**
  * Peril lens: how a hazard or loss metric scales with global
@@ -43,18 +43,8 @@ import { distributionSchema, type Distribution } from "./distribution.js";
  * * A portfolio row is projected by every profile with the same peril and region.
  */
 
-const finite = () => z.number({ error: "must be a number" }).refine(Number.isFinite, "must be finite");
-
 /** Perils the demo and the editor offer; any lower-case slug is accepted. */
-export const SUGGESTED_PERILS = [
-  "flood-heavy-rainfall",
-  "heat",
-  "wind",
-  "drought",
-  "wildfire",
-  "hail",
-  "coastal-flood",
-] as const;
+export const SUGGESTED_PERILS = ["flood-heavy-rainfall", "heat", "wind", "drought", "wildfire", "hail", "coastal-flood"] as const;
 
 export const PERIL_METRICS = ["frequency", "severity"] as const;
 export type PerilMetric = (typeof PERIL_METRICS)[number];
@@ -184,7 +174,11 @@ export const tableScalingSchema = z
   .strict()
   .superRefine((s, ctx) => {
     if (s.tables && s.points)
-      ctx.addIssue({ code: "custom", path: ["points"], message: "must not be given with tables (put the points in a table with its return period)" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["points"],
+        message: "must not be given with tables (put the points in a table with its return period)",
+      });
     if (!s.tables && !s.points) ctx.addIssue({ code: "custom", path: ["tables"], message: "must hold at least one table" });
     if (s.points) warmingsIncrease(s.points, ctx, ["points"]);
     s.tables?.forEach((t, i) => {
@@ -208,13 +202,6 @@ export const perilScalingSchema = z.discriminatedUnion("kind", [perKelvinScaling
   error: 'kind must be "per-kelvin" or "table"',
 });
 
-const slug = (example: string) =>
-  z
-    .string({ error: "must be text" })
-    .trim()
-    .regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, `must be a lower-case slug like "${example}"`);
-const label = () => z.string({ error: "must be text" }).trim().min(1, "must not be empty").max(120, "must be at most 120 characters");
-
 export const perilProfileSchema = z
   .object({
     id: z.string({ error: "must be text" }).trim().min(1, "must not be empty").max(64, "must be at most 64 characters"),
@@ -232,73 +219,12 @@ export const perilProfileSchema = z
   })
   .strict();
 
-/** ISO 4217 codes (currency-codes package), less XTS (testing) and XXX (no currency). */
-export const CURRENCY_CODES: readonly string[] = currencyCodes.codes().filter((c) => c !== "XTS" && c !== "XXX");
-const currencySet = new Set(CURRENCY_CODES);
-
-const money = () => finite().refine((v) => v >= 0, "must not be negative");
-
-/**
- * One line of a portfolio baseline: the firm's own figures for a region and peril, from
- * its catastrophe model or experience, in one currency. Losses per year (AAL) and at the
- * 1-in-100 and 1-in-200 annual return periods.
- */
-export const portfolioRowSchema = z
-  .object({
-    region: label(),
-    peril: slug("flood-heavy-rainfall"),
-    currency: z
-      .string({ error: "must be text" })
-      .trim()
-      .refine((c) => currencySet.has(c), "must be an ISO 4217 currency code in capitals, such as EUR"),
-    aal: money(),
-    loss100: money(),
-    loss200: money(),
-  })
-  .strict()
-  .superRefine((r, ctx) => {
-    if (r.loss200 < r.loss100)
-      ctx.addIssue({
-        code: "custom",
-        path: ["loss200"],
-        message: `must be at least loss100 (${r.loss100}): a 1-in-200 loss cannot be below the 1-in-100 loss`,
-      });
-  });
-
-/** Rows of a portfolio: each (region, peril) once. Issues name the row index and field. */
-export const portfolioRowsSchema = z
-  .array(portfolioRowSchema, { error: "must be a list of rows" })
-  .min(1, "must hold at least one row")
-  .superRefine((rows, ctx) => {
-    const seen = new Map<string, number>();
-    rows.forEach((r, i) => {
-      const key = `${r.region}\u0000${r.peril}`;
-      const first = seen.get(key);
-      if (first !== undefined)
-        ctx.addIssue({
-          code: "custom",
-          path: [i, "region"],
-          message: `repeats region "${r.region}" with peril "${r.peril}", already given in rows[${first}]`,
-        });
-      else seen.set(key, i);
-    });
-  });
-
-export const portfolioSchema = z
-  .object({
-    id: z.string({ error: "must be text" }).trim().min(1, "must not be empty").max(64, "must be at most 64 characters"),
-    name: label(),
-    rows: portfolioRowsSchema,
-  })
-  .strict();
-
 /** Profiles of one run: ids unique. */
 export const perilProfilesSchema = z.array(perilProfileSchema, { error: "must be a list of peril profiles" }).superRefine((ps, ctx) => {
   const seen = new Map<string, number>();
   ps.forEach((p, i) => {
     const first = seen.get(p.id);
-    if (first !== undefined)
-      ctx.addIssue({ code: "custom", path: [i, "id"], message: `"${p.id}" is used twice (also perils[${first}])` });
+    if (first !== undefined) ctx.addIssue({ code: "custom", path: [i, "id"], message: `"${p.id}" is used twice (also perils[${first}])` });
     else seen.set(p.id, i);
   });
 });
@@ -324,92 +250,6 @@ export function perilSpecIssues(spec: {
   return issues;
 }
 
-/** Summary of one uncertain output: the requested percentiles ("p5" …) and the (weighted) mean. */
-export const perilSummarySchema = z.record(z.string().regex(/^(p\d+(\.\d+)?|mean)$/), z.number());
-
-export const projectedLossSchema = z.object({
-  region: z.string(),
-  peril: z.string(),
-  currency: z.string(),
-  aal: perilSummarySchema,
-  loss100: perilSummarySchema,
-  loss200: perilSummarySchema,
-});
-
-/** Share of members (weighted) whose warming lies outside a table profile's warming range, 0–1. */
-export const beyondTableShareSchema = z.object({ below: z.number(), above: z.number() });
-
-/** Above this share of members beyond a table's warming range, screens and exports warn. */
-export const BEYOND_TABLE_WARNING_SHARE = 0.05;
-
-export const perilHorizonResultSchema = z.object({
-  year: z.number().int(),
-  /** The multiplier AAL uses: for a table profile, that of its most frequent table's return period. */
-  multiplier: perilSummarySchema,
-  /** Multipliers of today's 1-in-100 and 1-in-200 events, m(100) and m(200). Optional: newer engines. */
-  tailMultipliers: z.object({ "100": perilSummarySchema, "200": perilSummarySchema }).optional(),
-  /** Table profiles: members beyond the table's warming range; null for per-kelvin. Optional: newer engines. */
-  beyondTable: beyondTableShareSchema.nullable().optional(),
-  /** Frequency profiles: return period (years) of today's 1-in-100 and 1-in-200 events; null for severity. */
-  returnPeriods: z.object({ "100": perilSummarySchema, "200": perilSummarySchema }).nullable(),
-  losses: z.array(projectedLossSchema),
-});
-
-export const perilProfileResultSchema = z.object({
-  profileId: z.string(),
-  name: z.string(),
-  peril: z.string(),
-  region: z.string(),
-  metric: z.enum(PERIL_METRICS),
-  baselineWarming: z.number(),
-  /** Table profiles: the tables' return periods (years) and the warming range (K) every table covers; null for per-kelvin. */
-  table: z
-    .object({
-      returnPeriods: z.array(z.number()),
-      warmingRange: z.tuple([z.number(), z.number()]),
-      beyondTable: z.enum(["hold", "extrapolate"]),
-      beyondReturnPeriods: z.enum(["hold", "extrapolate"]),
-      /** Reported return periods (1-in-100, 1-in-200) outside the tables' return periods: read by holding or extrapolating. */
-      readOutside: z.array(z.number()),
-    })
-    .nullable()
-    .optional(),
-  /** Return period (years) whose multiplier `multiplier` and AAL use; null when one multiplier serves every return period. */
-  multiplierReturnPeriod: z.number().nullable().optional(),
-  horizons: z.array(perilHorizonResultSchema),
-});
-
-const portfolioFiguresSchema = z.object({ aal: z.number(), loss100: z.number(), loss200: z.number() });
-
-/**
- * The portfolio's totals in one currency: every member's projected figures added over all the
- * rows in that currency (rows no profile projects enter at their baseline figures), then
- * summarised; `baseline` is today's sum of the rows. Currencies are never added together.
- */
-export const portfolioTotalSchema = z.object({
-  currency: z.string(),
-  rows: z.number().int(),
-  projectedRows: z.number().int(),
-  baseline: portfolioFiguresSchema,
-  horizons: z.array(z.object({ year: z.number().int(), aal: perilSummarySchema, loss100: perilSummarySchema, loss200: perilSummarySchema })),
-});
-
-export const pathwayPerilResultSchema = z.object({
-  pathwayId: z.string(),
-  profiles: z.array(perilProfileResultSchema),
-  /** With a portfolio: its totals, one per currency (absent in results made before totals existed, or when refused). */
-  totals: z.array(portfolioTotalSchema).optional(),
-});
-
-export const perilResultSchema = z.object({
-  portfolioId: z.string().nullable(),
-  pathways: z.array(pathwayPerilResultSchema),
-  /** Portfolio rows no profile matched (same peril and region): not projected. */
-  unmatchedRows: z.array(z.object({ region: z.string(), peril: z.string() })),
-  /** Why the portfolio has no totals (a row two profiles would project). */
-  totalsRefused: z.string().optional(),
-});
-
 /** The rules above in plain words, for result screens and workbook cautions. */
 export const PERIL_RULES: readonly string[] = [
   "Warming is the global-mean anomaly against 1850–1900; multipliers apply only to warming beyond the baseline warming already in the firm's risk view.",
@@ -421,26 +261,8 @@ export const PERIL_RULES: readonly string[] = [
   "Not a catastrophe model: multipliers adjust the firm's own view of risk. Scaling differs by region, peril and return period (rarer events can change more in frequency); exposure growth, adaptation, compound perils and tipping points are not included.",
 ];
 
-/** What the portfolio totals are and are not; shown beside them on screen, in the workbook and the report. */
-export const PORTFOLIO_TOTAL_NOTES: readonly string[] = [
-  "Totals are added member by member: each ensemble member's projected figures are summed over all rows of the portfolio, then percentiles are taken; percentiles are never added.",
-  "Rows no peril profile projects enter the totals at their baseline figures, unchanged.",
-  "Adding 1-in-100 and 1-in-200 losses within a member gives no diversification credit between perils and regions, so read the tail totals as an upper bound in that sense, not as the portfolio's own 1-in-100 or 1-in-200 loss. Adding the rows' tail losses assumes their tail events strike in the same year (perfectly dependent); for a percentile measure that is conservative in practice but not a guaranteed bound, because percentiles of a sum can exceed the sum of percentiles when losses are heavy-tailed. Defer to the firm's capital model and licensed actuarial judgement for aggregate tail losses.",
-  "Currencies are kept apart: a portfolio with rows in several currencies gets one total per currency and no combined total. Plumeline converts no currency.",
-];
-
 export type PerKelvinScaling = z.output<typeof perKelvinScalingSchema>;
 export type TableScaling = z.output<typeof tableScalingSchema>;
 export type ReturnPeriodTable = z.output<typeof returnPeriodTableSchema>;
-export type BeyondTableShare = z.infer<typeof beyondTableShareSchema>;
 export type PerilScaling = z.output<typeof perilScalingSchema>;
 export type PerilProfile = z.output<typeof perilProfileSchema>;
-export type PortfolioRow = z.output<typeof portfolioRowSchema>;
-export type Portfolio = z.output<typeof portfolioSchema>;
-export type PerilSummary = z.infer<typeof perilSummarySchema>;
-export type ProjectedLoss = z.infer<typeof projectedLossSchema>;
-export type PerilHorizonResult = z.infer<typeof perilHorizonResultSchema>;
-export type PerilProfileResult = z.infer<typeof perilProfileResultSchema>;
-export type PortfolioTotal = z.infer<typeof portfolioTotalSchema>;
-export type PathwayPerilResult = z.infer<typeof pathwayPerilResultSchema>;
-export type PerilResult = z.infer<typeof perilResultSchema>;
