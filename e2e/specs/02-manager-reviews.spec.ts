@@ -32,7 +32,7 @@ test.beforeAll(async ({ baseURL }) => {
   let asMarit: APIRequestContext | undefined;
   try {
     asMarit = await apiAs("manager", baseURL!);
-    const parent = (await getJson<Version[]>(asMarit, "/api/model-versions?status=approved")).find((v) => v.name === seededVersionName)!;
+    const parent = (await getJson<{ items: Version[] }>(asMarit, "/api/model-versions?status=approved")).items.find((v) => v.name === seededVersionName)!;
     const full = await getJson<Version>(asMarit, `/api/model-versions/${parent.id}`);
     const draft = await postJson<Version>(asMarit, "/api/model-versions", {
       name: names.managerOwnDraft,

@@ -17,7 +17,7 @@ const seed = "e2e-orsa-2025";
 test.beforeAll(async ({ baseURL }) => {
   // The previous version's run to compare against: same pathways, members and seed.
   const api = await apiAs("analyst", baseURL!);
-  const v1 = (await getJson<VersionSummary[]>(api, "/api/model-versions?status=approved")).find((v) => v.name === seededVersionName)!;
+  const v1 = (await getJson<{ items: VersionSummary[] }>(api, "/api/model-versions?status=approved")).items.find((v) => v.name === seededVersionName)!;
   const run = await postJson<RunSummary>(api, "/api/runs", {
     name: names.runOnPrevious,
     modelVersionId: v1.id,
@@ -140,7 +140,7 @@ test("analyst runs the approved version, reads the fan chart and horizons, compa
 test("a run on an unapproved version is marked exploratory on its page and on the desk", async ({ page, baseURL }, testInfo) => {
   // The seeded v2 draft (a trial 2001–2020 observational constraint) is not approved: any run of it is exploratory.
   const api = await apiAs("analyst", baseURL!);
-  const draft = (await getJson<VersionSummary[]>(api, "/api/model-versions?status=draft")).find((v) => v.name === seededVersionName)!;
+  const draft = (await getJson<{ items: VersionSummary[] }>(api, "/api/model-versions?status=draft")).items.find((v) => v.name === seededVersionName)!;
   const run = await postJson<RunSummary>(api, "/api/runs", {
     name: "Constraint trial (draft v2)",
     modelVersionId: draft.id,

@@ -24,7 +24,7 @@ test("an actuary at an admin URL is refused with the reason; the API says 403", 
 
 test("an analyst at a review URL is refused: deciding is the manager's", async ({ page }, testInfo) => {
   await signIn(page, "analyst");
-  const versions = await (await page.request.get("/api/model-versions")).json() as VersionSummary[];
+  const { items: versions } = await (await page.request.get("/api/model-versions?limit=200")).json() as { items: VersionSummary[] };
   const wider = versions.find((v) => v.name === names.widerDraft)!;
   await page.goto(`/model-versions/${wider.id}/review`);
   await expect(page.getByRole("heading", { level: 1, name: "Approving model versions needs the manager role" })).toBeVisible();

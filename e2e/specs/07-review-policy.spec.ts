@@ -23,7 +23,7 @@ test.beforeAll(async ({ baseURL }) => {
   // Set-up through the API (the editor itself is covered by 01): the approved version with a
   // higher ECS median, pinned to two seeded pathways to keep the preview short.
   const api = await apiAs("analyst", baseURL!);
-  const parent = (await getJson<VersionSummary[]>(api, "/api/model-versions?status=approved")).find((v) => v.name === seededVersionName)!;
+  const parent = (await getJson<{ items: VersionSummary[] }>(api, "/api/model-versions?status=approved")).items.find((v) => v.name === seededVersionName)!;
   const full = await getJson<Version>(api, `/api/model-versions/${parent.id}`);
   draft = await postJson<Version>(api, "/api/model-versions", {
     name: names.hotterDraft,

@@ -14,7 +14,7 @@ interface AuditPage { items: Array<{ action: string; entityId: string | null }>;
 test("analyst cancels a large run: confirmation, cancelling…, cancelled; a second cancel changes nothing", async ({ page, baseURL }, testInfo) => {
   // A run long enough to catch while it runs: 500,000 members on four pathways (tens of seconds on one core).
   const api = await apiAs("analyst", baseURL!);
-  const v1 = (await getJson<VersionSummary[]>(api, "/api/model-versions?status=approved")).find((v) => v.name === seededVersionName)!;
+  const v1 = (await getJson<{ items: VersionSummary[] }>(api, "/api/model-versions?status=approved")).items.find((v) => v.name === seededVersionName)!;
   const run = await postJson<RunSummary>(api, "/api/runs", {
     name: names.runToCancel,
     modelVersionId: v1.id,

@@ -23,7 +23,7 @@ export async function waitForRun(api: APIRequestContext, id: string, timeoutMs =
 
 /** The ids of seeded pathways by name. */
 export async function pathwayIds(api: APIRequestContext, wanted: readonly string[]): Promise<string[]> {
-  const all = await getJson<PathwaySummary[]>(api, "/api/pathways");
+  const { items: all } = await getJson<{ items: PathwaySummary[] }>(api, "/api/pathways?limit=200");
   return wanted.map((name) => {
     const found = all.find((p) => p.name === name);
     expect(found, `pathway ${name}`).toBeTruthy();

@@ -58,6 +58,7 @@ async function api<T>(method: string, url: string, body?: unknown): Promise<{ st
   if (setCookies.length > 0) cookie = setCookies.map((c) => c.split(";")[0]).join("; ");
   return { status: res.status, body: (text ? JSON.parse(text) : null) as T, ms };
 }
+/** Lists answer `{ items, total }`; a server from before paging answered a bare array. */
 const items = <T>(body: T[] | { items: T[] }): T[] => (Array.isArray(body) ? body : body.items);
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
@@ -101,9 +102,9 @@ async function createRun(version: { id: string }, pathways: Array<{ id: string }
 async function main() {
   const signIn = await api("POST", "/api/auth/sign-in/email", { email, password });
   if (signIn.status !== 200) throw new Error(`sign-in failed (${signIn.status}); is the demo seed loaded?`);
-  const version = items((await api<Array<{ id: string }>>("GET", "/api/model-versions?status=approved")).body)[0];
+  const version = items((await api<{ items: Array<{ id: string }> }>("GET", "/api/model-versions?status=approved")).body)[0];
   if (!version) throw new Error("no approved model version on the server");
-  const pathways = items((await api<Array<{ id: string; name: string }>>("GET", "/api/pathways")).body).slice(0, pathwayCount);
+  const pathways = items((await api<{ items: Array<{ id: string; name: string }> }>("GET", "/api/pathways?limit=200")).body).slice(0, pathwayCount);
   if (pathways.length < pathwayCount) throw new Error(`the server has only ${pathways.length} pathways`);
   const common = { members, pathways: pathways.map((p) => p.name), loadAverage: round(os.loadavg()[0]!, 2), cores: os.availableParallelism() };
 

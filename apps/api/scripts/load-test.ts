@@ -118,10 +118,11 @@ async function main() {
   };
 
   // 2. Runs from two people, and 3. GET latency while they execute.
-  const versions = await api<Array<{ id: string }>>(analyst, "GET", "/api/model-versions?status=approved");
-  const version = versions.body[0];
-  const pathways = await api<Array<{ id: string; name: string }>>(analyst, "GET", "/api/pathways");
-  const pathway = pathways.body.find((p) => p.name === "Harbourline Middle") ?? pathways.body[0];
+  // Lists answer one page, { items, total }.
+  const versions = await api<{ items: Array<{ id: string }> }>(analyst, "GET", "/api/model-versions?status=approved");
+  const version = versions.body.items[0];
+  const pathways = await api<{ items: Array<{ id: string; name: string }> }>(analyst, "GET", "/api/pathways?limit=200");
+  const pathway = pathways.body.items.find((p) => p.name === "Harbourline Middle") ?? pathways.body.items[0];
   if (!version || !pathway) throw new Error("no approved model version or pathway on the server (demo seed?)");
 
   const r0 = performance.now();
@@ -146,12 +147,13 @@ async function main() {
   let poll = 0;
   while (finished.size < runIds.length && !pastDeadline()) {
     const url = poll++ % 2 === 0 ? "/api/runs" : "/api/pathways";
-    const res = await api<Array<{ id: string; status: string }>>(poll % 4 < 2 ? analyst : actuary, "GET", url);
+    const res = await api<{ items: Array<{ id: string; status: string }> }>(poll % 4 < 2 ? analyst : actuary, "GET", url);
     getLatencies.push(res.ms);
     getStatuses.push(res.status);
-    if (url === "/api/runs" && Array.isArray(res.body)) {
+    // The newest 50 runs hold this test's runs (it made at most a few dozen just now).
+    if (url === "/api/runs" && Array.isArray(res.body.items)) {
       finished = new Map(
-        res.body.filter((r) => runIds.includes(r.id) && !["queued", "running"].includes(r.status)).map((r) => [r.id, r.status]),
+        res.body.items.filter((r) => runIds.includes(r.id) && !["queued", "running"].includes(r.status)).map((r) => [r.id, r.status]),
       );
     }
     await new Promise((resolve) => setTimeout(resolve, 100));

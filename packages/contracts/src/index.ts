@@ -23,6 +23,7 @@ export * from "./api/perils.js";
 export * from "./api/run-statements.js";
 export * from "./format/number-format.js";
 export * from "./format/input-labels.js";
+export * from "./api/paging.js";
 export * from "./format/time-format.js";
 export * from "./compose/index.js";
 export * from "./format/palette.js";

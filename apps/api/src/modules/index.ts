@@ -1,5 +1,5 @@
 import type { Router } from "express";
-import { auditRouter } from "./audit/audit.routes.js";
+import { auditCsvRouter, auditRouter } from "./audit/audit.routes.js";
 import { healthRouter } from "./health/health.routes.js";
 import { meRouter } from "./me/me.routes.js";
 import { outboxRouter } from "./outbox/outbox.routes.js";
@@ -24,6 +24,7 @@ export const moduleRouters: ReadonlyArray<readonly [path: string, router: Router
   ["/me", meRouter],
   ["/users", usersRouter],
   ["/audit", auditRouter],
+  ["/audit.csv", auditCsvRouter],
   ["/outbox", outboxRouter],
   ["/settings", settingsRouter],
   // domain (pathways, model-versions, runs, results, exports)

@@ -17,7 +17,7 @@ describe("seedPerils", () => {
     expect(await seedPerils(t.ctx, t.userIds)).toEqual({ profiles: demoPerilProfiles.length, portfolioRows: 5 });
     const actuary = await signIn(t.app, "actuary");
     const profiles = await actuary.get("/api/peril-profiles");
-    expect(profiles.body.map((p: { id: string }) => p.id).sort()).toEqual(demoPerilProfiles.map((p) => p.id).sort());
+    expect(profiles.body.items.map((p: { id: string }) => p.id).sort()).toEqual(demoPerilProfiles.map((p) => p.id).sort());
     const [portfolio] = (await actuary.get("/api/portfolios")).body;
     const preview = await actuary.post("/api/portfolios/upload").field("preview", "true").attach("file", Buffer.from(demoPortfolioCsv()), "demo.csv");
     expect(portfolio.checksum).toBe(preview.body.checksum);

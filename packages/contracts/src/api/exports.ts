@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { authorAndDateFilters, pagedQuerySchema, pageSchema, type ListQueryInput } from "./paging.js";
 
 /** Tables a run result can be exported as, one CSV each (docs/API.md). */
 export const RESULT_TABLES = [
@@ -35,10 +36,16 @@ export const MEMBER_SHEET_MAX_MEMBERS = 10_000;
 
 export const EXPORT_FORMATS = ["csv", "xlsx", "pdf", "zip"] as const;
 
-export const listExportsQuerySchema = z.object({
+export const EXPORT_SORT_KEYS = ["createdAt", "fileName", "format", "byteSize"] as const;
+/** GET /api/exports: `q` searches the file name, table and the run's name; `author` who exported it. */
+export const listExportsQuerySchema = pagedQuerySchema(EXPORT_SORT_KEYS, "createdAt:desc").extend({
   mine: z.enum(["true", "false"], { error: 'must be "true" or "false"' }).optional(),
   runId: z.string().min(1).optional(),
+  format: z.enum(EXPORT_FORMATS, { error: `must be one of ${EXPORT_FORMATS.join(", ")}` }).optional(),
+  ...authorAndDateFilters,
 });
+export type ListExportsQuery = z.infer<typeof listExportsQuerySchema>;
+export type ListExportsQueryInput = ListQueryInput<typeof listExportsQuerySchema>;
 
 export const exportRecordSchema = z.object({
   id: z.string(),
@@ -58,6 +65,8 @@ export const exportRecordSchema = z.object({
   createdAt: z.string(),
 });
 export type ExportRecord = z.infer<typeof exportRecordSchema>;
+export const exportPageSchema = pageSchema(exportRecordSchema);
+export type ExportPage = z.infer<typeof exportPageSchema>;
 
 /**
  * Limitations shown beside results on screens and in every export (README "Cautions" says the

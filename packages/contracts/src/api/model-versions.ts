@@ -2,6 +2,7 @@ import { z } from "zod";
 import { modelSpecSchema, percentileSchema } from "../engine/run-spec.js";
 import { boundedUniqueList, MAX_HORIZONS, MAX_PERCENTILES, MAX_THRESHOLDS } from "../engine/spec-limits.js";
 import { defaultRunSettings } from "../engine/default-assumptions.js";
+import { authorAndDateFilters, pagedQuerySchema, pageSchema, type ListQueryInput } from "./paging.js";
 
 /**
  * Model versions: the uncertainty assumptions (the engine's `model` object) plus the run
@@ -75,9 +76,14 @@ export const decideModelVersionBodySchema = z
 
 export const retireModelVersionBodySchema = z.object({ comment: z.string().max(4000).optional() }).strict();
 
-export const listModelVersionsQuerySchema = z.object({
+export const MODEL_VERSION_SORT_KEYS = ["updatedAt", "createdAt", "name", "versionNumber", "status"] as const;
+/** GET /api/model-versions: `q` searches name and notes; `author` the author's name or email. */
+export const listModelVersionsQuerySchema = pagedQuerySchema(MODEL_VERSION_SORT_KEYS, "updatedAt:desc").extend({
   status: z.enum(MODEL_VERSION_STATUSES, { error: `must be one of ${MODEL_VERSION_STATUSES.join(", ")}` }).optional(),
+  ...authorAndDateFilters,
 });
+export type ListModelVersionsQuery = z.infer<typeof listModelVersionsQuerySchema>;
+export type ListModelVersionsQueryInput = ListQueryInput<typeof listModelVersionsQuerySchema>;
 
 export const diffModelVersionQuerySchema = z.object({ against: z.string().min(1).optional() });
 
@@ -98,6 +104,8 @@ export const modelVersionSummarySchema = z.object({
   decidedAt: z.string().nullable(),
 });
 export type ModelVersionSummary = z.infer<typeof modelVersionSummarySchema>;
+export const modelVersionPageSchema = pageSchema(modelVersionSummarySchema);
+export type ModelVersionPage = z.infer<typeof modelVersionPageSchema>;
 
 export const modelVersionSchema = modelVersionSummarySchema.extend({
   model: modelSpecSchema,

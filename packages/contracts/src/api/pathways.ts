@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { pathwayAgentsSchema } from "../engine/run-spec.js";
 import { MAX_YEAR, MIN_YEAR, plausibleYear } from "../engine/spec-limits.js";
+import { authorAndDateFilters, pagedQuerySchema, pageSchema, type ListQueryInput } from "./paging.js";
 import { pathwayRecipeSchema } from "../compose/pathway-recipe.js";
 
 /**
@@ -92,6 +93,17 @@ export const pathwaySummarySchema = z.object({
   createdAt: z.string(),
 });
 export type PathwaySummary = z.infer<typeof pathwaySummarySchema>;
+export const pathwayPageSchema = pageSchema(pathwaySummarySchema);
+export type PathwayPage = z.infer<typeof pathwayPageSchema>;
+
+export const PATHWAY_SORT_KEYS = ["createdAt", "name", "startYear", "endYear"] as const;
+/** GET /api/pathways: `q` searches name, description, source and vintage; `author` the uploader's name or email. */
+export const listPathwaysQuerySchema = pagedQuerySchema(PATHWAY_SORT_KEYS, "createdAt:desc").extend({
+  locked: z.enum(["true", "false"], { error: 'must be "true" or "false"' }).optional(),
+  ...authorAndDateFilters,
+});
+export type ListPathwaysQuery = z.infer<typeof listPathwaysQuerySchema>;
+export type ListPathwaysQueryInput = ListQueryInput<typeof listPathwaysQuerySchema>;
 
 /** A pathway in full: `agents` is the series object exactly as the engine's pathway spec takes it. */
 export const pathwaySchema = pathwaySummarySchema.extend({ agents: pathwayAgentsSchema });

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { perilProfileSchema, TABLE_WARMING_RANGE } from "../engine/peril-profile.js";
 import { portfolioRowSchema } from "../engine/peril-portfolio.js";
+import { authorAndDateFilters, pagedQuerySchema, pageSchema, type ListQueryInput } from "./paging.js";
 
 /**
  * Peril profiles and portfolio baselines over the REST API (docs/API.md "peril-profiles",
@@ -48,6 +49,17 @@ export const perilProfileRecordSchema = z.object({
   updatedAt: z.string(),
 });
 export type PerilProfileRecord = z.infer<typeof perilProfileRecordSchema>;
+export const perilProfilePageSchema = pageSchema(perilProfileRecordSchema);
+export type PerilProfilePage = z.infer<typeof perilProfilePageSchema>;
+
+export const PERIL_PROFILE_SORT_KEYS = ["peril", "region", "name", "updatedAt", "createdAt"] as const;
+/** GET /api/peril-profiles: `q` searches name, peril, region and source; `author` the creator's name or email. */
+export const listPerilProfilesQuerySchema = pagedQuerySchema(PERIL_PROFILE_SORT_KEYS, "peril:asc").extend({
+  metric: z.enum(["frequency", "severity"], { error: "must be one of frequency, severity" }).optional(),
+  ...authorAndDateFilters,
+});
+export type ListPerilProfilesQuery = z.infer<typeof listPerilProfilesQuerySchema>;
+export type ListPerilProfilesQueryInput = ListQueryInput<typeof listPerilProfilesQuerySchema>;
 
 const DEFAULT_CURVE_PERCENTILES = [5, 17, 50, 83, 95];
 /** Most warming levels a preview curve may ask for (keeps the response small). */

@@ -2,6 +2,7 @@ import { z } from "zod";
 import { MAX_MEMBERS, percentileSchema } from "../engine/run-spec.js";
 import { boundedUniqueList, MAX_HORIZONS, MAX_PATHWAYS_PER_RUN, MAX_PERCENTILES, MAX_THRESHOLDS } from "../engine/spec-limits.js";
 import { MODEL_VERSION_STATUSES } from "./model-versions.js";
+import { authorAndDateFilters, pagedQuerySchema, pageSchema, type ListQueryInput } from "./paging.js";
 
 /** Runs: an ensemble of one model version over one or more pathways, executed by the queue. */
 export const RUN_STATUSES = ["queued", "running", "succeeded", "failed", "cancelled"] as const;
@@ -34,10 +35,15 @@ export const createRunBodySchema = z
   .strict();
 export type CreateRunBody = z.input<typeof createRunBodySchema>;
 
-export const listRunsQuerySchema = z.object({
+export const RUN_SORT_KEYS = ["createdAt", "name", "status", "members"] as const;
+/** GET /api/runs: `q` searches the run's name; `author` the creator's name or email. */
+export const listRunsQuerySchema = pagedQuerySchema(RUN_SORT_KEYS, "createdAt:desc").extend({
   mine: z.enum(["true", "false"], { error: 'must be "true" or "false"' }).optional(),
   status: z.enum(RUN_STATUSES, { error: `must be one of ${RUN_STATUSES.join(", ")}` }).optional(),
+  ...authorAndDateFilters,
 });
+export type ListRunsQuery = z.infer<typeof listRunsQuerySchema>;
+export type ListRunsQueryInput = ListQueryInput<typeof listRunsQuerySchema>;
 
 export const runSummarySchema = z.object({
   id: z.string(),
@@ -72,6 +78,8 @@ export const runSummarySchema = z.object({
   cancelRequested: z.boolean(),
 });
 export type RunSummary = z.infer<typeof runSummarySchema>;
+export const runPageSchema = pageSchema(runSummarySchema);
+export type RunPage = z.infer<typeof runPageSchema>;
 
 export const runSchema = runSummarySchema.extend({
   manifest: z.object({

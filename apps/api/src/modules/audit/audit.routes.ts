@@ -8,3 +8,8 @@ import { auditInputs as input } from "./audit.inputs.js";
 export const auditRouter = Router();
 
 auditRouter.get("/", authenticate, requirePermission("audit:read"), validate(input.list), auditController.list);
+
+/** Mounted at /audit.csv: the same filters as the list, the whole trail as one file. */
+export const auditCsvRouter = Router();
+
+auditCsvRouter.get("/", authenticate, requirePermission("audit:read"), validate(input.list), auditController.csv);

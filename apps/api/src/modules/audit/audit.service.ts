@@ -1,5 +1,11 @@
-import type { AuditEvent, AuditQuery } from "@plumeline/contracts";
-import { Op, type Transaction, type WhereOptions } from "sequelize";
+import { SIGN_IN_ACTION, type AUDIT_SORT_KEYS, type AuditEvent, type AuditPage, type AuditQuery } from "@plumeline/contracts";
+import { literal, Op, type Sequelize, type Transaction, type WhereOptions } from "sequelize";
+import type { Literal } from "sequelize/lib/utils";
+import { createdBetween } from "../../db/paging/date-range.js";
+import { findPage, type SortColumns } from "../../db/paging/find-page.js";
+import { anyContains, idNamed } from "../../db/paging/like-pattern.js";
+import { csvRecord } from "../exports/csv-writer.js";
+import { auditNames, ENTITY_NAME_SOURCES } from "./audit-names.js";
 import type { Models } from "../../db/models.js";
 import type { AuditEventModel } from "./audit-event.model.js";
 
@@ -42,32 +48,79 @@ export async function recordAudit(ctx: { models: Models }, input: AuditInput, tr
   return toAuditEvent(row);
 }
 
-/** Filtered, newest-first page of the audit trail. */
-export async function listAudit(ctx: { models: Models }, query: AuditQuery): Promise<{ items: AuditEvent[]; total: number }> {
-  const where: Record<string | symbol, unknown> = {};
-  if (query.action) where.action = query.action;
-  if (query.entityType) where.entityType = query.entityType;
-  if (query.entityId) where.entityId = query.entityId;
-  if (query.actorId) where.actorId = query.actorId;
-  const range: Record<symbol, Date> = {};
-  if (query.from) range[Op.gte] = startOf(query.from);
-  if (query.to) range[Op.lte] = endOf(query.to);
-  if (query.from || query.to) where.createdAt = range;
-  const { rows, count } = await ctx.models.AuditEvent.findAndCountAll({
-    where: where as WhereOptions,
-    order: [["createdAt", "DESC"], ["id", "DESC"]],
-    limit: query.limit,
-    offset: query.offset,
-  });
-  return { items: rows.map(toAuditEvent), total: count };
+const AUDIT_SORT_COLUMNS: SortColumns<(typeof AUDIT_SORT_KEYS)[number]> = {
+  createdAt: ["createdAt"],
+  action: ["action", "createdAt"],
+  entityType: ["entityType", "createdAt"],
+};
+
+/** The filters of an audit query as where conditions (sign-in hiding aside). */
+function auditConditions(ctx: { sequelize: Sequelize }, query: AuditQuery): Array<WhereOptions | Literal> {
+  const { sequelize } = ctx;
+  const conditions: Array<WhereOptions | Literal> = [...createdBetween(query)];
+  if (query.action) conditions.push({ action: query.action });
+  if (query.entityType) conditions.push({ entityType: query.entityType });
+  if (query.entityId) conditions.push({ entityId: query.entityId });
+  if (query.actorId) conditions.push({ actorId: query.actorId });
+  // A failed sign-in has no actor id, only the address typed, so the email is searched too.
+  const actorByName = (text: string) => idNamed(sequelize, "actor_id", "users", ["name", "email"], text);
+  if (query.actor) conditions.push(anyContains(sequelize, ["actor_email"], query.actor, [actorByName(query.actor)]));
+  if (query.entity) conditions.push(entityNamed(sequelize, query.entity));
+  if (query.q) conditions.push(anyContains(sequelize, ["summary", "action", "entity_type", "actor_email"], query.q, [actorByName(query.q)]));
+  return conditions;
 }
 
-/** A bare date means the whole day: `from` at its first instant, `to` at its last. */
-function startOf(value: string): Date {
-  return new Date(/^\d{4}-\d{2}-\d{2}$/.test(value) ? `${value}T00:00:00.000Z` : value);
+/** The row's entity (of any type that has a name) is named like the text. */
+function entityNamed(sequelize: Sequelize, text: string): Literal {
+  const perType = Object.entries(ENTITY_NAME_SOURCES).map(
+    ([type, source]) => `(entity_type = ${sequelize.escape(type)} AND ${idNamed(sequelize, "entity_id", source.table, source.nameColumns, text)})`,
+  );
+  return literal(`(${perType.join(" OR ")})`);
 }
-function endOf(value: string): Date {
-  return new Date(/^\d{4}-\d{2}-\d{2}$/.test(value) ? `${value}T23:59:59.999Z` : value);
+
+/**
+ * Filtered page of the audit trail (newest first by default) with each row's actor and
+ * entity named. With `hideSignIns=true` successful sign-ins are left out and counted instead.
+ */
+export async function listAudit(ctx: { models: Models; sequelize: Sequelize }, query: AuditQuery): Promise<AuditPage> {
+  const conditions = auditConditions(ctx, query);
+  const hide = query.hideSignIns === "true";
+  const [{ rows, total }, hiddenSignIns] = await Promise.all([
+    findPage(ctx.models.AuditEvent, { conditions: hide ? [...conditions, { action: { [Op.ne]: SIGN_IN_ACTION } }] : conditions, page: query, sortColumns: AUDIT_SORT_COLUMNS }),
+    hide ? ctx.models.AuditEvent.count({ where: { [Op.and]: [...conditions, { action: SIGN_IN_ACTION }] } }) : Promise.resolve(0),
+  ]);
+  return { items: await presentAudit(ctx.models, rows), total, hiddenSignIns };
+}
+
+/** Rows per database read while writing the CSV: bounds memory whatever the trail's size. */
+const CSV_BATCH_ROWS = 500;
+export const AUDIT_CSV_COLUMNS = ["time_utc", "action", "actor_name", "actor_email", "entity_type", "entity_id", "entity_name", "summary"];
+
+/**
+ * The whole filtered trail as CSV (header row, ISO 8601 UTC times), in the query's sort
+ * order, ignoring limit/offset: `write` receives it in batches so a long trail streams.
+ */
+export async function writeAuditCsv(ctx: { models: Models; sequelize: Sequelize }, query: AuditQuery, write: (chunk: string) => void): Promise<number> {
+  const conditions = auditConditions(ctx, query);
+  if (query.hideSignIns === "true") conditions.push({ action: { [Op.ne]: SIGN_IN_ACTION } });
+  write(csvRecord(AUDIT_CSV_COLUMNS));
+  let written = 0;
+  for (;;) {
+    const { rows } = await findPage(ctx.models.AuditEvent, { conditions, page: { sort: query.sort, limit: CSV_BATCH_ROWS, offset: written }, sortColumns: AUDIT_SORT_COLUMNS });
+    const events = await presentAudit(ctx.models, rows);
+    write(events.map((e) => csvRecord([e.createdAt, e.action, e.actorName, e.actorEmail, e.entityType, e.entityId, e.entityName, e.summary])).join(""));
+    written += rows.length;
+    if (rows.length < CSV_BATCH_ROWS) return written;
+  }
+}
+
+async function presentAudit(models: Models, rows: AuditEventModel[]): Promise<AuditEvent[]> {
+  const names = await auditNames(models, rows);
+  return rows.map((row) => ({
+    ...toAuditEvent(row),
+    actorName: row.actorId ? (names.actor.get(row.actorId) ?? null) : null,
+    entityName: row.entityId ? (names.entity.get(`${row.entityType}:${row.entityId}`) ?? null) : null,
+  }));
 }
 
 export function toAuditEvent(row: AuditEventModel): AuditEvent {
@@ -80,6 +133,8 @@ export function toAuditEvent(row: AuditEventModel): AuditEvent {
     entityId: row.entityId,
     summary: row.summary,
     data: row.data ?? null,
+    actorName: null,
+    entityName: null,
     createdAt: row.createdAt.toISOString(),
   };
 }

@@ -1,8 +1,10 @@
 import { QueryTypes } from "sequelize";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { expectBadQuery } from "../../test-support/list-fixtures.js";
 import { signIn, type SignedInAgent } from "../../test-support/sign-in.js";
-import { createTestContext, type TestContext } from "../../test-support/test-context.js";
+import { createTestContext, TEST_ORIGIN, type TestContext } from "../../test-support/test-context.js";
+import { testPathwayBody } from "../runs/runs.fixtures.js";
 import { AuditAppendOnlyError } from "./audit-event.model.js";
 import { recordAudit } from "./audit.service.js";
 
@@ -78,10 +80,63 @@ describe("GET /api/audit", () => {
     expect((await manager.get("/api/audit?to=2000-01-01")).body.total).toBe(0);
   });
 
+  it("names the actor and the entity of each row, and filters by those names", async () => {
+    const analyst = await signIn(t.app, "analyst");
+    const pathway = await analyst.post("/api/pathways").send(testPathwayBody("Harbour_front ramp"));
+    expect(pathway.status).toBe(201);
+    const byEntity = await manager.get("/api/audit?entity=harbour_front");
+    expect(byEntity.body.total).toBe(1);
+    expect(byEntity.body.items[0]).toMatchObject({ action: "pathway.created", entityId: pathway.body.id, entityName: "Harbour_front ramp", actorName: "Ines Calloway" });
+    // "_" is literal: "harbourXfront" must not match.
+    expect((await manager.get("/api/audit?entity=harbour_fron")).body.total).toBe(1);
+    expect((await manager.get("/api/audit?entity=harbourXfront")).body.total).toBe(0);
+    // Ines Calloway (the demo analyst) by name and by email; Marit Oyelaran is the manager.
+    const byActor = await manager.get("/api/audit?actor=calloway&action=pathway.created");
+    expect(byActor.body.total).toBe(6);
+    expect((await manager.get("/api/audit?actor=analyst@harbourline&action=pathway.created")).body.total).toBe(6);
+    expect((await manager.get("/api/audit?actor=oyelaran&action=pathway.created")).body.total).toBe(0);
+    expect((await manager.get("/api/audit?q=oyelaran&action=model-version.approved")).body.total).toBe(1);
+    expect((await manager.get("/api/audit?q=version 7 APPROVED")).body.total).toBe(1);
+  });
+
+  it("hides successful sign-ins on request and counts them; failed sign-ins stay", async () => {
+    await request(t.app).post("/api/auth/sign-in/email").set("Origin", TEST_ORIGIN).send({ email: "nobody@harbourline.example", password: "wrong-password" });
+    const all = await manager.get("/api/audit?limit=200");
+    const signIns = all.body.items.filter((e: { action: string }) => e.action === "auth.signed-in").length;
+    expect(signIns).toBeGreaterThan(0);
+    const hidden = await manager.get("/api/audit?limit=200&hideSignIns=true");
+    expect(hidden.body.hiddenSignIns).toBe(signIns);
+    expect(hidden.body.total).toBe(all.body.total - signIns);
+    expect(hidden.body.items.some((e: { action: string }) => e.action === "auth.signed-in")).toBe(false);
+    expect(hidden.body.items.some((e: { action: string }) => e.action === "auth.sign-in-failed")).toBe(true);
+    expect(all.body.hiddenSignIns).toBe(0);
+  });
+
+  it("sorts by action", async () => {
+    const actions = (await manager.get("/api/audit?sort=action:asc&limit=200")).body.items.map((e: { action: string }) => e.action);
+    expect(actions).toEqual([...actions].sort());
+  });
+
+  it("exports the filtered trail as CSV with a header row and ISO UTC times", async () => {
+    const res = await manager.get("/api/audit.csv?action=pathway.created&sort=createdAt:asc&limit=1").buffer(true);
+    expect(res.status).toBe(200);
+    expect(res.headers["content-type"]).toMatch(/^text\/csv/);
+    expect(res.headers["content-disposition"]).toMatch(/attachment; filename="plumeline-audit-\d{4}-\d{2}-\d{2}\.csv"/);
+    const lines = res.text.trimEnd().split("\r\n");
+    expect(lines[0]).toBe("time_utc,action,actor_name,actor_email,entity_type,entity_id,entity_name,summary");
+    // limit/offset page the screen, not the file: all six pathway rows are in it, oldest first.
+    expect(lines).toHaveLength(7);
+    expect(lines[1]).toMatch(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}\.\d{3}Z,pathway\.created,Ines Calloway,analyst@harbourline\.example,pathway,p1,,Pathway p1 created\.$/);
+    expect(lines[6]).toMatch(/^[^,]+,pathway\.created,Ines Calloway,analyst@harbourline\.example,pathway,[0-9a-f-]{36},Harbour_front ramp,/);
+    await expectBadQuery(manager, "/api/audit.csv?from=2026-02-31", ["from"]);
+    expect((await request(t.app).get("/api/audit.csv")).status).toBe(401);
+  });
+
   it("answers 400 listing each bad query field", async () => {
     const res = await manager.get("/api/audit?limit=0&from=yesterday");
     expect(res.status).toBe(400);
     expect(res.body.error.details.map((d: { path: string }) => d.path).sort()).toEqual(["from", "limit"]);
+    await expectBadQuery(manager, "/api/audit?to=2026-13-01&limit=201&sort=summary:asc&hideSignIns=yes", ["to", "limit", "sort", "hideSignIns"]);
   });
 
   it("answers 401 without a session and 403 for roles without audit:read", async () => {

@@ -13,8 +13,11 @@ function field(cell: TableCell): string {
   return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }
 
+/** One CSV record with its CRLF, for writers that stream rows batch by batch. */
+export function csvRecord(cells: readonly TableCell[]): string {
+  return cells.map(field).join(",") + "\r\n";
+}
+
 export function tableToCsv(table: Table): string {
-  const lines = [table.columns.map(field).join(",")];
-  for (const row of table.rows) lines.push(row.map(field).join(","));
-  return lines.join("\r\n") + "\r\n";
+  return csvRecord(table.columns) + table.rows.map(csvRecord).join("");
 }

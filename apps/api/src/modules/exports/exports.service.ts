@@ -1,6 +1,10 @@
 import { randomUUID } from "node:crypto";
-import { MEMBER_TABLE, type ExportRecord, type ResultTable } from "@plumeline/contracts";
-import { Op } from "sequelize";
+import { MEMBER_TABLE, type EXPORT_SORT_KEYS, type ExportRecord, type ListExportsQuery, type Page, type ResultTable } from "@plumeline/contracts";
+import { Op, type WhereOptions } from "sequelize";
+import type { Literal } from "sequelize/lib/utils";
+import { createdBetween } from "../../db/paging/date-range.js";
+import { findPage, type SortColumns } from "../../db/paging/find-page.js";
+import { anyContains, idNamed, personMatches } from "../../db/paging/like-pattern.js";
 import type { AppContext } from "../../context.js";
 import { conflict, notFound } from "../../errors/app-error.js";
 import type { RequestUser } from "../../middleware/request-context.js";
@@ -162,11 +166,30 @@ export async function downloadExportAgain(ctx: Ctx, user: RequestUser, exportId:
   return { ...file, fileName: record.fileName };
 }
 
-export async function listExports(ctx: Ctx, user: RequestUser, query: { mine?: "true" | "false"; runId?: string }): Promise<ExportRecord[]> {
-  const where: Record<string, unknown> = {};
-  if (query.mine === "true") where.createdBy = user.id;
-  if (query.runId) where.runId = query.runId;
-  const rows: ExportRecordModel[] = await ctx.models.ExportRecord.findAll({ where, order: [["createdAt", "DESC"]], limit: 500 });
+const EXPORT_SORT_COLUMNS: SortColumns<(typeof EXPORT_SORT_KEYS)[number]> = {
+  createdAt: ["createdAt"],
+  fileName: ["fileName"],
+  format: ["format"],
+  byteSize: ["byteSize"],
+};
+
+/**
+ * One page of the export register: `q` in the file name, the table or the run's name;
+ * `author` in the exporter's name or email; mine, run, format, created from/to.
+ */
+export async function listExports(ctx: Ctx, user: RequestUser, query: ListExportsQuery): Promise<Page<ExportRecord>> {
+  const conditions: Array<WhereOptions | Literal> = [...createdBetween(query)];
+  if (query.mine === "true") conditions.push({ createdBy: user.id });
+  if (query.runId) conditions.push({ runId: query.runId });
+  if (query.format) conditions.push({ format: query.format });
+  if (query.author) conditions.push(personMatches(ctx.sequelize, "created_by", query.author));
+  // The run's name is searched too ("the workbook of the coastal run"), through a sub-select.
+  if (query.q) conditions.push(anyContains(ctx.sequelize, ["file_name", "table_name"], query.q, [idNamed(ctx.sequelize, "run_id", "runs", ["name"], query.q)]));
+  const { rows, total } = await findPage(ctx.models.ExportRecord, { conditions, page: query, sortColumns: EXPORT_SORT_COLUMNS });
+  return { items: await presentExports(ctx, rows), total };
+}
+
+async function presentExports(ctx: Ctx, rows: ExportRecordModel[]): Promise<ExportRecord[]> {
   const runs = await ctx.models.Run.findAll({ where: { id: { [Op.in]: [...new Set(rows.map((r) => r.runId))] } }, attributes: ["id", "name"] });
   const users = await ctx.models.User.findAll({ where: { id: { [Op.in]: [...new Set(rows.map((r) => r.createdBy))] } }, attributes: ["id", "name"] });
   const runName = new Map(runs.map((r) => [r.id, r.name]));

@@ -162,8 +162,8 @@ describe("GET /api/runs/:id/workbook.xlsx", () => {
   it("records the export (exports table + audit) and lists it", async () => {
     const list = await actuary.get("/api/exports?mine=true");
     expect(list.status).toBe(200);
-    expect(list.body[0]).toMatchObject({ runId, format: "xlsx", table: "workbook", exploratory: true, resultHash: result.resultHash });
-    expect(list.body[0].checksum).toMatch(/^[0-9a-f]{64}$/);
+    expect(list.body.items[0]).toMatchObject({ runId, format: "xlsx", table: "workbook", exploratory: true, resultHash: result.resultHash });
+    expect(list.body.items[0].checksum).toMatch(/^[0-9a-f]{64}$/);
     expect(await t.ctx.models.AuditEvent.count({ where: { action: "export.created", entityId: runId } })).toBe(1);
   });
 
@@ -261,7 +261,7 @@ describe("GET /api/runs/:id/tables.zip", () => {
 
 describe("GET /api/exports/:exportId/file", () => {
   it("downloads any past export again, rebuilt and checked against its recorded checksum", async () => {
-    const list = (await actuary.get(`/api/exports?runId=${runId}&mine=true`)).body as Array<{ id: string; format: string; checksum: string; fileName: string }>;
+    const list = (await actuary.get(`/api/exports?runId=${runId}&mine=true`)).body.items as Array<{ id: string; format: string; checksum: string; fileName: string }>;
     for (const format of ["csv", "xlsx", "pdf", "zip"]) {
       const record = list.find((r) => r.format === format)!;
       expect(record, format).toBeDefined();

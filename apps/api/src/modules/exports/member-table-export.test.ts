@@ -75,8 +75,8 @@ describe("GET /api/runs/:id/tables/members.csv", () => {
 
   it("records the export in the register with the checksum of the bytes handed out", async () => {
     const list = await actuary.get(`/api/exports?runId=${small.runId}`);
-    expect(list.body[0]).toMatchObject({ table: "members", format: "csv", resultHash: small.result.resultHash });
-    expect(list.body[0].checksum).toMatch(/^[0-9a-f]{64}$/);
+    expect(list.body.items[0]).toMatchObject({ table: "members", format: "csv", resultHash: small.result.resultHash });
+    expect(list.body.items[0].checksum).toMatch(/^[0-9a-f]{64}$/);
   });
 
   it("refuses with 409 when the stored engine version or result hash does not come back, and records nothing", async () => {

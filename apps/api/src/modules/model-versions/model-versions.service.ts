@@ -8,11 +8,17 @@ import {
   type ModelSpec,
   type ModelVersionDefaults,
   type ModelVersionDiff,
-  type ModelVersionStatus,
   type ModelVersionSummary,
   type UpdateModelVersionBody,
+  type ListModelVersionsQuery,
+  type MODEL_VERSION_SORT_KEYS,
+  type Page,
 } from "@plumeline/contracts";
-import { Op, type Transaction } from "sequelize";
+import { Op, type Transaction, type WhereOptions } from "sequelize";
+import type { Literal } from "sequelize/lib/utils";
+import { createdBetween } from "../../db/paging/date-range.js";
+import { findPage, type SortColumns } from "../../db/paging/find-page.js";
+import { anyContains, personMatches } from "../../db/paging/like-pattern.js";
 import type { AppContext } from "../../context.js";
 import { badRequest, conflict, forbidden, notFound } from "../../errors/app-error.js";
 import type { RequestUser } from "../../middleware/request-context.js";
@@ -74,13 +80,23 @@ export async function presentModelVersion(ctx: Pick<Ctx, "models">, row: ModelVe
   return toFull(row, await userNames(ctx, [row.authorId, row.decidedBy]));
 }
 
-export async function listModelVersions(ctx: Ctx, status?: ModelVersionStatus): Promise<ModelVersionSummary[]> {
-  const rows = await ctx.models.ModelVersion.findAll({
-    where: status ? { status } : {},
-    order: [["updatedAt", "DESC"], ["versionNumber", "DESC"]],
-  });
+const MODEL_VERSION_SORT_COLUMNS: SortColumns<(typeof MODEL_VERSION_SORT_KEYS)[number]> = {
+  updatedAt: ["updatedAt", "versionNumber"],
+  createdAt: ["createdAt"],
+  name: ["name", "versionNumber"],
+  versionNumber: ["versionNumber"],
+  status: ["status", "updatedAt"],
+};
+
+/** One page of model versions: `q` in name and notes, `author` in the author's name or email, status, created from/to. */
+export async function listModelVersions(ctx: Ctx, query: ListModelVersionsQuery): Promise<Page<ModelVersionSummary>> {
+  const conditions: Array<WhereOptions | Literal> = [...createdBetween(query)];
+  if (query.status) conditions.push({ status: query.status });
+  if (query.q) conditions.push(anyContains(ctx.sequelize, ["name", "notes"], query.q));
+  if (query.author) conditions.push(personMatches(ctx.sequelize, "author_id", query.author));
+  const { rows, total } = await findPage(ctx.models.ModelVersion, { conditions, page: query, sortColumns: MODEL_VERSION_SORT_COLUMNS });
   const names = await userNames(ctx, rows.flatMap((r) => [r.authorId, r.decidedBy]));
-  return rows.map((r) => toSummary(r, names));
+  return { items: rows.map((r) => toSummary(r, names)), total };
 }
 
 export async function findModelVersion(ctx: Pick<Ctx, "models">, id: string, transaction?: Transaction): Promise<ModelVersionModel> {

@@ -35,7 +35,7 @@ describe("model version lifecycle", () => {
     const read = await actuary.get(`/api/model-versions/${id}`);
     expect(read.status).toBe(200);
     expect(read.body.model.climate.ecs).toMatchObject({ type: "range", p50: 3 });
-    expect((await actuary.get("/api/model-versions?status=draft")).body.map((v: { id: string }) => v.id)).toContain(id);
+    expect((await actuary.get("/api/model-versions?status=draft")).body.items.map((v: { id: string }) => v.id)).toContain(id);
   });
 
   it("answers 401, 403 (no model-versions:write), 400 (every bad field) and 404", async () => {

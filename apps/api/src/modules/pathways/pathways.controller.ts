@@ -6,7 +6,7 @@ import { createPathway, getPathway, listPathways, updatePathway, uploadPathway }
 
 export const pathwaysController = {
   async list(req: Request, res: Response) {
-    res.json(await listPathways(contextOf(req)));
+    res.json(await listPathways(contextOf(req), validated(res, input.list).query));
   },
   async get(req: Request, res: Response) {
     res.json(await getPathway(contextOf(req), validated(res, input.byId).params.id));

@@ -13,7 +13,7 @@ const upload = singleFileUpload("file", MAX_PATHWAY_UPLOAD_BYTES);
 
 export const pathwaysRouter: Router = Router();
 
-pathwaysRouter.get("/", authenticate, requirePermission("pathways:read"), pathwaysController.list);
+pathwaysRouter.get("/", authenticate, requirePermission("pathways:read"), validate(input.list), pathwaysController.list);
 pathwaysRouter.post(
   "/upload",
   authenticate,

@@ -7,8 +7,15 @@ import {
   type PathwayPreview,
   type PathwaySummary,
   type UpdatePathwayBody,
+  type ListPathwaysQuery,
+  type PATHWAY_SORT_KEYS,
+  type Page,
 } from "@plumeline/contracts";
-import { Op, type Transaction } from "sequelize";
+import { Op, type Transaction, type WhereOptions } from "sequelize";
+import type { Literal } from "sequelize/lib/utils";
+import { createdBetween } from "../../db/paging/date-range.js";
+import { findPage, type SortColumns } from "../../db/paging/find-page.js";
+import { anyContains, personMatches } from "../../db/paging/like-pattern.js";
 import type { AppContext } from "../../context.js";
 import { badRequest, conflict, forbidden, notFound } from "../../errors/app-error.js";
 import type { RequestUser } from "../../middleware/request-context.js";
@@ -48,9 +55,24 @@ export function toPathway(row: PathwayModel): Pathway {
   return { ...toPathwaySummary(row), agents: row.agents as Pathway["agents"] };
 }
 
-export async function listPathways(ctx: Ctx): Promise<PathwaySummary[]> {
-  const rows = await ctx.models.Pathway.findAll({ order: [["createdAt", "DESC"], ["name", "ASC"]] });
-  return rows.map(toPathwaySummary);
+const PATHWAY_SORT_COLUMNS: SortColumns<(typeof PATHWAY_SORT_KEYS)[number]> = {
+  createdAt: ["createdAt"],
+  name: ["name"],
+  startYear: ["startYear", "name"],
+  endYear: ["endYear", "name"],
+};
+
+/**
+ * One page of pathways: `q` in name, description, source and vintage; `author` in the
+ * uploader's name or email; locked; created from/to.
+ */
+export async function listPathways(ctx: Ctx, query: ListPathwaysQuery): Promise<Page<PathwaySummary>> {
+  const conditions: Array<WhereOptions | Literal> = [...createdBetween(query)];
+  if (query.locked) conditions.push({ locked: query.locked === "true" });
+  if (query.q) conditions.push(anyContains(ctx.sequelize, ["name", "description", "source", "vintage"], query.q));
+  if (query.author) conditions.push(personMatches(ctx.sequelize, "created_by", query.author));
+  const { rows, total } = await findPage(ctx.models.Pathway, { conditions, page: query, sortColumns: PATHWAY_SORT_COLUMNS });
+  return { items: rows.map(toPathwaySummary), total };
 }
 
 export async function findPathway(ctx: Ctx, id: string, transaction?: Transaction): Promise<PathwayModel> {

@@ -27,7 +27,7 @@ describe("POST /api/pathways and GET /api/pathways[/:id]", () => {
     expect(res.body.checksum).toMatch(/^[0-9a-f]{64}$/);
     const list = await actuary.get("/api/pathways");
     expect(list.status).toBe(200);
-    expect(list.body.find((p: { id: string }) => p.id === res.body.id)).toMatchObject({ agents: ["co2", "aerosol-cloud"], quantities: { co2: "erf" } });
+    expect(list.body.items.find((p: { id: string }) => p.id === res.body.id)).toMatchObject({ agents: ["co2", "aerosol-cloud"], quantities: { co2: "erf" } });
     const one = await actuary.get(`/api/pathways/${res.body.id}`);
     expect(one.status).toBe(200);
     expect(one.body.agents.co2.erf[250]).toBe(4);

@@ -16,7 +16,7 @@ import {
 
 export const perilProfilesController = {
   async list(req: Request, res: Response) {
-    res.json(await listPerilProfiles(contextOf(req)));
+    res.json(await listPerilProfiles(contextOf(req), validated(res, input.list).query));
   },
   async get(req: Request, res: Response) {
     res.json(await getPerilProfile(contextOf(req), validated(res, input.byId).params.id));

@@ -1,6 +1,7 @@
 import {
   copyPerilProfileBodySchema,
   curveRangeSchema,
+  listPerilProfilesQuerySchema,
   perilCurvePreviewBodySchema,
   perilProfileBodySchema,
   updatePerilProfileBodySchema,
@@ -10,6 +11,7 @@ import type { ValidationSchemas } from "../../middleware/validate.js";
 
 /** What each peril-profile endpoint accepts: the route validates it, the controller reads it typed. */
 export const perilProfilesInputs = {
+  list: { query: listPerilProfilesQuerySchema },
   byId: { params: idParams },
   create: { body: perilProfileBodySchema },
   preview: { body: perilCurvePreviewBodySchema },

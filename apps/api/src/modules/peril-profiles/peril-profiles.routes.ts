@@ -7,7 +7,7 @@ import { perilProfilesInputs as input } from "./peril-profiles.inputs.js";
 
 export const perilProfilesRouter: Router = Router();
 
-perilProfilesRouter.get("/", authenticate, requirePermission("perils:read"), c.list);
+perilProfilesRouter.get("/", authenticate, requirePermission("perils:read"), validate(input.list), c.list);
 perilProfilesRouter.post("/", authenticate, requirePermission("perils:write"), validate(input.create), c.create);
 // A draft's curve saves nothing, so reading the lens is enough to ask for it.
 perilProfilesRouter.post("/preview", authenticate, requirePermission("perils:read"), validate(input.preview), c.preview);

@@ -9,8 +9,15 @@ import {
   type PerilProfileBody,
   type PerilProfileRecord,
   type UpdatePerilProfileBody,
+  type ListPerilProfilesQuery,
+  type PERIL_PROFILE_SORT_KEYS,
+  type Page,
 } from "@plumeline/contracts";
-import { Op, type Transaction } from "sequelize";
+import { Op, type Transaction, type WhereOptions } from "sequelize";
+import type { Literal } from "sequelize/lib/utils";
+import { createdBetween } from "../../db/paging/date-range.js";
+import { findPage, type SortColumns } from "../../db/paging/find-page.js";
+import { anyContains, personMatches } from "../../db/paging/like-pattern.js";
 import type { AppContext } from "../../context.js";
 import { badRequest, conflict, forbidden, notFound } from "../../errors/app-error.js";
 import type { RequestUser } from "../../middleware/request-context.js";
@@ -62,9 +69,22 @@ async function present(ctx: Ctx, rows: PerilProfileModel[]): Promise<PerilProfil
   return rows.map((r) => toRecord(r, dependants.get(r.id), names.get(r.createdBy) ?? null));
 }
 
-export async function listPerilProfiles(ctx: Ctx): Promise<PerilProfileRecord[]> {
-  const rows = await ctx.models.PerilProfile.findAll({ order: [["peril", "ASC"], ["region", "ASC"], ["name", "ASC"]] });
-  return present(ctx, rows);
+const PERIL_PROFILE_SORT_COLUMNS: SortColumns<(typeof PERIL_PROFILE_SORT_KEYS)[number]> = {
+  peril: ["peril", "region", "name"],
+  region: ["region", "peril", "name"],
+  name: ["name"],
+  updatedAt: ["updatedAt"],
+  createdAt: ["createdAt"],
+};
+
+/** One page of peril profiles: `q` in name, peril, region and source; `author` in the creator's name or email; metric; created from/to. */
+export async function listPerilProfiles(ctx: Ctx, query: ListPerilProfilesQuery): Promise<Page<PerilProfileRecord>> {
+  const conditions: Array<WhereOptions | Literal> = [...createdBetween(query)];
+  if (query.metric) conditions.push({ metric: query.metric });
+  if (query.q) conditions.push(anyContains(ctx.sequelize, ["name", "peril", "region", "source"], query.q));
+  if (query.author) conditions.push(personMatches(ctx.sequelize, "created_by", query.author));
+  const { rows, total } = await findPage(ctx.models.PerilProfile, { conditions, page: query, sortColumns: PERIL_PROFILE_SORT_COLUMNS });
+  return { items: await present(ctx, rows), total };
 }
 
 export async function findPerilProfile(ctx: Pick<Ctx, "models">, id: string, transaction?: Transaction): Promise<PerilProfileModel> {

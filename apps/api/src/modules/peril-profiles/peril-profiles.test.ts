@@ -56,7 +56,7 @@ describe("peril profiles CRUD", () => {
     expect(created).toMatchObject({ ...rainfall, locked: false, createdBy: t.userIds.analyst, copiedFrom: null });
     const list = await actuary.get("/api/peril-profiles");
     expect(list.status).toBe(200);
-    expect(list.body.map((p: { id: string }) => p.id)).toContain(created.id);
+    expect(list.body.items.map((p: { id: string }) => p.id)).toContain(created.id);
     const one = await manager.get(`/api/peril-profiles/${created.id}`);
     expect(one.status).toBe(200);
     expect(one.body.scaling).toEqual(rainfall.scaling);

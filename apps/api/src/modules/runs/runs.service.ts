@@ -1,6 +1,10 @@
 import { randomUUID } from "node:crypto";
-import type { CreateRunBody, ErrorDetail, Run, RunStatus, RunSummary } from "@plumeline/contracts";
-import { Op } from "sequelize";
+import type { CreateRunBody, ErrorDetail, ListRunsQuery, Page, Run, RUN_SORT_KEYS, RunSummary } from "@plumeline/contracts";
+import { Op, type WhereOptions } from "sequelize";
+import type { Literal } from "sequelize/lib/utils";
+import { createdBetween } from "../../db/paging/date-range.js";
+import { findPage, type SortColumns } from "../../db/paging/find-page.js";
+import { anyContains, personMatches } from "../../db/paging/like-pattern.js";
 import type { AppContext } from "../../context.js";
 import { badRequest, conflict, forbidden, notFound } from "../../errors/app-error.js";
 import type { RequestUser } from "../../middleware/request-context.js";
@@ -22,6 +26,7 @@ import type { RunModel } from "./run.model.js";
 const loadEngine = () => import("@plumeline/engine");
 
 type Ctx = Pick<AppContext, "models" | "sequelize" | "mailer" | "config">;
+type RunSortKey = (typeof RUN_SORT_KEYS)[number];
 
 const iso = (d: Date | null | undefined) => (d ? d.toISOString() : null);
 /** Columns a list needs: the spec (all pathway series) stays out, so the queue screen stays fast. */
@@ -71,12 +76,17 @@ async function present(ctx: Pick<Ctx, "models">, rows: RunModel[]): Promise<RunS
   });
 }
 
-export async function listRuns(ctx: Ctx, user: RequestUser, query: { mine?: "true" | "false"; status?: RunStatus }): Promise<RunSummary[]> {
-  const where: Record<string, unknown> = {};
-  if (query.mine === "true") where.createdBy = user.id;
-  if (query.status) where.status = query.status;
-  const rows = await ctx.models.Run.findAll({ where, attributes: SUMMARY_ATTRIBUTES, order: [["createdAt", "DESC"]], limit: 500 });
-  return present(ctx, rows);
+const RUN_SORT_COLUMNS: SortColumns<RunSortKey> = { createdAt: ["createdAt"], name: ["name"], status: ["status"], members: ["members"] };
+
+/** One page of runs: `q` in the name, `author` in the creator's name or email, status, mine, created from/to. */
+export async function listRuns(ctx: Ctx, user: RequestUser, query: ListRunsQuery): Promise<Page<RunSummary>> {
+  const conditions: Array<WhereOptions | Literal> = [...createdBetween(query)];
+  if (query.mine === "true") conditions.push({ createdBy: user.id });
+  if (query.status) conditions.push({ status: query.status });
+  if (query.q) conditions.push(anyContains(ctx.sequelize, ["name"], query.q));
+  if (query.author) conditions.push(personMatches(ctx.sequelize, "created_by", query.author));
+  const { rows, total } = await findPage(ctx.models.Run, { conditions, page: query, sortColumns: RUN_SORT_COLUMNS, attributes: SUMMARY_ATTRIBUTES });
+  return { items: await present(ctx, rows), total };
 }
 
 export async function findRun(ctx: Pick<Ctx, "models">, id: string): Promise<RunModel> {

@@ -130,7 +130,8 @@ describe("running a job", () => {
   it("lists runs (mine, by status) and replays a run to the same hash", async () => {
     const mine = await actuary.get("/api/runs?mine=true&status=succeeded");
     expect(mine.status).toBe(200);
-    expect(mine.body.map((r: { id: string }) => r.id)).toEqual([runId]);
+    expect(mine.body.items.map((r: { id: string }) => r.id)).toEqual([runId]);
+    expect(mine.body.total).toBe(1);
     expect((await actuary.get("/api/runs?status=bogus")).status).toBe(400);
     // A replay is queued like a run (same queue, same WORKERS limit) ...
     const replay = await actuary.post(`/api/runs/${runId}/replay`);

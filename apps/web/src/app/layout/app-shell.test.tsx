@@ -29,7 +29,7 @@ describe("app shell", () => {
   });
 
   it("shows only the navigation the role may use", async () => {
-    stubFetch((req) => (req.path === "/api/me" ? { body: managerMe } : req.path === "/api/model-versions" ? { body: [] } : req.path === "/api/runs" ? { body: [] } : req.path === "/api/exports" ? { body: [] } : undefined));
+    stubFetch((req) => (req.path === "/api/me" ? { body: managerMe } : ["/api/model-versions", "/api/runs", "/api/exports"].includes(req.path) ? { body: { items: [], total: 0 } } : undefined));
     renderAt("/");
     const nav = await screen.findByRole("navigation", { name: "Main" });
     const labels = [...nav.querySelectorAll("a")].map((a) => a.textContent);

@@ -3,11 +3,11 @@ import { paths } from "@/config/paths";
 import { useMe } from "@/features/auth/api/get-me";
 import { useExports } from "@/features/exports/api/get-exports";
 import { ExportsTable } from "@/features/exports/components/exports-table";
-import { useModelVersions } from "@/features/model-versions/api/get-model-versions";
+import { useModelVersionChoices } from "@/features/model-versions/api/get-model-versions";
 import { ModelVersionsTable } from "@/features/model-versions/components/model-versions-table";
 import { ReturnedToYou } from "@/features/model-versions/components/returned-to-you";
 import { ReviewQueue } from "@/features/model-versions/components/review-queue";
-import { useRuns } from "@/features/runs/api/get-runs";
+import { useRunChoices, useRuns } from "@/features/runs/api/get-runs";
 import { RunsTable } from "@/features/runs/components/runs-table";
 import { ExploratoryStamp } from "@/components/ui/badges";
 import { ButtonLink } from "@/components/ui/button";
@@ -95,7 +95,7 @@ export default function DeskPage() {
 }
 
 function MyRuns({ userId, canCreate, mine }: { userId: string; canCreate: boolean; mine: boolean }) {
-  const runs = useRuns({ mine });
+  const runs = useRuns({ mine, limit: 8 });
   return (
     <Card>
       <CardHeader title={mine ? "My runs" : "Recent runs"} subtitle="Progress updates on its own while runs are going." actions={<Link to={paths.runs.build()} className="text-sm text-accent">All runs →</Link>} />
@@ -105,7 +105,7 @@ function MyRuns({ userId, canCreate, mine }: { userId: string; canCreate: boolea
         <CardBody>
           <ErrorState error={runs.error} />
         </CardBody>
-      ) : runs.data.length === 0 ? (
+      ) : runs.data.items.length === 0 ? (
         <CardBody>
           {/* Someone who cannot start runs gets one quiet line, not a call-to-action box. */}
           {canCreate ? (
@@ -115,14 +115,14 @@ function MyRuns({ userId, canCreate, mine }: { userId: string; canCreate: boolea
           )}
         </CardBody>
       ) : (
-        <RunsTable runs={runs.data.slice(0, 8)} currentUserId={userId} canCreate={canCreate} compact />
+        <RunsTable runs={runs.data.items} currentUserId={userId} canCreate={canCreate} compact />
       )}
     </Card>
   );
 }
 
 function ReviewsWaiting({ userId }: { userId: string }) {
-  const versions = useModelVersions("in-review");
+  const versions = useModelVersionChoices({ status: "in-review" });
   return (
     <Card className="border-l-4 border-l-accent">
       <CardHeader title="Waiting for your review" subtitle="Versions others submitted, for you to approve or reject." />
@@ -141,7 +141,8 @@ function ReviewsWaiting({ userId }: { userId: string }) {
 
 /** My rejected versions nothing has been drafted from yet (a child means the author already acted on it). */
 function ReturnedToMe({ userId }: { userId: string }) {
-  const versions = useModelVersions();
+  // The 200 most recently changed versions: a rejection waiting for its author is recent.
+  const versions = useModelVersionChoices();
   if (!versions.data) return null;
   const drafted = new Set(versions.data.map((v) => v.parentId));
   const returned = versions.data.filter((v) => v.authorId === userId && v.status === "rejected" && !drafted.has(v.id));
@@ -149,7 +150,8 @@ function ReturnedToMe({ userId }: { userId: string }) {
 }
 
 function MyDrafts({ userId }: { userId: string }) {
-  const versions = useModelVersions();
+  // The 200 most recently changed versions hold anyone's work in progress.
+  const versions = useModelVersionChoices();
   const mine = versions.data?.filter((v) => v.authorId === userId && (v.status === "draft" || v.status === "in-review" || v.status === "rejected")) ?? [];
   if (versions.isPending || mine.length === 0) return null;
   return (
@@ -161,7 +163,7 @@ function MyDrafts({ userId }: { userId: string }) {
 }
 
 function ExploratoryFlags() {
-  const runs = useRuns({ status: "succeeded" });
+  const runs = useRunChoices({ status: "succeeded" });
   if (runs.isPending) return null;
   if (runs.isError) return <ErrorState error={runs.error} />;
   const exploratory = runs.data.filter((r) => r.exploratory);
@@ -189,7 +191,7 @@ function ExploratoryFlags() {
 }
 
 function RecentExports() {
-  const exports = useExports(true);
+  const exports = useExports({ mine: true, limit: 5 });
   return (
     <Card>
       <CardHeader title="My recent exports" actions={<Link to={paths.exports.build()} className="text-sm text-accent">All exports →</Link>} />
@@ -199,12 +201,12 @@ function RecentExports() {
         <CardBody>
           <ErrorState error={exports.error} />
         </CardBody>
-      ) : exports.data.length === 0 ? (
+      ) : exports.data.items.length === 0 ? (
         <CardBody>
           <p className="text-sm text-muted">Nothing exported yet.</p>
         </CardBody>
       ) : (
-        <ExportsTable exports={exports.data.slice(0, 5)} compact />
+        <ExportsTable exports={exports.data.items} compact />
       )}
     </Card>
   );

@@ -4,7 +4,7 @@ import { useMe } from "@/features/auth/api/get-me";
 import { useModelVersion } from "@/features/model-versions/api/get-model-version";
 import { useUpdateModelVersion } from "@/features/model-versions/api/save-model-version";
 import { ModelEditorWithDraft } from "@/features/model-versions/components/model-editor-with-draft";
-import { usePerilProfiles } from "@/features/peril/api/get-peril-profiles";
+import { usePerilProfileChoices } from "@/features/peril/api/get-peril-profiles";
 import { PageHeader } from "@/components/ui/page-header";
 import { draftStorageKey } from "@/lib/draft-storage";
 import { ErrorState, LoadingState } from "@/components/ui/states";
@@ -14,7 +14,7 @@ export default function ModelVersionEditPage() {
   const me = useMe();
   const version = useModelVersion(versionId);
   const update = useUpdateModelVersion();
-  const profiles = usePerilProfiles();
+  const profiles = usePerilProfileChoices();
   const navigate = useNavigate();
   if (version.isPending) return <LoadingState />;
   if (version.isError) return <ErrorState error={version.error} />;

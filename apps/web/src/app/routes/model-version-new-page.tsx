@@ -7,7 +7,7 @@ import { ModelEditorWithDraft } from "@/features/model-versions/components/model
 import { useMe } from "@/features/auth/api/get-me";
 import { draftStorageKey } from "@/lib/draft-storage";
 import { STARTING_DRAFT } from "@/features/model-versions/lib/starting-draft";
-import { usePerilProfiles } from "@/features/peril/api/get-peril-profiles";
+import { usePerilProfileChoices } from "@/features/peril/api/get-peril-profiles";
 import { PageHeader } from "@/components/ui/page-header";
 import { ErrorState, LoadingState } from "@/components/ui/states";
 
@@ -16,7 +16,7 @@ export default function ModelVersionNewPage() {
   const fromId = params.get("from") ?? undefined;
   const parent = useModelVersion(fromId);
   const create = useCreateModelVersion();
-  const profiles = usePerilProfiles();
+  const profiles = usePerilProfileChoices();
   const navigate = useNavigate();
   const me = useMe();
   // The kept draft belongs to the person: wait for who is signed in before the editor reads it.

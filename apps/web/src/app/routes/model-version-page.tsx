@@ -7,7 +7,7 @@ import { AssumptionsTable } from "@/features/model-versions/components/assumptio
 import { DiffTable } from "@/features/model-versions/components/diff-table";
 import { ImpactPanel } from "@/features/model-versions/components/impact-panel";
 import { PinnedPerilProfilesList, profileNames } from "@/features/model-versions/components/pinned-peril-profiles";
-import { usePerilProfiles } from "@/features/peril/api/get-peril-profiles";
+import { usePerilProfileChoices } from "@/features/peril/api/get-peril-profiles";
 import { usePinnedPathways } from "@/app/use-pinned-pathways";
 import { ReviewWaitNote } from "@/features/model-versions/components/review-wait-note";
 import { SubmitPanel } from "@/features/model-versions/components/submit-panel";
@@ -23,7 +23,7 @@ export default function ModelVersionPage() {
   const me = useMe();
   const version = useModelVersion(versionId);
   const diff = useModelVersionDiff(versionId);
-  const profiles = usePerilProfiles();
+  const profiles = usePerilProfileChoices();
   const pinned = usePinnedPathways(version.data?.pathwayIds ?? []);
   if (version.isPending) return <LoadingState />;
   if (version.isError) return <ErrorState error={version.error} retry={() => version.refetch()} />;

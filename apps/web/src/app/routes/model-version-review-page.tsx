@@ -7,7 +7,7 @@ import { DecisionPanel } from "@/features/model-versions/components/decision-pan
 import { DiffTable } from "@/features/model-versions/components/diff-table";
 import { ImpactPanel } from "@/features/model-versions/components/impact-panel";
 import { profileNames } from "@/features/model-versions/components/pinned-peril-profiles";
-import { usePerilProfiles } from "@/features/peril/api/get-peril-profiles";
+import { usePerilProfileChoices } from "@/features/peril/api/get-peril-profiles";
 import { usePinnedPathways } from "@/app/use-pinned-pathways";
 import { StatusBadge } from "@/components/ui/badges";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
@@ -19,7 +19,7 @@ export default function ModelVersionReviewPage() {
   const me = useMe();
   const version = useModelVersion(versionId);
   const diff = useModelVersionDiff(versionId);
-  const profiles = usePerilProfiles();
+  const profiles = usePerilProfileChoices();
   const pinned = usePinnedPathways(version.data?.pathwayIds ?? []);
   if (version.isPending) return <LoadingState />;
   if (version.isError) return <ErrorState error={version.error} />;

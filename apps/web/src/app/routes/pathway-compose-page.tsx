@@ -1,7 +1,7 @@
 import { useNavigate, useSearchParams } from "react-router-dom";
 import { paths } from "@/config/paths";
 import { usePathway } from "@/features/pathways/api/get-pathway";
-import { usePathways } from "@/features/pathways/api/get-pathways";
+import { usePathwayChoices } from "@/features/pathways/api/get-pathways";
 import { PathwayComposeForm } from "@/features/pathways/components/pathway-compose-form";
 import { PathwayComposer } from "@/features/pathways/components/pathway-composer";
 import { ButtonLink } from "@/components/ui/button";
@@ -49,7 +49,7 @@ function JsonComposer({ fromId }: { fromId: string | undefined }) {
 
 /** The step composer: choose the pathway to start from, then add steps. */
 function StepComposer({ fromId, choose }: { fromId: string | undefined; choose: (id: string) => void }) {
-  const list = usePathways();
+  const list = usePathwayChoices();
   const from = usePathway(fromId);
   const navigate = useNavigate();
   if (list.isPending) return <LoadingState label="Loading pathways…" />;

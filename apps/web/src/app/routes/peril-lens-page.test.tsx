@@ -13,7 +13,7 @@ const reader = { userId: "u-manager", canWrite: false };
 
 describe("PerilLens states", () => {
   it("names each list while it loads", () => {
-    stubFetch(() => ({ body: [] }));
+    stubFetch((req) => ({ body: req.path === "/api/peril-profiles" ? { items: [], total: 0 } : [] }));
     renderWithClient(<PerilLens viewer={writer} />);
     // The first render is before any answer: both cards say what they are waiting for.
     expect(screen.getByText("Loading peril profiles…")).toBeInTheDocument();
@@ -21,7 +21,7 @@ describe("PerilLens states", () => {
   });
 
   it("explains empty lists and offers a writer the way to fill them", async () => {
-    stubFetch(() => ({ body: [] }));
+    stubFetch((req) => ({ body: req.path === "/api/peril-profiles" ? { items: [], total: 0 } : [] }));
     renderWithClient(<PerilLens viewer={writer} />);
     expect(await screen.findByText("No peril profiles yet")).toBeInTheDocument();
     expect(screen.getByText("No portfolios yet")).toBeInTheDocument();
@@ -31,7 +31,7 @@ describe("PerilLens states", () => {
   });
 
   it("tells a read-only role who can add profiles and portfolios instead of offering buttons", async () => {
-    stubFetch(() => ({ body: [] }));
+    stubFetch((req) => ({ body: req.path === "/api/peril-profiles" ? { items: [], total: 0 } : [] }));
     renderWithClient(<PerilLens viewer={reader} />);
     expect(await screen.findByText("No peril profiles yet")).toBeInTheDocument();
     // docs/API.md permission table: perils:write is held by the analyst and actuary roles.
@@ -43,7 +43,7 @@ describe("PerilLens states", () => {
   it("says which list failed, keeps the other, and tries again on request", async () => {
     let fail = true;
     const server = stubFetch((req) => {
-      if (req.path === "/api/peril-profiles") return fail ? apiError(500, "internal_error", "An unexpected error occurred.") : { body: [perilProfileRecord()] };
+      if (req.path === "/api/peril-profiles") return fail ? apiError(500, "internal_error", "An unexpected error occurred.") : { body: { items: [perilProfileRecord()], total: 1 } };
       if (req.path === "/api/portfolios") return { body: [] };
       return undefined;
     });

@@ -3,7 +3,11 @@ import type { UseQueryResult } from "@tanstack/react-query";
 import { paths } from "@/config/paths";
 import { PERMISSION_HOLDERS } from "@/config/permissions";
 import { ButtonLink } from "@/components/ui/button";
-import { Card, CardHeader } from "@/components/ui/card";
+import { Card, CardBody, CardHeader } from "@/components/ui/card";
+import { ListControls } from "@/components/lists/list-controls";
+import { listFieldErrors } from "@/components/lists/list-field-errors";
+import { PagedList } from "@/components/lists/paged-list";
+import { useListQuery } from "@/components/lists/use-list-query";
 import { Cautions } from "@/components/ui/cautions";
 import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState, ErrorState, LoadingState } from "@/components/ui/states";
@@ -41,9 +45,21 @@ function ListBody<T>({
   return <>{children(query.data)}</>;
 }
 
+const PROFILE_SORTS = [
+  { value: "peril:asc", label: "Peril, region, name" },
+  { value: "region:asc", label: "Region, peril, name" },
+  { value: "name:asc", label: "Name A–Z" },
+  { value: "name:desc", label: "Name Z–A" },
+  { value: "updatedAt:desc", label: "Recently changed" },
+  { value: "createdAt:desc", label: "Newest first" },
+  { value: "createdAt:asc", label: "Oldest first" },
+];
+
 /** Peril profiles and portfolio baselines (the peril lens), with the way in to the editors. */
 export function PerilLens({ viewer }: { viewer: PerilViewer }) {
-  const profiles = usePerilProfiles();
+  const list = useListQuery({ defaultSort: "peril:asc", filterKeys: ["metric", "author", "from", "to"] });
+  const { q, sort, limit, offset, filters } = list.state;
+  const profiles = usePerilProfiles({ q, sort, limit, offset, metric: (filters.metric || undefined) as "frequency" | "severity" | undefined, author: filters.author, from: filters.from, to: filters.to });
   const portfolios = usePortfolios();
   // Read-only roles cannot fill an empty list themselves; say who can instead of offering a button.
   const whoAdds = `Only ${PERMISSION_HOLDERS["perils:write"]} can add them.`;
@@ -70,12 +86,27 @@ export function PerilLens({ viewer }: { viewer: PerilViewer }) {
       <div className="flex flex-col gap-6">
         <Card>
           <CardHeader title="Peril profiles" subtitle="A locked profile is used by a run or an approved model version; copy it to change it." />
-          <ListBody
-            query={profiles}
+          <CardBody>
+            <ListControls
+              noun="peril profiles"
+              state={list.state}
+              onChange={list.update}
+              errors={listFieldErrors(profiles.error)}
+              searchHint="Name, peril, region or source"
+              sortOptions={PROFILE_SORTS}
+              selects={[{ key: "metric", label: "Metric", options: [{ value: "frequency", label: "frequency" }, { value: "severity", label: "severity" }] }]}
+              texts={[{ key: "author", label: "Written by", placeholder: "Name or email" }]}
+              dates
+            />
+          </CardBody>
+          <PagedList
+            result={profiles}
             noun="peril profiles"
+            state={list.state}
+            onOffset={list.setOffset}
             empty={
               <EmptyState
-                title="No peril profiles yet"
+                title={list.filtered ? "No peril profiles match these filters" : "No peril profiles yet"}
                 action={
                   viewer.canWrite && (
                     <ButtonLink to={paths.perilProfileNew.build()} variant="secondary">
@@ -90,7 +121,7 @@ export function PerilLens({ viewer }: { viewer: PerilViewer }) {
             }
           >
             {(rows) => <PerilProfilesTable profiles={rows} />}
-          </ListBody>
+          </PagedList>
         </Card>
         <Card>
           <CardHeader title="Portfolio baselines" />

@@ -1,6 +1,6 @@
 import { useNavigate, useSearchParams } from "react-router-dom";
 import type { Run, RunResult } from "@plumeline/contracts";
-import { useRuns } from "@/features/runs/api/get-runs";
+import { useRunChoices } from "@/features/runs/api/get-runs";
 import { useRun } from "@/features/runs/api/get-run";
 import { useRunResult } from "@/features/runs/api/get-run-result";
 import { runBaseline } from "@/features/runs/lib/compare-baseline";
@@ -28,7 +28,7 @@ const slotName = (i: number) => (i === 0 ? "Reference run" : `Run ${i + 1}`);
 export default function RunComparePage() {
   const [params] = useSearchParams();
   const navigate = useNavigate();
-  const runs = useRuns({ status: "succeeded" });
+  const runs = useRunChoices({ status: "succeeded" });
   const slots = readCompareSelection(params);
   const loaded = [useSlot(slots[0]), useSlot(slots[1]), useSlot(slots[2]), useSlot(slots[3])].slice(0, slots.length);
   const save = (next: CompareSlot[]) => void navigate({ search: `?${writeCompareSelection(next)}` }, { replace: true });

@@ -1,9 +1,9 @@
 import { useState } from "react";
 import { useNavigate, useSearchParams } from "react-router-dom";
 import { paths } from "@/config/paths";
-import { useModelVersions } from "@/features/model-versions/api/get-model-versions";
-import { usePathways } from "@/features/pathways/api/get-pathways";
-import { usePerilProfiles } from "@/features/peril/api/get-peril-profiles";
+import { useModelVersionChoices } from "@/features/model-versions/api/get-model-versions";
+import { usePathwayChoices } from "@/features/pathways/api/get-pathways";
+import { usePerilProfileChoices } from "@/features/peril/api/get-peril-profiles";
 import { usePortfolios } from "@/features/peril/api/get-portfolios";
 import { PerilRunPicker, type PerilRunChoice } from "@/features/peril/components/peril-run-picker";
 import { RunForm } from "@/features/runs/components/run-form";
@@ -15,10 +15,10 @@ import { EmptyState, ErrorState, LoadingState } from "@/components/ui/states";
 export default function RunNewPage() {
   const [params] = useSearchParams();
   const navigate = useNavigate();
-  const versions = useModelVersions();
-  const pathways = usePathways();
+  const versions = useModelVersionChoices();
+  const pathways = usePathwayChoices();
   const usable = versions.data?.filter((v) => v.status !== "rejected" && v.status !== "retired") ?? [];
-  const perilProfiles = usePerilProfiles();
+  const perilProfiles = usePerilProfileChoices();
   const portfolios = usePortfolios();
   const [lens, setLens] = useState<PerilRunChoice>({ perilProfileIds: [], portfolioId: null });
   return (

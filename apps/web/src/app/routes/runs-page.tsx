@@ -1,18 +1,32 @@
-import { useState } from "react";
+import { RUN_STATUSES, type RunStatus } from "@plumeline/contracts";
 import { paths } from "@/config/paths";
 import { useMe } from "@/features/auth/api/get-me";
 import { useRuns } from "@/features/runs/api/get-runs";
 import { RunsTable } from "@/features/runs/components/runs-table";
 import { ButtonLink } from "@/components/ui/button";
-import { Card } from "@/components/ui/card";
+import { Card, CardBody } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
-import { Segmented } from "@/components/ui/segmented";
-import { EmptyState, ErrorState, LoadingState } from "@/components/ui/states";
+import { EmptyState } from "@/components/ui/states";
+import { ListControls } from "@/components/lists/list-controls";
+import { listFieldErrors } from "@/components/lists/list-field-errors";
+import { PagedList } from "@/components/lists/paged-list";
+import { useListQuery } from "@/components/lists/use-list-query";
+
+const RUN_SORTS = [
+  { value: "createdAt:desc", label: "Newest first" },
+  { value: "createdAt:asc", label: "Oldest first" },
+  { value: "name:asc", label: "Name A–Z" },
+  { value: "name:desc", label: "Name Z–A" },
+  { value: "status:asc", label: "Status" },
+  { value: "members:desc", label: "Most members" },
+  { value: "members:asc", label: "Fewest members" },
+];
 
 export default function RunsPage() {
   const me = useMe();
-  const [mine, setMine] = useState(false);
-  const runs = useRuns({ mine });
+  const list = useListQuery({ defaultSort: "createdAt:desc", filterKeys: ["status", "author", "from", "to", "mine"] });
+  const { q, sort, limit, offset, filters } = list.state;
+  const runs = useRuns({ q, sort, limit, offset, status: (filters.status || undefined) as RunStatus | undefined, author: filters.author, from: filters.from, to: filters.to, mine: filters.mine === "true" });
   const canCreate = me.data?.permissions.includes("runs:create") ?? false;
   return (
     <>
@@ -33,33 +47,36 @@ export default function RunsPage() {
           </>
         }
       />
-      <div className="mb-3">
-        <Segmented
-          label="Which runs"
-          value={mine ? "mine" : "all"}
-          onChange={(v) => setMine(v === "mine")}
-          options={[
-            { value: "all", label: "All runs" },
-            { value: "mine", label: "Mine" },
-          ]}
+      <Card className="mb-4">
+        <CardBody>
+        <ListControls
+          noun="runs"
+          state={list.state}
+          onChange={list.update}
+          errors={listFieldErrors(runs.error)}
+          searchHint="Part of a run's name"
+          sortOptions={RUN_SORTS}
+          selects={[{ key: "status", label: "Status", options: RUN_STATUSES.map((s) => ({ value: s, label: s })) }]}
+          texts={[{ key: "author", label: "Started by", placeholder: "Name or email" }]}
+          toggles={[{ key: "mine", label: "Only mine" }]}
+          dates
         />
-      </div>
+        </CardBody>
+      </Card>
       <Card>
-        {runs.isPending ? (
-          <LoadingState label="Loading runs…" />
-        ) : runs.isError ? (
-          <div className="p-4">
-            <ErrorState error={runs.error} retry={() => runs.refetch()} />
-          </div>
-        ) : runs.data.length === 0 ? (
-          <div className="p-4">
-            <EmptyState title="No runs yet" action={canCreate ? <ButtonLink to={paths.runNew.build()}>Start a run</ButtonLink> : undefined}>
+        <PagedList
+          result={runs}
+          noun="runs"
+          state={list.state}
+          onOffset={list.setOffset}
+          empty={
+            <EmptyState title={list.filtered ? "No runs match these filters" : "No runs yet"} action={canCreate ? <ButtonLink to={paths.runNew.build()}>Start a run</ButtonLink> : undefined}>
               Runs you and your colleagues start appear here with live progress.
             </EmptyState>
-          </div>
-        ) : (
-          <RunsTable runs={runs.data} currentUserId={me.data!.user.id} canCreate={canCreate} />
-        )}
+          }
+        >
+          {(items) => <RunsTable runs={items} currentUserId={me.data!.user.id} canCreate={canCreate} />}
+        </PagedList>
       </Card>
     </>
   );

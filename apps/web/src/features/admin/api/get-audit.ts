@@ -1,22 +1,22 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
-import { auditPageSchema, type AuditPage } from "@plumeline/contracts";
-import { api } from "@/lib/api-client";
+import { auditPageSchema, type AuditPage, type AuditQueryInput } from "@plumeline/contracts";
+import { api, buildUrl } from "@/lib/api-client";
+import { compactQuery } from "@/lib/list-query";
 
-export interface AuditFilter {
-  action?: string;
-  entityType?: string;
-  entityId?: string;
-  actorId?: string;
-  from?: string;
-  to?: string;
-  limit: number;
-  offset: number;
-}
+export type AuditQuery = Omit<AuditQueryInput, "hideSignIns"> & { hideSignIns?: boolean };
 
-export const getAudit = (filter: AuditFilter, signal?: AbortSignal) =>
-  api.get<AuditPage>("/api/audit", { query: { ...filter }, signal, schema: auditPageSchema });
+const toQuery = (query: AuditQuery) => compactQuery({ ...query, hideSignIns: query.hideSignIns ? "true" : undefined });
 
-export const getAuditQueryOptions = (filter: AuditFilter) =>
-  queryOptions({ queryKey: ["audit", filter], queryFn: ({ signal }) => getAudit(filter, signal), placeholderData: keepPreviousData });
+export const getAudit = (query: AuditQuery, signal?: AbortSignal) =>
+  api.get<AuditPage>("/api/audit", { query: toQuery(query), signal, schema: auditPageSchema });
 
-export const useAudit = (filter: AuditFilter) => useQuery(getAuditQueryOptions(filter));
+export const getAuditQueryOptions = (query: AuditQuery) =>
+  queryOptions({ queryKey: ["audit", toQuery(query)], queryFn: ({ signal }) => getAudit(query, signal), placeholderData: keepPreviousData });
+
+export const useAudit = (query: AuditQuery) => useQuery(getAuditQueryOptions(query));
+
+/** The same filters as a CSV download link (the file holds every matching row, not one page). */
+export const auditCsvUrl = (query: AuditQuery) => {
+  const { limit: _limit, offset: _offset, ...filters } = toQuery(query);
+  return buildUrl("/api/audit.csv", filters);
+};

@@ -1,14 +1,23 @@
-import { queryOptions, useQuery } from "@tanstack/react-query";
-import { exportRecordSchema, type ExportRecord } from "@plumeline/contracts";
-import { z } from "zod";
+import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
+import { exportPageSchema, type ExportPage, type ListExportsQueryInput } from "@plumeline/contracts";
 import { api } from "@/lib/api-client";
+import { compactQuery } from "@/lib/list-query";
 
 export const exportsRootKey = ["exports"] as const;
 
-export const getExports = (mine: boolean, signal?: AbortSignal) =>
-  api.get<ExportRecord[]>("/api/exports", { query: { mine: mine ? "true" : undefined }, signal, schema: z.array(exportRecordSchema) });
+/** The query string of GET /api/exports; `mine` is sent as "true" when set. */
+export type ExportsQuery = Omit<ListExportsQueryInput, "mine"> & { mine?: boolean };
 
-export const getExportsQueryOptions = (mine = false) =>
-  queryOptions({ queryKey: [...exportsRootKey, "list", { mine }], queryFn: ({ signal }) => getExports(mine, signal) });
+const toQuery = (query: ExportsQuery) => compactQuery({ ...query, mine: query.mine ? "true" : undefined });
 
-export const useExports = (mine = false) => useQuery(getExportsQueryOptions(mine));
+export const getExports = (query: ExportsQuery = {}, signal?: AbortSignal) =>
+  api.get<ExportPage>("/api/exports", { query: toQuery(query), signal, schema: exportPageSchema });
+
+export const getExportsQueryOptions = (query: ExportsQuery = {}) =>
+  queryOptions({
+    queryKey: [...exportsRootKey, "list", toQuery(query)],
+    queryFn: ({ signal }) => getExports(query, signal),
+    placeholderData: keepPreviousData,
+  });
+
+export const useExports = (query: ExportsQuery = {}) => useQuery(getExportsQueryOptions(query));

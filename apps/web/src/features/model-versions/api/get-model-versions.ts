@@ -1,18 +1,25 @@
-import { queryOptions, useQuery } from "@tanstack/react-query";
-import { modelVersionSummarySchema, type ModelVersionStatus, type ModelVersionSummary } from "@plumeline/contracts";
-import { z } from "zod";
+import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
+import { MAX_PAGE_LIMIT, modelVersionPageSchema, type ListModelVersionsQueryInput, type ModelVersionPage } from "@plumeline/contracts";
 import { api } from "@/lib/api-client";
+import { compactQuery } from "@/lib/list-query";
 
 /** Every model-version query starts with this key, so a decision can refresh them all at once. */
 export const modelVersionsRootKey = ["model-versions"] as const;
 
-export const getModelVersions = (status?: ModelVersionStatus, signal?: AbortSignal) =>
-  api.get<ModelVersionSummary[]>("/api/model-versions", { query: { status }, signal, schema: z.array(modelVersionSummarySchema) });
+export type ModelVersionsQuery = ListModelVersionsQueryInput;
 
-export const getModelVersionsQueryOptions = (status?: ModelVersionStatus) =>
+export const getModelVersions = (query: ModelVersionsQuery = {}, signal?: AbortSignal) =>
+  api.get<ModelVersionPage>("/api/model-versions", { query: compactQuery(query), signal, schema: modelVersionPageSchema });
+
+export const getModelVersionsQueryOptions = (query: ModelVersionsQuery = {}) =>
   queryOptions({
-    queryKey: [...modelVersionsRootKey, "list", { status: status ?? null }],
-    queryFn: ({ signal }) => getModelVersions(status, signal),
+    queryKey: [...modelVersionsRootKey, "list", compactQuery(query)],
+    queryFn: ({ signal }) => getModelVersions(query, signal),
+    placeholderData: keepPreviousData,
   });
 
-export const useModelVersions = (status?: ModelVersionStatus) => useQuery(getModelVersionsQueryOptions(status));
+export const useModelVersions = (query: ModelVersionsQuery = {}) => useQuery(getModelVersionsQueryOptions(query));
+
+/** Model versions for a picker or a queue, as a plain array: the 200 most recently changed (the API's largest page). */
+export const useModelVersionChoices = (query: Omit<ModelVersionsQuery, "limit" | "offset"> = {}) =>
+  useQuery({ ...getModelVersionsQueryOptions({ ...query, limit: MAX_PAGE_LIMIT }), select: (page) => page.items });

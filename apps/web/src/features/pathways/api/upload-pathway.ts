@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { pathwayPreviewSchema, pathwaySchema, type Pathway, type PathwayPreview } from "@plumeline/contracts";
 import { api } from "@/lib/api-client";
-import { getPathwaysQueryOptions } from "./get-pathways";
+import { pathwaysListKey } from "./get-pathways";
 
 export interface PathwayUploadInput {
   file: File;
@@ -35,6 +35,6 @@ export function useUploadPathway() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: uploadPathway,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: getPathwaysQueryOptions().queryKey }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: pathwaysListKey }),
   });
 }

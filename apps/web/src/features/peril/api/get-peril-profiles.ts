@@ -1,14 +1,23 @@
-import { queryOptions, useQuery } from "@tanstack/react-query";
-import { perilProfileRecordSchema, type PerilProfileRecord } from "@plumeline/contracts";
-import { z } from "zod";
+import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
+import { MAX_PAGE_LIMIT, perilProfilePageSchema, type ListPerilProfilesQueryInput, type PerilProfilePage } from "@plumeline/contracts";
 import { api } from "@/lib/api-client";
+import { compactQuery } from "@/lib/list-query";
 
 export const perilRootKey = ["peril"] as const;
 
-export const getPerilProfiles = (signal?: AbortSignal) =>
-  api.get<PerilProfileRecord[]>("/api/peril-profiles", { signal, schema: z.array(perilProfileRecordSchema) });
+export type PerilProfilesQuery = ListPerilProfilesQueryInput;
 
-export const getPerilProfilesQueryOptions = () =>
-  queryOptions({ queryKey: [...perilRootKey, "profiles"], queryFn: ({ signal }) => getPerilProfiles(signal) });
+export const getPerilProfiles = (query: PerilProfilesQuery = {}, signal?: AbortSignal) =>
+  api.get<PerilProfilePage>("/api/peril-profiles", { query: compactQuery(query), signal, schema: perilProfilePageSchema });
 
-export const usePerilProfiles = () => useQuery(getPerilProfilesQueryOptions());
+export const getPerilProfilesQueryOptions = (query: PerilProfilesQuery = {}) =>
+  queryOptions({
+    queryKey: [...perilRootKey, "profiles", compactQuery(query)],
+    queryFn: ({ signal }) => getPerilProfiles(query, signal),
+    placeholderData: keepPreviousData,
+  });
+
+export const usePerilProfiles = (query: PerilProfilesQuery = {}) => useQuery(getPerilProfilesQueryOptions(query));
+
+/** The peril profiles a picker offers, as a plain array: the first 200 by peril and region (the API's largest page). */
+export const usePerilProfileChoices = () => useQuery({ ...getPerilProfilesQueryOptions({ limit: MAX_PAGE_LIMIT }), select: (page) => page.items });

@@ -1,33 +1,36 @@
-import { queryOptions, useQuery } from "@tanstack/react-query";
-import { runSummarySchema, type RunStatus, type RunSummary } from "@plumeline/contracts";
-import { z } from "zod";
+import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
+import { MAX_PAGE_LIMIT, runPageSchema, type ListRunsQueryInput, type RunPage, type RunSummary } from "@plumeline/contracts";
 import { api } from "@/lib/api-client";
 import { env } from "@/lib/env";
+import { compactQuery } from "@/lib/list-query";
 
 export const runsRootKey = ["runs"] as const;
-/** Prefix of every run list (mine, by status): invalidating it refreshes them all. */
+/** Prefix of every run list (any search, filter or page): invalidating it refreshes them all. */
 export const runsListKey = [...runsRootKey, "list"] as const;
 
-export interface RunsFilter {
-  mine?: boolean;
-  status?: RunStatus;
-}
+/** The query string of GET /api/runs; `mine` is sent as "true" when set. */
+export type RunsQuery = Omit<ListRunsQueryInput, "mine"> & { mine?: boolean };
 
 export const isActive = (r: Pick<RunSummary, "status">) => r.status === "queued" || r.status === "running";
 
-export const getRuns = (filter: RunsFilter = {}, signal?: AbortSignal) =>
-  api.get<RunSummary[]>("/api/runs", {
-    query: { mine: filter.mine ? "true" : undefined, status: filter.status },
-    signal,
-    schema: z.array(runSummarySchema),
-  });
+const toQuery = (query: RunsQuery) => compactQuery({ ...query, mine: query.mine ? "true" : undefined });
 
-/** Polls while any listed run is queued or running, so progress bars move on their own. */
-export const getRunsQueryOptions = (filter: RunsFilter = {}) =>
+export const getRuns = (query: RunsQuery = {}, signal?: AbortSignal) =>
+  api.get<RunPage>("/api/runs", { query: toQuery(query), signal, schema: runPageSchema });
+
+/**
+ * Polls while any listed run is queued or running, so progress bars move on their own; the
+ * previous page stays on screen while the next one loads (no flash when paging).
+ */
+export const getRunsQueryOptions = (query: RunsQuery = {}) =>
   queryOptions({
-    queryKey: [...runsListKey, { mine: filter.mine ?? false, status: filter.status ?? null }],
-    queryFn: ({ signal }) => getRuns(filter, signal),
-    refetchInterval: (query) => (query.state.data?.some(isActive) ? env.pollMs : false),
+    queryKey: [...runsListKey, toQuery(query)],
+    queryFn: ({ signal }) => getRuns(query, signal),
+    placeholderData: keepPreviousData,
+    refetchInterval: (q) => (q.state.data?.items.some(isActive) ? env.pollMs : false),
   });
 
-export const useRuns = (filter: RunsFilter = {}) => useQuery(getRunsQueryOptions(filter));
+export const useRuns = (query: RunsQuery = {}) => useQuery(getRunsQueryOptions(query));
+
+/** Runs for a picker, as a plain array: the newest 200 (the API's largest page). */
+export const useRunChoices = (query: Omit<RunsQuery, "limit" | "offset"> = {}) => useQuery({ ...getRunsQueryOptions({ ...query, limit: MAX_PAGE_LIMIT }), select: (page) => page.items });

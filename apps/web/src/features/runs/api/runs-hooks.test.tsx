@@ -12,29 +12,31 @@ afterEach(() => vi.unstubAllGlobals());
 
 describe("run hooks", () => {
   it("keys run lists by their filter and sends the filter as the query string", async () => {
-    expect(getRunsQueryOptions({ mine: true }).queryKey).toEqual(["runs", "list", { mine: true, status: null }]);
-    expect(getRunsQueryOptions().queryKey).toEqual(["runs", "list", { mine: false, status: null }]);
+    expect(getRunsQueryOptions({ mine: true }).queryKey).toEqual(["runs", "list", { mine: "true" }]);
+    // Empty values leave the key (and the URL): these two are one query.
+    expect(getRunsQueryOptions({ mine: false, q: "", status: undefined }).queryKey).toEqual(["runs", "list", {}]);
+    expect(getRunsQueryOptions({ q: "coastal", sort: "name:asc", offset: 50 }).queryKey).toEqual(["runs", "list", { q: "coastal", sort: "name:asc", offset: 50 }]);
     expect(getRunQueryOptions("r1").queryKey).toEqual(["runs", "detail", "r1"]);
-    const server = stubFetch((req) => (req.path === "/api/runs" ? { body: [runSummary({ status: "succeeded", progress: 1 })] } : undefined));
+    const server = stubFetch((req) => (req.path === "/api/runs" ? { body: { items: [runSummary({ status: "succeeded", progress: 1 })], total: 1 } } : undefined));
     const client = testQueryClient();
     const { result } = renderHook(() => useRuns({ mine: true }), { wrapper: wrapperFor(client) });
     await waitFor(() => expect(result.current.isSuccess).toBe(true));
     expect(server.calls[0]!.search.get("mine")).toBe("true");
-    expect(client.getQueryData(["runs", "list", { mine: true, status: null }])).toHaveLength(1);
+    expect(client.getQueryData<{ items: unknown[] }>(["runs", "list", { mine: "true" }])?.items).toHaveLength(1);
   });
 
   it("polls while a listed run is active and stops once none is", () => {
     // Defaults from env: poll every 1500 ms while any run is queued or running.
     const opts = getRunsQueryOptions();
     const interval = opts.refetchInterval as (q: { state: { data: unknown } }) => number | false;
-    expect(interval({ state: { data: [runSummary({ status: "running" })] } })).toBe(1500);
-    expect(interval({ state: { data: [runSummary({ status: "succeeded" })] } })).toBe(false);
+    expect(interval({ state: { data: { items: [runSummary({ status: "running" })], total: 1 } } })).toBe(1500);
+    expect(interval({ state: { data: { items: [runSummary({ status: "succeeded" })], total: 1 } } })).toBe(false);
   });
 
   it("refreshes every run list after a run is created", async () => {
     let runs = [runSummary({ id: "old", status: "succeeded", progress: 1 })];
     const server = stubFetch((req) => {
-      if (req.method === "GET" && req.path === "/api/runs") return { body: runs };
+      if (req.method === "GET" && req.path === "/api/runs") return { body: { items: runs, total: runs.length } };
       if (req.method === "POST" && req.path === "/api/runs") {
         const created = runSummary({ id: "new", status: "queued", progress: 0 });
         runs = [created, ...runs];
@@ -45,10 +47,10 @@ describe("run hooks", () => {
     const client = testQueryClient();
     const wrapper = wrapperFor(client);
     const list = renderHook(() => useRuns({ mine: true }), { wrapper });
-    await waitFor(() => expect(list.result.current.data).toHaveLength(1));
+    await waitFor(() => expect(list.result.current.data?.items).toHaveLength(1));
     const create = renderHook(() => useCreateRun(), { wrapper });
     await act(() => create.result.current.mutateAsync({ modelVersionId: "mv-1", pathwayIds: ["p1"], members: 100, seed: "s", sampling: "monte-carlo" }));
-    await waitFor(() => expect(list.result.current.data).toHaveLength(2));
+    await waitFor(() => expect(list.result.current.data?.total).toBe(2));
     expect(server.count("GET", "/api/runs")).toBe(2);
   });
 
