@@ -176,7 +176,7 @@ describe("scale-out: API with WORKERS=0 and two stateless worker processes", () 
     cookie = "";
     expect((await call("POST", "/api/auth/sign-in/email", { email: admin.email, password: admin.password })).status).toBe(200);
     type AuditRow = { entityId: string | null; summary: string };
-    const audit = async (action: string) => (await call<{ items: AuditRow[] }>("GET", `/api/audit?action=${action}&entityType=run&limit=500`)).body.items;
+    const audit = async (action: string) => (await call<{ items: AuditRow[] }>("GET", `/api/audit?action=${action}&entityType=run&limit=200`)).body.items;
     const requeued = (await audit("run.requeued")).filter((e) => ids.includes(e.entityId ?? ""));
     expect(requeued.length).toBeGreaterThanOrEqual(1);
     expect(requeued[0]!.summary).toContain("stopped answering");

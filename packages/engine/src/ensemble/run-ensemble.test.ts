@@ -3,6 +3,7 @@ import { quantile } from "d3-array";
 import { twoLayerPropagator } from "../climate/two-layer-propagator.js";
 import { preparePlan } from "./prepare-plan.js";
 import { runEnsemble } from "./run-ensemble.js";
+import { SETUP_SHARE } from "./progress-share.js";
 import { baseSpec, fixedClimate, rampPathway } from "./test-support/specs.js";
 
 // Standard normal quantiles, scipy.stats.norm.ppf (SciPy 1.17).
@@ -152,6 +153,16 @@ describe("runEnsemble", { timeout: 60_000 }, () => {
     expect(low.never).toBeLessThan(0.05);
     expect(low.p5!).toBeLessThanOrEqual(low.p50!);
     expect(low.p50!).toBeGreaterThan(1900);
+  });
+
+  it("reports set-up progress before the first year is simulated, within set-up's share of the bar", () => {
+    const fractions: number[] = [];
+    runEnsemble(baseSpec({ members: 20 }), { onProgress: (f) => fractions.push(f) });
+    const setup = fractions.filter((f) => f <= SETUP_SHARE);
+    // One report per sampled input and one for the correlation step and the end of set-up.
+    expect(setup.length).toBeGreaterThanOrEqual(3);
+    expect(fractions[0]).toBeGreaterThan(0);
+    expect(setup.at(-1)).toBe(SETUP_SHARE);
   });
 
   it("reports progress and can be cancelled", () => {

@@ -7,6 +7,7 @@ import { runPipeline, type PathwayMembers } from "./run-pipeline.js";
 
 export type { PathwayMembers };
 import { preparePlan } from "./prepare-plan.js";
+import { setupProgress, simulationProgress } from "./progress-share.js";
 import { YearSummariser } from "./summarise-year.js";
 
 export interface RunOptions {
@@ -52,7 +53,8 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
     if (times) times[stage] += (now - clock) / 1000;
     clock = now;
   };
-  const { spec, plan } = preparePlan(input, 1, options.summaries);
+  const report = options.onProgress && ((fraction: number) => options.onProgress?.(fraction));
+  const { spec, plan } = preparePlan(input, 1, options.summaries, undefined, report && ((f) => report(setupProgress(f))));
   lap("sample");
   const n = plan.members;
   const totalYears = plan.pathways.reduce((s, p, i) => s + p.years + firstPassYears(plan, i), 0);
@@ -62,7 +64,7 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
     done++;
     if (done % every !== 0) return;
     if (options.shouldCancel?.()) throw new RunCancelledError();
-    options.onProgress?.(done / totalYears);
+    report?.(simulationProgress(done / totalYears));
   };
   const summariser = new YearSummariser(plan);
   const slots = plan.state.slots;

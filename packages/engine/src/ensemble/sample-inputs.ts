@@ -22,15 +22,26 @@ export const allocateLocal: Allocate = (length) => new Float64Array(length);
  * createRandom's (AleaStream); Monte Carlo columns are drawn two at a time
  * (AleaStream.fillTwo: the same draws, ~2× faster than one stream after the other).
  */
-export function sampleInputs(spec: RunSpec, inputs: ModelInput[], allocate: Allocate = allocateLocal): Float64Array[] {
+/** onColumn(done, of): called after each input's column is filled (set-up progress; changes no number). */
+export function sampleInputs(
+  spec: RunSpec,
+  inputs: ModelInput[],
+  allocate: Allocate = allocateLocal,
+  onColumn?: (done: number, of: number) => void,
+): Float64Array[] {
   const columns = inputs.map(() => allocate(spec.members));
   const correlated = correlatedInputs(spec, inputs);
   const streams = inputs.map((input) =>
     input.distribution.type === "fixed" ? null : new AleaStream(deriveSeed(spec.seed, `input/${input.name}`)),
   );
   if (spec.sampling === "monte-carlo") drawMonteCarloUniforms(streams, columns);
-  inputs.forEach((_, i) => sampleColumn(spec, inputs[i]!, columns[i]!, streams[i]!, correlated.includes(i)));
+  const steps = inputs.length + 1;
+  inputs.forEach((_, i) => {
+    sampleColumn(spec, inputs[i]!, columns[i]!, streams[i]!, correlated.includes(i));
+    onColumn?.(i + 1, steps);
+  });
   correlateColumns(spec, inputs, columns, correlated);
+  onColumn?.(steps, steps);
   return columns;
 }
 

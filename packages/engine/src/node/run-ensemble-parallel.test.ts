@@ -2,8 +2,19 @@ import { describe, expect, it } from "vitest";
 import { runEnsemble } from "../ensemble/run-ensemble.js";
 import { baseSpec, rampPathway } from "../ensemble/test-support/specs.js";
 import { runEnsembleParallel } from "./run-ensemble-parallel.js";
+import { SETUP_SHARE } from "../ensemble/progress-share.js";
 
 describe("runEnsembleParallel", () => {
+  it("reports set-up progress (sampling) before any year is simulated, then moves on from set-up's share", async () => {
+    const fractions: number[] = [];
+    await runEnsembleParallel(baseSpec({ members: 4_000 }), { threads: 2, onProgress: (f) => fractions.push(f) });
+    expect(fractions[0]).toBeGreaterThan(0);
+    expect(fractions[0]).toBeLessThanOrEqual(SETUP_SHARE);
+    expect(fractions.filter((f) => f <= SETUP_SHARE).length).toBeGreaterThanOrEqual(3);
+    expect(fractions.at(-1)).toBe(1);
+    expect(fractions.every((f, i) => i === 0 || f >= fractions[i - 1]!)).toBe(true);
+  });
+
   it("gives results bit-identical to one thread, with and without a constraint, peril lens included", async () => {
     // Two pathways, a constraint (weighted summaries), a peril profile per pathway's horizons
     // and an odd member count split over 2 and 3 threads.

@@ -4,6 +4,7 @@ import type { EnsemblePlan } from "../ensemble/ensemble-plan.js";
 import { impliedTcr } from "../ensemble/implied-tcr.js";
 import { firstPassYears, horizonsByYear } from "../ensemble/pathway-passes.js";
 import { preparePlan } from "../ensemble/prepare-plan.js";
+import { setupProgress, simulationProgress } from "../ensemble/progress-share.js";
 import { runPipeline } from "../ensemble/run-pipeline.js";
 import { WARM_MEMBERS } from "../ensemble/warm-kernels.js";
 import { runEnsemble, type RunOptions, type StageTimes } from "../ensemble/run-ensemble.js";
@@ -76,7 +77,7 @@ export async function runEnsembleParallel(input: RunSpecInput | RunSpec, options
         early.ready = pool.all((worker) => ({ kind: "plan", plan, control, worker }));
         early.ready.catch(() => {}); // awaited in runWithPool; if set-up refuses the spec first, the pool just stops
       },
-    });
+    }, options.onProgress && ((f) => options.onProgress!(setupProgress(f))));
     if (options.stageTimes) options.stageTimes.sample += (performance.now() - start) / 1000;
     return await runWithPool(spec, plan, pool, options, early);
   } finally {
@@ -105,7 +106,7 @@ async function runWithPool(
   const progress = options.onProgress
     ? setInterval(() => {
         const reported = control.summarised.reduce((s, v) => s + v, 0);
-        options.onProgress!((finishedYears + reported) / totalYears);
+        options.onProgress!(simulationProgress((finishedYears + reported) / totalYears));
       }, 100)
     : null;
   try {
