@@ -16,7 +16,7 @@
  *   runs per minute (issue: 8 runs x 100,000 members with one and with two `pnpm worker`s).
  *
  *   node --import tsx apps/api/scripts/bench-api.ts [--base http://127.0.0.1:4250] [--members 100000]
- *       [--pathways 3] [--runs 1] [--api-pid <pid>] [--skip-cli]
+ *       [--pathways 3] [--runs 1] [--api-pid <pid>] [--skip-cli] [--trace polls.jsonl]
  *       [--email analyst@harbourline.example --password plume-demo-analyst]
  *
  * Uses the demo seed's approved model version and its first --pathways pathways. Prints a human
@@ -39,6 +39,7 @@ const pathwayCount = Number(arg("pathways", "3"));
 const runCount = Number(arg("runs", "1"));
 const apiPid = arg("api-pid", "");
 const skipCli = args.includes("--skip-cli");
+const traceFile = arg("trace", "");
 const email = arg("email", "analyst@harbourline.example");
 const password = arg("password", "plume-demo-analyst");
 const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../../..");
@@ -140,6 +141,9 @@ async function main() {
     }
   })();
   let peak = memoryOf(apiPid);
+  // --trace: one line per poll (wall clock, status, progress, the API's memory), to line the
+  // memory curve up with the run's phases.
+  const trace: object[] = [];
   while (status === "queued" || status === "running") {
     await sleep(50);
     const got = await api<RunView>("GET", `/api/runs/${runId}`);
@@ -148,10 +152,12 @@ async function main() {
     if (firstProgressMs === null && (got.body.progress > 0 || status === "succeeded")) firstProgressMs = performance.now() - created;
     const mem = memoryOf(apiPid);
     if (mem && (!peak || mem.peakMiB > peak.peakMiB)) peak = mem;
+    trace.push({ at: Date.now(), sinceCreatedMs: Math.round(performance.now() - created), status, progress: got.body.progress, ...(mem ?? {}) });
   }
   const apiSeconds = (performance.now() - t0) / 1000;
   done = true;
   await poller;
+  if (traceFile) writeFileSync(traceFile, trace.map((line) => JSON.stringify(line)).join("\n") + "\n");
   if (status !== "succeeded") throw new Error(`run ended ${status}`);
 
   // The result as the browser gets it: the stored gzip bytes (Content-Length); fetch inflates

@@ -17,9 +17,10 @@ export function crossingSummary(
   percentiles: number[],
   weights: Float64Array | null,
   totalWeight: number,
+  values: Float64Array = new Float64Array(crossingIndex.length),
 ): Record<string, number | null> {
   const n = crossingIndex.length;
-  const values = new Float64Array(n);
+  if (values.length !== n) throw new RangeError(`values must hold ${n} members, not ${values.length}`);
   let never = 0;
   for (let m = 0; m < n; m++) {
     const t = crossingIndex[m]!;

@@ -1,7 +1,7 @@
 import type { PathwayResult, PercentileSeries, RunSpec } from "../spec/types.js";
-import { PercentileSelector } from "../summary/percentile-selector.js";
 import type { EnsemblePlan } from "./ensemble-plan.js";
 import { crossingShareByYear, crossingSummary } from "./crossing-summary.js";
+import type { FinishWorkspace } from "./finish-workspace.js";
 import { percentilePrecision } from "./percentile-precision.js";
 import { percentileKey, percentileSet } from "./percentile-set.js";
 import { likelihoodSd } from "./constraint-weights.js";
@@ -18,14 +18,14 @@ export interface PathwayWeights {
  * Turns the streamed per-year summaries and the horizon snapshots of one pathway into its
  * result: series, exceedance, crossing years, horizon tables (with committed warming,
  * forcing by agent and precision), sensitivity budget and constraint diagnostics.
- * `inputOrders` caches each uncertain input's member order across pathways.
+ * `work`: the run's working arrays (finish-workspace.ts), shared by its pathways.
  */
 export function finishPathway(
   spec: RunSpec,
   plan: EnsemblePlan,
   pathwayIndex: number,
   weighting: PathwayWeights,
-  inputOrders: Map<number, Uint32Array>,
+  work: FinishWorkspace,
 ): PathwayResult {
   const pathwaySpec = spec.pathways[pathwayIndex]!;
   const pathway = plan.pathways[pathwayIndex]!;
@@ -46,7 +46,10 @@ export function finishPathway(
   spec.thresholds.forEach((th, i) => (exceedance[String(th)] = row(exceedanceRow(i, P))));
 
   const { weights, totalWeight, effectiveMembers } = weighting;
-  const selector = new PercentileSelector();
+  const selector = work.selector;
+  // One member column for every threshold's crossing years and every horizon's agent forcing
+  // in turn (each is written in full before it is read).
+  const scratch = work.column;
   const crossing: PathwayResult["crossing"] = {};
   const crossingShare: Record<string, number[]> = {};
   spec.thresholds.forEach((th) => {
@@ -60,6 +63,7 @@ export function finishPathway(
       percentiles,
       weights,
       totalWeight,
+      scratch,
     );
   });
 
@@ -67,7 +71,7 @@ export function finishPathway(
     const t = year - pathway.startYear;
     const horizonExceedance: Record<string, number> = {};
     spec.thresholds.forEach((th, i) => (horizonExceedance[String(th)] = yearly[exceedanceRow(i, P) * years + t]!));
-    const agentValues = new Float64Array(plan.members);
+    const agentValues = scratch;
     const forcingByAgent: Record<string, Record<string, number>> = {};
     pathway.agents.forEach((agent, k) => {
       const b = pathway.base[k]![t]!;
@@ -90,7 +94,7 @@ export function finishPathway(
     };
   });
 
-  const sensitivity = sensitivityBudget(plan, pathwayIndex, weighting, inputOrders);
+  const sensitivity = sensitivityBudget(plan, pathwayIndex, weighting, work);
 
   const c = spec.model.constraint;
   const constraint = c

@@ -9,15 +9,16 @@ import { percentileSet } from "./percentile-set.js";
  * The ensemble's implied equilibrium sensitivity (ECS = F2x/λ, which is the sampled ECS) and
  * transient response (each member's own TCR, implied-tcr.ts), as percentiles weighted like
  * the first pathway. `tcr` may be passed in when already computed (the parallel runner
- * works it out while the workers run the first pathway).
+ * works it out while the workers run the first pathway). `selector`: the run's own, so its
+ * O(members) buffers are not made again (finish-workspace.ts).
  */
 export function impliedSensitivities(
   plan: EnsemblePlan,
   percentiles: number[],
   weighting: PathwayWeights,
   tcr: Float64Array = impliedTcr(plan.climate),
+  selector: PercentileSelector = new PercentileSelector(),
 ): { ecs: PercentileSet; tcr: PercentileSet } {
-  const selector = new PercentileSelector();
   const { weights, totalWeight } = weighting;
   return {
     ecs: percentileSet(selector, plan.climate.ecs, percentiles, weights, totalWeight),

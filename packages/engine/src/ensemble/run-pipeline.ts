@@ -3,6 +3,7 @@ import type { PathwayResult, PercentileSet, RunResult, RunSpec } from "../spec/t
 import { assembleResult } from "./assemble-result.js";
 import type { EnsemblePlan } from "./ensemble-plan.js";
 import { finishPathway, type PathwayWeights } from "./finish-pathway.js";
+import { createFinishWorkspace } from "./finish-workspace.js";
 import { impliedSensitivities } from "./implied-sensitivity.js";
 import { pathwayPerils, runPerils } from "./pathway-perils.js";
 import { weighPathway } from "./pathway-weights.js";
@@ -46,12 +47,12 @@ export function* runPipeline(
   const pathways: PathwayResult[] = [];
   const perils: (PathwayPerilResult | null)[] = [];
   let implied: { ecs: PercentileSet; tcr: PercentileSet } | null = null;
-  const inputOrders = new Map<number, Uint32Array>();
+  const finishWork = createFinishWorkspace(plan.members, plan.horizons.length);
   for (let p = 0; p < plan.pathways.length; p++) {
     yield { kind: "baseline", pathway: p };
     const weighting = weighPathway(plan);
     const tcr = yield { kind: "report", pathway: p, weighting };
-    pathways.push(finishPathway(spec, plan, p, weighting, inputOrders));
+    pathways.push(finishPathway(spec, plan, p, weighting, finishWork));
     onPathwayMembers?.({
       pathwayIndex: p,
       horizonWarming: plan.state.horizonTemperature,
@@ -60,7 +61,7 @@ export function* runPipeline(
       agents: plan.pathways[p]!.agents,
     });
     perils.push(pathwayPerils(spec, plan, p, weighting));
-    if (p === 0) implied = impliedSensitivities(plan, spec.percentiles, weighting, tcr);
+    if (p === 0) implied = impliedSensitivities(plan, spec.percentiles, weighting, tcr, finishWork.selector);
   }
   return assembleResult(spec, pathways, implied!, runPerils(spec, perils));
 }

@@ -5,10 +5,18 @@
  * Pearson correlation is Spearman's. `order` lists the members sorted by value.
  * Cost O(n). Reference: the weighted Spearman coefficient as the weighted Pearson
  * correlation of weighted ranks (Bailey & Emad, R package wCorr, 2017 — from memory).
+ * `out`: where to write them (every element is written, since order lists every member once),
+ * so a caller ranking many columns in turn can reuse one O(n) array.
  */
-export function weightedMidRanks(values: ArrayLike<number>, order: ArrayLike<number>, weights: ArrayLike<number> | null, totalWeight: number): Float64Array {
+export function weightedMidRanks(
+  values: ArrayLike<number>,
+  order: ArrayLike<number>,
+  weights: ArrayLike<number> | null,
+  totalWeight: number,
+  out: Float64Array = new Float64Array(order.length),
+): Float64Array {
   const n = order.length;
-  const out = new Float64Array(n);
+  if (out.length !== n) throw new RangeError(`out must hold ${n} ranks, not ${out.length}`);
   let before = 0;
   let start = 0;
   while (start < n) {
@@ -62,12 +70,19 @@ export function weightedCorrelation(x: ArrayLike<number>, y: ArrayLike<number>, 
  * Method: a native numeric sort of a copy of the values, then each member, in index order,
  * takes the first free position of its value (binary search): the same order as an index
  * sort with a comparator, ~4× faster in V8 at 100,000 members. Values must not be NaN.
- * Cost O(n log n).
+ * `scratch`: the sorted copy and the taken flags, for a caller sorting many columns in turn
+ * (at 1,000,000 members they are 9 MB per call that would otherwise wait for the collector);
+ * see sortScratch. Cost O(n log n).
  */
-export function sortOrder(values: ArrayLike<number>): Uint32Array {
+export function sortOrder(values: ArrayLike<number>, scratch: SortScratch = sortScratch(values.length)): Uint32Array {
   const n = values.length;
-  const sorted = Float64Array.from(values).sort();
-  const taken = new Uint8Array(n);
+  if (scratch.sorted.length !== n || scratch.taken.length !== n)
+    throw new RangeError(`scratch must be sized for ${n} values, not ${scratch.sorted.length}`);
+  const sorted = scratch.sorted;
+  sorted.set(values);
+  sorted.sort();
+  const taken = scratch.taken;
+  taken.fill(0);
   const order = new Uint32Array(n);
   for (let m = 0; m < n; m++) {
     const v = values[m]!;
@@ -83,4 +98,14 @@ export function sortOrder(values: ArrayLike<number>): Uint32Array {
     order[low] = m;
   }
   return order;
+}
+
+/** Working arrays of sortOrder for n values; reusable for any number of calls of that size. */
+export interface SortScratch {
+  sorted: Float64Array;
+  taken: Uint8Array;
+}
+
+export function sortScratch(n: number): SortScratch {
+  return { sorted: new Float64Array(n), taken: new Uint8Array(n) };
 }

@@ -98,7 +98,12 @@ export async function findRun(ctx: Pick<Ctx, "models">, id: string): Promise<Run
 export async function getRun(ctx: Ctx, id: string): Promise<Run> {
   const row = await findRun(ctx, id);
   const [summary] = await present(ctx, [row]);
-  const pathways = await ctx.models.Pathway.findAll({ where: { id: { [Op.in]: row.pathwayIds } } });
+  // The manifest names each pathway; its series (agents, ~24 kB of JSON each) stay unread, since
+  // a page showing a running run asks for this several times a second.
+  const pathways = await ctx.models.Pathway.findAll({
+    where: { id: { [Op.in]: row.pathwayIds } },
+    attributes: ["id", "name", "checksum", "source", "vintage"],
+  });
   const byId = new Map(pathways.map((p) => [p.id, p]));
   return {
     ...summary!,
