@@ -8,7 +8,7 @@
  */
 import { parentPort } from "node:worker_threads";
 import { runResultSchema } from "@plumeline/contracts";
-import { runEnsembleParallel } from "@plumeline/engine/node";
+import { runEnsembleParallel, startEngineThreads } from "@plumeline/engine/node";
 import type { FromEngineThread, ToEngineThread } from "./engine-thread-protocol.js";
 
 const PROGRESS_EVERY_MS = 200;
@@ -18,6 +18,10 @@ if (!parentPort) throw new Error("engine-thread.ts must run as a worker thread")
 
 const port = parentPort;
 const post = (message: FromEngineThread) => port.postMessage(message);
+
+// The engine's helper threads start now, not inside the first big run (they are kept between
+// runs). A thread that cannot start shows its error in the first run that needs it.
+startEngineThreads().catch(() => {});
 
 port.on("message", (message: ToEngineThread) => {
   if (message.type !== "run") return;

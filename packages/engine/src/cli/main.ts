@@ -20,7 +20,13 @@ async function main(argv: string[]): Promise<void> {
   const args = parseArgs(argv);
   if (args.command === "bench") {
     process.stdout.write(
-      `${JSON.stringify(await runW1(args.members!, args.threads, args.full ? "full" : "w1", args.debug === true, args.seed))}\n`,
+      `${JSON.stringify(await runW1(args.members!, {
+        ...(args.threads ? { threads: args.threads } : {}),
+        scope: args.full ? "full" : "w1",
+        debug: args.debug === true,
+        ...(args.seed !== undefined ? { seed: args.seed } : {}),
+        coldThreads: args.cold === true,
+      }))}\n`,
     );
     return;
   }

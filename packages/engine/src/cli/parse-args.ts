@@ -5,9 +5,11 @@ export const USAGE = `usage:
   engine members SPEC.json [--out FILE]            CSV, one row per member: member, inputs,
                                                    weight, <pathwayId>@<year> warming (K)
   engine validate SPEC.json                        checks a spec without running it
-  engine bench --members N [--threads T] [--full] [--debug] [--seed S]
+  engine bench --members N [--threads T] [--full] [--cold] [--debug] [--seed S]
                                                    one W1 benchmark line (bench-reference/README.md);
                                                    --full also summarises forcing and imbalance;
+                                                   --cold starts the helper threads inside the timing
+                                                   (a process's first run; default: ready, as in a server);
                                                    --debug adds the process CPU seconds (cpu_s);
                                                    --seed draws another ensemble (default "w1")`;
 
@@ -19,6 +21,8 @@ export interface ParsedArgs {
   threads?: number;
   /** bench: also summarise forcing and imbalance per year (the product's full summaries). */
   full?: boolean;
+  /** bench: start the helper threads inside the timing (default: before it, as a server has them). */
+  cold?: boolean;
   /** bench: add diagnostic fields to the line (cpu_s: CPU seconds of all threads during the run). */
   debug?: boolean;
   /** bench: the run's seed (default "w1"), to see how the check value varies between ensembles. */
@@ -48,6 +52,7 @@ export function parseArgs(argv: string[]): ParsedArgs {
     else if (arg === "--members" && command === "bench") parsed.members = count("--members");
     else if (arg === "--full" && command === "bench") parsed.full = true;
     else if (arg === "--debug" && command === "bench") parsed.debug = true;
+    else if (arg === "--cold" && command === "bench") parsed.cold = true;
     else if (arg === "--seed" && command === "bench") {
       parsed.seed = value();
       if (parsed.seed === "") throw new CliError("--seed must not be empty");

@@ -36,7 +36,7 @@ export function expressionDoublingForcing(expression: ForcingExpressionName): nu
  * Per member, the forcing it feels at doubled CO2: scale_co2[m] · F2x, with F2x the sampled
  * f2x[m] ("erf") or the expression's constant ("concentration"). `co2Scale` is the CO2
  * scale column, or null when the model does not make it uncertain (scale 1 or its fixed value
- * is then `fixedCo2Scale`). Written into `out`; cost O(members).
+ * is then `fixedCo2Scale`). Written into out[lo, hi) (default: all of it); cost O(members).
  */
 export function fillDoublingForcing(
   source: DoublingSource,
@@ -45,9 +45,10 @@ export function fillDoublingForcing(
   co2Scale: Float64Array | null,
   fixedCo2Scale: number,
   out: Float64Array,
+  lo = 0,
+  hi = out.length,
 ): Float64Array {
-  const n = out.length;
-  for (let m = 0; m < n; m++) {
+  for (let m = lo; m < hi; m++) {
     const scale = co2Scale ? co2Scale[m]! : fixedCo2Scale;
     out[m] = scale * (source === "concentration" ? expressionF2x : f2x[m]!);
   }

@@ -63,43 +63,19 @@ export interface ClimateInputColumn {
 }
 
 /**
- * Builds every member's propagator. Cost O(members), a few exponentials each. Refuses a
- * non-positive input (first by column of `inputs`, then by member) and then the first
- * member whose propagator is not finite (checked once all are built).
+ * Refuses a member climate that fillMemberClimate could not fill cleanly, in a fixed
+ * order: the first non-positive input (by column of `inputs`, then by member), then the
+ * first member whose propagator is not finite. Call it only when some fill returned false:
+ * the two passes over every column are then worth their cost.
  */
-export function buildMemberClimate(
-  columns: ClimateColumns,
-  inputs: ClimateInputColumn[],
-  out: MemberClimate,
-  early?: EarlyMembers,
-): MemberClimate {
-  const n = out.ecs.length;
-  const first = early ? Math.min(n, early.members) : 0;
-  const firstClean = fillMemberClimate(columns, out, 0, first);
-  early?.filled(out);
-  const restClean = fillMemberClimate(columns, out, first, n);
-  // Every member had positive inputs and a finite propagator, so neither check could refuse
-  // anything: skip their two passes over every column. Otherwise they find and word the
-  // first refusal, in their order.
-  if (firstClean && restClean) return out;
+export function refuseMemberClimate(columns: ClimateColumns, inputs: ClimateInputColumn[], out: MemberClimate): void {
   for (const input of inputs) requirePositiveSamples(input.values, input.field);
   checkMemberPropagators(columns, out);
-  return out;
 }
 
-/**
- * Lets a caller use the first `members` members' propagators while the rest are built
- * (the parallel runner's workers warm their kernels on them): `filled` is called once
- * those are in place, before any member has been checked.
- */
-export interface EarlyMembers {
-  members: number;
-  filled(climate: MemberClimate): void;
-}
-
-/** A member climate's arrays, not yet filled (buildMemberClimate fills them). */
-export function allocateMemberClimate(columns: ClimateColumns, allocate: Allocate): MemberClimate {
-  const n = columns.ecs.length;
+/** A member climate's arrays, not yet filled (fillMemberClimate fills them). */
+export function allocateMemberClimate(ecs: Float64Array, doublingForcing: Float64Array, allocate: Allocate): MemberClimate {
+  const n = ecs.length;
   return {
     a11: allocate(n),
     a12: allocate(n),
@@ -115,8 +91,8 @@ export function allocateMemberClimate(columns: ClimateColumns, allocate: Allocat
     m22: allocate(n),
     lambda: allocate(n),
     extraUptake: allocate(n),
-    ecs: columns.ecs,
-    doublingForcing: columns.doublingForcing,
+    ecs,
+    doublingForcing,
   };
 }
 
@@ -150,12 +126,13 @@ function propagatorInputs(columns: ClimateColumns, m: number, lambda: number) {
 }
 
 /**
- * Members [lo, hi) of the propagators. Never throws: a member with a non-positive or
- * non-finite input or λ is left as it is (checkMemberPropagators refuses it). Returns true
+ * Builds members [lo, hi) of the propagators (cost O(members), a few exponentials each).
+ * Members are independent, so ranges may be filled in any order, on any thread. Never throws: a member with a non-positive or
+ * non-finite input or λ is left as it is (refuseMemberClimate refuses it). Returns true
  * when no member was left out and every term written is finite, i.e. when the checks
  * would pass; they run after the loop, so the loop stays small.
  */
-function fillMemberClimate(columns: ClimateColumns, out: MemberClimate, lo: number, hi: number): boolean {
+export function fillMemberClimate(columns: ClimateColumns, out: MemberClimate, lo: number, hi: number): boolean {
   const { ecs: ecsColumn, doublingForcing: doublingColumn, upperHeatCapacity: cColumn, deepHeatCapacity: c0Column, heatExchange: gammaColumn, deepEfficacy: epsilonColumn } = columns;
   const { a11, a12, a21, a22, b1, b2, r1, r2, m11, m12, m21, m22, lambda: lambdaColumn, extraUptake } = out;
   const terms = new Float64Array(PROPAGATOR_TERMS);

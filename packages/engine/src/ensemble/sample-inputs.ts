@@ -9,7 +9,7 @@ import type { ModelInput } from "./uncertain-inputs.js";
 export type Allocate = (length: number) => Float64Array;
 export const allocateLocal: Allocate = (length) => new Float64Array(length);
 
-/**
+/*
  * Draws every member's value of every input: one column per input.
  *
  * Method: each uncertain input gets its own seeded stream (deriveSeed(seed, "input/" + name)),
@@ -18,51 +18,49 @@ export const allocateLocal: Allocate = (length) => new Float64Array(length);
  * correlations are then re-paired by Iman–Conover (1982) towards the target rank
  * correlations, which keeps each marginal exactly; finally each uniform goes through the
  * input's inverse CDF. Fixed inputs are a constant column. Cost O(members × inputs).
- * Each column is drawn straight into its (possibly shared) array, no copy. The streams are
- * createRandom's (AleaStream); Monte Carlo columns are drawn two at a time
+ *
+ * The work comes as jobs (samplingJobs), each filling one or two columns straight into
+ * their (possibly shared) arrays from their own streams. A job depends on nothing but the
+ * spec and its inputs, so jobs may run in any order, on any thread, with the same numbers;
+ * correlateColumns then needs every job done. Monte Carlo columns are drawn two at a time
  * (AleaStream.fillTwo: the same draws, ~2× faster than one stream after the other).
  */
-/** onColumn(done, of): called after each input's column is filled (set-up progress; changes no number). */
-export function sampleInputs(
-  spec: RunSpec,
-  inputs: ModelInput[],
-  allocate: Allocate = allocateLocal,
-  onColumn?: (done: number, of: number) => void,
-): Float64Array[] {
-  const columns = inputs.map(() => allocate(spec.members));
-  const correlated = correlatedInputs(spec, inputs);
-  const streams = inputs.map((input) =>
-    input.distribution.type === "fixed" ? null : new AleaStream(deriveSeed(spec.seed, `input/${input.name}`)),
-  );
-  if (spec.sampling === "monte-carlo") drawMonteCarloUniforms(streams, columns);
-  const steps = inputs.length + 1;
-  inputs.forEach((_, i) => {
-    sampleColumn(spec, inputs[i]!, columns[i]!, streams[i]!, correlated.includes(i));
-    onColumn?.(i + 1, steps);
-  });
-  correlateColumns(spec, inputs, columns, correlated);
-  onColumn?.(steps, steps);
-  return columns;
+
+/**
+ * The sampling jobs of a spec: lists of input indices. Monte Carlo pairs the uncertain
+ * inputs in input order (the last one alone if their number is odd); Latin hypercube draws
+ * each column on its own; each fixed input is a job of its own.
+ */
+export function samplingJobs(spec: RunSpec, inputs: ModelInput[]): number[][] {
+  const uncertain = inputs.flatMap((input, i) => (input.distribution.type === "fixed" ? [] : [i]));
+  const fixed = inputs.flatMap((input, i) => (input.distribution.type === "fixed" ? [[i]] : []));
+  if (spec.sampling !== "monte-carlo") return [...uncertain.map((i) => [i]), ...fixed];
+  const pairs: number[][] = [];
+  for (let k = 0; k < uncertain.length; k += 2) pairs.push(uncertain.slice(k, k + 2));
+  return [...pairs, ...fixed];
 }
 
-/** Every uncertain input's Monte Carlo uniforms, from its own stream, two columns at a time. */
-function drawMonteCarloUniforms(streams: (AleaStream | null)[], columns: Float64Array[]): void {
-  const drawn = streams.flatMap((stream, i) => (stream ? [i] : []));
-  for (let k = 0; k + 1 < drawn.length; k += 2) {
-    const [a, b] = [drawn[k]!, drawn[k + 1]!];
-    AleaStream.fillTwo(streams[a]!, columns[a]!, streams[b]!, columns[b]!);
+/**
+ * Runs one sampling job: fills the columns of inputs `job` (samplingJobs) with their draws,
+ * mapped through each input's inverse CDF unless the input is correlated (correlateColumns
+ * maps those after re-pairing).
+ */
+export function runSamplingJob(spec: RunSpec, inputs: ModelInput[], columns: Float64Array[], correlated: number[], job: number[]): void {
+  const streams = job.map((i) =>
+    inputs[i]!.distribution.type === "fixed" ? null : new AleaStream(deriveSeed(spec.seed, `input/${inputs[i]!.name}`)),
+  );
+  if (spec.sampling === "monte-carlo") {
+    if (job.length === 2) AleaStream.fillTwo(streams[0]!, columns[job[0]!]!, streams[1]!, columns[job[1]!]!);
+    else streams[0]?.fill(columns[job[0]!]!);
   }
-  if (drawn.length % 2 === 1) {
-    const last = drawn[drawn.length - 1]!;
-    streams[last]!.fill(columns[last]!);
-  }
+  job.forEach((i, k) => sampleColumn(spec, inputs[i]!, columns[i]!, streams[k]!, correlated.includes(i)));
 }
 
 /**
  * Indices of the inputs Iman–Conover re-pairs: those named in correlations, in input order
  * (none when there are no correlations or fewer than 3 members).
  */
-function correlatedInputs(spec: RunSpec, inputs: ModelInput[]): number[] {
+export function correlatedInputs(spec: RunSpec, inputs: ModelInput[]): number[] {
   const correlations = spec.model.correlations;
   if (correlations.length === 0 || spec.members < 3) return [];
   const named = new Set(correlations.flatMap((c) => c.between));
@@ -90,7 +88,7 @@ function sampleColumn(spec: RunSpec, input: ModelInput, column: Float64Array, st
  * Re-pairs the uniforms held in the correlated columns by Iman–Conover, then maps each
  * through its input's inverse CDF, in place. Needs every correlated column drawn.
  */
-function correlateColumns(spec: RunSpec, inputs: ModelInput[], columns: Float64Array[], correlated: number[]): void {
+export function correlateColumns(spec: RunSpec, inputs: ModelInput[], columns: Float64Array[], correlated: number[]): void {
   if (correlated.length === 0) return;
   const correlations = spec.model.correlations;
   const involved = correlated.map((i) => inputs[i]!.name);

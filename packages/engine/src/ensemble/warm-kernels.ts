@@ -3,7 +3,7 @@ import { MEMBER_BLOCK, advanceReportedMembers } from "./advance-year.js";
 import type { EnsemblePlan } from "./ensemble-plan.js";
 import { resetForReporting, runBaselinePass } from "./pathway-passes.js";
 
-/** Members each worker thread warms its kernels on (worker w: members [w·256, (w + 1)·256)). */
+/** Members of the small ensemble a helper thread warms its kernels on when it starts. */
 export const WARM_MEMBERS = 256;
 
 /**
@@ -11,10 +11,9 @@ export const WARM_MEMBERS = 256;
  * selector is JavaScript, which V8 only optimises after it has run for a while (in a fresh
  * thread the first years' summaries otherwise run in the interpreter), and V8 compiles the
  * member kernels' WebAssembly with a quick compiler first and an optimising one once they
- * are called often. Uses members [lo, hi) of pathway 0 — a range no other thread uses until
- * the run starts — and the selector on a small sample. The passes that follow reset every
- * state they read (runBaselinePass, resetForReporting, per-year tallies), so no number
- * changes. Cost: about (hi − lo) × (pathway years + first-pass years) member-years.
+ * are called often. Uses members [lo, hi) of pathway 0 of `plan` and the selector on a
+ * small sample; a helper thread runs it once, on a plan of its own
+ * (node/ensemble-worker.ts), so no run's numbers are touched. Cost: about (hi − lo) × (pathway years + first-pass years) member-years.
  */
 export function warmKernels(plan: EnsemblePlan, lo: number, hi: number): void {
   if (hi <= lo || plan.pathways.length === 0) return;

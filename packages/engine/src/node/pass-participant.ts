@@ -1,5 +1,6 @@
 import { MEMBER_BLOCK, advanceReportedBlock } from "../ensemble/advance-year.js";
 import type { EnsemblePlan } from "../ensemble/ensemble-plan.js";
+import type { PlanSetup } from "../ensemble/plan-setup.js";
 import { resetForReporting, runBaselinePass } from "../ensemble/pathway-passes.js";
 import { YearSummariser } from "../ensemble/summarise-year.js";
 import { CANCEL_FLAG, addAndWake, waitUntilAtLeast, type PipelineControl } from "./pipeline-control.js";
@@ -54,6 +55,28 @@ export class PassParticipant {
 
   private cancelled(): boolean {
     return Atomics.load(this.control.flags, CANCEL_FLAG) !== 0;
+  }
+
+  /** Set-up's sampling jobs (plan-setup.ts), claimed from the counter at index `spans` of blockClaims. */
+  sample(setup: PlanSetup): Generator<PassPause, boolean> {
+    return this.claimEach(setup.jobs.length, (j) => setup.sample(j));
+  }
+
+  /** Set-up's climate pieces, claimed as sample() claims its jobs (the counters reset between). */
+  buildClimates(setup: PlanSetup): Generator<PassPause, boolean> {
+    return this.claimEach(setup.pieces, (k) => setup.buildClimate(k));
+  }
+
+  private *claimEach(count: number, work: (index: number) => void): Generator<PassPause, boolean> {
+    const { control } = this;
+    const at = control.blockClaims.length - 1;
+    for (;;) {
+      yield "claim";
+      if (this.cancelled()) return false;
+      const i = Atomics.add(control.blockClaims, at, 1);
+      if (i >= count) return true;
+      work(i);
+    }
   }
 
   /** First pass of a pathway: member blocks claimed from the counter at index `spans` of blockClaims. */

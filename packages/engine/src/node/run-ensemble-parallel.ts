@@ -1,15 +1,15 @@
 import { availableParallelism } from "node:os";
-import { Worker } from "node:worker_threads";
 import type { EnsemblePlan } from "../ensemble/ensemble-plan.js";
 import { impliedTcr } from "../ensemble/implied-tcr.js";
 import { firstPassYears, horizonsByYear } from "../ensemble/pathway-passes.js";
-import { preparePlan } from "../ensemble/prepare-plan.js";
+import type { PlanSetup } from "../ensemble/plan-setup.js";
+import { allocatePlan, preparePlan } from "../ensemble/prepare-plan.js";
 import { setupProgress, simulationProgress } from "../ensemble/progress-share.js";
 import { runPipeline } from "../ensemble/run-pipeline.js";
-import { WARM_MEMBERS } from "../ensemble/warm-kernels.js";
 import { runEnsemble, type RunOptions, type StageTimes } from "../ensemble/run-ensemble.js";
 import { RunCancelledError } from "../spec/spec-error.js";
 import type { RunResult, RunSpec, RunSpecInput } from "../spec/types.js";
+import { EngineThread, returnEngineThreads, takeEngineThreads } from "./engine-thread-pool.js";
 import { PassParticipant, type PassPause, type ReportOrder } from "./pass-participant.js";
 import { CANCEL_FLAG, createPipelineControl, resetPipelineControl, type PipelineControl } from "./pipeline-control.js";
 import type { FromWorker, ToWorker } from "./worker-messages.js";
@@ -48,10 +48,7 @@ export interface ParallelRunOptions {
  * that everything waits for; with one worker fewer that stage went from ~0.18 to ~0.14 s.
  */
 export async function runEnsembleParallel(input: RunSpecInput | RunSpec, options: ParallelRunOptions = {}): Promise<RunResult> {
-  const threads = Math.max(
-    1,
-    Math.floor(options.threads ?? (input.members >= PARALLEL_MIN_MEMBERS ? availableParallelism() : 1)),
-  );
+  const threads = Math.max(1, Math.floor(options.threads ?? (input.members >= PARALLEL_MIN_MEMBERS ? availableParallelism() : 1)));
   if (threads === 1 || input.members < 2 * threads) {
     const signal = options.signal;
     return runEnsemble(input, {
@@ -62,63 +59,66 @@ export async function runEnsembleParallel(input: RunSpecInput | RunSpec, options
       shouldCancel: () => signal?.aborted === true,
     });
   }
-  // Start the workers first: their start-up overlaps with sampling on this thread. They get
-  // the plan as soon as their warm-up members are built (preparePlan's EarlyPlan) and warm
-  // their kernels while this thread builds the other members' propagators.
+  // Threads kept from earlier runs are ready at once; new ones start while this thread
+  // allocates and begins sampling, and join in when they are up.
   const pool = new WorkerPool(threads - 1);
-  const early: EarlyStart = {};
   try {
     const start = performance.now();
-    const { spec, plan } = preparePlan(input, 2, options.summaries, {
-      members: (threads - 1) * WARM_MEMBERS,
-      ready: (plan) => {
-        const control = createPipelineControl(Math.max(...plan.pathways.map((p) => p.years)));
-        early.control = control;
-        early.ready = pool.all((worker) => ({ kind: "plan", plan, control, worker }));
-        early.ready.catch(() => {}); // awaited in runWithPool; if set-up refuses the spec first, the pool just stops
-      },
-    }, options.onProgress && ((f) => options.onProgress!(setupProgress(f))));
-    if (options.stageTimes) options.stageTimes.sample += (performance.now() - start) / 1000;
-    return await runWithPool(spec, plan, pool, options, early);
+    const allocated = allocatePlan(input, 2, options.summaries ?? {});
+    if (allocated.plan === null) {
+      // A pathway's forcing cannot be built: set up on this thread, which throws the spec's
+      // refusals in their usual order (the samples' own first, then the pathway's).
+      preparePlan(input, 2, options.summaries);
+      throw allocated.pathwayError!;
+    }
+    return await runWithPool(allocated.spec, allocated.plan, allocated.setup, pool, options, start);
   } finally {
-    pool.stop();
+    pool.finish();
   }
-}
-
-/** The workers' start when the plan went out before set-up ended (preparePlan's EarlyPlan). */
-interface EarlyStart {
-  control?: PipelineControl;
-  ready?: Promise<FromWorker[]>;
 }
 
 async function runWithPool(
   spec: RunSpec,
   plan: EnsemblePlan,
+  setup: PlanSetup,
   pool: WorkerPool,
   options: ParallelRunOptions,
-  early: EarlyStart,
+  start: number,
 ): Promise<RunResult> {
-  const control = early.control ?? createPipelineControl(Math.max(...plan.pathways.map((p) => p.years)));
+  const control = createPipelineControl(Math.max(...plan.pathways.map((p) => p.years)));
   const onAbort = () => Atomics.store(control.flags, CANCEL_FLAG, 1);
   options.signal?.addEventListener("abort", onAbort);
   const totalYears = plan.pathways.reduce((s, p, i) => s + p.years + firstPassYears(plan, i), 0);
+  const setupSteps = setup.jobs.length + 1 + setup.pieces;
+  let setupDone = 0;
   let finishedYears = 0;
+  let simulating = false;
+  const claimed = (total: number) => Math.min(total, control.blockClaims[control.blockClaims.length - 1]!);
   const progress = options.onProgress
     ? setInterval(() => {
+        if (!simulating) {
+          const inPhase = setupDone === 0 ? claimed(setup.jobs.length) : setupDone === setup.jobs.length + 1 ? claimed(setup.pieces) : 0;
+          options.onProgress!(setupProgress((setupDone + inPhase) / setupSteps));
+          return;
+        }
         const reported = control.summarised.reduce((s, v) => s + v, 0);
         options.onProgress!(simulationProgress((finishedYears + reported) / totalYears));
       }, 100)
     : null;
   try {
-    await (early.ready ?? pool.all((worker) => ({ kind: "plan", plan, control, worker })));
     const participant = new PassParticipant(plan, control);
     const times = options.stageTimes;
+    const setupOrder =
+      (sample: boolean) =>
+      (worker: number): ToWorker => ({ kind: "setup", plan, control, spec, clean: setup.clean, worker, sample });
     // Runs one pass on every thread; stage times are thread-seconds over threads.
     const everyThread = async (order: ToWorker, pass: Generator<PassPause, boolean>, meanwhile?: () => void) => {
-      const replies = pool.all(() => order).catch((error: unknown) => {
-        Atomics.store(control.flags, CANCEL_FLAG, 1); // a worker failed: this thread stops waiting for it
-        throw error;
-      });
+      const replies = pool
+        .all(() => order)
+        .catch((error: unknown) => {
+          Atomics.store(control.flags, CANCEL_FLAG, 1); // a worker failed: this thread stops waiting for it
+          throw error;
+        });
       meanwhile?.();
       const [workers, finished] = await Promise.all([replies, runCooperatively(control, pass)]);
       if (!finished) throw new RunCancelledError();
@@ -129,6 +129,28 @@ async function runWithPool(
         times.summarise += reply.summariseSeconds / all.length;
       }
     };
+    // Set-up (plan-setup.ts): sampling jobs on every thread that is up, correlation here,
+    // climate pieces on the same threads, then the spec's refusals here. A thread still
+    // starting (a process's first run) gets the plan only and joins at the first pass.
+    // Stage time "sample" is wall-clock.
+    const up = pool.booted();
+    await runSetupPass(pool.some(up, setupOrder(true)), participant.sample(setup), control);
+    setupDone = setup.jobs.length;
+    setup.correlate();
+    setupDone++;
+    resetPipelineControl(control);
+    await runSetupPass(
+      pool.some(up, () => ({ kind: "climate" })),
+      participant.buildClimates(setup),
+      control,
+    );
+    setupDone += setup.pieces;
+    setup.refusals();
+    // Its answer comes before its answer to the first pass, which is awaited.
+    pool.some(pool.notIn(up), setupOrder(false)).catch(() => {});
+    options.onProgress?.(setupProgress(1));
+    if (times) times.sample += (performance.now() - start) / 1000;
+    simulating = true;
     // The pipeline both runners share (ensemble/run-pipeline.ts); here its passes run on every thread.
     const pipeline = runPipeline(spec, plan, options.onPathwayMembers);
     let step = pipeline.next();
@@ -168,6 +190,16 @@ async function runWithPool(
   }
 }
 
+/** One set-up pass on every thread: the workers' replies and this thread's share. */
+async function runSetupPass(replies: Promise<FromWorker[]>, pass: Generator<PassPause, boolean>, control: PipelineControl): Promise<void> {
+  const failed = replies.catch((error: unknown) => {
+    Atomics.store(control.flags, CANCEL_FLAG, 1); // a worker failed: this thread stops its share
+    throw error;
+  });
+  const [, finished] = await Promise.all([failed, runCooperatively(control, pass)]);
+  if (!finished) throw new RunCancelledError();
+}
+
 /** Milliseconds this thread computes before it lets its event loop run. */
 const SLICE_MS = 4;
 
@@ -199,59 +231,41 @@ async function runCooperatively(control: PipelineControl, pass: Generator<PassPa
   }
 }
 
-/** A fixed set of ensemble workers driven in lock-step: each call sends one message to all and awaits all replies. */
+/** The run's helper threads, driven in lock-step: each call sends one order to all and awaits all replies. */
 class WorkerPool {
-  private readonly workers: Worker[];
+  private readonly threads: EngineThread[];
 
   constructor(count: number) {
-    const { url } = workerEntry();
-    this.workers = Array.from({ length: count }, () => new Worker(url));
+    this.threads = takeEngineThreads(count);
   }
 
   all(message: (worker: number, count: number) => ToWorker): Promise<FromWorker[]> {
-    const count = this.workers.length;
-    return Promise.all(
-      this.workers.map(
-        (worker, w) =>
-          new Promise<FromWorker>((resolve, reject) => {
-            const cleanup = () => {
-              worker.off("message", onMessage);
-              worker.off("error", onError);
-            };
-            const onMessage = (reply: FromWorker) => {
-              cleanup();
-              if (reply.kind === "failed") reject(Object.assign(new Error(reply.message), { stack: reply.stack }));
-              else if (reply.kind === "cancelled") reject(new RunCancelledError());
-              else resolve(reply);
-            };
-            const onError = (error: Error) => {
-              cleanup();
-              reject(error);
-            };
-            worker.on("message", onMessage);
-            worker.on("error", onError);
-            worker.postMessage(message(w, count));
-          }),
-      ),
-    );
+    return Promise.all(this.threads.map((thread, w) => thread.request(message(w, this.threads.length))));
   }
 
-  stop(): void {
-    for (const worker of this.workers) void worker.terminate();
+  /** As all(), to the threads `only` picks (by index). */
+  some(only: number[], message: (worker: number) => ToWorker): Promise<FromWorker[]> {
+    return Promise.all(only.map((w) => this.threads[w]!.request(message(w))));
   }
-}
 
-/**
- * The worker script beside this file: compiled JavaScript in dist. Under the test runner
- * (TypeScript sources) a small ES-module bootstrap registers tsx in the worker, then loads
- * the .ts worker (Node 20 does not apply --import loaders given in a worker's execArgv).
- */
-function workerEntry(): { url: URL } {
-  if (!import.meta.url.endsWith(".ts")) return { url: new URL("./ensemble-worker.js", import.meta.url) };
-  const worker = new URL("./ensemble-worker.ts", import.meta.url).href;
-  const tsx = import.meta.resolve("tsx/esm/api");
-  const bootstrap = `import { register } from ${JSON.stringify(tsx)}; register(); await import(${JSON.stringify(worker)});`;
-  return { url: new URL(`data:text/javascript,${encodeURIComponent(bootstrap)}`) };
+  /** Indexes of the threads that are up now; set-up is shared with these only. */
+  booted(): number[] {
+    return this.threads.flatMap((thread, w) => (thread.isBooted ? [w] : []));
+  }
+
+  /** Indexes of the other threads. */
+  notIn(picked: number[]): number[] {
+    return this.threads.flatMap((_, w) => (picked.includes(w) ? [] : [w]));
+  }
+
+  /**
+   * Hands the threads back for the next run, each told to let go of this run's plan; a
+   * thread still busy (a run that failed or was cancelled before it answered) is stopped.
+   */
+  finish(): void {
+    for (const thread of this.threads) if (thread.reusable) thread.release();
+    returnEngineThreads(this.threads);
+  }
 }
 
 export type { PipelineControl };
