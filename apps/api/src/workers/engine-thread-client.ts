@@ -10,8 +10,14 @@ export class EngineThreadCrashed extends Error {
   override name = "EngineThreadCrashed";
 }
 
+/** What a job step needs of an engine thread: run one ensemble, or ask the running one to stop. */
+export interface EngineRunner {
+  run(spec: RunSpec, onProgress?: (fraction: number) => void): Promise<EngineOutcome>;
+  cancel(): void;
+}
+
 /** One long-lived engine thread; `run` sends it one ensemble at a time. */
-export class EngineThread {
+export class EngineThread implements EngineRunner {
   private worker: Worker;
   private busy: { settle: (outcome: EngineOutcome) => void; fail: (error: Error) => void; onProgress: (f: number) => void } | null = null;
   private cancelFlag = new Int32Array(new SharedArrayBuffer(4));

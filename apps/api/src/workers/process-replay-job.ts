@@ -5,7 +5,7 @@ import type { RunReplayModel } from "../modules/runs/run-replay.model.js";
 import type { ClaimedJob, JobQueue } from "../queue/job-queue.js";
 import type { JobModel } from "../queue/job.model.js";
 import { BULLMQ_HOLDER, type EngineJobKindHandler } from "./engine-job-kind.js";
-import { EngineThreadCrashed, type EngineOutcome, type EngineThread } from "./engine-thread-client.js";
+import { EngineThreadCrashed, type EngineOutcome, type EngineRunner } from "./engine-thread-client.js";
 import { OutcomeDiscarded, type StepOptions, type StepOutcome, type WorkerContext } from "./worker-step.js";
 import { logger } from "../logging/logger.js";
 
@@ -67,7 +67,7 @@ export async function recordReplayOutcome(
 }
 
 /** QUEUE=sqlite: runs a claimed replay job in `thread`, as processClaimedRunJob does for runs. */
-export async function processClaimedReplayJob(ctx: WorkerContext, queue: JobQueue, job: ClaimedJob, thread: EngineThread, options: StepOptions = {}): Promise<StepOutcome> {
+export async function processClaimedReplayJob(ctx: WorkerContext, queue: JobQueue, job: ClaimedJob, thread: EngineRunner, options: StepOptions = {}): Promise<StepOutcome> {
   const { replay, run } = await replayAndRun(ctx, job.payload);
   if (!replay || !run) {
     await ctx.sequelize.transaction((t) => queue.finish(job.id, job.lockedBy, "failed", t, "the replay or its run no longer exists"));

@@ -4,7 +4,7 @@ import type { ResultDocument } from "../modules/results/result-document.js";
 import { storeRunResult } from "../modules/results/store-run-result.js";
 import type { RunModel } from "../modules/runs/run.model.js";
 import type { ClaimedJob, JobQueue } from "../queue/job-queue.js";
-import { EngineThreadCrashed, type EngineOutcome, type EngineThread } from "./engine-thread-client.js";
+import { EngineThreadCrashed, type EngineOutcome, type EngineRunner } from "./engine-thread-client.js";
 import { processClaimedReplayJob } from "./process-replay-job.js";
 import { OutcomeDiscarded, type StepOptions, type StepOutcome, type WorkerContext } from "./worker-step.js";
 import { REPLAY_JOB_TYPE, RUN_JOB_TYPE } from "../queue/job-types.js";
@@ -19,7 +19,7 @@ export async function processNextRunJob(
   ctx: WorkerContext,
   queue: JobQueue,
   workerId: string,
-  thread: EngineThread,
+  thread: EngineRunner,
   options: StepOptions = {},
 ): Promise<StepOutcome> {
   // Runs and replays share the queue, the order and the WORKERS limit.
@@ -39,7 +39,7 @@ export async function processClaimedRunJob(
   ctx: WorkerContext,
   queue: JobQueue,
   job: ClaimedJob,
-  thread: EngineThread,
+  thread: EngineRunner,
   options: StepOptions = {},
 ): Promise<StepOutcome> {
   const workerId = job.lockedBy;
@@ -67,7 +67,7 @@ export async function processClaimedRunJob(
 }
 
 /** Progress writes at most every `everyMs`, one at a time; each doubles as heartbeat and cancel check. */
-function throttledProgress(ctx: WorkerContext, queue: JobQueue, job: ClaimedJob, run: RunModel, thread: EngineThread, everyMs: number) {
+function throttledProgress(ctx: WorkerContext, queue: JobQueue, job: ClaimedJob, run: RunModel, thread: EngineRunner, everyMs: number) {
   let last = 0;
   let chain: Promise<void> = Promise.resolve();
   let writing = false;

@@ -1,13 +1,13 @@
 import os from "node:os";
 import type { JobQueue } from "../queue/job-queue.js";
 import { jobSignal } from "../queue/job-signal.js";
-import { EngineThread } from "./engine-thread-client.js";
+import { EngineThreadSupply } from "./engine-thread-supply.js";
 import { processNextRunJob, syncRunsWithRequeuedJobs } from "./process-run-job.js";
 import type { WorkerContext } from "./worker-step.js";
 import { logger } from "../logging/logger.js";
 
 export interface WorkerPoolOptions {
-  /** Engine threads, each running one job at a time (config WORKERS; default one per core). */
+  /** Jobs run at once, each in an engine thread of its own (config WORKERS; default one per core). */
   size: number;
   /** How often an idle worker looks for queued jobs it was not told about (other processes). */
   pollMs?: number;
@@ -24,8 +24,10 @@ export interface WorkerPool {
 
 /**
  * Starts `size` workers. First, jobs left "running" by a process that died are re-queued
- * (or failed, out of attempts); then each worker loops: claim, run in its own engine thread,
- * write the outcome. A worker whose thread died gets a fresh thread before its next job.
+ * (or failed, out of attempts); then each worker loops: claim, run in an engine thread,
+ * write the outcome. The engine threads come from one supply (engine-thread-supply.ts): one
+ * is kept ready, more start only while more jobs run at once, and a thread that died or ran
+ * a large ensemble is replaced.
  */
 export async function startWorkerPool(ctx: WorkerContext, queue: JobQueue, options: WorkerPoolOptions): Promise<WorkerPool> {
   const requeued = await queue.requeueAbandoned();
@@ -38,8 +40,9 @@ export async function startWorkerPool(ctx: WorkerContext, queue: JobQueue, optio
     for (const wake of [...wakers]) wake();
   };
   jobSignal.on("enqueued", notify);
-  const threads: EngineThread[] = [];
   const host = `${os.hostname()}:${process.pid}`;
+  const supply = new EngineThreadSupply(`${host}:engine`);
+  if (options.size > 0) supply.prestart();
 
   const sleep = () =>
     new Promise<void>((resolve) => {
@@ -54,13 +57,8 @@ export async function startWorkerPool(ctx: WorkerContext, queue: JobQueue, optio
 
   async function loop(slot: number): Promise<void> {
     const workerId = `${host}:worker-${slot}`;
-    let thread = new EngineThread(workerId);
-    threads[slot] = thread;
+    const thread = supply.runner();
     while (!stopping) {
-      if (!thread.alive) {
-        thread = new EngineThread(workerId);
-        threads[slot] = thread;
-      }
       try {
         const outcome = await processNextRunJob(ctx, queue, workerId, thread, {
           progressWriteMs: options.progressWriteMs,
@@ -82,7 +80,7 @@ export async function startWorkerPool(ctx: WorkerContext, queue: JobQueue, optio
       stopping = true;
       jobSignal.off("enqueued", notify);
       notify();
-      await Promise.all(threads.map((t) => t.terminate()));
+      await supply.stop();
       await Promise.allSettled(loops);
     },
   };

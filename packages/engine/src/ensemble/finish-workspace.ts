@@ -1,4 +1,4 @@
-import { sortScratch, type SortScratch } from "../statistics/weighted-spearman.js";
+import type { SortScratch } from "../statistics/weighted-spearman.js";
 import { PercentileSelector } from "../summary/percentile-selector.js";
 
 /**
@@ -15,7 +15,7 @@ export interface FinishWorkspace {
   column: Float64Array;
   /** Each uncertain input's member order by value (by index in plan.inputs); kept across pathways, since the inputs are. */
   inputOrders: Map<number, Uint32Array>;
-  /** sortOrder's sorted copy and flags. */
+  /** sortOrder's sorted copy (the same array as `column`: the two are never in use at once) and flags. */
   sort: SortScratch;
   /** One input's weighted mid-ranks at a time. */
   inputRanks: Float64Array;
@@ -24,11 +24,12 @@ export interface FinishWorkspace {
 }
 
 export function createFinishWorkspace(members: number, horizons: number): FinishWorkspace {
+  const column = new Float64Array(members);
   return {
     selector: new PercentileSelector(),
-    column: new Float64Array(members),
+    column,
     inputOrders: new Map(),
-    sort: sortScratch(members),
+    sort: { sorted: column, taken: new Uint8Array(members) },
     inputRanks: new Float64Array(members),
     warmingRanks: Array.from({ length: horizons }, () => new Float64Array(members)),
   };
