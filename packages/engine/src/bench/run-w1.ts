@@ -50,7 +50,7 @@ export interface W1Options {
  */
 export async function runW1(members: number, options: W1Options = {}): Promise<W1Line> {
   const { threads, scope = "w1", debug = false, seed, coldThreads = false } = options;
-  if (!coldThreads) await startEngineThreads(threads);
+  if (!coldThreads && threads !== 1) await startEngineThreads(threads);
   const spec = seed === undefined ? w1Spec(members) : w1Spec(members, seed);
   const times: StageTimes = { sample: 0, simulate: 0, summarise: 0, finish: 0 };
   const summaries = scope === "full" ? {} : { forcing: false, imbalance: false };
