@@ -36,9 +36,9 @@ export interface W1Options {
   /** The run's seed (default "w1"). */
   seed?: string;
   /**
-   * Start the helper threads inside the timing, as a process's first run does. By default
-   * they are started before the clock, as a long-lived process (the API server, a queue
-   * worker) has them ready for every run (node/engine-thread-pool.ts).
+   * Start the helper threads inside the timing, as a process's first large run does. By
+   * default they are started before the clock, as a long-lived process (the API server, a
+   * queue worker) has them for every large run after its first (node/engine-thread-pool.ts).
    */
   coldThreads?: boolean;
 }
