@@ -1,14 +1,16 @@
 /**
  * Entry of an engine worker thread: runs one ensemble at a time off the server's event loop.
- * It calls the engine's parallel runner, which samples here and spreads members over its own
- * helper threads (all cores for large ensembles, one thread for small ones; results are
- * bit-identical either way), so one big run is as fast as the engine CLI. Progress goes back
+ * It calls the engine's parallel runner, which for large ensembles shares the work out to its
+ * own helper threads (one per core; started by the first large run and kept for the next ones)
+ * and runs small ones here; results are bit-identical either way, so one big run is as fast
+ * as the engine CLI. Helpers are not started ahead: each costs ~20 MB while idle, and an
+ * engine thread that only ever runs small ensembles (impact previews) never needs them. Progress goes back
  * by message (throttled); cancellation comes in through shared memory and is handed to the
  * engine as an AbortSignal, which it checks between simulated years.
  */
 import { parentPort } from "node:worker_threads";
 import { runResultSchema } from "@plumeline/contracts";
-import { runEnsembleParallel, startEngineThreads } from "@plumeline/engine/node";
+import { runEnsembleParallel } from "@plumeline/engine/node";
 import type { FromEngineThread, ToEngineThread } from "./engine-thread-protocol.js";
 
 const PROGRESS_EVERY_MS = 200;
@@ -18,10 +20,6 @@ if (!parentPort) throw new Error("engine-thread.ts must run as a worker thread")
 
 const port = parentPort;
 const post = (message: FromEngineThread) => port.postMessage(message);
-
-// The engine's helper threads start now, not inside the first big run (they are kept between
-// runs). A thread that cannot start shows its error in the first run that needs it.
-startEngineThreads().catch(() => {});
 
 port.on("message", (message: ToEngineThread) => {
   if (message.type !== "run") return;

@@ -36,9 +36,9 @@ export interface W1Options {
   /** The run's seed (default "w1"). */
   seed?: string;
   /**
-   * Start the helper threads inside the timing, as a process's first run does. By default
-   * they are started before the clock, as a long-lived process (the API server, a queue
-   * worker) has them ready for every run (node/engine-thread-pool.ts).
+   * Start the helper threads inside the timing, as a process's first large run does. By
+   * default they are started before the clock, as a long-lived process (the API server, a
+   * queue worker) has them for every large run after its first (node/engine-thread-pool.ts).
    */
   coldThreads?: boolean;
 }
@@ -50,7 +50,7 @@ export interface W1Options {
  */
 export async function runW1(members: number, options: W1Options = {}): Promise<W1Line> {
   const { threads, scope = "w1", debug = false, seed, coldThreads = false } = options;
-  if (!coldThreads) await startEngineThreads(threads);
+  if (!coldThreads && threads !== 1) await startEngineThreads(threads);
   const spec = seed === undefined ? w1Spec(members) : w1Spec(members, seed);
   const times: StageTimes = { sample: 0, simulate: 0, summarise: 0, finish: 0 };
   const summaries = scope === "full" ? {} : { forcing: false, imbalance: false };

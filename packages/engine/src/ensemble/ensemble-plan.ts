@@ -58,6 +58,8 @@ export interface EnsemblePlan {
   climates: MemberClimate[];
   /** Per pathway, the index of its climate in `climates`. */
   pathwayClimate: number[];
+  /** Each member's implied TCR in the first pathway's climate (implied-tcr.ts), filled by set-up. */
+  tcr: Float64Array;
   pathways: PathwayForcing[];
   /** Requested percentiles as probabilities, in the order asked. */
   probs: number[];

@@ -1,6 +1,6 @@
 import { advanceBaselineYears } from "./advance-year.js";
 import type { EnsemblePlan } from "./ensemble-plan.js";
-import { MAX_SPAN_YEARS } from "./year-spans.js";
+import { BASELINE_SPAN_YEARS } from "./year-spans.js";
 
 /**
  * The two passes over one pathway, for members [lo, hi). Anomalies are against each
@@ -37,8 +37,8 @@ export function runBaselinePass(
   const years = firstPassYears(plan, pathwayIndex);
   const start = pathway.startYear;
   // Spans of years over all members, so progress (and cancellation) is seen every span.
-  for (let t0 = 0; t0 < years; t0 += MAX_SPAN_YEARS) {
-    const t1 = Math.min(years, t0 + MAX_SPAN_YEARS);
+  for (let t0 = 0; t0 < years; t0 += BASELINE_SPAN_YEARS) {
+    const t1 = Math.min(years, t0 + BASELINE_SPAN_YEARS);
     advanceBaselineYears(
       plan,
       pathwayIndex,

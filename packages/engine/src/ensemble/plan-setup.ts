@@ -1,6 +1,7 @@
 import { SpecError } from "../spec/spec-error.js";
 import type { RunSpec } from "../spec/types.js";
 import { doublingSourceOf, expressionDoublingForcing, fillDoublingForcing, type DoublingSource } from "./doubling-forcing.js";
+import { impliedTcrInto } from "./implied-tcr.js";
 import {
   fillMemberClimate,
   refuseMemberClimate,
@@ -20,6 +21,8 @@ export interface SetupArrays {
   columns: Float64Array[];
   /** One per source of F2x the pathways use, in order of first use (doubling-forcing.ts). */
   climates: MemberClimate[];
+  /** Each member's implied TCR in the first member climate (implied-tcr.ts). */
+  tcr: Float64Array;
 }
 
 /**
@@ -27,7 +30,7 @@ export interface SetupArrays {
  * numbers: (1) sampling jobs (sample-inputs.ts: one or two input columns each); (2) the
  * correlation step, on one thread once every sampling job is done; (3) climate pieces:
  * SETUP_PIECE_MEMBERS members' forcing at doubled CO2 and one-year propagators, for each
- * member climate. `refusals()` then throws the spec's first problem, in the order a
+ * member climate (for the first, also their implied TCR). `refusals()` then throws the spec's first problem, in the order a
  * one-thread set-up always gave it. The one-thread runner does every piece in turn
  * (prepare-plan.ts); the parallel runner hands them out to its threads, each holding its
  * own PlanSetup over the same shared arrays. `clean` (one flag per climate piece and member
@@ -107,7 +110,11 @@ export class PlanSetup {
     const { source, expressionF2x } = this.doubling[v]!;
     const out = this.climateColumns[v]!;
     fillDoublingForcing(source, this.f2x, expressionF2x, this.co2Scale, 1, out.doublingForcing, lo, hi);
-    this.clean[k] = fillMemberClimate(out, this.arrays.climates[v]!, lo, hi) ? 1 : 0;
+    const climate = this.arrays.climates[v]!;
+    const clean = fillMemberClimate(out, climate, lo, hi);
+    this.clean[k] = clean ? 1 : 0;
+    // A piece that is not clean will be refused (refusals()), so its TCR is never read.
+    if (v === 0 && clean) impliedTcrInto(climate, this.arrays.tcr, lo, hi);
   }
 
   /**

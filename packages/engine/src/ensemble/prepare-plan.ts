@@ -6,10 +6,10 @@ import { MEMBER_BLOCK } from "./advance-year.js";
 import { ALL_SUMMARIES, allocateState, type EnsemblePlan, type SummaryChoice } from "./ensemble-plan.js";
 import { layOutKernels } from "./kernel-layout.js";
 import { doublingSourceOf } from "./doubling-forcing.js";
-import { allocateMemberClimate, type MemberClimate } from "./member-climate.js";
+import { allocateMemberClimate } from "./member-climate.js";
 import { buildPathwayForcing, type PathwayForcing } from "./pathway-forcing.js";
-import { PlanSetup } from "./plan-setup.js";
-import { listModelInputs, type ModelInput } from "./uncertain-inputs.js";
+import { PlanSetup, type SetupArrays } from "./plan-setup.js";
+import { listModelInputs } from "./uncertain-inputs.js";
 import { spanYears } from "./year-spans.js";
 import { yearlyLength } from "./yearly-layout.js";
 
@@ -65,7 +65,8 @@ export function allocatePlan(input: RunSpecInput | RunSpec, spansInRing: number,
   const sources = spec.pathways.map(doublingSourceOf);
   const variants = [...new Set(sources)];
   const climates = variants.map(() => allocateMemberClimate(ecs, memory.float64(spec.members), memory.float64));
-  const setup = new PlanSetup(spec, { inputs, columns, climates }, memory.int32(PlanSetup.piecesOf(spec, variants.length)));
+  const tcr = memory.float64(spec.members);
+  const setup = new PlanSetup(spec, { inputs, columns, climates, tcr }, memory.int32(PlanSetup.piecesOf(spec, variants.length)));
   let pathways: PathwayForcing[];
   try {
     const names = inputs.map((x) => x.name);
@@ -74,15 +75,13 @@ export function allocatePlan(input: RunSpecInput | RunSpec, spansInRing: number,
     return { spec, plan: null, setup, pathwayError: error instanceof Error ? error : new Error(String(error)) };
   }
   const pathwayClimate = sources.map((s) => variants.indexOf(s));
-  const plan = assemblePlan(spec, inputs, columns, climates, pathwayClimate, pathways, spansInRing, memory, summaries);
+  const plan = assemblePlan(spec, { inputs, columns, climates, tcr }, pathwayClimate, pathways, spansInRing, memory, summaries);
   return { spec, plan, setup, pathwayError: null };
 }
 
 function assemblePlan(
   spec: RunSpec,
-  inputs: ModelInput[],
-  columns: Float64Array[],
-  climates: MemberClimate[],
+  { inputs, columns, climates, tcr }: SetupArrays,
   pathwayClimate: number[],
   pathways: PathwayForcing[],
   spansInRing: number,
@@ -110,6 +109,7 @@ function assemblePlan(
     climate: climates[0]!,
     climates,
     pathwayClimate,
+    tcr,
     pathways,
     probs,
     thresholds: [...spec.thresholds],

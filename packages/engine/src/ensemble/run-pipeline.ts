@@ -34,16 +34,14 @@ export interface PathwayMembers {
  *
  * A generator, so the same steps serve a synchronous and an asynchronous runner: it yields
  * each pass it needs (PassRequest) and the runner runs it over all members however it
- * likes, then resumes it. Resuming after the first pathway's reporting pass may hand in the
- * members' TCR if the runner worked it out meanwhile (the parallel runner does, while its
- * workers run); otherwise it is computed here. The runners differ only in who runs the
- * passes, so they give the same numbers.
+ * likes, then resumes it. The runners differ only in who runs the passes, so they give the
+ * same numbers.
  */
 export function* runPipeline(
   spec: RunSpec,
   plan: EnsemblePlan,
   onPathwayMembers?: (members: PathwayMembers) => void,
-): Generator<PassRequest, RunResult, Float64Array | undefined> {
+): Generator<PassRequest, RunResult, void> {
   const pathways: PathwayResult[] = [];
   const perils: (PathwayPerilResult | null)[] = [];
   let implied: { ecs: PercentileSet; tcr: PercentileSet } | null = null;
@@ -51,7 +49,7 @@ export function* runPipeline(
   for (let p = 0; p < plan.pathways.length; p++) {
     yield { kind: "baseline", pathway: p };
     const weighting = weighPathway(plan);
-    const tcr = yield { kind: "report", pathway: p, weighting };
+    yield { kind: "report", pathway: p, weighting };
     pathways.push(finishPathway(spec, plan, p, weighting, finishWork));
     onPathwayMembers?.({
       pathwayIndex: p,
@@ -61,7 +59,7 @@ export function* runPipeline(
       agents: plan.pathways[p]!.agents,
     });
     perils.push(pathwayPerils(spec, plan, p, weighting));
-    if (p === 0) implied = impliedSensitivities(plan, spec.percentiles, weighting, tcr, finishWork.selector);
+    if (p === 0) implied = impliedSensitivities(plan, spec.percentiles, weighting, finishWork.selector);
   }
   return assembleResult(spec, pathways, implied!, runPerils(spec, perils));
 }

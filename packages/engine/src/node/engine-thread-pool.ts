@@ -105,11 +105,11 @@ export function takeEngineThreads(count: number): EngineThread[] {
 /**
  * Gives threads back after a run. Only threads with no order outstanding are kept (a
  * thread still finishing a pass after a failure elsewhere would answer the next run's first
- * order with this run's reply); the others stop. At most one fewer than the machine's
- * cores stay idle.
+ * order with this run's reply); the others stop. At most as many as the machine has cores
+ * stay idle.
  */
 export function returnEngineThreads(threads: EngineThread[]): void {
-  const keep = Math.max(0, availableParallelism() - 1);
+  const keep = availableParallelism();
   for (const thread of threads) {
     if (thread.reusable && idle.length < keep) {
       thread.park();
@@ -119,12 +119,12 @@ export function returnEngineThreads(threads: EngineThread[]): void {
 }
 
 /**
- * Starts the helper threads a run with `threads` threads would use (threads − 1; default: one
- * per core), so the first big run does not pay their start. For long-lived processes: call
- * once at start-up. Resolves when they are ready.
+ * Starts the helper threads a run with `threads` computing threads uses (default: one per
+ * core), so the first big run does not pay their start. For long-lived processes: call once
+ * at start-up. Resolves when they are ready.
  */
 export async function startEngineThreads(threads = availableParallelism()): Promise<void> {
-  const wanted = Math.max(0, threads - 1) - idle.length;
+  const wanted = threads - idle.length;
   if (wanted <= 0) return;
   const started = Array.from({ length: wanted }, () => new EngineThread());
   await Promise.all(started.map((thread) => thread.booted));

@@ -1,6 +1,5 @@
 import { availableParallelism } from "node:os";
 import type { EnsemblePlan } from "../ensemble/ensemble-plan.js";
-import { impliedTcr } from "../ensemble/implied-tcr.js";
 import { firstPassYears, horizonsByYear } from "../ensemble/pathway-passes.js";
 import type { PlanSetup } from "../ensemble/plan-setup.js";
 import { allocatePlan, preparePlan } from "../ensemble/prepare-plan.js";
@@ -10,7 +9,7 @@ import { runEnsemble, type RunOptions, type StageTimes } from "../ensemble/run-e
 import { RunCancelledError } from "../spec/spec-error.js";
 import type { RunResult, RunSpec, RunSpecInput } from "../spec/types.js";
 import { EngineThread, returnEngineThreads, takeEngineThreads } from "./engine-thread-pool.js";
-import { PassParticipant, type PassPause, type ReportOrder } from "./pass-participant.js";
+import { PassParticipant, type PassPause } from "./pass-participant.js";
 import { CANCEL_FLAG, createPipelineControl, resetPipelineControl, type PipelineControl } from "./pipeline-control.js";
 import type { FromWorker, ToWorker } from "./worker-messages.js";
 
@@ -19,8 +18,9 @@ export const PARALLEL_MIN_MEMBERS = 20_000;
 
 export interface ParallelRunOptions {
   /**
-   * Computing threads, this one included (threads − 1 workers are started); default: the
-   * machine's available cores when members ≥ 20,000, else 1.
+   * Computing threads: helper threads that take the work while this thread coordinates
+   * (engine-thread-pool.ts keeps them between runs); default: the machine's available cores
+   * when members ≥ 20,000, else 1 (then this thread computes, as runEnsemble).
    */
   threads?: number;
   onProgress?: (fraction: number) => void;
@@ -34,18 +34,21 @@ export interface ParallelRunOptions {
 }
 
 /**
- * runEnsemble spread over threads: sampling happens once on this thread (one seeded stream
- * per input, as in runEnsemble) into the plan's shared kernel memory; then this thread and
- * threads − 1 workers claim member blocks and years to summarise from shared counters
- * (pass-participant.ts), so a thread the machine slows down takes less of the work. This
- * thread takes its share in slices of a few milliseconds and lets its event loop run in
- * between (progress, abort, and a server's other work keep going). Results are
- * bit-identical to runEnsemble for any thread count. Rejects with SpecError for a bad spec
- * and with RunCancelledError when the signal aborts.
+ * runEnsemble spread over helper threads: set-up comes as sampling jobs and climate pieces
+ * (plan-setup.ts), the passes as member blocks and then years to summarise, all claimed by
+ * the helpers from shared counters (pass-participant.ts), so a thread the machine slows
+ * down takes less of the work. Results are bit-identical to runEnsemble for any thread
+ * count. Rejects with SpecError for a bad spec and with RunCancelledError when the signal
+ * aborts.
  *
- * Why this thread computes too (measured, W1 at 100,000 members on 2 cores): starting and
- * warming a worker costs ~0.1 s of CPU, which on two cores is taken from the sampling
- * that everything waits for; with one worker fewer that stage went from ~0.18 to ~0.14 s.
+ * This thread coordinates: it allocates the plan, does the serial steps between passes
+ * (correlation, the spec's refusals, constraint weights, each pathway's result) and keeps
+ * its event loop free for progress, abort and a server's other work. Why the helpers take
+ * all the computing (measured, W1 at 100,000 members on 2 cores): they are kept between
+ * runs with their code already optimised by V8, while this thread's code runs cold in a
+ * fresh process; with this thread taking a share, two threads did barely better than one.
+ * Only when no helper is up yet (a process's first run) does this thread do the set-up
+ * itself, while they start.
  */
 export async function runEnsembleParallel(input: RunSpecInput | RunSpec, options: ParallelRunOptions = {}): Promise<RunResult> {
   const threads = Math.max(1, Math.floor(options.threads ?? (input.members >= PARALLEL_MIN_MEMBERS ? availableParallelism() : 1)));
@@ -59,9 +62,7 @@ export async function runEnsembleParallel(input: RunSpecInput | RunSpec, options
       shouldCancel: () => signal?.aborted === true,
     });
   }
-  // Threads kept from earlier runs are ready at once; new ones start while this thread
-  // allocates and begins sampling, and join in when they are up.
-  const pool = new WorkerPool(threads - 1);
+  const pool = new WorkerPool(threads);
   try {
     const start = performance.now();
     const allocated = allocatePlan(input, 2, options.summaries ?? {});
@@ -88,116 +89,132 @@ async function runWithPool(
   const control = createPipelineControl(Math.max(...plan.pathways.map((p) => p.years)));
   const onAbort = () => Atomics.store(control.flags, CANCEL_FLAG, 1);
   options.signal?.addEventListener("abort", onAbort);
-  const totalYears = plan.pathways.reduce((s, p, i) => s + p.years + firstPassYears(plan, i), 0);
-  const setupSteps = setup.jobs.length + 1 + setup.pieces;
-  let setupDone = 0;
-  let finishedYears = 0;
-  let simulating = false;
-  const claimed = (total: number) => Math.min(total, control.blockClaims[control.blockClaims.length - 1]!);
-  const progress = options.onProgress
-    ? setInterval(() => {
-        if (!simulating) {
-          const inPhase = setupDone === 0 ? claimed(setup.jobs.length) : setupDone === setup.jobs.length + 1 ? claimed(setup.pieces) : 0;
-          options.onProgress!(setupProgress((setupDone + inPhase) / setupSteps));
-          return;
-        }
-        const reported = control.summarised.reduce((s, v) => s + v, 0);
-        options.onProgress!(simulationProgress((finishedYears + reported) / totalYears));
-      }, 100)
-    : null;
+  const progress = options.onProgress ? new ParallelProgress(plan, setup, control, options.onProgress) : null;
   try {
-    const participant = new PassParticipant(plan, control);
     const times = options.stageTimes;
+    // Every helper's reply to one order; a failure stops the others at their next claim.
+    const everyHelper = async (only: number[], order: (worker: number) => ToWorker) => {
+      const replies = await pool.some(only, order).catch((error: unknown) => {
+        Atomics.store(control.flags, CANCEL_FLAG, 1);
+        throw error;
+      });
+      return replies.flatMap((r) => (r.kind === "done" ? [r] : []));
+    };
     const setupOrder =
       (sample: boolean) =>
       (worker: number): ToWorker => ({ kind: "setup", plan, control, spec, clean: setup.clean, worker, sample });
-    // Runs one pass on every thread; stage times are thread-seconds over threads.
-    const everyThread = async (order: ToWorker, pass: Generator<PassPause, boolean>, meanwhile?: () => void) => {
-      const replies = pool
-        .all(() => order)
-        .catch((error: unknown) => {
-          Atomics.store(control.flags, CANCEL_FLAG, 1); // a worker failed: this thread stops waiting for it
-          throw error;
-        });
-      meanwhile?.();
-      const [workers, finished] = await Promise.all([replies, runCooperatively(control, pass)]);
-      if (!finished) throw new RunCancelledError();
-      if (!times) return;
-      const all = [...workers.flatMap((r) => (r.kind === "done" ? [r] : [])), participant.takeTimes()];
-      for (const reply of all) {
-        times.simulate += reply.simulateSeconds / all.length;
-        times.summarise += reply.summariseSeconds / all.length;
-      }
-    };
-    // Set-up (plan-setup.ts): sampling jobs on every thread that is up, correlation here,
-    // climate pieces on the same threads, then the spec's refusals here. A thread still
-    // starting (a process's first run) gets the plan only and joins at the first pass.
-    // Stage time "sample" is wall-clock.
+    // Set-up: the helpers that are up share it; if none is (a process's first run), this
+    // thread does it, in slices, while they start. A helper still starting gets the plan
+    // afterwards and joins at the first pass. Stage time "sample" is wall-clock.
     const up = pool.booted();
-    await runSetupPass(pool.some(up, setupOrder(true)), participant.sample(setup), control);
-    setupDone = setup.jobs.length;
+    const here = up.length === 0 ? new PassParticipant(plan, control) : null;
+    const shareOut = (order: (worker: number) => ToWorker, pass: () => Generator<PassPause, boolean>) =>
+      here ? runHere(control, pass()) : everyHelper(up, order);
+    await shareOut(setupOrder(true), () => here!.sample(setup));
+    progress?.setupStep(setup.jobs.length);
     setup.correlate();
-    setupDone++;
+    progress?.setupStep(1);
     resetPipelineControl(control);
-    await runSetupPass(
-      pool.some(up, () => ({ kind: "climate" })),
-      participant.buildClimates(setup),
-      control,
+    await shareOut(
+      () => ({ kind: "climate" }),
+      () => here!.buildClimates(setup),
     );
-    setupDone += setup.pieces;
+    progress?.setupStep(setup.pieces);
     setup.refusals();
-    // Its answer comes before its answer to the first pass, which is awaited.
+    // Their answer comes before their answer to the first pass, which is awaited.
     pool.some(pool.notIn(up), setupOrder(false)).catch(() => {});
-    options.onProgress?.(setupProgress(1));
     if (times) times.sample += (performance.now() - start) / 1000;
-    simulating = true;
-    // The pipeline both runners share (ensemble/run-pipeline.ts); here its passes run on every thread.
+    const all = pool.all();
+    // The pipeline both runners share (ensemble/run-pipeline.ts); here the helpers run its passes.
     const pipeline = runPipeline(spec, plan, options.onPathwayMembers);
     let step = pipeline.next();
     while (!step.done) {
       const request = step.value;
       const p = request.pathway;
       resetPipelineControl(control);
-      let tcr: Float64Array | undefined;
-      if (request.kind === "baseline") {
-        if (options.signal?.aborted) throw new RunCancelledError();
-        await everyThread({ kind: "baseline", pathway: p }, participant.baseline(p));
-        finishedYears += firstPassYears(plan, p);
-      } else {
-        const order: ReportOrder = {
-          pathway: p,
-          weighted: request.weighting.weights !== null,
-          totalWeight: request.weighting.totalWeight,
-          horizonsByYear: horizonsByYear(plan, p),
-        };
-        // The members' TCR is worked out here once the workers have started reporting; this
-        // thread then joins them.
-        await everyThread({ kind: "report", ...order }, participant.report(order), () => {
-          if (p === 0) tcr = impliedTcr(plan.climate);
-        });
-        finishedYears += plan.pathways[p]!.years;
-        control.summarised.fill(0);
-      }
+      if (options.signal?.aborted) throw new RunCancelledError();
+      const order: ToWorker =
+        request.kind === "baseline"
+          ? { kind: "baseline", pathway: p }
+          : {
+              kind: "report",
+              pathway: p,
+              weighted: request.weighting.weights !== null,
+              totalWeight: request.weighting.totalWeight,
+              horizonsByYear: horizonsByYear(plan, p),
+            };
+      const replies = await everyHelper(all, () => order);
+      if (times)
+        for (const reply of replies) {
+          times.simulate += reply.simulateSeconds / replies.length;
+          times.summarise += reply.summariseSeconds / replies.length;
+        }
+      progress?.passDone(request.kind === "baseline" ? firstPassYears(plan, p) : plan.pathways[p]!.years);
       const finishStart = performance.now();
-      step = pipeline.next(tcr);
+      step = pipeline.next();
       if (times && request.kind === "report") times.finish += (performance.now() - finishStart) / 1000;
     }
     options.onProgress?.(1);
     return step.value;
   } finally {
-    if (progress) clearInterval(progress);
+    progress?.stop();
     options.signal?.removeEventListener("abort", onAbort);
   }
 }
 
-/** One set-up pass on every thread: the workers' replies and this thread's share. */
-async function runSetupPass(replies: Promise<FromWorker[]>, pass: Generator<PassPause, boolean>, control: PipelineControl): Promise<void> {
-  const failed = replies.catch((error: unknown) => {
-    Atomics.store(control.flags, CANCEL_FLAG, 1); // a worker failed: this thread stops its share
-    throw error;
-  });
-  const [, finished] = await Promise.all([failed, runCooperatively(control, pass)]);
-  if (!finished) throw new RunCancelledError();
+/**
+ * The run's progress, reported every 100 ms from the shared counters: set-up's share while
+ * sampling jobs and climate pieces are claimed, then the years simulated and summarised.
+ */
+class ParallelProgress {
+  private readonly timer: ReturnType<typeof setInterval>;
+  private readonly setupSteps: number;
+  private setupDone = 0;
+  private finishedYears = 0;
+  private readonly totalYears: number;
+
+  constructor(
+    plan: EnsemblePlan,
+    private readonly setup: PlanSetup,
+    private readonly control: PipelineControl,
+    private readonly report: (fraction: number) => void,
+  ) {
+    this.setupSteps = setup.jobs.length + 1 + setup.pieces;
+    this.totalYears = plan.pathways.reduce((s, p, i) => s + p.years + firstPassYears(plan, i), 0);
+    this.timer = setInterval(() => this.tick(), 100);
+  }
+
+  setupStep(steps: number): void {
+    this.setupDone += steps;
+    if (this.setupDone === this.setupSteps) this.report(setupProgress(1));
+  }
+
+  passDone(years: number): void {
+    this.finishedYears += years;
+    this.control.summarised.fill(0);
+  }
+
+  stop(): void {
+    clearInterval(this.timer);
+  }
+
+  private tick(): void {
+    const { setup, control } = this;
+    if (this.setupDone < this.setupSteps) {
+      // The set-up counter claims jobs, then (after the correlation step) climate pieces.
+      const phase = this.setupDone === 0 ? setup.jobs.length : setup.pieces;
+      const claimed = Math.min(phase, control.blockClaims[control.blockClaims.length - 1]!);
+      this.report(setupProgress((this.setupDone + claimed) / this.setupSteps));
+      return;
+    }
+    const reported = control.summarised.reduce((s, v) => s + v, 0);
+    this.report(simulationProgress((this.finishedYears + reported) / this.totalYears));
+  }
+}
+
+/** Runs a pass on this thread in slices (runCooperatively); rejects with RunCancelledError if cancelled. */
+async function runHere(control: PipelineControl, pass: Generator<PassPause, boolean>): Promise<void> {
+  if (!(await runCooperatively(control, pass))) throw new RunCancelledError();
 }
 
 /** Milliseconds this thread computes before it lets its event loop run. */
@@ -231,7 +248,7 @@ async function runCooperatively(control: PipelineControl, pass: Generator<PassPa
   }
 }
 
-/** The run's helper threads, driven in lock-step: each call sends one order to all and awaits all replies. */
+/** The run's helper threads, driven in lock-step: each call sends one order to each and awaits every reply. */
 class WorkerPool {
   private readonly threads: EngineThread[];
 
@@ -239,11 +256,12 @@ class WorkerPool {
     this.threads = takeEngineThreads(count);
   }
 
-  all(message: (worker: number, count: number) => ToWorker): Promise<FromWorker[]> {
-    return Promise.all(this.threads.map((thread, w) => thread.request(message(w, this.threads.length))));
+  /** Indexes of every thread. */
+  all(): number[] {
+    return this.threads.map((_, w) => w);
   }
 
-  /** As all(), to the threads `only` picks (by index). */
+  /** Sends one order to each thread `only` picks (by index) and awaits every reply. */
   some(only: number[], message: (worker: number) => ToWorker): Promise<FromWorker[]> {
     return Promise.all(only.map((w) => this.threads[w]!.request(message(w))));
   }
