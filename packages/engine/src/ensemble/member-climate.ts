@@ -101,7 +101,7 @@ function checkMemberPropagators(columns: ClimateColumns, out: MemberClimate): vo
   const { a11, a12, a21, a22, b1, b2, r1, r2, m11, m12, m21, m22 } = out;
   for (let m = 0; m < n; m++) {
     const lambda = columns.doublingForcing[m]! / columns.ecs[m]!;
-    // fillMemberClimate skipped this member: twoLayerPropagator gives the error it gives buildMemberClimate.
+    // fillMemberClimate skipped this member: twoLayerPropagator words the refusal.
     if (!isPositive(lambda)) twoLayerPropagator(propagatorInputs(columns, m, lambda));
     const finite =
       Number.isFinite(a11[m]!) && Number.isFinite(a12[m]!) && Number.isFinite(a21[m]!) && Number.isFinite(a22[m]!) &&

@@ -23,6 +23,8 @@ export interface SetupArrays {
   climates: MemberClimate[];
   /** Each member's implied TCR in the first member climate (implied-tcr.ts). */
   tcr: Float64Array;
+  /** The kernel memory every array above lives in. */
+  memory: WebAssembly.Memory;
 }
 
 /**
@@ -92,7 +94,7 @@ export class PlanSetup {
 
   sample(job: number): void {
     const { inputs, columns } = this.arrays;
-    runSamplingJob(this.spec, inputs, columns, this.correlated, this.jobs[job]!);
+    runSamplingJob(this.spec, inputs, columns, this.correlated, this.jobs[job]!, this.arrays.memory);
   }
 
   /** Re-pairs the correlated inputs (Iman–Conover) and maps them through their laws; after every sampling job. */

@@ -66,7 +66,7 @@ export function allocatePlan(input: RunSpecInput | RunSpec, spansInRing: number,
   const variants = [...new Set(sources)];
   const climates = variants.map(() => allocateMemberClimate(ecs, memory.float64(spec.members), memory.float64));
   const tcr = memory.float64(spec.members);
-  const setup = new PlanSetup(spec, { inputs, columns, climates, tcr }, memory.int32(PlanSetup.piecesOf(spec, variants.length)));
+  const setup = new PlanSetup(spec, { inputs, columns, climates, tcr, memory: memory.memory }, memory.int32(PlanSetup.piecesOf(spec, variants.length)));
   let pathways: PathwayForcing[];
   try {
     const names = inputs.map((x) => x.name);
@@ -75,7 +75,7 @@ export function allocatePlan(input: RunSpecInput | RunSpec, spansInRing: number,
     return { spec, plan: null, setup, pathwayError: error instanceof Error ? error : new Error(String(error)) };
   }
   const pathwayClimate = sources.map((s) => variants.indexOf(s));
-  const plan = assemblePlan(spec, { inputs, columns, climates, tcr }, pathwayClimate, pathways, spansInRing, memory, summaries);
+  const plan = assemblePlan(spec, { inputs, columns, climates, tcr, memory: memory.memory }, pathwayClimate, pathways, spansInRing, memory, summaries);
   return { spec, plan, setup, pathwayError: null };
 }
 

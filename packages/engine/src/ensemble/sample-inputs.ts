@@ -43,15 +43,26 @@ export function samplingJobs(spec: RunSpec, inputs: ModelInput[]): number[][] {
 /**
  * Runs one sampling job: fills the columns of inputs `job` (samplingJobs) with their draws,
  * mapped through each input's inverse CDF unless the input is correlated (correlateColumns
- * maps those after re-pairing).
+ * maps those after re-pairing). With `memory` (the kernel memory the columns live in), Monte
+ * Carlo uniforms are drawn by the random kernels: the same draws, faster in a fresh process.
  */
-export function runSamplingJob(spec: RunSpec, inputs: ModelInput[], columns: Float64Array[], correlated: number[], job: number[]): void {
+export function runSamplingJob(
+  spec: RunSpec,
+  inputs: ModelInput[],
+  columns: Float64Array[],
+  correlated: number[],
+  job: number[],
+  memory?: WebAssembly.Memory,
+): void {
   const streams = job.map((i) =>
     inputs[i]!.distribution.type === "fixed" ? null : new AleaStream(deriveSeed(spec.seed, `input/${inputs[i]!.name}`)),
   );
   if (spec.sampling === "monte-carlo") {
-    if (job.length === 2) AleaStream.fillTwo(streams[0]!, columns[job[0]!]!, streams[1]!, columns[job[1]!]!);
-    else streams[0]?.fill(columns[job[0]!]!);
+    const [a, b] = [columns[job[0]!]!, job.length === 2 ? columns[job[1]!]! : null];
+    if (b && memory) AleaStream.fillTwoInMemory(streams[0]!, a, streams[1]!, b, memory);
+    else if (b) AleaStream.fillTwo(streams[0]!, a, streams[1]!, b);
+    else if (memory) streams[0]?.fillInMemory(a, memory);
+    else streams[0]?.fill(a);
   }
   job.forEach((i, k) => sampleColumn(spec, inputs[i]!, columns[i]!, streams[k]!, correlated.includes(i)));
 }

@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
-import { compileKernelText, kernelModuleSource } from "../../scripts/kernel-text.mjs";
+import { KERNEL_MODULES, compileKernelText, kernelModuleSource } from "../../scripts/kernel-text.mjs";
 import { createKernelMemory, type KernelMemory } from "./kernel-memory.js";
 import { memberKernels } from "./member-kernels.js";
 
@@ -13,11 +13,12 @@ import { memberKernels } from "./member-kernels.js";
  */
 
 describe("the committed kernel bytes", () => {
-  it("are member-kernels.wat compiled by wabt (rebuild: pnpm --filter @plumeline/engine build:kernels)", async () => {
-    const wat = readFileSync(new URL("./member-kernels.wat", import.meta.url), "utf8");
-    const committed = readFileSync(new URL("./member-kernels-wasm.ts", import.meta.url), "utf8");
-    expect(committed).toBe(kernelModuleSource(await compileKernelText(wat)));
-  });
+  for (const kernel of KERNEL_MODULES)
+    it(`are ${kernel.wat} compiled by wabt (rebuild: pnpm --filter @plumeline/engine build:kernels)`, async () => {
+      const wat = readFileSync(new URL(`./${kernel.wat}`, import.meta.url), "utf8");
+      const committed = readFileSync(new URL(`./${kernel.ts}`, import.meta.url), "utf8");
+      expect(committed).toBe(kernelModuleSource(await compileKernelText(wat, kernel.wat), kernel));
+    });
 });
 
 /** A small seeded stream (Park–Miller), enough to fill test arrays reproducibly. */
@@ -53,7 +54,17 @@ describe("forcing kernel", () => {
         extremes[1] = 0.5;
         const t = 2;
         const base = r(-1, 1);
-        memberKernels(memory.memory).forcing(out.byteOffset, 3, n, base, table.byteOffset, coefficients.byteOffset + 8 * t, 8 * years, width, extremes.byteOffset);
+        memberKernels(memory.memory).forcing(
+          out.byteOffset,
+          3,
+          n,
+          base,
+          table.byteOffset,
+          coefficients.byteOffset + 8 * t,
+          8 * years,
+          width,
+          extremes.byteOffset,
+        );
         let min = 0.25;
         let max = 0.5;
         for (let m = 3; m < 3 + n; m++) {
@@ -75,13 +86,42 @@ function stepFixture(members: number, seed: number) {
   const r = stream(seed);
   const a = (lo: number, hi: number) => filled(memory, members, () => r(lo, hi));
   const arrays = {
-    a11: a(0.8, 0.9), a12: a(0.01, 0.02), a21: a(0.001, 0.003), a22: a(0.99, 0.999), b1: a(0.1, 0.13), b2: a(0.0005, 0.001),
-    upper: a(-0.5, 2), deep: a(-0.2, 1), baselineMean: a(-0.1, 0.1), windowMean: a(0, 0.2), nextThreshold: a(0.5, 2.5),
-    lambda: a(0.8, 1.6), extraUptake: a(0, 0.2),
-    m11: a(0.9, 0.95), m12: a(0.005, 0.01), m21: a(0.0005, 0.002), m22: a(0.995, 0.9995), r1: a(0.05, 0.07), r2: a(0.0001, 0.0004),
+    a11: a(0.8, 0.9),
+    a12: a(0.01, 0.02),
+    a21: a(0.001, 0.003),
+    a22: a(0.99, 0.999),
+    b1: a(0.1, 0.13),
+    b2: a(0.0005, 0.001),
+    upper: a(-0.5, 2),
+    deep: a(-0.2, 1),
+    baselineMean: a(-0.1, 0.1),
+    windowMean: a(0, 0.2),
+    nextThreshold: a(0.5, 2.5),
+    lambda: a(0.8, 1.6),
+    extraUptake: a(0, 0.2),
+    m11: a(0.9, 0.95),
+    m12: a(0.005, 0.01),
+    m21: a(0.0005, 0.002),
+    m22: a(0.995, 0.9995),
+    r1: a(0.05, 0.07),
+    r2: a(0.0001, 0.0004),
   };
   const crossed = memory.int32(members);
-  const order = ["a11", "a12", "a21", "a22", "b1", "b2", "upper", "deep", "baselineMean", "windowMean", "nextThreshold", "lambda", "extraUptake"] as const;
+  const order = [
+    "a11",
+    "a12",
+    "a21",
+    "a22",
+    "b1",
+    "b2",
+    "upper",
+    "deep",
+    "baselineMean",
+    "windowMean",
+    "nextThreshold",
+    "lambda",
+    "extraUptake",
+  ] as const;
   const meanOrder = ["m11", "m12", "m21", "m22", "r1", "r2"] as const;
   const frame = memory.int32(20);
   order.forEach((name, i) => (frame[i] = arrays[name].byteOffset));
@@ -94,7 +134,11 @@ function stepFixture(members: number, seed: number) {
 
 describe("step kernels", () => {
   for (const n of [1, 2, 9, 64]) {
-    for (const [inBaseline, inWindow] of [[1, 0], [0, 1], [0, 0]] as const)
+    for (const [inBaseline, inWindow] of [
+      [1, 0],
+      [0, 1],
+      [0, 0],
+    ] as const)
       it(`baseline step, ${n} members from member 1, baseline ${inBaseline} window ${inWindow}: the exact propagator and the sums of the year's mean`, () => {
         const x = stepFixture(n + 2, n);
         memberKernels(x.memory.memory).baselineStep(x.frame.byteOffset, 1, n, x.forcing.byteOffset, inBaseline, inWindow);
@@ -120,8 +164,15 @@ describe("step kernels", () => {
         tallies.set([0, 0, Infinity, -Infinity, Infinity, -Infinity, -1]);
         const lowest = 1;
         const crossings = memberKernels(x.memory.memory).reportedStep(
-          x.frame.byteOffset, 1, n, x.forcing.byteOffset, anomaly.byteOffset, withImbalance ? imbalance.byteOffset : 0,
-          tallies.byteOffset, lowest, tallies.byteOffset + 48,
+          x.frame.byteOffset,
+          1,
+          n,
+          x.forcing.byteOffset,
+          anomaly.byteOffset,
+          withImbalance ? imbalance.byteOffset : 0,
+          tallies.byteOffset,
+          lowest,
+          tallies.byteOffset + 48,
         );
         const b = x.before;
         let above = 0;

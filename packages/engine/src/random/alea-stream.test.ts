@@ -1,5 +1,6 @@
 import seedrandom from "seedrandom";
 import { describe, expect, it } from "vitest";
+import { createKernelMemory } from "../kernels/kernel-memory.js";
 import { AleaStream, type AleaState } from "./alea-stream.js";
 import { createRandom } from "./create-random.js";
 
@@ -93,6 +94,33 @@ describe("AleaStream", () => {
     expect(second).toEqual(seedrandomDraws("other", 4));
     AleaStream.fillTwo(new AleaStream("other"), second, new AleaStream(zeroFirst), first);
     expect(first).toEqual(expected);
+  });
+
+  it("draws the same numbers into a kernel memory by the random kernels (WebAssembly), zeros redrawn too", () => {
+    const memory = createKernelMemory();
+    const [outA, outB, single] = [memory.float64(100_001), memory.float64(100_001), memory.float64(50_000)];
+    const a = new AleaStream("w1/input/ecs");
+    const b = new AleaStream("w1/input/f2x");
+    AleaStream.fillTwoInMemory(a, outA, b, outB, memory.memory);
+    expect(firstDifference(outA, seedrandomDraws("w1/input/ecs", 100_001))).toBe(-1);
+    expect(firstDifference(outB, seedrandomDraws("w1/input/f2x", 100_001))).toBe(-1);
+    // The states come back: both streams, in JavaScript and in memory, carry on where they stopped.
+    const afterA = seedrandomDraws("w1/input/ecs", 150_003);
+    expect(a.next()).toBe(afterA[100_001]);
+    a.fillInMemory(single, memory.memory);
+    expect(firstDifference(single, afterA.subarray(100_002, 150_002))).toBe(-1);
+    expect(a.next()).toBe(afterA[150_002]);
+    expect(b.next()).toBe(seedrandomDraws("w1/input/f2x", 100_002)[100_001]);
+    // A first draw of exactly 0 is skipped (see the test above), in either stream of a pair.
+    const zeroFirst: AleaState = { c: 0, s0: 0, s1: 0, s2: 0.5 };
+    const expected = seedrandomDraws(zeroFirst, 4);
+    const [first, second] = [memory.float64(4), memory.float64(4)];
+    AleaStream.fillTwoInMemory(new AleaStream("other"), second, new AleaStream(zeroFirst), first, memory.memory);
+    expect(first).toEqual(expected);
+    expect(second).toEqual(seedrandomDraws("other", 4));
+    new AleaStream(zeroFirst).fillInMemory(first, memory.memory);
+    expect(first).toEqual(expected);
+    expect(() => AleaStream.fillTwoInMemory(a, outA, b, single, memory.memory)).toThrow(/outB must be as long as outA/);
   });
 
   it("backs createRandom: calls and fill give the same draws as seedrandom", () => {

@@ -1,4 +1,5 @@
 import seedrandom from "seedrandom";
+import { randomKernels } from "../kernels/random-kernels.js";
 
 /** Alea's state in seedrandom's naming: carry c and the three lagged values s0, s1, s2. */
 export interface AleaState {
@@ -143,6 +144,38 @@ export class AleaStream {
     stateB[1] = r0;
     stateB[2] = r1;
     stateB[3] = r2;
+  }
+
+  /**
+   * fill(out) for a column of a kernel memory (kernels/kernel-memory.ts), by the random kernels
+   * (kernels/random-kernels.wat): the same draws, without the unoptimised JavaScript's boxed
+   * doubles in a fresh process.
+   */
+  fillInMemory(out: Float64Array, memory: WebAssembly.Memory): void {
+    const s = this.state;
+    const next = randomKernels(memory).fill(out.byteOffset, out.length, s[0]!, s[1]!, s[2]!, s[3]!);
+    s.set(next);
+  }
+
+  /** fillTwo for two columns of one kernel memory, by the random kernels (as fillInMemory). */
+  static fillTwoInMemory(a: AleaStream, outA: Float64Array, b: AleaStream, outB: Float64Array, memory: WebAssembly.Memory): void {
+    if (outB.length !== outA.length) throw new RangeError("outB must be as long as outA");
+    const [p, q] = [a.state, b.state];
+    const next = randomKernels(memory).fillTwo(
+      outA.byteOffset,
+      outB.byteOffset,
+      outA.length,
+      p[0]!,
+      p[1]!,
+      p[2]!,
+      p[3]!,
+      q[0]!,
+      q[1]!,
+      q[2]!,
+      q[3]!,
+    );
+    p.set(next.slice(0, 4));
+    q.set(next.slice(4));
   }
 
   /** out[from … to) ← the next draws in order, as that many next() calls would give them. */
