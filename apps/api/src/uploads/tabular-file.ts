@@ -3,7 +3,8 @@
  * Each module then parses the rows by its own header rules and names bad cells by row and column.
  */
 import { parse } from "csv-parse/sync";
-import ExcelJS from "exceljs";
+import type * as ExcelJS from "exceljs";
+import { loadExcelJs } from "../lazy-modules.js";
 import { AppError, badRequest } from "../errors/app-error.js";
 import { extractNeededXlsxParts, XlsxNotAZipError } from "./xlsx-parts.js";
 
@@ -120,7 +121,7 @@ export async function readXlsxRows(buffer: Buffer): Promise<RawRow[]> {
     if (error instanceof XlsxNotAZipError) throw new UnreadableFileError(`the XLSX workbook could not be read: ${error.message}`);
     throw error;
   }
-  const workbook = new ExcelJS.Workbook();
+  const workbook = new (await loadExcelJs()).Workbook();
   try {
     await workbook.xlsx.load(parts as unknown as ArrayBuffer);
   } catch (error) {

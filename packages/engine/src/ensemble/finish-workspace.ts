@@ -17,6 +17,8 @@ export interface FinishWorkspace {
   inputOrders: Map<number, Uint32Array>;
   /** sortOrder's sorted copy (the same array as `column`: the two are never in use at once) and flags. */
   sort: SortScratch;
+  /** The member order of one horizon's warming at a time (only its ranks are kept). */
+  warmingOrder: Uint32Array;
   /** One input's weighted mid-ranks at a time. */
   inputRanks: Float64Array;
   /** Per horizon, the pathway's warming's weighted mid-ranks. */
@@ -30,6 +32,7 @@ export function createFinishWorkspace(members: number, horizons: number): Finish
     column,
     inputOrders: new Map(),
     sort: { sorted: column, taken: new Uint8Array(members) },
+    warmingOrder: new Uint32Array(members),
     inputRanks: new Float64Array(members),
     warmingRanks: Array.from({ length: horizons }, () => new Float64Array(members)),
   };

@@ -36,7 +36,7 @@ export function sensitivityBudget(
   // ranks were held at once, so the same numbers; entries stay in horizon-then-input order.
   const warmingRanks = plan.horizons.map((_, h) => {
     const warming = plan.state.horizonTemperature[h]!;
-    return weightedMidRanks(warming, sortOrder(warming, work.sort), weights, totalWeight, work.warmingRanks[h]);
+    return weightedMidRanks(warming, sortOrder(warming, work.sort, work.warmingOrder), weights, totalWeight, work.warmingRanks[h]);
   });
   const entries = new Array<SensitivityEntry>(plan.horizons.length * relevant.length);
   const ranks = work.inputRanks;

@@ -13,9 +13,14 @@ function columns(n: number, count: number, seed: string): Float64Array[] {
 const indexSort = (values: Float64Array) => Array.from(values.keys()).sort((a, b) => values[a]! - values[b]! || a - b);
 
 describe("sortOrder and weightedMidRanks with reused working arrays", () => {
-  it("one scratch sorts column after column into the same orders as a comparator sort", () => {
+  it("one scratch and one order array sort column after column into the same orders as a comparator sort", () => {
     const scratch = sortScratch(2000);
-    for (const column of columns(2000, 4, "reused-scratch")) expect(Array.from(sortOrder(column, scratch))).toEqual(indexSort(column));
+    const order = new Uint32Array(2000);
+    for (const column of columns(2000, 4, "reused-scratch")) {
+      expect(Array.from(sortOrder(column, scratch))).toEqual(indexSort(column));
+      expect(sortOrder(column, scratch, order)).toBe(order);
+      expect(Array.from(order)).toEqual(indexSort(column));
+    }
   });
 
   it("one ranks array reused across columns gives Spearman's coefficient (simple-statistics sampleRankCorrelation)", () => {
@@ -33,6 +38,7 @@ describe("sortOrder and weightedMidRanks with reused working arrays", () => {
   it("refuses working arrays of the wrong size, naming them", () => {
     const values = new Float64Array([3, 1, 2]);
     expect(() => sortOrder(values, sortScratch(4))).toThrow(/scratch must be sized for 3 values/);
+    expect(() => sortOrder(values, sortScratch(3), new Uint32Array(5))).toThrow(/order must hold 3 members/);
     expect(() => weightedMidRanks(values, sortOrder(values), null, 3, new Float64Array(2))).toThrow(/out must hold 3 ranks/);
   });
 });

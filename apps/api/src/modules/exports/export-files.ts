@@ -1,6 +1,6 @@
 import { createHash } from "node:crypto";
 import { RESULT_TABLES, type ResultTable, type RunResult, type RunSpec } from "@plumeline/contracts";
-import JSZip from "jszip";
+import { loadJsZip } from "../../lazy-modules.js";
 import { buildRunReport } from "../reports/run-report.js";
 import { tableToCsv } from "./csv-writer.js";
 import { resultTable } from "./result-tables.js";
@@ -61,7 +61,7 @@ export function tablesOf(result: RunResult): ResultTable[] {
  * the export time so the same export rebuilds to the same bytes.
  */
 async function tablesZip(source: ExportSource, manifest: WorkbookManifest, base: string): Promise<Buffer> {
-  const zip = new JSZip();
+  const zip = new (await loadJsZip())();
   const date = new Date(manifest.exportedAt);
   const files: Array<{ file: string; table: ResultTable; sha256: string }> = [];
   for (const table of tablesOf(source.result)) {

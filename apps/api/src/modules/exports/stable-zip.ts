@@ -1,4 +1,4 @@
-import JSZip from "jszip";
+import { loadJsZip } from "../../lazy-modules.js";
 
 /**
  * Rewrites a zip (an .xlsx is one) with every entry dated `date`, in the same order, so the
@@ -6,6 +6,7 @@ import JSZip from "jszip";
  * would make a rebuilt export differ from its recorded checksum although nothing in it did.
  */
 export async function withFixedEntryDates(bytes: Buffer, date: Date): Promise<Buffer> {
+  const JSZip = await loadJsZip();
   const source = await JSZip.loadAsync(bytes);
   const out = new JSZip();
   for (const entry of Object.values(source.files)) {

@@ -1,4 +1,5 @@
-import ExcelJS from "exceljs";
+import type * as ExcelJS from "exceljs";
+import { loadExcelJs } from "../../lazy-modules.js";
 import {
   CLIMATE_INPUT_UNITS,
   PERIL_RULES,
@@ -231,7 +232,7 @@ function addPortfolioTotals(workbook: ExcelJS.Workbook, result: RunResult, tag: 
 
 /** The run's workbook: Manifest first, result tables, Inputs, Cautions. Returns the .xlsx bytes. */
 export async function buildRunWorkbook(manifest: WorkbookManifest, result: RunResult, model: ModelSpec, members: MemberSheet): Promise<Buffer> {
-  const workbook = new ExcelJS.Workbook();
+  const workbook = new (await loadExcelJs()).Workbook();
   workbook.creator = "Plumeline";
   // Fixed dates keep the bytes of two exports of the same run comparable apart from the manifest.
   workbook.created = new Date(manifest.exportedAt);

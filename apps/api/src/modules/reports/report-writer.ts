@@ -1,4 +1,4 @@
-import PDFDocument from "pdfkit";
+import { loadPdfKit } from "../../lazy-modules.js";
 import { DANGER, FAINT, INK, LINE, LINE_STRONG, MUTED, OK, REPORT_FONTS, SURFACE_2, TEXT } from "./report-style.js";
 
 export interface Column {
@@ -20,7 +20,13 @@ export class ReportWriter {
   readonly width = 595.28 - 96;
   private readonly bottom = 841.89 - 56;
 
-  constructor(
+  /** A writer with its first page open (PDFKit is loaded on first use: lazy-modules.ts). */
+  static async open(head: { title: string; exploratory: boolean; foot: string }, createdAt: Date): Promise<ReportWriter> {
+    return new ReportWriter(await loadPdfKit(), head, createdAt);
+  }
+
+  private constructor(
+    PDFDocument: Awaited<ReturnType<typeof loadPdfKit>>,
     private readonly head: { title: string; exploratory: boolean; foot: string },
     createdAt: Date,
   ) {

@@ -46,7 +46,7 @@ const date = (iso: string | null) => (iso ? formatUtcDateTime(iso) : "–");
  * Built from stored data only, with fixed metadata, so the same export rebuilds byte for byte.
  */
 export async function buildRunReport(manifest: WorkbookManifest, result: RunResult, spec: { perils?: unknown }): Promise<Buffer> {
-  const w = new ReportWriter(
+  const w = await ReportWriter.open(
     {
       title: manifest.runName,
       exploratory: manifest.exploratory,
