@@ -67,6 +67,21 @@ describe("POST /api/runs", () => {
     await t.ctx.models.Job.update({ status: "cancelled" }, { where: { id: job.id } }); // keep the queue clear for later tests
   });
 
+  it("names each pathway in the run's manifest with the checksum, source and vintage the pathway has", async () => {
+    const res = await analyst.post("/api/runs").send(runBody({ seed: "manifest-names" }));
+    const got = await analyst.get(`/api/runs/${res.body.id}`);
+    expect(got.status).toBe(200);
+    const expected = await Promise.all(
+      pathwayIds.map(async (id) => {
+        const p = (await analyst.get(`/api/pathways/${id}`)).body as { id: string; name: string; checksum: string; source: string; vintage: string };
+        return { id, name: p.name, checksum: p.checksum, source: p.source, vintage: p.vintage };
+      }),
+    );
+    expect(got.body.manifest.pathways).toEqual(expected);
+    expect(expected.every((p) => p.checksum.length === 64)).toBe(true);
+    await queue().requestCancel((await t.ctx.models.Run.findByPk(res.body.id))!.jobId!);
+  });
+
   it("answers 401, 403 (manager lacks runs:create), 400 naming bad fields, and 404", async () => {
     expect((await request(t.app).post("/api/runs").send(runBody())).status).toBe(401);
     const denied = await manager.post("/api/runs").send(runBody());
