@@ -18,19 +18,16 @@ import { yearlyLength } from "./yearly-layout.js";
  * each pathway's forcing: all the deterministic set-up of a run on this thread (the
  * parallel runner shares the same pieces out: allocatePlan, plan-setup.ts). Every
  * per-member array goes into one new shared kernel memory (kernel-memory.ts), which worker
- * threads can share. spansInRing: how many spans of year slots exist at once (1 for one
- * thread; 2 lets workers simulate the next span while the last one is being summarised).
- * summaries: forcing and imbalance series on (default) or off (ensemble-plan.ts
+ * threads can share. summaries: forcing and imbalance series on (default) or off (ensemble-plan.ts
  * SummaryChoice). onSetup(fraction): set-up's own progress, 0–1, so a caller's progress can
  * move before the first year is simulated.
  */
 export function preparePlan(
   input: RunSpecInput | RunSpec,
-  spansInRing = 1,
   summaries: Partial<SummaryChoice> = {},
   onSetup?: (fraction: number) => void,
 ): { spec: RunSpec; plan: EnsemblePlan } {
-  const { spec, plan, setup, pathwayError } = allocatePlan(input, spansInRing, summaries);
+  const { spec, plan, setup, pathwayError } = allocatePlan(input, summaries);
   setup.runAll(onSetup && ((done, of) => onSetup(done / of)));
   // A pathway's forcing error comes after the samples' own refusals (their order always).
   if (pathwayError !== null) throw pathwayError;
@@ -55,7 +52,7 @@ export interface AllocatedPlan {
  * fails validation; a pathway's forcing error is returned, to be thrown after set-up's own
  * refusals.
  */
-export function allocatePlan(input: RunSpecInput | RunSpec, spansInRing: number, summaries: Partial<SummaryChoice>): AllocatedPlan {
+export function allocatePlan(input: RunSpecInput | RunSpec, summaries: Partial<SummaryChoice>): AllocatedPlan {
   const spec = applyDefaults(input);
   validateSpec(spec);
   const memory = createKernelMemory();
@@ -75,7 +72,7 @@ export function allocatePlan(input: RunSpecInput | RunSpec, spansInRing: number,
     return { spec, plan: null, setup, pathwayError: error instanceof Error ? error : new Error(String(error)) };
   }
   const pathwayClimate = sources.map((s) => variants.indexOf(s));
-  const plan = assemblePlan(spec, { inputs, columns, climates, tcr, memory: memory.memory }, pathwayClimate, pathways, spansInRing, memory, summaries);
+  const plan = assemblePlan(spec, { inputs, columns, climates, tcr, memory: memory.memory }, pathwayClimate, pathways, memory, summaries);
   return { spec, plan, setup, pathwayError: null };
 }
 
@@ -84,19 +81,18 @@ function assemblePlan(
   { inputs, columns, climates, tcr }: SetupArrays,
   pathwayClimate: number[],
   pathways: PathwayForcing[],
-  spansInRing: number,
   memory: KernelMemory,
   summaries: Partial<SummaryChoice>,
 ): EnsemblePlan {
   const maxYears = Math.max(...pathways.map((p) => p.years));
   const probs = spec.percentiles.map((p) => p / 100);
-  const span = spanYears(spec.members, spansInRing);
+  const span = spanYears(spec.members);
   const blocks = Math.ceil(spec.members / MEMBER_BLOCK);
   const state = allocateState(
     spec.members,
     spec.thresholds.length,
     spec.horizons.length,
-    span * spansInRing,
+    span,
     blocks,
     yearlyLength(probs.length, spec.thresholds.length, maxYears),
     memory,

@@ -54,7 +54,7 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
     clock = now;
   };
   const report = options.onProgress && ((fraction: number) => options.onProgress?.(fraction));
-  const { spec, plan } = preparePlan(input, 1, options.summaries, report && ((f) => report(setupProgress(f))));
+  const { spec, plan } = preparePlan(input, options.summaries, report && ((f) => report(setupProgress(f))));
   lap("sample");
   const n = plan.members;
   const totalYears = plan.pathways.reduce((s, p, i) => s + p.years + firstPassYears(plan, i), 0);

@@ -65,11 +65,11 @@ export async function runEnsembleParallel(input: RunSpecInput | RunSpec, options
   const pool = new WorkerPool(threads);
   try {
     const start = performance.now();
-    const allocated = allocatePlan(input, 2, options.summaries ?? {});
+    const allocated = allocatePlan(input, options.summaries ?? {});
     if (allocated.plan === null) {
       // A pathway's forcing cannot be built: set up on this thread, which throws the spec's
       // refusals in their usual order (the samples' own first, then the pathway's).
-      preparePlan(input, 2, options.summaries);
+      preparePlan(input, options.summaries);
       throw allocated.pathwayError!;
     }
     return await runWithPool(allocated.spec, allocated.plan, allocated.setup, pool, options, start);
