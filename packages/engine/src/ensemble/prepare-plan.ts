@@ -63,7 +63,11 @@ export function allocatePlan(input: RunSpecInput | RunSpec, summaries: Partial<S
   const variants = [...new Set(sources)];
   const climates = variants.map(() => allocateMemberClimate(ecs, memory.float64(spec.members), memory.float64));
   const tcr = memory.float64(spec.members);
-  const setup = new PlanSetup(spec, { inputs, columns, climates, tcr, memory: memory.memory }, memory.int32(PlanSetup.piecesOf(spec, variants.length)));
+  const setup = new PlanSetup(
+    spec,
+    { inputs, columns, climates, tcr, memory: memory.memory },
+    memory.int32(PlanSetup.piecesOf(spec, variants.length)),
+  );
   let pathways: PathwayForcing[];
   try {
     const names = inputs.map((x) => x.name);
