@@ -27,9 +27,18 @@ const mixed = (members, withConstraint) => ({
     forcingExpression: "ar6",
   },
 });
+// Pathways that alternate between CO2 as ERF and CO2 in ppm: the member climate is rebuilt
+// for each change of source of F2x (ensemble-plan.ts climate).
+const alternating = (members) => {
+  const spec = mixed(members, true);
+  const ppm = (p) => ({ ...p, agents: { ...p.agents, co2: { ppm: Array.from({ length: p.agents.co2.erf.length }, (_, t) => 278 + 400 * (t / (p.agents.co2.erf.length - 1)) ** 2.5) } } });
+  const [wide, narrow] = spec.pathways;
+  return { ...spec, pathways: [wide, ppm({ ...narrow, id: "narrow-ppm" }), { ...narrow, id: "narrow-erf" }, ppm({ ...wide, id: "wide-ppm" })] };
+};
 const cases = [
   ["w1 5000", w1Spec(5000)], ["w1 30001", w1Spec(30001)],
   ["mixed 5001", mixed(5001, false)], ["mixed 30000 constrained", mixed(30000, true)],
+  ["alternating co2 sources 20000 constrained", alternating(20000)],
 ];
 for (const [name, spec] of cases)
   for (const summaries of [{}, { forcing: false, imbalance: false }])

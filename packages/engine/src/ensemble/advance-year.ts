@@ -34,7 +34,7 @@ export function advanceBaselineYears(
   const pathway = plan.pathways[pathwayIndex]!;
   const columns = plan.kernels.forcingColumns[pathwayIndex]!.byteOffset;
   const coefficients = plan.kernels.forcingCoefficients[pathwayIndex]!.byteOffset;
-  const frame = plan.kernels.frames[plan.pathwayClimate[pathwayIndex]!]!.byteOffset;
+  const frame = plan.kernels.frame.byteOffset;
   const scratch = plan.state.blockForcing.byteOffset;
   for (let b = lo; b < hi; b += MEMBER_BLOCK) {
     const n = Math.min(hi, b + MEMBER_BLOCK) - b;
@@ -83,7 +83,7 @@ export function advanceReportedMembers(plan: EnsemblePlan, pathwayIndex: number,
   const pathway = plan.pathways[pathwayIndex]!;
   const columns = plan.kernels.forcingColumns[pathwayIndex]!.byteOffset;
   const coefficients = plan.kernels.forcingCoefficients[pathwayIndex]!.byteOffset;
-  const frame = plan.kernels.frames[plan.pathwayClimate[pathwayIndex]!]!.byteOffset;
+  const frame = plan.kernels.frame.byteOffset;
   const crossed = plan.state.crossedMembers;
   for (let t = t0; t < t1; t++) {
     const slot = slots[t % ring]!;

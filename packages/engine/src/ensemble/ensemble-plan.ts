@@ -48,15 +48,17 @@ export interface EnsemblePlan {
   columns: Float64Array[];
   /** Where the member kernels find the plan's arrays (kernel-layout.ts). */
   kernels: KernelLayout;
-  /** The first pathway's member climate (implied ECS and TCR are read from it). */
-  climate: MemberClimate;
   /**
-   * One member climate per source of F2x the pathways use (doubling-forcing.ts): a
-   * concentration pathway's members feel the expression's doubled-CO2 forcing, an ERF
-   * pathway's the sampled f2x, so their feedbacks differ.
+   * The members' climate (propagators, λ): one set of arrays, holding the climate of the
+   * pathway being run. A concentration pathway's members feel the expression's doubled-CO2
+   * forcing, an ERF pathway's the sampled f2x, so their feedbacks differ
+   * (doubling-forcing.ts); set-up builds the first pathway's, and the pipeline has it rebuilt
+   * in place before a pathway that feels another source (run-pipeline.ts). Why one set: a
+   * second would cost 15 arrays of members (120 MB at 1,000,000 members); rebuilding costs
+   * a set-up's climate pieces once per change of source.
    */
-  climates: MemberClimate[];
-  /** Per pathway, the index of its climate in `climates`. */
+  climate: MemberClimate;
+  /** Per pathway, the index of its source of F2x (in order of first use by the pathways). */
   pathwayClimate: number[];
   /** Each member's implied TCR in the first pathway's climate (implied-tcr.ts), filled by set-up. */
   tcr: Float64Array;

@@ -9,11 +9,8 @@ import type { PathwayForcing } from "./pathway-forcing.js";
  */
 export interface KernelLayout {
   memory: WebAssembly.Memory;
-  /**
-   * Per member climate (plan.climates), the per-member arrays of the two-layer step in the
-   * order the .wat's frame lists them; a pathway steps with the frame of its climate.
-   */
-  frames: Int32Array[];
+  /** The per-member arrays of the two-layer step (plan.climate, state) in the order the .wat's frame lists them. */
+  frame: Int32Array;
   /**
    * Per pathway, per forcing slot (pathway-forcing.ts slotColumns, padded to its
    * scaleWidth): the address of the scale column the forcing kernel reads, state.zeros for
@@ -26,18 +23,17 @@ export interface KernelLayout {
 
 export function layOutKernels(
   memory: KernelMemory,
-  climates: MemberClimate[],
+  climate: MemberClimate,
   state: EnsembleState,
   columns: Float64Array[],
   pathways: PathwayForcing[],
 ): KernelLayout {
   return {
     memory: memory.memory,
-    frames: climates.map((climate) => frameOf(memory, climate, state)),
+    frame: frameOf(memory, climate, state),
     forcingColumns: pathways.map((p) => {
       const table = memory.int32(p.scaleWidth);
-      for (let j = 0; j < p.scaleWidth; j++)
-        table[j] = (j < p.slotColumns.length ? columns[p.slotColumns[j]!]! : state.zeros).byteOffset;
+      for (let j = 0; j < p.scaleWidth; j++) table[j] = (j < p.slotColumns.length ? columns[p.slotColumns[j]!]! : state.zeros).byteOffset;
       return table;
     }),
     forcingCoefficients: pathways.map((p) => {
@@ -51,7 +47,28 @@ export function layOutKernels(
 function frameOf(memory: KernelMemory, climate: MemberClimate, state: EnsembleState): Int32Array {
   const { a11, a12, a21, a22, b1, b2, lambda, extraUptake, m11, m12, m21, m22, r1, r2 } = climate;
   const { upper, deep, baselineMean, windowMean, nextThreshold, crossedMembers } = state;
-  const arrays = [a11, a12, a21, a22, b1, b2, upper, deep, baselineMean, windowMean, nextThreshold, lambda, extraUptake, crossedMembers, m11, m12, m21, m22, r1, r2];
+  const arrays = [
+    a11,
+    a12,
+    a21,
+    a22,
+    b1,
+    b2,
+    upper,
+    deep,
+    baselineMean,
+    windowMean,
+    nextThreshold,
+    lambda,
+    extraUptake,
+    crossedMembers,
+    m11,
+    m12,
+    m21,
+    m22,
+    r1,
+    r2,
+  ];
   const frame = memory.int32(arrays.length);
   arrays.forEach((array, i) => (frame[i] = array.byteOffset));
   return frame;

@@ -20,19 +20,20 @@ import { yearlyLength } from "./yearly-layout.js";
  * per-member array goes into one new shared kernel memory (kernel-memory.ts), which worker
  * threads can share. summaries: forcing and imbalance series on (default) or off (ensemble-plan.ts
  * SummaryChoice). onSetup(fraction): set-up's own progress, 0–1, so a caller's progress can
- * move before the first year is simulated.
+ * move before the first year is simulated. The set-up is returned too: the runner rebuilds
+ * the member climate with it for a pathway that feels another source of F2x.
  */
 export function preparePlan(
   input: RunSpecInput | RunSpec,
   summaries: Partial<SummaryChoice> = {},
   onSetup?: (fraction: number) => void,
-): { spec: RunSpec; plan: EnsemblePlan } {
+): { spec: RunSpec; plan: EnsemblePlan; setup: PlanSetup } {
   const { spec, plan, setup, pathwayError } = allocatePlan(input, summaries);
   setup.runAll(onSetup && ((done, of) => onSetup(done / of)));
   // A pathway's forcing error comes after the samples' own refusals (their order always).
   if (pathwayError !== null) throw pathwayError;
   onSetup?.(1);
-  return { spec, plan: plan! };
+  return { spec, plan: plan!, setup };
 }
 
 /** A run's arrays allocated and its pathways' forcing built, before any input is sampled. */
@@ -46,7 +47,7 @@ export interface AllocatedPlan {
 }
 
 /**
- * Validates the spec and allocates everything a run holds — input columns, member climates,
+ * Validates the spec and allocates everything a run holds — input columns, member climate,
  * state — in one new kernel memory, and builds each pathway's forcing; nothing is sampled
  * yet (setup does that, on one thread or shared out). Throws SpecError for a spec that
  * fails validation; a pathway's forcing error is returned, to be thrown after set-up's own
@@ -61,12 +62,12 @@ export function allocatePlan(input: RunSpecInput | RunSpec, summaries: Partial<S
   const ecs = columns[inputs.findIndex((x) => x.name === "ecs")]!;
   const sources = spec.pathways.map(doublingSourceOf);
   const variants = [...new Set(sources)];
-  const climates = variants.map(() => allocateMemberClimate(ecs, memory.float64(spec.members), memory.float64));
+  const climate = allocateMemberClimate(ecs, memory.float64(spec.members), memory.float64);
   const tcr = memory.float64(spec.members);
   const setup = new PlanSetup(
     spec,
-    { inputs, columns, climates, tcr, memory: memory.memory },
-    memory.int32(PlanSetup.piecesOf(spec, variants.length)),
+    { inputs, columns, climate, tcr, memory: memory.memory },
+    memory.int32(PlanSetup.piecesOf(spec)),
   );
   let pathways: PathwayForcing[];
   try {
@@ -76,13 +77,13 @@ export function allocatePlan(input: RunSpecInput | RunSpec, summaries: Partial<S
     return { spec, plan: null, setup, pathwayError: error instanceof Error ? error : new Error(String(error)) };
   }
   const pathwayClimate = sources.map((s) => variants.indexOf(s));
-  const plan = assemblePlan(spec, { inputs, columns, climates, tcr, memory: memory.memory }, pathwayClimate, pathways, memory, summaries);
+  const plan = assemblePlan(spec, { inputs, columns, climate, tcr, memory: memory.memory }, pathwayClimate, pathways, memory, summaries);
   return { spec, plan, setup, pathwayError: null };
 }
 
 function assemblePlan(
   spec: RunSpec,
-  { inputs, columns, climates, tcr }: SetupArrays,
+  { inputs, columns, climate, tcr }: SetupArrays,
   pathwayClimate: number[],
   pathways: PathwayForcing[],
   memory: KernelMemory,
@@ -105,9 +106,8 @@ function assemblePlan(
     members: spec.members,
     inputs,
     columns,
-    kernels: layOutKernels(memory, climates, state, columns, pathways),
-    climate: climates[0]!,
-    climates,
+    kernels: layOutKernels(memory, climate, state, columns, pathways),
+    climate,
     pathwayClimate,
     tcr,
     pathways,

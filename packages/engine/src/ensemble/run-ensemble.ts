@@ -54,7 +54,7 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
     clock = now;
   };
   const report = options.onProgress && ((fraction: number) => options.onProgress?.(fraction));
-  const { spec, plan } = preparePlan(input, options.summaries, report && ((f) => report(setupProgress(f))));
+  const { spec, plan, setup } = preparePlan(input, options.summaries, report && ((f) => report(setupProgress(f))));
   lap("sample");
   const n = plan.members;
   const totalYears = plan.pathways.reduce((s, p, i) => s + p.years + firstPassYears(plan, i), 0);
@@ -78,6 +78,12 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
     }
     const request = step.value;
     const p = request.pathway;
+    if (request.kind === "climate") {
+      setup.buildAllClimate(request.variant);
+      lap("sample");
+      step = pipeline.next();
+      continue;
+    }
     if (request.kind === "baseline") {
       runBaselinePass(plan, p, 0, n, tick);
       lap("simulate");

@@ -10,6 +10,8 @@ import { weighPathway } from "./pathway-weights.js";
 
 /** A pass the pipeline needs run over every member before it can go on. */
 export type PassRequest =
+  /** Rebuild the member climate in place for source `variant` of F2x (plan.climate), before `pathway`'s passes. */
+  | { kind: "climate"; pathway: number; variant: number }
   | { kind: "baseline"; pathway: number }
   | { kind: "report"; pathway: number; weighting: PathwayWeights };
 
@@ -28,7 +30,8 @@ export interface PathwayMembers {
 
 /**
  * The run pipeline both runners share (run-ensemble.ts on one thread, node/run-ensemble-
- * parallel.ts over worker threads): per pathway, the first pass (baseline and constraint
+ * parallel.ts over worker threads): per pathway, the member climate rebuilt if the pathway
+ * feels another source of F2x than the one before, the first pass (baseline and constraint
  * window), the constraint weights, the reporting pass, then the pathway's result, its peril
  * lens and — for the first pathway — the implied ECS and TCR; finally the stamped result.
  *
@@ -46,7 +49,12 @@ export function* runPipeline(
   const perils: (PathwayPerilResult | null)[] = [];
   let implied: { ecs: PercentileSet; tcr: PercentileSet } | null = null;
   const finishWork = createFinishWorkspace(plan.members, plan.horizons.length);
+  let climate = 0; // set-up built the first pathway's
   for (let p = 0; p < plan.pathways.length; p++) {
+    if (plan.pathwayClimate[p] !== climate) {
+      climate = plan.pathwayClimate[p]!;
+      yield { kind: "climate", pathway: p, variant: climate };
+    }
     yield { kind: "baseline", pathway: p };
     const weighting = weighPathway(plan);
     yield { kind: "report", pathway: p, weighting };

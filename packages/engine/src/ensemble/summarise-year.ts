@@ -142,7 +142,7 @@ export class YearSummariser {
   /** Committed warming: equilibrium F/λ minus the current warming, both from the pathway start. */
   private keepHorizon(pathwayIndex: number, h: number, slot: YearSlot): void {
     const { horizonTemperature, horizonForcing, horizonCommitted, baselineMean } = this.plan.state;
-    const lambda = this.plan.climates[this.plan.pathwayClimate[pathwayIndex]!]!.lambda;
+    const lambda = this.plan.climate.lambda; // the climate of the pathway being run
     const temperature = horizonTemperature[h]!;
     const forcing = horizonForcing[h]!;
     const committed = horizonCommitted[h]!;

@@ -29,7 +29,7 @@ port.on("message", (message: ToWorker) => {
       const { plan } = message;
       control = message.control;
       participant = new PassParticipant(plan, control);
-      setup = new PlanSetup(message.spec, { inputs: plan.inputs, columns: plan.columns, climates: plan.climates, tcr: plan.tcr, memory: plan.kernels.memory }, message.clean);
+      setup = new PlanSetup(message.spec, { inputs: plan.inputs, columns: plan.columns, climate: plan.climate, tcr: plan.tcr, memory: plan.kernels.memory }, message.clean);
       if (!message.sample) {
         send({ kind: "done", simulateSeconds: 0, summariseSeconds: 0 });
         return;
@@ -40,7 +40,7 @@ port.on("message", (message: ToWorker) => {
       message.kind === "setup"
         ? participant.sample(setup)
         : message.kind === "climate"
-          ? participant.buildClimates(setup)
+          ? participant.buildClimates(setup, message.variant)
           : message.kind === "baseline"
             ? participant.baseline(message.pathway)
             : participant.report(message);

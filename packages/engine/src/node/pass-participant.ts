@@ -62,9 +62,9 @@ export class PassParticipant {
     return this.claimEach(setup.jobs.length, (j) => setup.sample(j));
   }
 
-  /** Set-up's climate pieces, claimed as sample() claims its jobs (the counters reset between). */
-  buildClimates(setup: PlanSetup): Generator<PassPause, boolean> {
-    return this.claimEach(setup.pieces, (k) => setup.buildClimate(k));
+  /** The member climate's pieces for source `variant` of F2x, claimed as sample() claims its jobs (the counters reset between). */
+  buildClimates(setup: PlanSetup, variant: number): Generator<PassPause, boolean> {
+    return this.claimEach(setup.pieces, (k) => setup.buildClimate(k, variant));
   }
 
   private *claimEach(count: number, work: (index: number) => void): Generator<PassPause, boolean> {
@@ -127,7 +127,15 @@ export class PassParticipant {
         const j = Atomics.add(control.yearClaims, s, 1);
         if (t0 + j >= t1) break;
         const t = t0 + j;
-        this.summariser.summarise(order.pathway, t, pathway.years, plan.state.slots[t % ring]!, weights, order.totalWeight, order.horizonsByYear[t]!);
+        this.summariser.summarise(
+          order.pathway,
+          t,
+          pathway.years,
+          plan.state.slots[t % ring]!,
+          weights,
+          order.totalWeight,
+          order.horizonsByYear[t]!,
+        );
         addAndWake(control.summarised, t, 1);
         yield "claim";
       }

@@ -116,8 +116,8 @@ async function runWithPool(
     progress?.setupStep(1);
     resetPipelineControl(control);
     await shareOut(
-      () => ({ kind: "climate" }),
-      () => here!.buildClimates(setup),
+      () => ({ kind: "climate", variant: 0 }),
+      () => here!.buildClimates(setup, 0),
     );
     progress?.setupStep(setup.pieces);
     setup.refusals();
@@ -133,6 +133,15 @@ async function runWithPool(
       const p = request.pathway;
       resetPipelineControl(control);
       if (options.signal?.aborted) throw new RunCancelledError();
+      if (request.kind === "climate") {
+        // The member climate rebuilt in place by the helpers, then refused here if it must be.
+        const climateStart = performance.now();
+        await everyHelper(all, () => ({ kind: "climate", variant: request.variant }));
+        setup.refuseClimate();
+        if (times) times.sample += (performance.now() - climateStart) / 1000;
+        step = pipeline.next();
+        continue;
+      }
       const order: ToWorker =
         request.kind === "baseline"
           ? { kind: "baseline", pathway: p }

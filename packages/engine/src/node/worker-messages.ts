@@ -7,8 +7,8 @@ import type { PipelineControl } from "./pipeline-control.js";
 export type ToWorker =
   /** A new run: its plan (arrays allocated, not filled), then, if `sample`, this thread's share of the sampling. */
   | { kind: "setup"; plan: EnsemblePlan; control: PipelineControl; spec: RunSpec; clean: Int32Array; worker: number; sample: boolean }
-  /** This thread's share of the members' climates. */
-  | { kind: "climate" }
+  /** This thread's share of building the member climate for source `variant` of F2x (plan-setup.ts). */
+  | { kind: "climate"; variant: number }
   | { kind: "baseline"; pathway: number }
   | ({ kind: "report" } & ReportOrder)
   /** The run is over: drop its plan (no reply). */
