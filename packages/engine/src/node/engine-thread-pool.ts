@@ -94,6 +94,11 @@ export class EngineThread {
 
 const idle: EngineThread[] = [];
 
+/** Threads kept idle now, ready for a run. */
+export function idleEngineThreads(): number {
+  return idle.length;
+}
+
 /** Takes `count` threads: idle ones first, then new ones (whose start overlaps the caller's own work). */
 export function takeEngineThreads(count: number): EngineThread[] {
   const taken = idle.splice(0, count);
