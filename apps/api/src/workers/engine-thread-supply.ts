@@ -5,7 +5,8 @@ import { EngineThread, type EngineOutcome, type EngineRunner } from "./engine-th
  * A run this large or larger gets its engine thread replaced when it ends. Why: the run's
  * arrays (about 0.8 KB per member, so ~0.8 GB at 1,000,000 members) stay in the thread until
  * its collector runs, which may be long after; ending the thread hands them back to the
- * system at once, and a fresh thread (started right away, with its helper threads) is ready
+ * system at once, and a fresh thread (started right away; the engine's helper threads start
+ * with its first large run, whose set-up this thread does while they start) is ready
  * for the next run. Below this size a run's memory is small and keeping the warm thread is
  * worth more.
  */
