@@ -100,7 +100,6 @@ async function runWithPool(
   const progress = options.onProgress ? new ParallelProgress(plan, setup, control, options.onProgress) : null;
   try {
     const times = options.stageTimes;
-    // Every helper's reply to one order; a failure stops the others at their next claim.
     const here = new PassParticipant(plan, control);
     // Every helper's reply to one order, and this thread's share of the pass if it computes
     // (in slices, runCooperatively); a failure stops the others at their next claim.
@@ -110,18 +109,19 @@ async function runWithPool(
         throw error;
       });
       const [answers] = await Promise.all([replies, pass ? runHere(control, pass) : null]);
-      const times = answers.flatMap((r) => (r.kind === "done" ? [r] : []));
-      return pass ? [...times, here.takeTimes()] : times;
+      const done = answers.flatMap((r) => (r.kind === "done" ? [r] : []));
+      return pass ? [...done, here.takeTimes()] : done;
     };
     const setupOrder =
       (sample: boolean) =>
       (worker: number): ToWorker => ({ kind: "setup", plan, control, spec, clean: setup.clean, worker, sample });
-    // Set-up: the helpers that are up share it; if none is (a process's first run), this
-    // thread does it, in slices, while they start. A helper still starting gets the plan
-    // afterwards and joins at the first pass. Stage time "sample" is wall-clock.
+    // Set-up: the helpers that are up share it, with this thread when it computes (or when
+    // none is up yet); a helper still starting gets the plan afterwards and joins at the first
+    // pass. Stage time "sample" is wall-clock.
     const up = pool.booted();
+    const setUpHere = computeHere || up.length === 0;
     const shareOut = (order: (worker: number) => ToWorker, pass: () => Generator<PassPause, boolean>) =>
-      up.length === 0 ? runHere(control, pass()) : everyThread(up, order);
+      everyThread(up, order, setUpHere ? pass() : undefined);
     await shareOut(setupOrder(true), () => here.sample(setup));
     progress?.setupStep(setup.jobs.length);
     setup.correlate();
