@@ -4,9 +4,9 @@ import { usePathway } from "@/features/pathways/api/get-pathway";
 import { usePathwayChoices } from "@/features/pathways/api/get-pathways";
 import { PathwayComposeForm } from "@/features/pathways/components/pathway-compose-form";
 import { PathwayComposer } from "@/features/pathways/components/pathway-composer";
+import { PathwaySelect } from "@/features/pathways/components/pathway-select";
 import { ButtonLink } from "@/components/ui/button";
 import { Card, CardBody } from "@/components/ui/card";
-import { Field, Select } from "@/components/ui/field";
 import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState, ErrorState, LoadingState } from "@/components/ui/states";
 
@@ -59,18 +59,14 @@ function StepComposer({ fromId, choose }: { fromId: string | undefined; choose: 
     return <EmptyState title="No pathways to start from">Upload a pathway first, or write one as JSON (advanced).</EmptyState>;
   return (
     <div className="flex flex-col gap-6">
-      <Field label="Start from" hint="The pathway whose numbers the steps change; it stays as it is.">
-        {(p) => (
-          <Select {...p} value={fromId ?? ""} onChange={(e) => choose(e.target.value)} className="max-w-xl">
-            <option value="">Choose a pathway…</option>
-            {choices.map((c) => (
-              <option key={c.id} value={c.id}>
-                {c.name} ({c.startYear}–{c.endYear})
-              </option>
-            ))}
-          </Select>
-        )}
-      </Field>
+      <PathwaySelect
+        label="Start from"
+        hint="The pathway whose numbers the steps change; it stays as it is."
+        value={fromId ?? ""}
+        onChange={choose}
+        choices={choices}
+        className="max-w-xl"
+      />
       {fromId && from.isPending && <LoadingState label="Loading the pathway…" />}
       {fromId && from.isError && <ErrorState error={from.error} />}
       {from.data && (

@@ -5,7 +5,8 @@ import { Spinner } from "@/components/ui/states";
 import type { StepDraft, StepKind } from "../lib/compose-step-draft";
 import type { StepState } from "../lib/evaluate-compose-drafts";
 import { ComposeComparisonCharts } from "./compose-comparison-charts";
-import { ComposeStepFields, type PathwayChoice } from "./compose-step-fields";
+import { ComposeStepFields } from "./compose-step-fields";
+import type { PathwayChoice } from "./pathway-select";
 
 export const STEP_TITLES: Record<StepKind, string> = {
   scale: "Scale an agent",

@@ -1,13 +1,7 @@
 import { AGENT_LABELS, type ForcingAgent } from "@plumeline/contracts";
 import { Field, Input, Select } from "@/components/ui/field";
 import type { StepDraft } from "../lib/compose-step-draft";
-
-export interface PathwayChoice {
-  id: string;
-  name: string;
-  startYear: number;
-  endYear: number;
-}
+import { PathwaySelect, type PathwayChoice } from "./pathway-select";
 
 interface Props {
   draft: StepDraft;
@@ -44,37 +38,6 @@ function AgentSelect({
           {agents.map((a) => (
             <option key={a.agent} value={a.agent}>
               {AGENT_LABELS[a.agent]} ({unitOf(a.quantity)})
-            </option>
-          ))}
-        </Select>
-      )}
-    </Field>
-  );
-}
-
-function PathwaySelect({
-  label,
-  value,
-  onChange,
-  choices,
-  error,
-  hint,
-}: {
-  label: string;
-  value: string;
-  onChange: (v: string) => void;
-  choices: PathwayChoice[];
-  error?: string;
-  hint?: string;
-}) {
-  return (
-    <Field label={label} error={error} hint={hint}>
-      {(p) => (
-        <Select {...p} value={value} onChange={(e) => onChange(e.target.value)}>
-          <option value="">Choose a pathway…</option>
-          {choices.map((c) => (
-            <option key={c.id} value={c.id}>
-              {c.name} ({c.startYear}–{c.endYear})
             </option>
           ))}
         </Select>

@@ -8,7 +8,7 @@ import { newStepDraft, referencedPathwayIds, type StepDraft, type StepKind } fro
 import { evaluateComposeDrafts } from "../lib/evaluate-compose-drafts";
 import { ComposeComparisonCharts } from "./compose-comparison-charts";
 import { ComposeStepCard, STEP_TITLES } from "./compose-step-card";
-import type { PathwayChoice } from "./compose-step-fields";
+import type { PathwayChoice } from "./pathway-select";
 import { ComposedPathwaySave } from "./composed-pathway-save";
 
 const KINDS: StepKind[] = ["scale", "splice", "blend", "extend"];
