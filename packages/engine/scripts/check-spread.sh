@@ -11,14 +11,9 @@ set -euo pipefail
 SEEDS="${1:-10}"
 MEMBERS="${2:-100000}"
 HERE="$(cd "$(dirname "$0")/.." && pwd)"
-BENCH_DIR="$HERE/bench-reference"
-REFERENCE_ARGS="${REFERENCE_ARGS-"--feedback co2-scaled --temperature annual-mean"}"
-for tool in gcc python3; do
-  command -v "$tool" >/dev/null || { echo "check-spread: $tool is needed for the reference programs" >&2; exit 2; }
-done
-python3 -c "import numpy" 2>/dev/null || { echo "check-spread: python3 needs numpy (Debian: python3-numpy)" >&2; exit 2; }
-C_BIN="$(mktemp -d)/w1-reference"
-gcc -O3 -march=native -o "$C_BIN" "$BENCH_DIR/w1-reference.c" -lm
+SCRIPT=check-spread
+# shellcheck source=reference-programs.sh
+source "$HERE/scripts/reference-programs.sh"
 OUT="$(mktemp)"
 echo "reference options: ${REFERENCE_ARGS:-(W1 as defined)}; $SEEDS seeds of $MEMBERS members"
 for s in $(seq "$SEEDS"); do

@@ -14,14 +14,9 @@ set -euo pipefail
 MEMBERS="${1:-100000}"
 RUNS="${2:-3}"
 HERE="$(cd "$(dirname "$0")/.." && pwd)"
-BENCH_DIR="${BENCH_DIR:-$HERE/bench-reference}"
-REFERENCE_ARGS="${REFERENCE_ARGS-"--feedback co2-scaled --temperature annual-mean"}"
-for tool in gcc python3; do
-  command -v "$tool" >/dev/null || { echo "compare-bench: $tool is needed for the reference programs" >&2; exit 2; }
-done
-python3 -c "import numpy" 2>/dev/null || { echo "compare-bench: python3 needs numpy (Debian: python3-numpy)" >&2; exit 2; }
-C_BIN="$(mktemp -d)/w1-reference"
-gcc -O3 -march=native -o "$C_BIN" "$BENCH_DIR/w1-reference.c" -lm
+SCRIPT=compare-bench
+# shellcheck source=reference-programs.sh
+source "$HERE/scripts/reference-programs.sh"
 echo "reference options: ${REFERENCE_ARGS:-(W1 as defined)}"
 node "$HERE/bin/plumeline-engine.mjs" bench --members 1000 >/dev/null # builds dist if needed, warms caches
 OUT="$(mktemp)"
