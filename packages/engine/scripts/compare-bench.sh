@@ -4,8 +4,9 @@
 # load hits all three alike), and prints the median total_s of each, the engine's ratios to the references, and
 # the check values, plus each program's median stage timings. The engine runs twice per
 # round: W1's own outputs (plumeline-ts) and with the product's full per-year summaries
-# (plumeline-ts-full: forcing and imbalance too), both with the helper threads ready as a
-# server has them, and W1 once more with them started inside the timing (plumeline-ts-cold). Extra engine options (e.g. --threads 1)
+# (plumeline-ts-full: forcing and imbalance too), both as a long-lived server runs them (helper
+# threads ready, one untimed W1 run before in the same process), and W1 once more as a fresh
+# process's first run (plumeline-ts-cold). Extra engine options (e.g. --threads 1)
 # can be given in ENGINE_ARGS. The references run with the engine's conventions where they
 # differ from W1's definition (REFERENCE_ARGS, default below; "" for W1 as defined), so the
 # check values are comparable. The load average is printed before and after.

@@ -25,7 +25,7 @@ async function main(argv: string[]): Promise<void> {
         scope: args.full ? "full" : "w1",
         debug: args.debug === true,
         ...(args.seed !== undefined ? { seed: args.seed } : {}),
-        coldThreads: args.cold === true,
+        cold: args.cold === true,
       }))}\n`,
     );
     return;

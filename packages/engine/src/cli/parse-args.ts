@@ -8,8 +8,8 @@ export const USAGE = `usage:
   engine bench --members N [--threads T] [--full] [--cold] [--debug] [--seed S]
                                                    one W1 benchmark line (bench-reference/README.md);
                                                    --full also summarises forcing and imbalance;
-                                                   --cold starts the helper threads inside the timing
-                                                   (a process's first run; default: ready, as in a server);
+                                                   --cold times a fresh process's first run (default: a
+                                                   run after one untimed W1 run, as in a server);
                                                    --debug adds the process CPU seconds (cpu_s);
                                                    --seed draws another ensemble (default "w1")`;
 
@@ -21,7 +21,7 @@ export interface ParsedArgs {
   threads?: number;
   /** bench: also summarise forcing and imbalance per year (the product's full summaries). */
   full?: boolean;
-  /** bench: start the helper threads inside the timing (default: before it, as a server has them). */
+  /** bench: time a fresh process's first run (default: a run after one untimed W1 run, as a long-lived server's). */
   cold?: boolean;
   /** bench: add diagnostic fields to the line (cpu_s: CPU seconds of all threads during the run). */
   debug?: boolean;

@@ -132,6 +132,25 @@ describe("runEnsemble", { timeout: 60_000 }, () => {
     expect(a.resultHash).toMatch(/^[0-9a-f]{64}$/);
   });
 
+  it("a run's numbers do not depend on the run before it on this thread, and the next run leaves its result as it was", () => {
+    // The next run reuses a finished run's memory (kernel-memory.ts): values left in it must
+    // not leak into sums or tallies, and no result may be a view into it.
+    const spec = baseSpec({ members: 3_001, thresholds: [1.5, 2], horizons: [2050, 2100] });
+    const other = baseSpec({
+      seed: "other",
+      members: 4_500,
+      thresholds: [1, 3],
+      horizons: [2030],
+      model: { ...baseSpec().model, constraint: { from: 2011, to: 2020, observed: 1.0, sd: 0.1, internalVariability: 0.21 } },
+    });
+    const first = runEnsemble(spec);
+    const text = JSON.stringify(first);
+    runEnsemble(other);
+    const again = runEnsemble(spec);
+    expect(again).toEqual(first);
+    expect(JSON.stringify(first)).toBe(text);
+  });
+
   it("defaults written out or left out give the same inputHash", () => {
     const spec = baseSpec({ members: 50 });
     const { baseline: _b, percentiles: _p, thresholds: _t, horizons: _h, ...rest } = spec;

@@ -1,3 +1,4 @@
+import { keepKernelMemory } from "../kernels/kernel-memory.js";
 import { RunCancelledError } from "../spec/spec-error.js";
 import type { RunResult, RunSpec, RunSpecInput } from "../spec/types.js";
 import { advanceReportedYears } from "./advance-year.js";
@@ -72,6 +73,8 @@ export function runEnsemble(input: RunSpecInput | RunSpec, options: RunOptions =
   const pipeline = runPipeline(spec, plan, options.onPathwayMembers);
   for (let step = pipeline.next(); ; ) {
     if (step.done) {
+      // The result holds copies only: the next run on this thread may reuse the arrays' memory.
+      keepKernelMemory(plan.kernels.memory);
       lap("finish");
       options.onProgress?.(1);
       return step.value;

@@ -53,6 +53,20 @@ describe("runEnsembleParallel", () => {
     expect(three.resultHash).toBe(runEnsemble(unconstrained).resultHash);
   }, 60_000);
 
+  it("gives one thread's numbers whatever ran before it on the same threads and memory", async () => {
+    // A bigger run with a constraint leaves its values in the memory the next run reuses
+    // (kernel-memory.ts); the first run's result must not change either.
+    const spec = baseSpec({ members: 6_001, thresholds: [1.5, 2], horizons: [2100] });
+    const other = baseSpec({ seed: "other", members: 9_000, model: { ...baseSpec().model, constraint: { from: 2011, to: 2020, observed: 1.0, sd: 0.1, internalVariability: 0.21 } } });
+    const first = await runEnsembleParallel(spec, { threads: 2 });
+    const text = JSON.stringify(first);
+    await runEnsembleParallel(other, { threads: 2 });
+    const again = await runEnsembleParallel(spec, { threads: 2 });
+    expect(again.resultHash).toBe(runEnsemble(spec).resultHash);
+    expect(again).toEqual(first);
+    expect(JSON.stringify(first)).toBe(text);
+  }, 60_000);
+
   it("is bit-identical to one thread when threads and member blocks split members differently", async () => {
     // 5,001 members: one thread runs member blocks of 2,048, 2,048 and 905; two threads run
     // 2,500 + 2,501 members, each as a block of 2,048 and a short one.

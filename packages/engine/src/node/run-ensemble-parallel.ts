@@ -6,6 +6,7 @@ import { allocatePlan, preparePlan } from "../ensemble/prepare-plan.js";
 import { setupProgress, simulationProgress } from "../ensemble/progress-share.js";
 import { runPipeline } from "../ensemble/run-pipeline.js";
 import { runEnsemble, type RunOptions, type StageTimes } from "../ensemble/run-ensemble.js";
+import { keepKernelMemory } from "../kernels/kernel-memory.js";
 import { RunCancelledError } from "../spec/spec-error.js";
 import type { RunResult, RunSpec, RunSpecInput } from "../spec/types.js";
 import { EngineThread, idleEngineThreads, returnEngineThreads, takeEngineThreads } from "./engine-thread-pool.js";
@@ -70,6 +71,7 @@ export async function runEnsembleParallel(input: RunSpecInput | RunSpec, options
   // threads − 1 new helpers, which start (and warm up) while it does the set-up.
   const warm = idleEngineThreads() >= threads;
   const pool = new WorkerPool(warm ? threads : threads - 1);
+  let finished: WebAssembly.Memory | null = null;
   try {
     const start = performance.now();
     const allocated = allocatePlan(input, options.summaries ?? {});
@@ -79,9 +81,13 @@ export async function runEnsembleParallel(input: RunSpecInput | RunSpec, options
       preparePlan(input, options.summaries);
       throw allocated.pathwayError!;
     }
-    return await runWithPool(allocated.spec, allocated.plan, allocated.setup, pool, options, start, !warm);
+    const result = await runWithPool(allocated.spec, allocated.plan, allocated.setup, pool, options, start, !warm);
+    finished = allocated.plan.kernels.memory;
+    return result;
   } finally {
     pool.finish();
+    // Only after a run every helper has answered to the end: a failed run's helper may still write.
+    if (finished) keepKernelMemory(finished);
   }
 }
 
