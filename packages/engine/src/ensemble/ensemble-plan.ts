@@ -134,10 +134,11 @@ export function allocateState(
     windowMean: allocate(members),
     weights: allocate(members),
     crossing: many(thresholds),
+    // Each year's step writes a slot's every member before that year is summarised.
     slots: Array.from({ length: ringSize }, () => ({
-      anomaly: allocate(members),
-      forcing: allocate(members),
-      imbalance: allocate(members),
+      anomaly: memory.scratch64(members),
+      forcing: memory.scratch64(members),
+      imbalance: memory.scratch64(members),
       extremes: allocate(6 * blocks),
       aboveCounts: allocate(Math.max(1, thresholds) * blocks),
     })),

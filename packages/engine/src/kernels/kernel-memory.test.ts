@@ -19,6 +19,17 @@ describe("kernel memory kept between runs", () => {
     expect(e.byteOffset + e.byteLength).toBeGreaterThan(a.byteOffset + a.byteLength);
   });
 
+  it("leaves a scratch array as the run before left it (its run writes it before reading), a zeroed one beside it zero", () => {
+    const first = createKernelMemory();
+    first.float64(1_000).fill(2);
+    keepKernelMemory(first.memory);
+    const again = createKernelMemory();
+    const scratch = again.scratch64(500);
+    const zeroed = again.float64(500);
+    expect(scratch.every((x) => x === 2)).toBe(true);
+    expect(zeroed.every((x) => x === 0)).toBe(true);
+  });
+
   it("hands it out once: a second memory asked for before it is kept again is a new one", () => {
     const first = createKernelMemory();
     keepKernelMemory(first.memory);
