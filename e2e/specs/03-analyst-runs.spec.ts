@@ -1,6 +1,7 @@
 import { expect, test } from "@playwright/test";
 import { members, names, seededPathways, seededVersionName } from "../support/names";
 import { openFromNav } from "../support/navigation";
+import { pick, pickEach } from "../support/pickers";
 import { chooseVersion, pathwayIds, runIdFromUrl, waitForRun, type RunResult, type RunSummary, type VersionSummary } from "../support/runs";
 import { snap } from "../support/screenshots";
 import { apiAs, getJson, postJson, signIn } from "../support/sign-in";
@@ -17,7 +18,9 @@ const seed = "e2e-orsa-2025";
 test.beforeAll(async ({ baseURL }) => {
   // The previous version's run to compare against: same pathways, members and seed.
   const api = await apiAs("analyst", baseURL!);
-  const v1 = (await getJson<{ items: VersionSummary[] }>(api, "/api/model-versions?status=approved")).items.find((v) => v.name === seededVersionName)!;
+  const v1 = (await getJson<{ items: VersionSummary[] }>(api, "/api/model-versions?status=approved")).items.find(
+    (v) => v.name === seededVersionName,
+  )!;
   const run = await postJson<RunSummary>(api, "/api/runs", {
     name: names.runOnPrevious,
     modelVersionId: v1.id,
@@ -50,7 +53,7 @@ test("analyst runs the approved version, reads the fan chart and horizons, compa
   await page.getByLabel("Name (optional)").fill(names.runOnWider);
   await chooseVersion(page, names.widerDraft);
   await expect(page.getByText(/will be exploratory/)).toHaveCount(0);
-  for (const p of seededPathways) await page.getByRole("checkbox", { name: new RegExp(`^${p} \\d{4}–`) }).check();
+  await pickEach(page, "Pathways", seededPathways);
   await page.getByLabel("Members").fill(String(members));
   await page.getByLabel("Seed").fill(seed);
   await page.getByRole("radio", { name: "Latin hypercube" }).check();
@@ -107,8 +110,7 @@ test("analyst runs the approved version, reads the fan chart and horizons, compa
   await expect(page.getByRole("heading", { level: 1, name: "Compare" })).toBeVisible();
   // The address carries the run ids; this run is the reference.
   await expect(page).toHaveURL(/\/runs\/compare\?runs=[0-9a-f-]{36}$/);
-  const second = page.getByLabel("Run 2", { exact: true });
-  await second.selectOption(await second.locator("option").filter({ hasText: names.runOnPrevious }).first().getAttribute("value"));
+  await pick(page, "Run 2", names.runOnPrevious);
   await page.getByLabel("Reference run: pathway").selectOption({ label: "Harbourline High" });
   await page.getByLabel("Run 2: pathway").selectOption({ label: "Harbourline High" });
   await expect(page.getByRole("figure", { name: `${names.runOnWider}: Harbourline High` })).toBeVisible();
@@ -120,8 +122,7 @@ test("analyst runs the approved version, reads the fan chart and horizons, compa
 
   // A third run: rows are labelled by run name, with differences from the reference.
   await page.getByRole("button", { name: "Add a run" }).click();
-  const third = page.getByLabel("Run 3", { exact: true });
-  await third.selectOption(await third.locator("option").filter({ hasText: names.runOnPreviousOtherSeed }).getAttribute("value"));
+  await pick(page, "Run 3", names.runOnPreviousOtherSeed);
   await page.getByLabel("Run 3: pathway").selectOption({ label: "Harbourline High" });
   await expect(page).toHaveURL(/\?runs=[0-9a-f-]{36},[0-9a-f-]{36},[0-9a-f-]{36}&pathways=/);
   await expect(page.getByTestId("differing-settings")).toHaveText("Differ: model version, seed.");
@@ -140,7 +141,9 @@ test("analyst runs the approved version, reads the fan chart and horizons, compa
 test("a run on an unapproved version is marked exploratory on its page and on the desk", async ({ page, baseURL }, testInfo) => {
   // The seeded v2 draft (a trial 2001–2020 observational constraint) is not approved: any run of it is exploratory.
   const api = await apiAs("analyst", baseURL!);
-  const draft = (await getJson<{ items: VersionSummary[] }>(api, "/api/model-versions?status=draft")).items.find((v) => v.name === seededVersionName)!;
+  const draft = (await getJson<{ items: VersionSummary[] }>(api, "/api/model-versions?status=draft")).items.find(
+    (v) => v.name === seededVersionName,
+  )!;
   const run = await postJson<RunSummary>(api, "/api/runs", {
     name: "Constraint trial (draft v2)",
     modelVersionId: draft.id,

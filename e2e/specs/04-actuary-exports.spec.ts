@@ -1,6 +1,7 @@
 import { expect, test } from "@playwright/test";
 import { members, names } from "../support/names";
 import { openFromNav } from "../support/navigation";
+import { pickEach } from "../support/pickers";
 import { downloadChart } from "../support/chart-download";
 import { pdfPages } from "../support/pdf-text";
 import { chooseVersion, runIdFromUrl, type RunResult } from "../support/runs";
@@ -29,13 +30,10 @@ test("actuary applies the peril profiles and portfolio, exports the workbook, wh
   await page.getByRole("link", { name: "New run" }).click();
   await page.getByLabel("Name (optional)").fill(names.actuaryRun);
   await chooseVersion(page, names.widerDraft);
-  for (const p of ["Harbourline Middle", "Harbourline Low"])
-    await page.getByRole("checkbox", { name: new RegExp(`^${p} \\d{4}–`) }).check();
+  await pickEach(page, "Pathways", ["Harbourline Middle", "Harbourline Low"]);
   await page.getByLabel("Members").fill(String(members));
   await page.getByLabel("Seed").fill(seed);
-  const profiles = page.getByRole("group", { name: "Peril profiles" });
-  await profiles.getByRole("checkbox", { name: new RegExp(`^${floodProfile}`) }).check();
-  await profiles.getByRole("checkbox", { name: new RegExp(`^${heatProfile}`) }).check();
+  await pickEach(page, "Peril profiles", [floodProfile, heatProfile]);
   const portfolio = page.getByLabel("Portfolio baseline");
   await expect(portfolio).toBeEnabled();
   const option = portfolio.locator("option").filter({ hasText: "Harbourline Mutual property baseline" });

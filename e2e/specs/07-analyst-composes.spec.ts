@@ -1,6 +1,7 @@
 import { expect, test } from "@playwright/test";
 import { baseURL } from "../playwright.config";
 import { openFromNav } from "../support/navigation";
+import { pick } from "../support/pickers";
 import { snap } from "../support/screenshots";
 import { apiAs, getJson, signIn } from "../support/sign-in";
 
@@ -28,7 +29,7 @@ for (const width of [1280, 1440]) {
     await openFromNav(page, "Pathways");
     await page.getByRole("link", { name: "Compose a pathway" }).click();
     await expect(page.getByRole("heading", { level: 1, name: "Compose a pathway" })).toBeVisible();
-    await page.getByLabel("Start from").selectOption({ label: "Harbourline Middle (1750–2100)" });
+    await pick(page, "Start from", "Harbourline Middle");
 
     const addStep = (label: string) => page.getByRole("group", { name: "Add a step" }).getByRole("button", { name: label }).click();
     await addStep("Scale an agent");
@@ -51,7 +52,11 @@ for (const width of [1280, 1440]) {
     await page.getByLabel("Name").fill(name);
     await page.getByRole("button", { name: "Save as new pathway" }).click();
     await expect(page.getByRole("heading", { level: 1, name })).toBeVisible();
-    await expect(page.getByText(/Composed in Plumeline from "Harbourline Middle" \(id [^)]+\): 1\. Aerosol–cloud scaled by 0\.5 in 2030–2100\. 2\. extended to 2150/)).toBeVisible();
+    await expect(
+      page.getByText(
+        /Composed in Plumeline from "Harbourline Middle" \(id [^)]+\): 1\. Aerosol–cloud scaled by 0\.5 in 2030–2100\. 2\. extended to 2150/,
+      ),
+    ).toBeVisible();
     await expect(page.getByText("1750–2150", { exact: true })).toBeVisible();
     await expect(page.getByRole("figure", { name: `Forcing by agent — ${name}` })).toBeVisible();
     await snap(page, testInfo, `composed-pathway-${width}`);

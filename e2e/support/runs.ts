@@ -1,14 +1,38 @@
 import { expect, type APIRequestContext, type Page } from "@playwright/test";
 import { getJson } from "./sign-in";
 
-export interface RunSummary { id: string; name: string; status: string; progress: number; exploratory: boolean; modelVersion: { id: string; name: string; status: string } }
-export interface VersionSummary { id: string; name: string; status: string; versionNumber: number }
-export interface PathwaySummary { id: string; name: string }
+export interface RunSummary {
+  id: string;
+  name: string;
+  status: string;
+  progress: number;
+  exploratory: boolean;
+  modelVersion: { id: string; name: string; status: string };
+}
+export interface VersionSummary {
+  id: string;
+  name: string;
+  status: string;
+  versionNumber: number;
+}
+export interface PathwaySummary {
+  id: string;
+  name: string;
+}
 type Stats = Record<string, number>;
 export interface RunResult {
   resultHash: string;
   pathways: Array<{ id: string; name: string; horizons: Array<{ year: number; temperature: Stats }> }>;
-  perils?: { pathways: Array<{ pathwayId: string; profiles: Array<{ profileId: string; name: string; horizons: Array<{ year: number; multiplier: Stats; losses: Array<{ region: string; peril: string; aal: Stats }> }> }> }> };
+  perils?: {
+    pathways: Array<{
+      pathwayId: string;
+      profiles: Array<{
+        profileId: string;
+        name: string;
+        horizons: Array<{ year: number; multiplier: Stats; losses: Array<{ region: string; peril: string; aal: Stats }> }>;
+      }>;
+    }>;
+  };
 }
 
 /** Waits (polling the API, as the page does) until a run has finished, and says how it ended. */
@@ -31,13 +55,17 @@ export async function pathwayIds(api: APIRequestContext, wanted: readonly string
   });
 }
 
-/** Picks a model version in the run form by its name (the option text also carries its number and status). */
+/** Picks a model version in the run form by its name (searched by name; the option reads "<name> v<number>"). */
 export async function chooseVersion(page: Page, name: string): Promise<void> {
-  const select = page.getByLabel("Model version");
-  const option = select.locator("option").filter({ hasText: `${name} v` });
+  await page.getByRole("combobox", { name: "Model version", exact: true }).fill(name);
+  const option = page
+    .getByRole("listbox", { name: "Model version" })
+    .getByRole("option", { name: new RegExp(`^${escapeRegExp(name)} v\\d+$`) });
   await expect(option).toHaveCount(1);
-  await select.selectOption((await option.getAttribute("value")));
+  await option.click();
 }
+
+const escapeRegExp = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
 
 /** The run id from a run page URL. */
 export const runIdFromUrl = (url: string) => /\/runs\/([^/?#]+)$/.exec(new URL(url).pathname)![1]!;

@@ -1,7 +1,7 @@
 import { useNavigate, useSearchParams } from "react-router-dom";
 import { paths } from "@/config/paths";
 import { usePathway } from "@/features/pathways/api/get-pathway";
-import { usePathwayChoices } from "@/features/pathways/api/get-pathways";
+import { usePathways } from "@/features/pathways/api/get-pathways";
 import { PathwayComposeForm } from "@/features/pathways/components/pathway-compose-form";
 import { PathwayComposer } from "@/features/pathways/components/pathway-composer";
 import { PathwaySelect } from "@/features/pathways/components/pathway-select";
@@ -49,13 +49,13 @@ function JsonComposer({ fromId }: { fromId: string | undefined }) {
 
 /** The step composer: choose the pathway to start from, then add steps. */
 function StepComposer({ fromId, choose }: { fromId: string | undefined; choose: (id: string) => void }) {
-  const list = usePathwayChoices();
+  // Only whether any pathway exists; the picker searches the whole list as someone types.
+  const any = usePathways({ limit: 1 });
   const from = usePathway(fromId);
   const navigate = useNavigate();
-  if (list.isPending) return <LoadingState label="Loading pathways…" />;
-  if (list.isError) return <ErrorState error={list.error} retry={() => list.refetch()} />;
-  const choices = list.data.map((p) => ({ id: p.id, name: p.name, startYear: p.startYear, endYear: p.endYear }));
-  if (choices.length === 0)
+  if (any.isPending) return <LoadingState label="Loading pathways…" />;
+  if (any.isError) return <ErrorState error={any.error} retry={() => any.refetch()} />;
+  if (any.data.total === 0)
     return <EmptyState title="No pathways to start from">Upload a pathway first, or write one as JSON (advanced).</EmptyState>;
   return (
     <div className="flex flex-col gap-6">
@@ -64,14 +64,12 @@ function StepComposer({ fromId, choose }: { fromId: string | undefined; choose: 
         hint="The pathway whose numbers the steps change; it stays as it is."
         value={fromId ?? ""}
         onChange={choose}
-        choices={choices}
+        selected={from.data}
         className="max-w-xl"
       />
       {fromId && from.isPending && <LoadingState label="Loading the pathway…" />}
       {fromId && from.isError && <ErrorState error={from.error} />}
-      {from.data && (
-        <PathwayComposer key={from.data.id} base={from.data} choices={choices} onSaved={(p) => navigate(paths.pathway.build(p.id))} />
-      )}
+      {from.data && <PathwayComposer key={from.data.id} base={from.data} onSaved={(p) => navigate(paths.pathway.build(p.id))} />}
     </div>
   );
 }

@@ -30,7 +30,7 @@ import { PerilRecordError } from "@/features/peril/components/peril-record-error
 import { ProfileStatusNote } from "@/features/peril/components/profile-status-note";
 import { draftFromRecord, emptyDraft, toProfileBody, type ProfileDraft } from "@/features/peril/lib/profile-draft";
 import { storedProfileDraftSchema } from "@/features/peril/lib/profile-draft-schema";
-import { useDebouncedValue } from "@/features/peril/lib/use-debounced-value";
+import { useDebouncedValue } from "@/lib/use-debounced-value";
 import type { PerilViewer } from "@/features/peril/lib/peril-viewer";
 import { usePerilViewer } from "../use-peril-viewer";
 
@@ -176,7 +176,9 @@ function Editor({ record, viewer }: { record: PerilProfileRecord | undefined; vi
                 // A profile preview has no run: its downloads name the profile and say it is a preview of the form.
                 <ChartSourceProvider
                   source={{
-                    lines: [`Peril profile “${record?.name ?? "new, not saved"}”${record ? ` · last saved ${record.updatedAt.slice(0, 10)}` : ""} · preview of the profile as edited on screen`],
+                    lines: [
+                      `Peril profile “${record?.name ?? "new, not saved"}”${record ? ` · last saved ${record.updatedAt.slice(0, 10)}` : ""} · preview of the profile as edited on screen`,
+                    ],
                     fileLabel: record?.name,
                   }}
                 >

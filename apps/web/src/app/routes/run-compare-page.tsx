@@ -1,6 +1,6 @@
 import { useNavigate, useSearchParams } from "react-router-dom";
-import type { Run, RunResult } from "@plumeline/contracts";
-import { useRunChoices } from "@/features/runs/api/get-runs";
+import type { Run, RunResult, RunSummary } from "@plumeline/contracts";
+import { runPickerSource, useRuns } from "@/features/runs/api/get-runs";
 import { useRun } from "@/features/runs/api/get-run";
 import { useRunResult } from "@/features/runs/api/get-run-result";
 import { runBaseline } from "@/features/runs/lib/compare-baseline";
@@ -11,6 +11,7 @@ import { ChartSourceProvider, runSourceLine } from "@/components/charts/chart-so
 import { Button } from "@/components/ui/button";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { Cautions } from "@/components/ui/cautions";
+import { SearchPicker } from "@/components/search-picker/search-picker";
 import { Field, Select } from "@/components/ui/field";
 import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState, ErrorState, LoadingState } from "@/components/ui/states";
@@ -24,11 +25,17 @@ function useSlot(slot: CompareSlot | undefined) {
 
 const slotName = (i: number) => (i === 0 ? "Reference run" : `Run ${i + 1}`);
 
+/** Only finished runs have results to compare. */
+const finishedRuns = runPickerSource({ status: "succeeded" });
+const runDetail = (r: RunSummary) =>
+  `${r.modelVersion.name} v${r.modelVersion.versionNumber}${r.exploratory ? " (exploratory)" : " (approved)"}`;
+
 /** Pick two to four finished runs (the first is the reference) and compare them on shared axes. */
 export default function RunComparePage() {
   const [params] = useSearchParams();
   const navigate = useNavigate();
-  const runs = useRunChoices({ status: "succeeded" });
+  // Only whether any finished run exists; each slot's picker searches them all as someone types.
+  const runs = useRuns({ status: "succeeded", limit: 1 });
   const slots = readCompareSelection(params);
   const loaded = [useSlot(slots[0]), useSlot(slots[1]), useSlot(slots[2]), useSlot(slots[3])].slice(0, slots.length);
   const save = (next: CompareSlot[]) => void navigate({ search: `?${writeCompareSelection(next)}` }, { replace: true });
@@ -50,7 +57,7 @@ export default function RunComparePage() {
         <LoadingState />
       ) : runs.isError ? (
         <ErrorState error={runs.error} />
-      ) : runs.data.length === 0 ? (
+      ) : runs.data.total === 0 ? (
         <EmptyState title="No finished runs to compare" />
       ) : (
         <div className="flex flex-col gap-6">
@@ -60,19 +67,16 @@ export default function RunComparePage() {
                 const { run, result } = loaded[i]!;
                 return (
                   <div key={i} className="grid content-start gap-2">
-                    <Field label={slotName(i)}>
-                      {(p) => (
-                        <Select {...p} value={slot.runId} onChange={(e) => setSlot(i, { runId: e.target.value, pathwayId: "" })}>
-                          <option value="">Choose a run…</option>
-                          {runs.data.map((r) => (
-                            <option key={r.id} value={r.id}>
-                              {r.name} — {r.modelVersion.name} v{r.modelVersion.versionNumber}
-                              {r.exploratory ? " (exploratory)" : " (approved)"}
-                            </option>
-                          ))}
-                        </Select>
-                      )}
-                    </Field>
+                    <SearchPicker<RunSummary>
+                      label={slotName(i)}
+                      source={finishedRuns}
+                      itemLabel={(r) => r.name}
+                      itemDetail={runDetail}
+                      value={slot.runId}
+                      selected={run.data}
+                      onChange={(runId) => setSlot(i, { runId, pathwayId: "" })}
+                      placeholder="Type part of a run's name…"
+                    />
                     {result.data && (
                       <Field label={`${slotName(i)}: pathway`}>
                         {(p) => (

@@ -1,5 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
-import { MAX_PAGE_LIMIT, pathwayPageSchema, type ListPathwaysQueryInput, type PathwayPage } from "@plumeline/contracts";
+import { pathwayPageSchema, type ListPathwaysQueryInput, type PathwayPage, type PathwaySummary } from "@plumeline/contracts";
+import type { PickerSource } from "@/components/search-picker/picker-source";
 import { api } from "@/lib/api-client";
 import { compactQuery } from "@/lib/list-query";
 
@@ -21,5 +22,11 @@ export const getPathwaysQueryOptions = (query: PathwaysQuery = {}) =>
 
 export const usePathways = (query: PathwaysQuery = {}) => useQuery(getPathwaysQueryOptions(query));
 
-/** The pathways a picker offers, as a plain array: the newest 200 (the API's largest page). */
-export const usePathwayChoices = () => useQuery({ ...getPathwaysQueryOptions({ limit: MAX_PAGE_LIMIT }), select: (page) => page.items });
+/**
+ * Where a pathway picker searches: the typed text as `q` (name, description, source, vintage),
+ * newest first. Cached under the pathway lists' key, so a saved pathway shows up in pickers too.
+ */
+export const pathwayPickerSource: PickerSource<PathwaySummary> = {
+  queryKey: pathwaysListKey,
+  fetchMatches: ({ q, limit }, signal) => getPathways({ q, limit }, signal),
+};

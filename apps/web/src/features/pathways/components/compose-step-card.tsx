@@ -23,7 +23,7 @@ export function ComposeStepCard({
   input,
   base,
   baseName,
-  choices,
+  known,
   onChange,
   onRemove,
 }: {
@@ -34,7 +34,8 @@ export function ComposeStepCard({
   input: PathwayData;
   base: PathwayData;
   baseName: string;
-  choices: PathwayChoice[];
+  /** Pathways already read, by id, so a step's picker can show the one it names. */
+  known: ReadonlyMap<string, PathwayChoice>;
   onChange: (next: StepDraft) => void;
   onRemove: () => void;
 }) {
@@ -59,7 +60,7 @@ export function ComposeStepCard({
           errors={errors}
           agents={presentAgents(input.agents).map((s) => ({ agent: s.agent, quantity: s.quantity }))}
           years={{ first: input.startYear, last: lastYear(input) }}
-          choices={choices}
+          known={known}
         />
         {state.status === "loading" && (
           <p role="status" className="flex items-center gap-2 text-sm text-muted">

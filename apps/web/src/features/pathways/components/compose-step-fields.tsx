@@ -11,8 +11,8 @@ interface Props {
   agents: Array<{ agent: ForcingAgent; quantity: string }>;
   /** Years of the pathway this step applies to. */
   years: { first: number; last: number };
-  /** Other pathways a splice or blend may read. */
-  choices: PathwayChoice[];
+  /** Pathways already read, by id, so the splice or blend picker can show the one it names. */
+  known: ReadonlyMap<string, PathwayChoice>;
 }
 
 const unitOf = (quantity: string) => (quantity === "erf" ? "W m-2" : quantity);
@@ -67,7 +67,7 @@ function YearInput({
 }
 
 /** The boxes of one compose step; every change goes up as a new draft, checked by the composer. */
-export function ComposeStepFields({ draft, onChange, errors, agents, years, choices }: Props) {
+export function ComposeStepFields({ draft, onChange, errors, agents, years, known }: Props) {
   const grid = "grid gap-3 sm:grid-cols-2 lg:grid-cols-4";
   switch (draft.kind) {
     case "scale":
@@ -109,7 +109,7 @@ export function ComposeStepFields({ draft, onChange, errors, agents, years, choi
             label="Take values from"
             value={draft.sourcePathwayId}
             onChange={(sourcePathwayId) => onChange({ ...draft, sourcePathwayId })}
-            choices={choices}
+            selected={known.get(draft.sourcePathwayId)}
             error={errors.sourcePathwayId}
             hint="Same agent, same unit, same calendar years."
           />
@@ -136,7 +136,7 @@ export function ComposeStepFields({ draft, onChange, errors, agents, years, choi
             label="Blend with"
             value={draft.otherPathwayId}
             onChange={(otherPathwayId) => onChange({ ...draft, otherPathwayId })}
-            choices={choices}
+            selected={known.get(draft.otherPathwayId)}
             error={errors.otherPathwayId}
             hint={`Must cover the same years (${years.first}–${years.last}).`}
           />

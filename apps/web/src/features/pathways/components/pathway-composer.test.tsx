@@ -31,7 +31,13 @@ function pathway(id: string, name: string, startYear: number, agents: Pathway["a
 // Base 2000–2003: CO2 forcing on the line 1 + 0.5·(year − 2000), ozone flat.
 const base = pathway("p-base", "Base ramp", 2000, { co2: { erf: [1, 1.5, 2, 2.5] }, ozone: { erf: [0.25, 0.25, 0.25, 0.25] } });
 const longer = pathway("p-long", "Longer one", 1999, { co2: { erf: [0, 1, 1, 1, 1, 1] } });
-const choices = [base, longer].map((p) => ({ id: p.id, name: p.name, startYear: p.startYear, endYear: p.endYear }));
+
+/** GET /api/pathways as the API answers it: summaries (agent ids, not series) matching `q` by name, `{ items, total }`. */
+function pathwayList(search: URLSearchParams) {
+  const q = (search.get("q") ?? "").toLowerCase();
+  const items = [base, longer].filter((p) => p.name.toLowerCase().includes(q)).map((p) => ({ ...p, agents: Object.keys(p.agents) }));
+  return { body: { items, total: items.length } };
+}
 
 const step = (n: number) => screen.getByRole("region", { name: new RegExp(`^Step ${n}:`) });
 async function addStep(name: string) {
@@ -50,7 +56,7 @@ describe("PathwayComposer", () => {
         : undefined,
     );
     const onSaved = vi.fn();
-    renderWithClient(<PathwayComposer base={base} choices={choices} onSaved={onSaved} />);
+    renderWithClient(<PathwayComposer base={base} onSaved={onSaved} />);
 
     await addStep("Scale an agent");
     await userEvent.selectOptions(within(step(1)).getByLabelText("Agent"), "co2");
@@ -92,10 +98,23 @@ describe("PathwayComposer", () => {
   }, 30_000);
 
   it("refuses to blend pathways over different years, naming the years, and offers no save", async () => {
-    stubFetch((req) => (req.method === "GET" && req.path === "/api/pathways/p-long" ? { body: longer } : undefined));
-    renderWithClient(<PathwayComposer base={base} choices={choices} onSaved={() => undefined} />);
+    const server = stubFetch((req) =>
+      req.method !== "GET"
+        ? undefined
+        : req.path === "/api/pathways/p-long"
+          ? { body: longer }
+          : req.path === "/api/pathways"
+            ? pathwayList(req.search)
+            : undefined,
+    );
+    renderWithClient(<PathwayComposer base={base} onSaved={() => undefined} />);
     await addStep("Blend with another pathway");
-    await userEvent.selectOptions(within(step(1)).getByLabelText("Blend with"), "p-long");
+    const blendWith = within(step(1)).getByRole("combobox", { name: "Blend with" });
+    await userEvent.type(blendWith, "longer");
+    await waitFor(() => expect(server.calls.some((c) => c.path === "/api/pathways" && c.search.get("q") === "longer")).toBe(true));
+    await userEvent.click(await within(step(1)).findByRole("option", { name: /Longer one/ }));
+    // Its label stays in the box once its numbers are read.
+    await waitFor(() => expect(blendWith).toHaveValue("Longer one"));
     const alert = await within(step(1)).findByText(/^Step 1 is not applied:/);
     expect(alert).toHaveTextContent(
       "otherPathwayId covers 1999–2004 but the pathway so far covers 2000–2003: years 1999 and 2004 are only in the other pathway. A blend needs the same years in both",
@@ -118,7 +137,7 @@ describe("PathwayComposer", () => {
           }
         : undefined,
     );
-    renderWithClient(<PathwayComposer base={base} choices={choices} onSaved={() => undefined} />);
+    renderWithClient(<PathwayComposer base={base} onSaved={() => undefined} />);
     await userEvent.click(screen.getByRole("button", { name: "Save as new pathway" }));
     const alert = await screen.findByText("The server did not save the pathway");
     expect(alert.closest("[role=alert]")).toHaveTextContent("agents.co2.erf, year 2003 must be finite");
@@ -126,7 +145,7 @@ describe("PathwayComposer", () => {
 
   it("counts the recipe against the description's 2000 characters and says so, saving nothing", async () => {
     const fetch = stubFetch(() => undefined);
-    renderWithClient(<PathwayComposer base={base} choices={choices} onSaved={() => undefined} />);
+    renderWithClient(<PathwayComposer base={base} onSaved={() => undefined} />);
     await addStep("Scale an agent");
     await userEvent.click(screen.getByLabelText("Description (optional)"));
     await userEvent.paste("x".repeat(1950));

@@ -18,21 +18,24 @@ const KINDS: StepKind[] = ["scale", "splice", "blend", "extend"];
  * each applied live with the same pure operations the API replays, each drawn against the
  * base. The result is saved as a new pathway with its recipe; the base is never changed.
  */
-export function PathwayComposer({ base, choices, onSaved }: { base: Pathway; choices: PathwayChoice[]; onSaved: (p: Pathway) => void }) {
+export function PathwayComposer({ base, onSaved }: { base: Pathway; onSaved: (p: Pathway) => void }) {
   const [drafts, setDrafts] = useState<StepDraft[]>([]);
   const ids = referencedPathwayIds(drafts);
   const others = usePathwaysByIds(ids);
   const loadedById = new Map<string, PathwayData>();
+  // The pathways the steps read, by id: their names label the step pickers and the recipe.
+  const known = new Map<string, PathwayChoice>([[base.id, base]]);
   others.forEach((q, i) => {
-    if (q.data) loadedById.set(ids[i]!, { startYear: q.data.startYear, agents: q.data.agents });
+    if (q.data) {
+      loadedById.set(ids[i]!, { startYear: q.data.startYear, agents: q.data.agents });
+      known.set(q.data.id, q.data);
+    }
   });
   const failedLoad = others.find((q) => q.isError);
   const baseData: PathwayData = useMemo(() => ({ startYear: base.startYear, agents: base.agents }), [base]);
   const { states, steps, result } = evaluateComposeDrafts(baseData, drafts, (id) => (id === base.id ? baseData : loadedById.get(id)));
-  const names = new Map(choices.map((c) => [c.id, c.name]));
-  names.set(base.id, base.name);
   const recipe = { basePathwayId: base.id, steps };
-  const recipeText = describeRecipe(recipe, (id) => names.get(id) ?? id);
+  const recipeText = describeRecipe(recipe, (id) => known.get(id)?.name ?? id);
 
   // Each step applies to the result of the one before; a step after a refused one shows the last good state's boxes.
   const inputs = drafts.map((_, i) => {
@@ -43,11 +46,10 @@ export function PathwayComposer({ base, choices, onSaved }: { base: Pathway; cho
     return baseData;
   });
   const last = result ?? inputs.at(-1) ?? baseData;
-  const firstOther = choices.find((c) => c.id !== base.id)?.id ?? "";
 
   const update = (i: number, next: StepDraft) => setDrafts((d) => d.map((x, k) => (k === i ? next : x)));
   const remove = (i: number) => setDrafts((d) => d.filter((_, k) => k !== i));
-  const add = (kind: StepKind) => setDrafts((d) => [...d, newStepDraft(kind, last, firstOther)]);
+  const add = (kind: StepKind) => setDrafts((d) => [...d, newStepDraft(kind, last)]);
 
   return (
     <div className="flex flex-col gap-6">
@@ -66,7 +68,7 @@ export function PathwayComposer({ base, choices, onSaved }: { base: Pathway; cho
           input={inputs[i]!}
           base={baseData}
           baseName={base.name}
-          choices={choices}
+          known={known}
           onChange={(next) => update(i, next)}
           onRemove={() => remove(i)}
         />

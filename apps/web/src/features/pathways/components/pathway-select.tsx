@@ -1,6 +1,7 @@
-import { Field, Select } from "@/components/ui/field";
+import { SearchPicker } from "@/components/search-picker/search-picker";
+import { pathwayPickerSource } from "../api/get-pathways";
 
-/** A stored pathway as a picker lists it. */
+/** A stored pathway as a picker shows it. */
 export interface PathwayChoice {
   id: string;
   name: string;
@@ -8,12 +9,15 @@ export interface PathwayChoice {
   endYear: number;
 }
 
-/** A labelled picker of stored pathways, each shown with its years; "" while none is chosen. */
+/**
+ * A labelled, searchable picker of stored pathways, each shown with its years; "" while none is
+ * chosen. Any pathway can be reached by typing part of its name, however many are stored.
+ */
 export function PathwaySelect({
   label,
   value,
   onChange,
-  choices,
+  selected,
   error,
   hint,
   className,
@@ -21,23 +25,25 @@ export function PathwaySelect({
   label: string;
   value: string;
   onChange: (id: string) => void;
-  choices: PathwayChoice[];
-  error?: string;
+  /** The chosen pathway when the caller already holds it (chosen on another visit, from a link). */
+  selected?: PathwayChoice | undefined;
+  error?: string | undefined;
   hint?: string;
   className?: string;
 }) {
   return (
-    <Field label={label} error={error} hint={hint}>
-      {(p) => (
-        <Select {...p} value={value} onChange={(e) => onChange(e.target.value)} {...(className ? { className } : {})}>
-          <option value="">Choose a pathway…</option>
-          {choices.map((c) => (
-            <option key={c.id} value={c.id}>
-              {c.name} ({c.startYear}–{c.endYear})
-            </option>
-          ))}
-        </Select>
-      )}
-    </Field>
+    <SearchPicker<PathwayChoice>
+      label={label}
+      source={pathwayPickerSource}
+      itemLabel={(c) => c.name}
+      itemDetail={(c) => `${c.startYear}–${c.endYear}`}
+      value={value}
+      selected={selected}
+      onChange={onChange}
+      placeholder="Type part of a pathway's name…"
+      {...(error ? { error } : {})}
+      {...(hint ? { hint } : {})}
+      {...(className ? { className } : {})}
+    />
   );
 }

@@ -1,7 +1,14 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
-import { MAX_PAGE_LIMIT, perilProfilePageSchema, type ListPerilProfilesQueryInput, type PerilProfilePage } from "@plumeline/contracts";
+import {
+  MAX_PAGE_LIMIT,
+  perilProfilePageSchema,
+  type ListPerilProfilesQueryInput,
+  type PerilProfilePage,
+  type PerilProfileRecord,
+} from "@plumeline/contracts";
 import { api } from "@/lib/api-client";
 import { compactQuery } from "@/lib/list-query";
+import type { PickerSource } from "@/components/search-picker/picker-source";
 
 export const perilRootKey = ["peril"] as const;
 
@@ -20,4 +27,14 @@ export const getPerilProfilesQueryOptions = (query: PerilProfilesQuery = {}) =>
 export const usePerilProfiles = (query: PerilProfilesQuery = {}) => useQuery(getPerilProfilesQueryOptions(query));
 
 /** The peril profiles a picker offers, as a plain array: the first 200 by peril and region (the API's largest page). */
-export const usePerilProfileChoices = () => useQuery({ ...getPerilProfilesQueryOptions({ limit: MAX_PAGE_LIMIT }), select: (page) => page.items });
+export const usePerilProfileChoices = () =>
+  useQuery({ ...getPerilProfilesQueryOptions({ limit: MAX_PAGE_LIMIT }), select: (page) => page.items });
+
+/**
+ * Where a peril-profile picker searches: the typed text as `q` (name, peril, region, source), in
+ * the list's own order. Cached under the profile lists' key, so a saved profile shows up in pickers.
+ */
+export const perilProfilePickerSource: PickerSource<PerilProfileRecord> = {
+  queryKey: [...perilRootKey, "profiles"],
+  fetchMatches: ({ q, limit }, signal) => getPerilProfiles({ q, limit }, signal),
+};

@@ -1,5 +1,9 @@
 import type { PerilProfileRecord, PortfolioSummary } from "@plumeline/contracts";
+import type { PickerSource } from "@/components/search-picker/picker-source";
+import { SearchMultiPicker } from "@/components/search-picker/search-multi-picker";
 import { Select } from "@/components/ui/field";
+
+type ProfileOption = Pick<PerilProfileRecord, "id" | "name" | "peril" | "region" | "metric">;
 
 /** What a run takes from the peril lens (the POST /api/runs fields). */
 export interface PerilRunChoice {
@@ -8,42 +12,34 @@ export interface PerilRunChoice {
 }
 
 /**
- * Peril profiles and a portfolio for a new run, from plain lists. A portfolio needs at least
- * one profile (the server refuses it otherwise), so its choice opens once a profile is ticked.
+ * Peril profiles (searched as someone types) and a portfolio for a new run. A portfolio needs
+ * at least one profile (the server refuses it otherwise), so its choice opens once a profile is chosen.
  */
 export function PerilRunPicker({
-  profiles,
+  profileSource,
   portfolios,
   value,
   onChange,
 }: {
-  profiles: Array<Pick<PerilProfileRecord, "id" | "name" | "peril" | "region" | "metric">>;
+  profileSource: PickerSource<ProfileOption>;
   portfolios: Array<Pick<PortfolioSummary, "id" | "name" | "rowCount">>;
   value: PerilRunChoice;
   onChange: (next: PerilRunChoice) => void;
 }) {
-  const toggle = (id: string) => {
-    const ids = value.perilProfileIds.includes(id) ? value.perilProfileIds.filter((x) => x !== id) : [...value.perilProfileIds, id];
-    onChange({ perilProfileIds: ids, portfolioId: ids.length === 0 ? null : value.portfolioId });
-  };
+  const choose = (ids: string[]) => onChange({ perilProfileIds: ids, portfolioId: ids.length === 0 ? null : value.portfolioId });
   return (
     <fieldset className="flex flex-col gap-3 rounded-md border border-line p-3">
       <legend className="px-1 text-sm font-medium text-ink">Peril lens (optional)</legend>
-      {profiles.length === 0 ? (
-        <p className="text-sm text-muted">No peril profiles yet.</p>
-      ) : (
-        <div role="group" aria-label="Peril profiles" className="flex flex-col gap-1">
-          {profiles.map((p) => (
-            <label key={p.id} className="flex items-center gap-2 text-sm">
-              <input type="checkbox" checked={value.perilProfileIds.includes(p.id)} onChange={() => toggle(p.id)} />
-              <span className="font-medium">{p.name}</span>
-              <span className="text-xs text-muted">
-                {p.peril} · {p.region} · {p.metric}
-              </span>
-            </label>
-          ))}
-        </div>
-      )}
+      <SearchMultiPicker<ProfileOption>
+        label="Peril profiles"
+        source={profileSource}
+        itemLabel={(p) => p.name}
+        itemDetail={(p) => `${p.peril} · ${p.region} · ${p.metric}`}
+        value={value.perilProfileIds}
+        onChange={choose}
+        placeholder="Type part of a profile's name, peril or region…"
+        noneChosen="None chosen: the run has no peril lens."
+      />
       <label className="flex flex-col gap-1 text-sm">
         <span className="font-medium text-ink">Portfolio baseline</span>
         <Select
@@ -59,7 +55,9 @@ export function PerilRunPicker({
             </option>
           ))}
         </Select>
-        {value.perilProfileIds.length === 0 && <span className="text-xs text-muted">Tick a profile first: a portfolio is projected by its profiles.</span>}
+        {value.perilProfileIds.length === 0 && (
+          <span className="text-xs text-muted">Choose a profile first: a portfolio is projected by its profiles.</span>
+        )}
       </label>
     </fieldset>
   );

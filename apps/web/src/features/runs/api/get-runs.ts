@@ -1,5 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
 import { MAX_PAGE_LIMIT, runPageSchema, type ListRunsQueryInput, type RunPage, type RunSummary } from "@plumeline/contracts";
+import type { PickerSource } from "@/components/search-picker/picker-source";
 import { api } from "@/lib/api-client";
 import { env } from "@/lib/env";
 import { compactQuery } from "@/lib/list-query";
@@ -32,5 +33,15 @@ export const getRunsQueryOptions = (query: RunsQuery = {}) =>
 
 export const useRuns = (query: RunsQuery = {}) => useQuery(getRunsQueryOptions(query));
 
-/** Runs for a picker, as a plain array: the newest 200 (the API's largest page). */
-export const useRunChoices = (query: Omit<RunsQuery, "limit" | "offset"> = {}) => useQuery({ ...getRunsQueryOptions({ ...query, limit: MAX_PAGE_LIMIT }), select: (page) => page.items });
+/** Runs for the desk's short lists, as a plain array: the newest 200 (the API's largest page). Pickers use `runPickerSource`. */
+export const useRunChoices = (query: Omit<RunsQuery, "limit" | "offset"> = {}) =>
+  useQuery({ ...getRunsQueryOptions({ ...query, limit: MAX_PAGE_LIMIT }), select: (page) => page.items });
+
+/**
+ * Where a run picker searches: the typed text as `q` (the run's name), newest first, within the
+ * given filters (finished runs only, say). Cached under the run lists' key.
+ */
+export const runPickerSource = (filters: Omit<RunsQuery, "q" | "limit" | "offset">): PickerSource<RunSummary> => ({
+  queryKey: [...runsListKey, toQuery(filters)],
+  fetchMatches: ({ q, limit }, signal) => getRuns({ ...filters, q, limit }, signal),
+});

@@ -2,8 +2,11 @@ import { useMemo, useState, type SubmitEvent, type ReactNode } from "react";
 import { createRunBodySchema, type CreateRunBody, type ModelVersionStatus, type RunSummary } from "@plumeline/contracts";
 import { Button } from "@/components/ui/button";
 import { ExploratoryStamp } from "@/components/ui/badges";
-import { Field, Input, Select } from "@/components/ui/field";
+import { Field, Input } from "@/components/ui/field";
 import { ErrorState } from "@/components/ui/states";
+import type { PickerSource } from "@/components/search-picker/picker-source";
+import { SearchMultiPicker } from "@/components/search-picker/search-multi-picker";
+import { SearchPicker } from "@/components/search-picker/search-picker";
 import { isApiError } from "@/lib/api-error";
 import { useCreateRun } from "../api/create-run";
 import { parseNumbers } from "@/lib/parse-numbers";
@@ -24,6 +27,9 @@ export interface PathwayOption {
   vintage: string;
 }
 
+/** A rejected or retired version stays listed (so no one wonders where it went) but cannot be run. */
+const notRunnable = (v: VersionOption) => v.status === "rejected" || v.status === "retired";
+
 type FieldName = "name" | "modelVersionId" | "pathwayIds" | "members" | "seed" | "sampling" | "horizons" | "thresholds";
 
 const randomSeed = () => `seed-${Math.random().toString(36).slice(2, 8)}`;
@@ -33,27 +39,32 @@ const randomSeed = () => `seed-${Math.random().toString(36).slice(2, 8)}`;
  * each message beside its field; the server's own 400 details land in the same places.
  */
 export function RunForm({
-  versions,
-  pathways,
-  initialVersionId,
+  versionSource,
+  pathwaySource,
+  initialVersion,
   onCreated,
   lens,
   lensFields,
 }: {
-  versions: VersionOption[];
-  pathways: PathwayOption[];
-  initialVersionId?: string;
+  /** Where the model-version picker searches (the model-versions feature's list, given by the app layer). */
+  versionSource: PickerSource<VersionOption>;
+  /** Where the pathway picker searches (the pathways feature's list, given by the app layer). */
+  pathwaySource: PickerSource<PathwayOption>;
+  /** The version chosen when the form opens (the one a link named, or the newest approved). */
+  initialVersion?: VersionOption | undefined;
   onCreated: (run: RunSummary) => void;
   /** Peril lens choices (perilProfileIds, portfolioId) and the fields that make them, composed by the app layer. */
   lens?: Pick<CreateRunBody, "perilProfileIds" | "portfolioId">;
   lensFields?: ReactNode;
 }) {
   const createRun = useCreateRun();
-  const [versionId, setVersionId] = useState(initialVersionId ?? versions.find((v) => v.status === "approved")?.id ?? versions[0]?.id ?? "");
+  const [version, setVersion] = useState<VersionOption | undefined>(
+    initialVersion && !notRunnable(initialVersion) ? initialVersion : undefined,
+  );
+  const versionId = version?.id ?? "";
   const [selected, setSelected] = useState<string[]>([]);
   const [sampling, setSampling] = useState<"latin-hypercube" | "monte-carlo">("latin-hypercube");
   const [errors, setErrors] = useState<Partial<Record<FieldName, string>>>({});
-  const version = versions.find((v) => v.id === versionId);
   const [seed] = useState(randomSeed);
   const defaults = useMemo(() => version?.defaults ?? { horizons: [2030, 2050, 2100], thresholds: [1.5, 2, 3] }, [version]);
 
@@ -103,48 +114,37 @@ export function RunForm({
       <Field label="Name (optional)" error={errors.name} hint="How the run is listed, e.g. “Q3 ORSA – three pathways”.">
         {(p) => <Input {...p} name="name" maxLength={120} />}
       </Field>
-      <Field label="Model version" error={errors.modelVersionId} hint="Approved versions give filing-grade results; any other version makes the run exploratory.">
-        {(p) => (
-          <Select {...p} value={versionId} onChange={(e) => setVersionId(e.target.value)}>
-            {versions.map((v) => (
-              <option key={v.id} value={v.id}>
-                {v.name} v{v.versionNumber} — {v.status}
-              </option>
-            ))}
-          </Select>
-        )}
-      </Field>
+      <SearchPicker<VersionOption>
+        label="Model version"
+        error={errors.modelVersionId}
+        hint="Approved versions give filing-grade results; any other version makes the run exploratory."
+        source={versionSource}
+        itemLabel={(v) => `${v.name} v${v.versionNumber}`}
+        itemDetail={(v) => (notRunnable(v) ? `${v.status} — cannot be run` : v.status)}
+        isDisabled={notRunnable}
+        value={versionId}
+        selected={version}
+        onChange={(_, v) => setVersion(v)}
+        placeholder="Type part of a version's name…"
+      />
       {version && version.status !== "approved" && (
         <div className="flex items-center gap-3 rounded-md border border-ember-400 bg-ember-50 px-3 py-2 text-sm text-ember-800 lg:col-span-2">
-          <ExploratoryStamp size="sm" /> This version is <strong>{version.status}</strong>: the result will be exploratory and not for filing.
+          <ExploratoryStamp size="sm" /> This version is <strong>{version.status}</strong>: the result will be exploratory and not for
+          filing.
         </div>
       )}
-      <fieldset className="lg:col-span-2" aria-describedby={errors.pathwayIds ? "pathways-error" : undefined}>
-        <legend className="mb-1 text-sm font-medium text-ink">Pathways</legend>
-        <div className="grid gap-2 sm:grid-cols-2 xl:grid-cols-3">
-          {pathways.map((p) => (
-            <label key={p.id} className="flex cursor-pointer items-start gap-2 rounded-md border border-line bg-surface px-3 py-2 text-sm has-checked:border-accent has-checked:bg-accent-soft">
-              <input
-                type="checkbox"
-                className="mt-0.5 accent-[var(--pl-accent)]"
-                checked={selected.includes(p.id)}
-                onChange={(e) => setSelected((s) => (e.target.checked ? [...s, p.id] : s.filter((x) => x !== p.id)))}
-              />
-              <span>
-                <span className="font-medium">{p.name}</span>
-                <span className="block text-xs text-muted">
-                  {p.startYear}–{p.endYear} · {p.vintage}
-                </span>
-              </span>
-            </label>
-          ))}
-        </div>
-        {errors.pathwayIds && (
-          <p id="pathways-error" role="alert" className="mt-1 text-xs font-medium text-danger">
-            Pathways {errors.pathwayIds}
-          </p>
-        )}
-      </fieldset>
+      <SearchMultiPicker<PathwayOption>
+        className="lg:col-span-2"
+        label="Pathways"
+        error={errors.pathwayIds && `Pathways ${errors.pathwayIds}`}
+        source={pathwaySource}
+        itemLabel={(p) => p.name}
+        itemDetail={(p) => `${p.startYear}–${p.endYear} · ${p.vintage}`}
+        value={selected}
+        onChange={setSelected}
+        placeholder="Type part of a pathway's name, choose to add…"
+        noneChosen="None chosen yet: each pathway chosen is run with the same members."
+      />
       <Field label="Members" error={errors.members} hint="Ensemble size; 5,000–20,000 is usual. Up to 2,000,000.">
         {(p) => <Input {...p} name="members" inputMode="numeric" defaultValue="5000" className="num" />}
       </Field>
@@ -161,7 +161,14 @@ export function RunForm({
             ] as const
           ).map(([value, label]) => (
             <label key={value} className="flex items-center gap-1.5">
-              <input type="radio" name="sampling" value={value} checked={sampling === value} onChange={() => setSampling(value)} className="accent-[var(--pl-accent)]" />
+              <input
+                type="radio"
+                name="sampling"
+                value={value}
+                checked={sampling === value}
+                onChange={() => setSampling(value)}
+                className="accent-[var(--pl-accent)]"
+              />
               {label}
             </label>
           ))}
