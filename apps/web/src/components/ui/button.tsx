@@ -1,4 +1,4 @@
-import type { ButtonHTMLAttributes } from "react";
+import type { ButtonHTMLAttributes, Ref } from "react";
 import { Link, type LinkProps } from "react-router-dom";
 import { cx } from "./cx";
 
@@ -25,15 +25,10 @@ export function Button({
   className,
   type = "button",
   ...props
-}: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant; size?: Size }) {
+}: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant; size?: Size; ref?: Ref<HTMLButtonElement> }) {
   return <button type={type} className={buttonClass(variant, size, className)} {...props} />;
 }
 
-export function ButtonLink({
-  variant = "secondary",
-  size = "md",
-  className,
-  ...props
-}: LinkProps & { variant?: Variant; size?: Size }) {
+export function ButtonLink({ variant = "secondary", size = "md", className, ...props }: LinkProps & { variant?: Variant; size?: Size }) {
   return <Link className={buttonClass(variant, size, className)} {...props} />;
 }

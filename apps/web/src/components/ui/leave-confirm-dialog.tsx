@@ -1,17 +1,29 @@
-import { useEffect, useId } from "react";
+import { useEffect, useId, useRef } from "react";
+import { createPortal } from "react-dom";
 import type { Blocker } from "react-router-dom";
 import { Button } from "./button";
+import { useModalFocus } from "./use-modal-focus";
 
 /**
  * Asks before leaving a form with unsaved changes (shown while the router holds the navigation).
  * Three ways out: stay; leave and keep the draft in this browser for later; or discard it and
- * leave. Escape and the backdrop mean "stay", the choice that loses nothing.
+ * leave. Escape and the backdrop mean "stay", the choice that loses nothing. While it is open it
+ * is modal: focus starts inside, Tab cycles inside, the page behind is inert, and focus returns to
+ * where it was when the person stays.
  */
 export function LeaveConfirmDialog({ blocker, onDiscard }: { blocker: Blocker; onDiscard: () => void }) {
+  if (blocker.state !== "blocked") return null;
+  // Rendered only while blocked, so mounting is opening and unmounting is closing.
+  return <OpenLeaveConfirmDialog blocker={blocker} onDiscard={onDiscard} />;
+}
+
+function OpenLeaveConfirmDialog({ blocker, onDiscard }: { blocker: Extract<Blocker, { state: "blocked" }>; onDiscard: () => void }) {
   const titleId = useId();
+  const backdrop = useRef<HTMLDivElement>(null);
+  const keepEditing = useRef<HTMLButtonElement>(null);
+  useModalFocus(backdrop, keepEditing);
 
   useEffect(() => {
-    if (blocker.state !== "blocked") return;
     const onKey = (e: KeyboardEvent) => {
       if (e.key === "Escape") blocker.reset();
     };
@@ -19,9 +31,9 @@ export function LeaveConfirmDialog({ blocker, onDiscard }: { blocker: Blocker; o
     return () => window.removeEventListener("keydown", onKey);
   }, [blocker]);
 
-  if (blocker.state !== "blocked") return null;
-  return (
-    <div className="fixed inset-0 z-50 flex items-center justify-center bg-black/40 p-4" onClick={() => blocker.reset()}>
+  // A portal to <body>, so the rest of the page can be made inert around it.
+  return createPortal(
+    <div ref={backdrop} className="fixed inset-0 z-50 flex items-center justify-center bg-black/40 p-4" onClick={() => blocker.reset()}>
       <div
         role="alertdialog"
         aria-modal="true"
@@ -38,7 +50,7 @@ export function LeaveConfirmDialog({ blocker, onDiscard }: { blocker: Blocker; o
         </p>
         <div className="mt-4 flex flex-wrap justify-end gap-2">
           {/* Focus starts on the choice that loses nothing. */}
-          <Button variant="primary" autoFocus onClick={() => blocker.reset()}>
+          <Button ref={keepEditing} variant="primary" onClick={() => blocker.reset()}>
             Keep editing
           </Button>
           <Button variant="secondary" onClick={() => blocker.proceed()}>
@@ -55,6 +67,7 @@ export function LeaveConfirmDialog({ blocker, onDiscard }: { blocker: Blocker; o
           </Button>
         </div>
       </div>
-    </div>
+    </div>,
+    document.body,
   );
 }
