@@ -150,9 +150,10 @@ const INSERTION_SORT_MAX = 64;
  * values[idx], stably, so tied values keep ascending member order. Why not a comparator
  * sort: on the weighted summaries of a constrained 100,000-member run it took ~1.3 s of
  * ~9 s of CPU. A bucket of a few dozen members is sorted by insertion in place; a big one
- * (values bunched by an outlier, as in early years when most members are near zero) as
- * statistics/weighted-spearman.ts sortOrder does: a native sort of the values, then each
- * member in index order takes the next place of its value. Values must not be NaN.
+ * (values bunched by an outlier, as in early years when most members are near zero) by a
+ * native sort of its values, then each member in index order takes the next place of its
+ * value. (Not statistics/sort-order.ts's radix sort: its passes run over 65,536 digits,
+ * far more than a bucket's members.) Values must not be NaN.
  */
 export function sortIndicesByValue(idx: Uint32Array, values: Float64Array): void {
   const count = idx.length;
