@@ -1,4 +1,4 @@
-import type { SortScratch } from "../statistics/weighted-spearman.js";
+import { sortScratch, type SortScratch } from "../statistics/sort-order.js";
 import { PercentileSelector } from "../summary/percentile-selector.js";
 
 /**
@@ -15,7 +15,7 @@ export interface FinishWorkspace {
   column: Float64Array;
   /** Each uncertain input's member order by value (by index in plan.inputs); kept across pathways, since the inputs are. */
   inputOrders: Map<number, Uint32Array>;
-  /** sortOrder's sorted copy (the same array as `column`: the two are never in use at once) and flags. */
+  /** sortOrder's working arrays (its keys are `column`: the two are never in use at once). */
   sort: SortScratch;
   /** The member order of one horizon's warming at a time (only its ranks are kept). */
   warmingOrder: Uint32Array;
@@ -31,7 +31,7 @@ export function createFinishWorkspace(members: number, horizons: number): Finish
     selector: new PercentileSelector(),
     column,
     inputOrders: new Map(),
-    sort: { sorted: column, taken: new Uint8Array(members) },
+    sort: sortScratch(members, column),
     warmingOrder: new Uint32Array(members),
     inputRanks: new Float64Array(members),
     warmingRanks: Array.from({ length: horizons }, () => new Float64Array(members)),

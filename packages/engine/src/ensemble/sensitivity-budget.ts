@@ -1,6 +1,7 @@
 import type { SensitivityEntry } from "../spec/types.js";
 import { firstOrderIndex } from "../statistics/first-order-index.js";
-import { sortOrder, weightedCorrelation, weightedMidRanks } from "../statistics/weighted-spearman.js";
+import { sortOrder } from "../statistics/sort-order.js";
+import { weightedCorrelation, weightedMidRanks } from "../statistics/weighted-spearman.js";
 import type { EnsemblePlan } from "./ensemble-plan.js";
 import type { FinishWorkspace } from "./finish-workspace.js";
 import type { PathwayWeights } from "./finish-pathway.js";

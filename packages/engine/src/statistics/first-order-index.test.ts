@@ -5,7 +5,8 @@ import { createRandom } from "../random/create-random.js";
 import { latinHypercube } from "../sampling/latin-hypercube.js";
 import { firstOrderIndex } from "./first-order-index.js";
 import { kishEffectiveSize } from "./kish.js";
-import { sortOrder, weightedCorrelation, weightedMidRanks } from "./weighted-spearman.js";
+import { sortOrder } from "./sort-order.js";
+import { weightedCorrelation, weightedMidRanks } from "./weighted-spearman.js";
 
 function columns(n: number, dims: number, seed: string, law: Parameters<typeof quantilesOf>[0]): Float64Array[] {
   return latinHypercube(n, dims, createRandom(seed)).map((u) => quantilesOf(law, u, "x"));

@@ -1,7 +1,8 @@
 import { sampleRankCorrelation } from "simple-statistics";
 import { describe, expect, it } from "vitest";
 import { createRandom } from "../random/create-random.js";
-import { sortOrder, sortScratch, weightedCorrelation, weightedMidRanks } from "./weighted-spearman.js";
+import { sortOrder, sortScratch } from "./sort-order.js";
+import { weightedCorrelation, weightedMidRanks } from "./weighted-spearman.js";
 
 /** Columns with ties (values rounded to a grid), so the tie rules are exercised. */
 function columns(n: number, count: number, seed: string): Float64Array[] {

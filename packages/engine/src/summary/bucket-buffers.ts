@@ -126,11 +126,11 @@ export class BucketBuffers {
         if (slot[b]! >= 0) order[cursor[b]!++] = i;
       }
       for (const [start, count] of starts) {
+        // Member indices sorted by value, ties by index, so weights pair deterministically.
         const idx = order.subarray(start, start + count);
-        // Sort member indices by value, ties by index, so weights pair deterministically.
-        const sortedIdx = Array.from(idx).sort((a, b) => values[a]! - values[b]! || a - b);
+        sortIndicesByValue(idx, values);
         for (let k = 0; k < count; k++) {
-          const m = sortedIdx[k]!;
+          const m = idx[k]!;
           gathered[start + k] = values[m]!;
           this.gatheredWeights[start + k] = weights[m]!;
         }
@@ -142,13 +142,54 @@ export class BucketBuffers {
   }
 }
 
-/*
- * The two hot loops live in small functions of their own: inside the class methods V8
- * optimised them on-stack and then deoptimised at the code after the loop, over a thousand
- * times per W1 run, so most years were counted by unoptimised code.
- */
+/** Up to this many members a bucket is sorted by insertion (a bucket holds ~32 unless the values bunch up). */
+const INSERTION_SORT_MAX = 64;
 
-/** Counts values[0..n) into buckets floor((v − min)·scale) (the top one clamped to last); returns Σ v in index order. */
+/**
+ * Sorts idx — member indices in ascending order, as the gathering pass lists them — by
+ * values[idx], stably, so tied values keep ascending member order. Why not a comparator
+ * sort: on the weighted summaries of a constrained 100,000-member run it took ~1.3 s of
+ * ~9 s of CPU. A bucket of a few dozen members is sorted by insertion in place; a big one
+ * (values bunched by an outlier, as in early years when most members are near zero) by a
+ * native sort of its values, then each member in index order takes the next place of its
+ * value. (Not statistics/sort-order.ts's radix sort: its passes run over 65,536 digits,
+ * far more than a bucket's members.) Values must not be NaN.
+ */
+export function sortIndicesByValue(idx: Uint32Array, values: Float64Array): void {
+  const count = idx.length;
+  if (count > INSERTION_SORT_MAX) {
+    const sorted = new Float64Array(count);
+    for (let k = 0; k < count; k++) sorted[k] = values[idx[k]!]!;
+    sorted.sort();
+    // Per value's first place: how many of its members are placed (ties can be thousands).
+    const placedAt = new Uint32Array(count);
+    const placed = new Uint32Array(count);
+    for (let k = 0; k < count; k++) {
+      const v = values[idx[k]!]!;
+      let low = 0;
+      let high = count - 1;
+      while (low < high) {
+        const middle = (low + high) >>> 1;
+        if (sorted[middle]! < v) low = middle + 1;
+        else high = middle;
+      }
+      placed[low + placedAt[low]!++] = idx[k]!;
+    }
+    idx.set(placed);
+    return;
+  }
+  for (let i = 1; i < count; i++) {
+    const m = idx[i]!;
+    const v = values[m]!;
+    let j = i - 1;
+    while (j >= 0 && values[idx[j]!]! > v) {
+      idx[j + 1] = idx[j]!;
+      j--;
+    }
+    idx[j + 1] = m;
+  }
+}
+
 /** Ranks (0-based) each percentile reads: floor(h) and floor(h) + 1 (capped at n − 1), h = (n − 1)p. */
 export function wantedRanks(n: number, probs: ArrayLike<number>): number[] {
   const wanted: number[] = [];
@@ -159,6 +200,13 @@ export function wantedRanks(n: number, probs: ArrayLike<number>): number[] {
   return wanted;
 }
 
+/*
+ * The two hot loops live in small functions of their own: inside the class methods V8
+ * optimised them on-stack and then deoptimised at the code after the loop, over a thousand
+ * times per W1 run, so most years were counted by unoptimised code.
+ */
+
+/** Counts values[0..n) into buckets floor((v − min)·scale) (the top one clamped to last); returns Σ v in index order. */
 export function countIntoBuckets(values: Float64Array, n: number, min: number, scale: number, last: number, counts: Int32Array): number {
   let sum = 0;
   for (let i = 0; i < n; i++) {
