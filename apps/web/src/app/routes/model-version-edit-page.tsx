@@ -4,7 +4,8 @@ import { useMe } from "@/features/auth/api/get-me";
 import { useModelVersion } from "@/features/model-versions/api/get-model-version";
 import { useUpdateModelVersion } from "@/features/model-versions/api/save-model-version";
 import { ModelEditorWithDraft } from "@/features/model-versions/components/model-editor-with-draft";
-import { usePerilProfileChoices } from "@/features/peril/api/get-peril-profiles";
+import { perilProfilePickerSource } from "@/features/peril/api/get-peril-profiles";
+import { usePerilProfilesByIds } from "@/app/use-peril-profiles-by-ids";
 import { PageHeader } from "@/components/ui/page-header";
 import { draftStorageKey } from "@/lib/draft-storage";
 import { ErrorState, LoadingState } from "@/components/ui/states";
@@ -14,7 +15,7 @@ export default function ModelVersionEditPage() {
   const me = useMe();
   const version = useModelVersion(versionId);
   const update = useUpdateModelVersion();
-  const profiles = usePerilProfileChoices();
+  const pinnedProfiles = usePerilProfilesByIds(version.data?.perilProfileIds ?? []);
   const navigate = useNavigate();
   if (version.isPending) return <LoadingState />;
   if (version.isError) return <ErrorState error={version.error} />;
@@ -49,7 +50,7 @@ export default function ModelVersionEditPage() {
           defaults: v.defaults,
           perilProfileIds: v.perilProfileIds,
         }}
-        perilProfiles={profiles.data}
+        perilProfiles={{ source: perilProfilePickerSource, known: pinnedProfiles }}
         submitLabel="Save changes"
         pending={update.isPending}
         serverError={update.error}

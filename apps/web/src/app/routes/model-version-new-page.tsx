@@ -7,7 +7,8 @@ import { ModelEditorWithDraft } from "@/features/model-versions/components/model
 import { useMe } from "@/features/auth/api/get-me";
 import { draftStorageKey } from "@/lib/draft-storage";
 import { STARTING_DRAFT } from "@/features/model-versions/lib/starting-draft";
-import { usePerilProfileChoices } from "@/features/peril/api/get-peril-profiles";
+import { perilProfilePickerSource } from "@/features/peril/api/get-peril-profiles";
+import { usePerilProfilesByIds } from "@/app/use-peril-profiles-by-ids";
 import { PageHeader } from "@/components/ui/page-header";
 import { ErrorState, LoadingState } from "@/components/ui/states";
 
@@ -16,7 +17,7 @@ export default function ModelVersionNewPage() {
   const fromId = params.get("from") ?? undefined;
   const parent = useModelVersion(fromId);
   const create = useCreateModelVersion();
-  const profiles = usePerilProfileChoices();
+  const pinnedProfiles = usePerilProfilesByIds(parent.data?.perilProfileIds ?? []);
   const navigate = useNavigate();
   const me = useMe();
   // The kept draft belongs to the person: wait for who is signed in before the editor reads it.
@@ -47,7 +48,7 @@ export default function ModelVersionNewPage() {
         draftKey={me.data ? draftStorageKey("model-version", me.data.user.id, fromId ? `new-from-${fromId}` : null) : null}
         initial={initial}
         submitLabel="Save draft"
-        perilProfiles={profiles.data}
+        perilProfiles={{ source: perilProfilePickerSource, known: pinnedProfiles }}
         pending={create.isPending}
         serverError={create.error}
         onSave={(body, saved) => {

@@ -7,7 +7,8 @@ import { AssumptionsTable } from "@/features/model-versions/components/assumptio
 import { DiffTable } from "@/features/model-versions/components/diff-table";
 import { ImpactPanel } from "@/features/model-versions/components/impact-panel";
 import { PinnedPerilProfilesList, profileNames } from "@/features/model-versions/components/pinned-peril-profiles";
-import { usePerilProfileChoices } from "@/features/peril/api/get-peril-profiles";
+import { diffProfileIds } from "@/features/model-versions/lib/diff-profile-ids";
+import { usePerilProfilesByIds } from "@/app/use-peril-profiles-by-ids";
 import { usePinnedPathways } from "@/app/use-pinned-pathways";
 import { ReviewWaitNote } from "@/features/model-versions/components/review-wait-note";
 import { SubmitPanel } from "@/features/model-versions/components/submit-panel";
@@ -23,7 +24,7 @@ export default function ModelVersionPage() {
   const me = useMe();
   const version = useModelVersion(versionId);
   const diff = useModelVersionDiff(versionId);
-  const profiles = usePerilProfileChoices();
+  const profiles = usePerilProfilesByIds([...(version.data?.perilProfileIds ?? []), ...diffProfileIds(diff.data)]);
   const pinned = usePinnedPathways(version.data?.pathwayIds ?? []);
   if (version.isPending) return <LoadingState />;
   if (version.isError) return <ErrorState error={version.error} retry={() => version.refetch()} />;
@@ -106,7 +107,10 @@ export default function ModelVersionPage() {
       )}
       {v.status === "draft" && own && can("model-versions:write") && (
         <Card className="mb-6">
-          <CardHeader title="Send for review" subtitle="A manager other than you decides. You cannot edit the version while it is in review." />
+          <CardHeader
+            title="Send for review"
+            subtitle="A manager other than you decides. You cannot edit the version while it is in review."
+          />
           <CardBody>
             <SubmitPanel versionId={v.id} />
           </CardBody>
@@ -114,7 +118,10 @@ export default function ModelVersionPage() {
       )}
       <div className="grid gap-6">
         <Card>
-          <CardHeader title="Assumptions" subtitle={`Concentration expression: ${v.model.forcingExpression}. ${c ? `Constrained by ${c.observed} ± ${c.sd} K over ${c.from}–${c.to}.` : "No observational constraint."}`} />
+          <CardHeader
+            title="Assumptions"
+            subtitle={`Concentration expression: ${v.model.forcingExpression}. ${c ? `Constrained by ${c.observed} ± ${c.sd} K over ${c.from}–${c.to}.` : "No observational constraint."}`}
+          />
           <CardBody>
             <AssumptionsTable model={v.model} />
             {v.model.correlations.length > 0 && (
@@ -126,18 +133,33 @@ export default function ModelVersionPage() {
         </Card>
         <Card>
           <CardHeader title="Changes against the parent" />
-          <CardBody>{diff.isPending ? <LoadingState /> : diff.isError ? <ErrorState error={diff.error} /> : <DiffTable diff={diff.data} profileNames={profileNames(profiles.data)} />}</CardBody>
+          <CardBody>
+            {diff.isPending ? (
+              <LoadingState />
+            ) : diff.isError ? (
+              <ErrorState error={diff.error} />
+            ) : (
+              <DiffTable diff={diff.data} profileNames={profileNames(profiles)} />
+            )}
+          </CardBody>
         </Card>
         <Card>
-          <CardHeader title="Effect on key outputs" subtitle="A preview ensemble of this version and its parent, side by side, on every pinned pathway." />
+          <CardHeader
+            title="Effect on key outputs"
+            subtitle="A preview ensemble of this version and its parent, side by side, on every pinned pathway."
+          />
           <CardBody>
-            {pinned === null ? <LoadingState /> : <ImpactPanel versionId={v.id} parentId={v.parentId} autoStart={false} pathways={pinned} changeClass={v.changeClass} />}
+            {pinned === null ? (
+              <LoadingState />
+            ) : (
+              <ImpactPanel versionId={v.id} parentId={v.parentId} autoStart={false} pathways={pinned} changeClass={v.changeClass} />
+            )}
           </CardBody>
         </Card>
         <Card>
           <CardHeader title="Pinned peril profiles" />
           <CardBody>
-            <PinnedPerilProfilesList ids={v.perilProfileIds} profiles={profiles.data} />
+            <PinnedPerilProfilesList ids={v.perilProfileIds} profiles={profiles} />
           </CardBody>
         </Card>
         <Card>
@@ -145,8 +167,8 @@ export default function ModelVersionPage() {
           <CardBody>
             <p className="whitespace-pre-wrap text-sm">{v.notes || "—"}</p>
             <p className="mt-3 text-xs text-muted">
-              Run defaults: percentiles {v.defaults.percentiles.join(", ")} · thresholds {v.defaults.thresholds.join(", ")} K · horizons {v.defaults.horizons.join(", ")} · baseline{" "}
-              {v.defaults.baseline.join("–")}
+              Run defaults: percentiles {v.defaults.percentiles.join(", ")} · thresholds {v.defaults.thresholds.join(", ")} K · horizons{" "}
+              {v.defaults.horizons.join(", ")} · baseline {v.defaults.baseline.join("–")}
             </p>
           </CardBody>
         </Card>

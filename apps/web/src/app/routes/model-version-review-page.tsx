@@ -7,7 +7,8 @@ import { DecisionPanel } from "@/features/model-versions/components/decision-pan
 import { DiffTable } from "@/features/model-versions/components/diff-table";
 import { ImpactPanel } from "@/features/model-versions/components/impact-panel";
 import { profileNames } from "@/features/model-versions/components/pinned-peril-profiles";
-import { usePerilProfileChoices } from "@/features/peril/api/get-peril-profiles";
+import { diffProfileIds } from "@/features/model-versions/lib/diff-profile-ids";
+import { usePerilProfilesByIds } from "@/app/use-peril-profiles-by-ids";
 import { usePinnedPathways } from "@/app/use-pinned-pathways";
 import { StatusBadge } from "@/components/ui/badges";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
@@ -19,7 +20,7 @@ export default function ModelVersionReviewPage() {
   const me = useMe();
   const version = useModelVersion(versionId);
   const diff = useModelVersionDiff(versionId);
-  const profiles = usePerilProfileChoices();
+  const profiles = usePerilProfilesByIds(diffProfileIds(diff.data));
   const pinned = usePinnedPathways(version.data?.pathwayIds ?? []);
   if (version.isPending) return <LoadingState />;
   if (version.isError) return <ErrorState error={version.error} />;
@@ -39,12 +40,27 @@ export default function ModelVersionReviewPage() {
         <div className="flex min-w-0 flex-col gap-6">
           <Card>
             <CardHeader title="What changed" />
-            <CardBody>{diff.isPending ? <LoadingState /> : diff.isError ? <ErrorState error={diff.error} /> : <DiffTable diff={diff.data} profileNames={profileNames(profiles.data)} />}</CardBody>
+            <CardBody>
+              {diff.isPending ? (
+                <LoadingState />
+              ) : diff.isError ? (
+                <ErrorState error={diff.error} />
+              ) : (
+                <DiffTable diff={diff.data} profileNames={profileNames(profiles)} />
+              )}
+            </CardBody>
           </Card>
           <Card>
-            <CardHeader title="Effect on key outputs" subtitle="The same preview ensemble of this version and the one it replaces, side by side, on every pinned pathway." />
+            <CardHeader
+              title="Effect on key outputs"
+              subtitle="The same preview ensemble of this version and the one it replaces, side by side, on every pinned pathway."
+            />
             <CardBody>
-              {pinned === null ? <LoadingState /> : <ImpactPanel versionId={v.id} parentId={v.parentId} autoStart pathways={pinned} changeClass={v.changeClass} />}
+              {pinned === null ? (
+                <LoadingState />
+              ) : (
+                <ImpactPanel versionId={v.id} parentId={v.parentId} autoStart pathways={pinned} changeClass={v.changeClass} />
+              )}
             </CardBody>
           </Card>
           <Card>

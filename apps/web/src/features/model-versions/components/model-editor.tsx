@@ -16,6 +16,7 @@ import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import { ErrorState } from "@/components/ui/states";
 import { CLIMATE_INPUT_LABELS, inputLabel, SCALE_FACTOR_UNIT } from "@/lib/input-labels";
 import { DistributionEditor } from "./distribution-editor";
+import type { PickerSource } from "@/components/search-picker/picker-source";
 import { PinnedPerilProfilesPicker, type PinnableProfile } from "./pinned-peril-profiles";
 import { parseNumbers } from "@/lib/parse-numbers";
 import { initialModelDraftForm, modelDraftReducer, NEW_AGENT_SCALE, type ModelDraft, type ModelDraftForm } from "../lib/model-draft-form";
@@ -49,8 +50,8 @@ export function ModelEditor({
   pending: boolean;
   serverError: unknown;
   onSave: (body: CreateModelVersionBody) => void;
-  /** Profiles that may be pinned (the picker shows once the list is known; the pins are always sent). */
-  perilProfiles?: readonly PinnableProfile[];
+  /** Where to search for profiles to pin, and the pinned ones' records (without it the picker is not shown; the pins are always sent). */
+  perilProfiles?: { source: PickerSource<PinnableProfile>; known: readonly PinnableProfile[] } | undefined;
   /** The form state to start from instead of `initial`'s (a draft restored from this browser). */
   startingForm?: ModelDraftForm;
   /** Told every state of the form, so the page can keep it and know whether it is saved. */
@@ -306,9 +307,9 @@ export function ModelEditor({
                 </Field>
               ))}
               <p className="text-xs text-muted sm:col-span-5">
-                AR6 SPM A.1.2: 2011–2020 was 1.09 K [0.95–1.20] above 1850–1900; sd 0.076 K treats that range as 5–95 %.
-                Internal variability (added to the observation sd in quadrature): 0.21 K reads AR6 SPM A.1.3&apos;s −0.2 to
-                +0.2 °C for 2010–2019 as a 17–83 % range; 0 ignores it.
+                AR6 SPM A.1.2: 2011–2020 was 1.09 K [0.95–1.20] above 1850–1900; sd 0.076 K treats that range as 5–95 %. Internal
+                variability (added to the observation sd in quadrature): 0.21 K reads AR6 SPM A.1.3&apos;s −0.2 to +0.2 °C for 2010–2019 as
+                a 17–83 % range; 0 ignores it.
               </p>
             </div>
           )}
@@ -352,7 +353,8 @@ export function ModelEditor({
           />
           <CardBody>
             <PinnedPerilProfilesPicker
-              profiles={perilProfiles}
+              source={perilProfiles.source}
+              known={perilProfiles.known}
               value={perilProfileIds}
               onChange={(ids) => dispatch({ type: "perilProfileIds", ids })}
             />

@@ -1,4 +1,6 @@
 import type { PerilProfileRecord } from "@plumeline/contracts";
+import type { PickerSource } from "@/components/search-picker/picker-source";
+import { SearchMultiPicker } from "@/components/search-picker/search-multi-picker";
 
 /** What the model-version screens need to know about a peril profile (the app layer passes the list in). */
 export type PinnableProfile = Pick<PerilProfileRecord, "id" | "name" | "peril" | "region">;
@@ -9,41 +11,36 @@ export function profileNames(profiles: readonly PinnableProfile[] | undefined): 
 }
 
 /**
- * Multi-select of the peril profiles a version pins: runs of the version that name no profiles
- * use these, and reviewers see them in the diff. Ids pinned earlier but missing from the list
- * stay visible (and removable) so nothing disappears silently.
+ * Searchable multi-select of the peril profiles a version pins: runs of the version that name no
+ * profiles use these, and reviewers see them in the diff. Any profile can be found by typing part
+ * of its name, peril or region; ids pinned earlier whose profile is unknown stay listed (and
+ * removable) so nothing disappears silently.
  */
 export function PinnedPerilProfilesPicker({
-  profiles,
+  source,
+  known,
   value,
   onChange,
 }: {
-  profiles: readonly PinnableProfile[];
+  /** Where to search (the peril feature's list, given by the app layer). */
+  source: PickerSource<PinnableProfile>;
+  /** The profiles already pinned, for their names. */
+  known: readonly PinnableProfile[];
   value: readonly string[];
   onChange: (next: string[]) => void;
 }) {
-  const known = new Set(profiles.map((p) => p.id));
-  const unknown = value.filter((id) => !known.has(id));
-  const toggle = (id: string) => onChange(value.includes(id) ? value.filter((x) => x !== id) : [...value, id]);
-  if (profiles.length === 0 && unknown.length === 0) return <p className="text-sm text-muted">No peril profiles exist yet; an actuary or analyst creates them in the peril lens.</p>;
   return (
-    <div role="group" aria-label="Pinned peril profiles" className="flex flex-col gap-1">
-      {profiles.map((p) => (
-        <label key={p.id} className="flex items-center gap-2 text-sm">
-          <input type="checkbox" checked={value.includes(p.id)} onChange={() => toggle(p.id)} />
-          <span className="font-medium">{p.name}</span>
-          <span className="text-xs text-muted">
-            {p.peril} · {p.region}
-          </span>
-        </label>
-      ))}
-      {unknown.map((id) => (
-        <label key={id} className="flex items-center gap-2 text-sm text-danger">
-          <input type="checkbox" checked onChange={() => toggle(id)} />
-          <code className="text-xs">{id}</code> <span className="text-xs">(not found — untick to remove)</span>
-        </label>
-      ))}
-    </div>
+    <SearchMultiPicker<PinnableProfile>
+      label="Pinned peril profiles"
+      source={source}
+      itemLabel={(p) => p.name}
+      itemDetail={(p) => `${p.peril} · ${p.region}`}
+      value={value}
+      known={known}
+      onChange={onChange}
+      placeholder="Type part of a profile's name, peril or region…"
+      noneChosen="None pinned: runs of this version use the profiles they name themselves."
+    />
   );
 }
 

@@ -1,6 +1,5 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
 import {
-  MAX_PAGE_LIMIT,
   perilProfilePageSchema,
   type ListPerilProfilesQueryInput,
   type PerilProfilePage,
@@ -25,10 +24,6 @@ export const getPerilProfilesQueryOptions = (query: PerilProfilesQuery = {}) =>
   });
 
 export const usePerilProfiles = (query: PerilProfilesQuery = {}) => useQuery(getPerilProfilesQueryOptions(query));
-
-/** The peril profiles a picker offers, as a plain array: the first 200 by peril and region (the API's largest page). */
-export const usePerilProfileChoices = () =>
-  useQuery({ ...getPerilProfilesQueryOptions({ limit: MAX_PAGE_LIMIT }), select: (page) => page.items });
 
 /**
  * Where a peril-profile picker searches: the typed text as `q` (name, peril, region, source), in
