@@ -1,6 +1,15 @@
 import seedrandom from "seedrandom";
 import { randomKernels } from "../kernels/random-kernels.js";
 
+/**
+ * Draws per call of a random kernel. V8 first runs WebAssembly through its baseline compiler
+ * and swaps in optimised code only for later calls of a function (a call under way finishes
+ * where it began), so one call per 100,000-member column ran wholly unoptimised in a fresh
+ * process; calls of this size let the later ones use the optimised loop. The stream's state
+ * carries from call to call: the same draws.
+ */
+const KERNEL_CALL_DRAWS = 8192;
+
 /** Alea's state in seedrandom's naming: carry c and the three lagged values s0, s1, s2. */
 export interface AleaState {
   c: number;
@@ -153,29 +162,24 @@ export class AleaStream {
    */
   fillInMemory(out: Float64Array, memory: WebAssembly.Memory): void {
     const s = this.state;
-    const next = randomKernels(memory).fill(out.byteOffset, out.length, s[0]!, s[1]!, s[2]!, s[3]!);
-    s.set(next);
+    const kernels = randomKernels(memory);
+    for (let from = 0; from < out.length; from += KERNEL_CALL_DRAWS) {
+      const n = Math.min(KERNEL_CALL_DRAWS, out.length - from);
+      s.set(kernels.fill(out.byteOffset + 8 * from, n, s[0]!, s[1]!, s[2]!, s[3]!));
+    }
   }
 
   /** fillTwo for two columns of one kernel memory, by the random kernels (as fillInMemory). */
   static fillTwoInMemory(a: AleaStream, outA: Float64Array, b: AleaStream, outB: Float64Array, memory: WebAssembly.Memory): void {
     if (outB.length !== outA.length) throw new RangeError("outB must be as long as outA");
     const [p, q] = [a.state, b.state];
-    const next = randomKernels(memory).fillTwo(
-      outA.byteOffset,
-      outB.byteOffset,
-      outA.length,
-      p[0]!,
-      p[1]!,
-      p[2]!,
-      p[3]!,
-      q[0]!,
-      q[1]!,
-      q[2]!,
-      q[3]!,
-    );
-    p.set(next.slice(0, 4));
-    q.set(next.slice(4));
+    const kernels = randomKernels(memory);
+    for (let from = 0; from < outA.length; from += KERNEL_CALL_DRAWS) {
+      const n = Math.min(KERNEL_CALL_DRAWS, outA.length - from);
+      const next = kernels.fillTwo(outA.byteOffset + 8 * from, outB.byteOffset + 8 * from, n, p[0]!, p[1]!, p[2]!, p[3]!, q[0]!, q[1]!, q[2]!, q[3]!);
+      p.set(next.slice(0, 4));
+      q.set(next.slice(4));
+    }
   }
 
   /** out[from … to) ← the next draws in order, as that many next() calls would give them. */
