@@ -114,9 +114,11 @@ export function SearchCombobox<T extends { id: string }>({
     }
   };
 
+  // Until the typed text has been asked about, the list shows the previous text's matches.
+  const settling = (typed ?? "").trim() !== matches.q || matches.isFetching;
   const status = matches.isError
     ? `Could not search: ${matches.error.message}`
-    : matches.isPending
+    : matches.isPending || settling
       ? "Searching…"
       : items.length === 0
         ? matches.q
@@ -164,7 +166,7 @@ export function SearchCombobox<T extends { id: string }>({
             id={listId}
             aria-label={label}
             aria-multiselectable={multiple || undefined}
-            className="max-h-72 overflow-auto py-1"
+            className={cx("max-h-72 overflow-auto", items.length > 0 && "py-1")}
           >
             {items.map((item, i) => {
               const off = isDisabled(item);

@@ -69,7 +69,7 @@ export function SearchMultiPicker<T extends { id: string }>({
           {value.length === 0 ? (
             noneChosen && <p className="text-xs text-muted">{noneChosen}</p>
           ) : (
-            <ul aria-label={`Chosen: ${label}`} className="flex flex-col gap-1">
+            <ul aria-label={`Chosen: ${label}`} className="grid gap-1 sm:grid-cols-2 xl:grid-cols-3">
               {value.map((id) => {
                 const item = find(id);
                 const name = item ? itemLabel(item) : id;
