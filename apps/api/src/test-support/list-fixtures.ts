@@ -19,7 +19,7 @@ export async function setCreatedAt(t: TestContext, table: string, id: string, is
 /** A queued run row (no spec the engine would accept: listing never reads it). */
 export async function insertRun(
   t: TestContext,
-  fields: { name: string; modelVersionId: string; createdBy: string; status?: string; members?: number },
+  fields: { name: string; modelVersionId: string; createdBy: string; status?: string; members?: number; exploratory?: boolean },
 ): Promise<string> {
   const id = randomUUID();
   await t.ctx.models.Run.create({
@@ -32,7 +32,7 @@ export async function insertRun(
     sampling: "latin-hypercube",
     spec: {},
     inputHash: "0".repeat(64),
-    exploratory: true,
+    exploratory: fields.exploratory ?? true,
     status: fields.status ?? "queued",
     progress: 0,
     perilProfileIds: [],

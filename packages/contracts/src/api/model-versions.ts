@@ -77,9 +77,15 @@ export const decideModelVersionBodySchema = z
 export const retireModelVersionBodySchema = z.object({ comment: z.string().max(4000).optional() }).strict();
 
 export const MODEL_VERSION_SORT_KEYS = ["updatedAt", "createdAt", "name", "versionNumber", "status"] as const;
-/** GET /api/model-versions: `q` searches name and notes; `author` the author's name or email. */
+/**
+ * GET /api/model-versions: `q` searches name and notes; `author` the author's name or email;
+ * `mine` the signed-in person's own versions; `undrafted` versions no other version was drafted
+ * from (a rejected one its author has not acted on yet).
+ */
 export const listModelVersionsQuerySchema = pagedQuerySchema(MODEL_VERSION_SORT_KEYS, "updatedAt:desc").extend({
   status: z.enum(MODEL_VERSION_STATUSES, { error: `must be one of ${MODEL_VERSION_STATUSES.join(", ")}` }).optional(),
+  mine: z.enum(["true", "false"], { error: 'must be "true" or "false"' }).optional(),
+  undrafted: z.enum(["true", "false"], { error: 'must be "true" or "false"' }).optional(),
   ...authorAndDateFilters,
 });
 export type ListModelVersionsQuery = z.infer<typeof listModelVersionsQuerySchema>;

@@ -36,9 +36,10 @@ export const createRunBodySchema = z
 export type CreateRunBody = z.input<typeof createRunBodySchema>;
 
 export const RUN_SORT_KEYS = ["createdAt", "name", "status", "members"] as const;
-/** GET /api/runs: `q` searches the run's name; `author` the creator's name or email. */
+/** GET /api/runs: `q` searches the run's name; `author` the creator's name or email; `exploratory` made with a version that was not approved. */
 export const listRunsQuerySchema = pagedQuerySchema(RUN_SORT_KEYS, "createdAt:desc").extend({
   mine: z.enum(["true", "false"], { error: 'must be "true" or "false"' }).optional(),
+  exploratory: z.enum(["true", "false"], { error: 'must be "true" or "false"' }).optional(),
   status: z.enum(RUN_STATUSES, { error: `must be one of ${RUN_STATUSES.join(", ")}` }).optional(),
   ...authorAndDateFilters,
 });

@@ -61,5 +61,20 @@ describe("GET /api/model-versions as a paged list", () => {
 
   it("answers 400 naming each bad query field", async () => {
     await expectBadQuery(manager, "/api/model-versions?status=nonsense&sort=model:desc&offset=1.5", ["status", "sort", "offset"]);
+    await expectBadQuery(manager, "/api/model-versions?mine=yes&undrafted=0", ["mine", "undrafted"]);
+  });
+
+  // Last: it adds a version drafted from another.
+  it("filters the signed-in person's own versions (mine) and those nothing was drafted from (undrafted)", async () => {
+    const analyst = await signIn(t.app, "analyst");
+    expect((await analyst.get("/api/model-versions?mine=true")).body.total).toBe(3);
+    expect((await manager.get("/api/model-versions?mine=true")).body.total).toBe(0);
+    expect((await manager.get("/api/model-versions?mine=false")).body.total).toBe(3);
+    const core = (await manager.get("/api/model-versions?q=core")).body.items[0];
+    const child = await analyst.post("/api/model-versions").send(testModelVersionBody({ name: "Core assumptions, redrafted", parentId: core.id }));
+    expect(child.status).toBe(201);
+    expect(names((await manager.get("/api/model-versions?undrafted=false")).body)).toEqual(["Core assumptions"]);
+    expect(names((await manager.get("/api/model-versions?undrafted=true&q=core")).body)).toEqual(["Core assumptions, redrafted"]);
+    expect((await manager.get("/api/model-versions?undrafted=true")).body.total).toBe(3);
   });
 });

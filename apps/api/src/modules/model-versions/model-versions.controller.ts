@@ -16,7 +16,7 @@ import {
 
 export const modelVersionsController = {
   async list(req: Request, res: Response) {
-    res.json(await listModelVersions(contextOf(req), validated(res, input.list).query));
+    res.json(await listModelVersions(contextOf(req), currentUser(req), validated(res, input.list).query));
   },
   async get(req: Request, res: Response) {
     res.json(await getModelVersion(contextOf(req), validated(res, input.byId).params.id));

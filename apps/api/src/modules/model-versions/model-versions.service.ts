@@ -14,7 +14,7 @@ import {
   type MODEL_VERSION_SORT_KEYS,
   type Page,
 } from "@plumeline/contracts";
-import { Op, type Transaction, type WhereOptions } from "sequelize";
+import { literal, Op, type Transaction, type WhereOptions } from "sequelize";
 import type { Literal } from "sequelize/lib/utils";
 import { createdBetween } from "../../db/paging/date-range.js";
 import { findPage, type SortColumns } from "../../db/paging/find-page.js";
@@ -88,10 +88,18 @@ const MODEL_VERSION_SORT_COLUMNS: SortColumns<(typeof MODEL_VERSION_SORT_KEYS)[n
   status: ["status", "updatedAt"],
 };
 
-/** One page of model versions: `q` in name and notes, `author` in the author's name or email, status, created from/to. */
-export async function listModelVersions(ctx: Ctx, query: ListModelVersionsQuery): Promise<Page<ModelVersionSummary>> {
+/** No other version was drafted from this one (parent_id names the version a draft started from). */
+const UNDRAFTED_SQL = "id NOT IN (SELECT parent_id FROM model_versions WHERE parent_id IS NOT NULL)";
+
+/**
+ * One page of model versions: `q` in name and notes, `author` in the author's name or email,
+ * status, mine, undrafted (or drafted from), created from/to.
+ */
+export async function listModelVersions(ctx: Ctx, user: RequestUser, query: ListModelVersionsQuery): Promise<Page<ModelVersionSummary>> {
   const conditions: Array<WhereOptions | Literal> = [...createdBetween(query)];
   if (query.status) conditions.push({ status: query.status });
+  if (query.mine === "true") conditions.push({ authorId: user.id });
+  if (query.undrafted) conditions.push(literal(query.undrafted === "true" ? UNDRAFTED_SQL : `NOT (${UNDRAFTED_SQL})`));
   if (query.q) conditions.push(anyContains(ctx.sequelize, ["name", "notes"], query.q));
   if (query.author) conditions.push(personMatches(ctx.sequelize, "author_id", query.author));
   const { rows, total } = await findPage(ctx.models.ModelVersion, { conditions, page: query, sortColumns: MODEL_VERSION_SORT_COLUMNS });

@@ -14,7 +14,7 @@ const ROWS = [
   { name: "Coastal_base", by: "actuary", status: "failed", members: 200, day: "2026-01-02" },
   { name: "Inland base", by: "analyst", status: "succeeded", members: 300, day: "2026-01-03" },
   { name: "Inland stress", by: "actuary", status: "queued", members: 100, day: "2026-01-04" },
-  { name: "Harbour base", by: "analyst", status: "succeeded", members: 400, day: "2026-01-05" },
+  { name: "Harbour base", by: "analyst", status: "succeeded", members: 400, day: "2026-01-05", exploratory: false },
 ] as const;
 
 beforeAll(async () => {
@@ -29,6 +29,7 @@ beforeAll(async () => {
       createdBy: t.userIds[row.by],
       status: row.status,
       members: row.members,
+      exploratory: "exploratory" in row ? row.exploratory : true,
     });
     await setCreatedAt(t, "runs", ids[row.name]!, `${row.day}T12:00:00Z`);
   }
@@ -94,6 +95,9 @@ describe("GET /api/runs as a paged list", () => {
     expect(names((await actuary.get("/api/runs?author=wrenfield&sort=name:asc")).body)).toEqual(["Coastal_base", "Inland stress"]);
     expect((await actuary.get("/api/runs?author=analyst@harbourline")).body.total).toBe(3);
     expect((await actuary.get("/api/runs?mine=true")).body.total).toBe(2);
+    // Made with an approved version or not (the desk lists exploratory results on their own).
+    expect(names((await actuary.get("/api/runs?exploratory=false")).body)).toEqual(["Harbour base"]);
+    expect((await actuary.get("/api/runs?exploratory=true&status=succeeded")).body.total).toBe(2);
     expect(names((await actuary.get("/api/runs?from=2026-01-02&to=2026-01-04&sort=createdAt:asc")).body)).toEqual([
       "Coastal_base",
       "Inland base",
@@ -109,5 +113,6 @@ describe("GET /api/runs as a paged list", () => {
     await expectBadQuery(actuary, "/api/runs?sort=seed:asc", ["sort"]);
     await expectBadQuery(actuary, "/api/runs?sort=name", ["sort"]);
     await expectBadQuery(actuary, "/api/runs?from=yesterday&to=2026-13-01&status=bogus", ["from", "to", "status"]);
+    await expectBadQuery(actuary, "/api/runs?exploratory=yes&mine=1", ["exploratory", "mine"]);
   });
 });

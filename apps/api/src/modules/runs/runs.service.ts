@@ -78,10 +78,11 @@ async function present(ctx: Pick<Ctx, "models">, rows: RunModel[]): Promise<RunS
 
 const RUN_SORT_COLUMNS: SortColumns<RunSortKey> = { createdAt: ["createdAt"], name: ["name"], status: ["status"], members: ["members"] };
 
-/** One page of runs: `q` in the name, `author` in the creator's name or email, status, mine, created from/to. */
+/** One page of runs: `q` in the name, `author` in the creator's name or email, status, mine, exploratory, created from/to. */
 export async function listRuns(ctx: Ctx, user: RequestUser, query: ListRunsQuery): Promise<Page<RunSummary>> {
   const conditions: Array<WhereOptions | Literal> = [...createdBetween(query)];
   if (query.mine === "true") conditions.push({ createdBy: user.id });
+  if (query.exploratory) conditions.push({ exploratory: query.exploratory === "true" });
   if (query.status) conditions.push({ status: query.status });
   if (query.q) conditions.push(anyContains(ctx.sequelize, ["name"], query.q));
   if (query.author) conditions.push(personMatches(ctx.sequelize, "created_by", query.author));

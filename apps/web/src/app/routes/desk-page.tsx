@@ -7,7 +7,7 @@ import { useModelVersionChoices } from "@/features/model-versions/api/get-model-
 import { ModelVersionsTable } from "@/features/model-versions/components/model-versions-table";
 import { ReturnedToYou } from "@/features/model-versions/components/returned-to-you";
 import { ReviewQueue } from "@/features/model-versions/components/review-queue";
-import { useRunChoices, useRuns } from "@/features/runs/api/get-runs";
+import { useRuns } from "@/features/runs/api/get-runs";
 import { RunsTable } from "@/features/runs/components/runs-table";
 import { ExploratoryStamp } from "@/components/ui/badges";
 import { ButtonLink } from "@/components/ui/button";
@@ -52,7 +52,7 @@ export default function DeskPage() {
           )}
           {can("model-versions:write") && (
             <PanelErrorBoundary>
-              <ReturnedToMe userId={user.id} />
+              <ReturnedToMe />
             </PanelErrorBoundary>
           )}
           {can("runs:read") && (
@@ -62,7 +62,7 @@ export default function DeskPage() {
           )}
           {can("model-versions:write") && (
             <PanelErrorBoundary>
-              <MyDrafts userId={user.id} />
+              <MyDrafts />
             </PanelErrorBoundary>
           )}
         </div>
@@ -139,21 +139,22 @@ function ReviewsWaiting({ userId }: { userId: string }) {
   );
 }
 
-/** My rejected versions nothing has been drafted from yet (a child means the author already acted on it). */
-function ReturnedToMe({ userId }: { userId: string }) {
-  // The 200 most recently changed versions: a rejection waiting for its author is recent.
-  const versions = useModelVersionChoices();
+/** My rejected versions nothing has been drafted from yet (a child means someone already acted on it). */
+function ReturnedToMe() {
+  const versions = useModelVersionChoices({ mine: "true", status: "rejected", undrafted: "true" });
   if (!versions.data) return null;
-  const drafted = new Set(versions.data.map((v) => v.parentId));
-  const returned = versions.data.filter((v) => v.authorId === userId && v.status === "rejected" && !drafted.has(v.id));
-  return <ReturnedToYou versions={returned} />;
+  return <ReturnedToYou versions={versions.data} />;
 }
 
-function MyDrafts({ userId }: { userId: string }) {
-  // The 200 most recently changed versions hold anyone's work in progress.
-  const versions = useModelVersionChoices();
-  const mine = versions.data?.filter((v) => v.authorId === userId && (v.status === "draft" || v.status === "in-review" || v.status === "rejected")) ?? [];
-  if (versions.isPending || mine.length === 0) return null;
+function MyDrafts() {
+  // Drafts, submissions and returns: one request per status, of my own versions only, so none
+  // is cut off by other people's more recent work.
+  const draft = useModelVersionChoices({ mine: "true", status: "draft" });
+  const inReview = useModelVersionChoices({ mine: "true", status: "in-review" });
+  const rejected = useModelVersionChoices({ mine: "true", status: "rejected" });
+  const parts = [draft, inReview, rejected];
+  const mine = parts.flatMap((part) => part.data ?? []).sort((a, b) => b.updatedAt.localeCompare(a.updatedAt));
+  if (parts.some((part) => part.isPending) || mine.length === 0) return null;
   return (
     <Card>
       <CardHeader title="My model versions in progress" />
@@ -162,20 +163,23 @@ function MyDrafts({ userId }: { userId: string }) {
   );
 }
 
+/** How many exploratory results the desk lists (the runs page lists them all). */
+const EXPLORATORY_SHOWN = 6;
+
 function ExploratoryFlags() {
-  const runs = useRunChoices({ status: "succeeded" });
+  const runs = useRuns({ status: "succeeded", exploratory: "true", limit: EXPLORATORY_SHOWN });
   if (runs.isPending) return null;
   if (runs.isError) return <ErrorState error={runs.error} />;
-  const exploratory = runs.data.filter((r) => r.exploratory);
+  const { items, total } = runs.data;
   return (
     <Card>
       <CardHeader title="Exploratory results" subtitle="Made with versions that were not approved: not for filing." />
       <CardBody>
-        {exploratory.length === 0 ? (
+        {items.length === 0 ? (
           <p className="text-sm text-muted">No exploratory results. Every finished run used an approved version.</p>
         ) : (
           <ul className="flex flex-col gap-2">
-            {exploratory.slice(0, 6).map((r) => (
+            {items.map((r) => (
               <li key={r.id} className="flex items-center justify-between gap-2 text-sm">
                 <Link to={paths.run.build(r.id)} className="truncate text-accent hover:underline">
                   {r.name}
@@ -183,6 +187,7 @@ function ExploratoryFlags() {
                 <ExploratoryStamp size="sm" />
               </li>
             ))}
+            {total > items.length && <li className="text-sm text-muted">and {total - items.length} older ones on the Runs page</li>}
           </ul>
         )}
       </CardBody>

@@ -1,5 +1,5 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
-import { MAX_PAGE_LIMIT, runPageSchema, type ListRunsQueryInput, type RunPage, type RunSummary } from "@plumeline/contracts";
+import { runPageSchema, type ListRunsQueryInput, type RunPage, type RunSummary } from "@plumeline/contracts";
 import type { PickerSource } from "@/components/search-picker/picker-source";
 import { api } from "@/lib/api-client";
 import { env } from "@/lib/env";
@@ -32,10 +32,6 @@ export const getRunsQueryOptions = (query: RunsQuery = {}) =>
   });
 
 export const useRuns = (query: RunsQuery = {}) => useQuery(getRunsQueryOptions(query));
-
-/** Runs for the desk's short lists, as a plain array: the newest 200 (the API's largest page). Pickers use `runPickerSource`. */
-export const useRunChoices = (query: Omit<RunsQuery, "limit" | "offset"> = {}) =>
-  useQuery({ ...getRunsQueryOptions({ ...query, limit: MAX_PAGE_LIMIT }), select: (page) => page.items });
 
 /**
  * Where a run picker searches: the typed text as `q` (the run's name), newest first, within the
