@@ -1,3 +1,4 @@
+import { useRef } from "react";
 import { useNavigate, useSearchParams } from "react-router-dom";
 import type { Run, RunResult, RunSummary } from "@plumeline/contracts";
 import { runPickerSource, useRuns } from "@/features/runs/api/get-runs";
@@ -38,8 +39,17 @@ export default function RunComparePage() {
   const runs = useRuns({ status: "succeeded", limit: 1 });
   const slots = readCompareSelection(params);
   const loaded = [useSlot(slots[0]), useSlot(slots[1]), useSlot(slots[2]), useSlot(slots[3])].slice(0, slots.length);
-  const save = (next: CompareSlot[]) => void navigate({ search: `?${writeCompareSelection(next)}` }, { replace: true });
-  const setSlot = (i: number, change: Partial<CompareSlot>) => save(slots.map((s, k) => (k === i ? { ...s, ...change } : s)));
+  // The selection as last written. A navigation renders later (in a transition), so a second
+  // change made before it — a run chosen, then at once a pathway — must start from the first
+  // change, not from this render's params, or it would write the run back out. Taken from
+  // the params whenever they change (a navigation committed, or the back button).
+  const latest = useRef({ search: "", slots });
+  if (params.toString() !== latest.current.search) latest.current = { search: params.toString(), slots };
+  const save = (next: CompareSlot[]) => {
+    latest.current = { ...latest.current, slots: next };
+    void navigate({ search: `?${writeCompareSelection(next)}` }, { replace: true });
+  };
+  const setSlot = (i: number, change: Partial<CompareSlot>) => save(latest.current.slots.map((s, k) => (k === i ? { ...s, ...change } : s)));
 
   const chosen = slots.map((s, i) => ({ slot: s, ...loaded[i]! })).filter((x) => x.slot.runId);
   const pending = chosen.some((x) => x.run.isPending || x.result.isPending);
@@ -99,7 +109,7 @@ export default function RunComparePage() {
                       {run.data &&
                         (run.data.exploratory ? <ExploratoryStamp size="sm" /> : <ApprovedSeal size="sm" className="self-start" />)}
                       {slots.length > 2 && (
-                        <Button variant="secondary" size="sm" onClick={() => save(slots.filter((_, k) => k !== i))}>
+                        <Button variant="secondary" size="sm" onClick={() => save(latest.current.slots.filter((_, k) => k !== i))}>
                           Remove
                         </Button>
                       )}
@@ -109,7 +119,7 @@ export default function RunComparePage() {
               })}
               {slots.length < MAX_COMPARED_RUNS && (
                 <div className="flex items-start">
-                  <Button variant="secondary" onClick={() => save([...slots, { runId: "", pathwayId: "" }])}>
+                  <Button variant="secondary" onClick={() => save([...latest.current.slots, { runId: "", pathwayId: "" }])}>
                     Add a run
                   </Button>
                 </div>
