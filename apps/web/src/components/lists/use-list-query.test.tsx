@@ -27,6 +27,17 @@ function renderAt(url: string, options: Parameters<typeof useListQuery<string>>[
 const RUNS = { defaultSort: "createdAt:desc", filterKeys: ["status", "author", "mine"] as const };
 
 describe("useListQuery", () => {
+  it("keeps every change made before the page renders again (a search, then at once a sort and a page)", () => {
+    const { hook, location } = renderAt("/runs?status=failed", { ...RUNS, filterKeys: [...RUNS.filterKeys] });
+    const { update, setOffset } = hook.result.current;
+    act(() => {
+      update({ q: "coastal" });
+      update({ sort: "name:asc" });
+      setOffset(50);
+    });
+    expect(new URLSearchParams(location().search).toString()).toBe("status=failed&q=coastal&sort=name%3Aasc&offset=50");
+  });
+
   it("reads search, sort, page and filters from the URL, with defaults for what is missing", () => {
     const { hook } = renderAt("/runs?q=coastal&sort=name:asc&offset=100&status=failed", { ...RUNS, filterKeys: [...RUNS.filterKeys] });
     expect(hook.result.current.state).toEqual({

@@ -1,4 +1,4 @@
-import { useCallback, useMemo } from "react";
+import { useCallback, useMemo, useRef } from "react";
 import { useSearchParams } from "react-router-dom";
 
 /** Rows per page unless the URL says otherwise (the API's own default). */
@@ -42,6 +42,20 @@ const wholeNumber = (text: string | null, fallback: number, min: number) => {
 export function useListQuery<F extends string>(options: ListQueryOptions<F>) {
   const { defaultSort, filterKeys, defaultFilters, pageSize = DEFAULT_PAGE_SIZE } = options;
   const [params, setParams] = useSearchParams();
+  // The query as last written. React Router renders a navigation later (in a transition) and
+  // hands a functional update this render's params, so a second change made before that
+  // render (a search, then at once a sort) would write the first one back out. Changes build
+  // on this instead; it follows the URL whenever the URL changes (a navigation, Back).
+  const latest = useRef({ seen: params.toString(), params });
+  if (params.toString() !== latest.current.seen) latest.current = { seen: params.toString(), params };
+  const write = useCallback(
+    (change: (prev: URLSearchParams) => URLSearchParams, navigateOptions?: { replace: boolean }) => {
+      const next = change(new URLSearchParams(latest.current.params));
+      latest.current = { ...latest.current, params: next };
+      setParams(next, navigateOptions);
+    },
+    [setParams],
+  );
   // Keys as text so callers may pass fresh array/object literals on every render.
   const filterKeysKey = filterKeys.join(",");
   const defaultFiltersKey = JSON.stringify(defaultFilters ?? {});
@@ -61,7 +75,7 @@ export function useListQuery<F extends string>(options: ListQueryOptions<F>) {
   const update = useCallback(
     (change: ListQueryChange<F>) => {
       const defaults = JSON.parse(defaultFiltersKey) as Partial<Record<F, string>>;
-      setParams(
+      write(
         (prev) => {
           const next = new URLSearchParams(prev);
           const put = (key: string, value: string, fallback: string) => {
@@ -79,19 +93,19 @@ export function useListQuery<F extends string>(options: ListQueryOptions<F>) {
         { replace: true },
       );
     },
-    [setParams, defaultSort, defaultFiltersKey],
+    [write, defaultSort, defaultFiltersKey],
   );
 
   const setOffset = useCallback(
     (offset: number) => {
-      setParams((prev) => {
+      write((prev) => {
         const next = new URLSearchParams(prev);
         if (offset > 0) next.set("offset", String(offset));
         else next.delete("offset");
         return next;
       });
     },
-    [setParams],
+    [write],
   );
 
   /** True when a search or a filter other than a default one narrows the list. */
