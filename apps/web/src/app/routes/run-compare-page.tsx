@@ -1,11 +1,10 @@
-import { useRef } from "react";
-import { useNavigate, useSearchParams } from "react-router-dom";
 import type { Run, RunResult, RunSummary } from "@plumeline/contracts";
 import { runPickerSource, useRuns } from "@/features/runs/api/get-runs";
 import { useRun } from "@/features/runs/api/get-run";
 import { useRunResult } from "@/features/runs/api/get-run-result";
 import { runBaseline } from "@/features/runs/lib/compare-baseline";
 import { MAX_COMPARED_RUNS, readCompareSelection, writeCompareSelection, type CompareSlot } from "@/features/runs/lib/compare-selection";
+import { useSearchParamsWriter } from "@/lib/use-search-params-writer";
 import { CompareView } from "@/features/runs/components/compare-view";
 import { CompareSettings } from "@/features/runs/components/compare-settings";
 import { ChartSourceProvider, runSourceLine } from "@/components/charts/chart-source";
@@ -33,23 +32,15 @@ const runDetail = (r: RunSummary) =>
 
 /** Pick two to four finished runs (the first is the reference) and compare them on shared axes. */
 export default function RunComparePage() {
-  const [params] = useSearchParams();
-  const navigate = useNavigate();
+  const [params, write] = useSearchParamsWriter();
   // Only whether any finished run exists; each slot's picker searches them all as someone types.
   const runs = useRuns({ status: "succeeded", limit: 1 });
   const slots = readCompareSelection(params);
   const loaded = [useSlot(slots[0]), useSlot(slots[1]), useSlot(slots[2]), useSlot(slots[3])].slice(0, slots.length);
-  // The selection as last written. A navigation renders later (in a transition), so a second
-  // change made before it — a run chosen, then at once a pathway — must start from the first
-  // change, not from this render's params, or it would write the run back out. Taken from
-  // the params whenever they change (a navigation committed, or the back button).
-  const latest = useRef({ search: "", slots });
-  if (params.toString() !== latest.current.search) latest.current = { search: params.toString(), slots };
-  const save = (next: CompareSlot[]) => {
-    latest.current = { ...latest.current, slots: next };
-    void navigate({ search: `?${writeCompareSelection(next)}` }, { replace: true });
-  };
-  const setSlot = (i: number, change: Partial<CompareSlot>) => save(latest.current.slots.map((s, k) => (k === i ? { ...s, ...change } : s)));
+  // Each change starts from the selection as last written (useSearchParamsWriter).
+  const save = (change: (current: CompareSlot[]) => CompareSlot[]) =>
+    write((prev) => writeCompareSelection(change(readCompareSelection(prev))), { replace: true });
+  const setSlot = (i: number, change: Partial<CompareSlot>) => save((current) => current.map((s, k) => (k === i ? { ...s, ...change } : s)));
 
   const chosen = slots.map((s, i) => ({ slot: s, ...loaded[i]! })).filter((x) => x.slot.runId);
   const pending = chosen.some((x) => x.run.isPending || x.result.isPending);
@@ -109,7 +100,7 @@ export default function RunComparePage() {
                       {run.data &&
                         (run.data.exploratory ? <ExploratoryStamp size="sm" /> : <ApprovedSeal size="sm" className="self-start" />)}
                       {slots.length > 2 && (
-                        <Button variant="secondary" size="sm" onClick={() => save(latest.current.slots.filter((_, k) => k !== i))}>
+                        <Button variant="secondary" size="sm" onClick={() => save((current) => current.filter((_, k) => k !== i))}>
                           Remove
                         </Button>
                       )}
@@ -119,7 +110,7 @@ export default function RunComparePage() {
               })}
               {slots.length < MAX_COMPARED_RUNS && (
                 <div className="flex items-start">
-                  <Button variant="secondary" onClick={() => save([...latest.current.slots, { runId: "", pathwayId: "" }])}>
+                  <Button variant="secondary" onClick={() => save((current) => [...current, { runId: "", pathwayId: "" }])}>
                     Add a run
                   </Button>
                 </div>

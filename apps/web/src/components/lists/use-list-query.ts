@@ -1,5 +1,5 @@
-import { useCallback, useMemo, useRef } from "react";
-import { useSearchParams } from "react-router-dom";
+import { useCallback, useMemo } from "react";
+import { useSearchParamsWriter } from "@/lib/use-search-params-writer";
 
 /** Rows per page unless the URL says otherwise (the API's own default). */
 export const DEFAULT_PAGE_SIZE = 50;
@@ -41,21 +41,7 @@ const wholeNumber = (text: string | null, fallback: number, min: number) => {
  */
 export function useListQuery<F extends string>(options: ListQueryOptions<F>) {
   const { defaultSort, filterKeys, defaultFilters, pageSize = DEFAULT_PAGE_SIZE } = options;
-  const [params, setParams] = useSearchParams();
-  // The query as last written. React Router renders a navigation later (in a transition) and
-  // hands a functional update this render's params, so a second change made before that
-  // render (a search, then at once a sort) would write the first one back out. Changes build
-  // on this instead; it follows the URL whenever the URL changes (a navigation, Back).
-  const latest = useRef({ seen: params.toString(), params });
-  if (params.toString() !== latest.current.seen) latest.current = { seen: params.toString(), params };
-  const write = useCallback(
-    (change: (prev: URLSearchParams) => URLSearchParams, navigateOptions?: { replace: boolean }) => {
-      const next = change(new URLSearchParams(latest.current.params));
-      latest.current = { ...latest.current, params: next };
-      setParams(next, navigateOptions);
-    },
-    [setParams],
-  );
+  const [params, write] = useSearchParamsWriter();
   // Keys as text so callers may pass fresh array/object literals on every render.
   const filterKeysKey = filterKeys.join(",");
   const defaultFiltersKey = JSON.stringify(defaultFilters ?? {});
